@@ -1,0 +1,210 @@
+import {
+  acceptInvitationBody,
+  acceptedResponse,
+  csrfResponse,
+  invitationPreview,
+  loginBody,
+  resetConfirmBody,
+  resetRequestBody,
+  tokenQuery,
+  userResponse,
+} from '@splitcase/contracts';
+import type { EntityManager } from '@mikro-orm/sqlite';
+import type { Request } from 'express';
+import { AppError } from '../../http/errors';
+import { route, type RouteDef } from '../../http/route';
+import type { AppDeps } from '../../http/deps';
+import { recordAudit } from '../audit/audit.service';
+import { linkMail } from '../mail/templates';
+import { UserSchema, type User } from '../users/user.entity';
+import { InvitationSchema, type Invitation } from './invitation.entity';
+import { dummyHash, hashPassword, verifyPassword } from './passwords';
+import { loginLimiters, mailLimiter } from './rate-limit';
+import { ResetTokenSchema } from './reset-token.entity';
+import { hashToken, newToken, RESET_TTL_MS } from './tokens';
+
+export const toUserDto = (u: User) => ({ id: u.id, email: u.email, name: u.name, role: u.role });
+
+/** Start a fresh session for the user (new id, so a session id known before sign-in is worthless). */
+async function signIn(req: Request, user: User): Promise<void> {
+  await new Promise<void>((resolve, reject) => req.session.regenerate((err) => (err ? reject(err) : resolve())));
+  req.session.userId = user.id;
+  await new Promise<void>((resolve, reject) => req.session.save((err) => (err ? reject(err) : resolve())));
+}
+
+export async function findUsableInvitation(em: EntityManager, token: string): Promise<Invitation> {
+  const inv = await em.findOne(InvitationSchema, { tokenHash: hashToken(token) });
+  if (!inv || inv.revokedAt) throw new AppError('token_invalid', 'This invitation link is not valid. Ask an admin for a new one.', { token: 'Unknown or revoked invitation' });
+  if (inv.acceptedAt) throw new AppError('token_used', 'This invitation has already been used. Sign in instead.', { token: 'Already used' });
+  if (inv.expiresAt.getTime() < Date.now()) throw new AppError('token_expired', 'This invitation has expired. Ask an admin for a new one.', { token: 'Expired' });
+  return inv;
+}
+
+export function authRoutes(deps: AppDeps): RouteDef[] {
+  const { env } = deps;
+  return [
+    route(
+      {
+        method: 'get',
+        path: '/api/auth/csrf',
+        tag: 'Auth',
+        summary: 'A CSRF token for this session; send it back as the X-CSRF-Token header on every state-changing request',
+        access: 'public',
+        response: csrfResponse,
+      },
+      ({ req }) => ({ token: req.csrfToken!() }),
+    ),
+    route(
+      {
+        method: 'post',
+        path: '/api/auth/login',
+        tag: 'Auth',
+        summary: 'Sign in with e-mail and password (rate-limited per address and per account)',
+        access: 'public',
+        body: loginBody,
+        response: userResponse,
+        before: loginLimiters(env.loginLimitPerIp, env.loginLimitPerAccount),
+      },
+      async ({ req, em, body }) => {
+        const user = await em.findOne(UserSchema, { email: body.email });
+        const ok = user ? await verifyPassword(user.passwordHash, body.password) : (await verifyPassword(await dummyHash(), body.password), false);
+        if (!user || !ok) {
+          throw new AppError('invalid_credentials', 'The e-mail address or the password is wrong.', {
+            password: 'E-mail or password is wrong',
+          });
+        }
+        if (!user.active) throw new AppError('account_inactive', 'This account has been deactivated. Ask an admin to reactivate it.');
+        user.lastSignInAt = new Date();
+        await em.flush();
+        await signIn(req, user);
+        return { user: toUserDto(user) };
+      },
+    ),
+    route(
+      { method: 'post', path: '/api/auth/logout', tag: 'Auth', summary: 'Sign out (ends the session)', access: 'public' },
+      async ({ req, res }) => {
+        await new Promise<void>((resolve) => req.session.destroy(() => resolve()));
+        res.clearCookie('splitcase.sid');
+        return undefined;
+      },
+    ),
+    route(
+      { method: 'get', path: '/api/auth/me', tag: 'Auth', summary: 'The signed-in user (401 when signed out)', access: 'signed-in', response: userResponse },
+      ({ user }) => ({ user }),
+    ),
+    route(
+      {
+        method: 'get',
+        path: '/api/auth/invitations/preview',
+        tag: 'Auth',
+        summary: 'Check an invitation link before accepting it',
+        access: 'public',
+        query: tokenQuery,
+        response: invitationPreview,
+      },
+      async ({ em, query }) => {
+        const inv = await findUsableInvitation(em, query.token);
+        return { invitation: { email: inv.email, role: inv.role, expiresAt: inv.expiresAt.toISOString() } };
+      },
+    ),
+    route(
+      {
+        method: 'post',
+        path: '/api/auth/invitations/accept',
+        tag: 'Auth',
+        summary: 'Accept an invitation: set name and password, and sign in',
+        access: 'public',
+        body: acceptInvitationBody,
+        response: userResponse,
+        status: 201,
+      },
+      async ({ req, em, body }) => {
+        const user = await em.transactional(async (tx) => {
+          const inv = await findUsableInvitation(tx, body.token);
+          if (await tx.count(UserSchema, { email: inv.email })) {
+            throw new AppError('conflict', 'An account with this e-mail address already exists. Sign in instead.');
+          }
+          const created = tx.create(UserSchema, {
+            email: inv.email,
+            name: body.name,
+            role: inv.role,
+            passwordHash: await hashPassword(body.password),
+            active: true,
+            lastSignInAt: new Date(),
+          } as never);
+          inv.acceptedAt = new Date();
+          await tx.flush();
+          recordAudit(tx, { id: created.id, email: created.email, name: created.name, role: created.role }, {
+            action: 'invitation.accepted',
+            entityType: 'user',
+            entityId: created.id,
+            summary: `${created.name} accepted an invitation as ${created.role}`,
+          });
+          return created;
+        });
+        await signIn(req, user);
+        return { user: toUserDto(user) };
+      },
+    ),
+    route(
+      {
+        method: 'post',
+        path: '/api/auth/password-reset/request',
+        tag: 'Auth',
+        summary: 'Ask for a password-reset link by e-mail (the answer is the same whether or not the account exists)',
+        access: 'public',
+        body: resetRequestBody,
+        response: acceptedResponse,
+        status: 202,
+        before: [mailLimiter(env.loginLimitPerIp)],
+      },
+      async ({ em, body, deps }) => {
+        const user = await em.findOne(UserSchema, { email: body.email, active: true });
+        if (user) {
+          const { token, hash } = newToken();
+          await em.transactional(async (tx) => {
+            // Earlier unused links stop working when a new one is sent.
+            await tx.nativeUpdate(ResetTokenSchema, { user: user.id, usedAt: null }, { usedAt: new Date() });
+            tx.create(ResetTokenSchema, { user, tokenHash: hash, expiresAt: new Date(Date.now() + RESET_TTL_MS) } as never);
+            await tx.flush();
+            await deps.mailer.send(
+              linkMail({
+                to: user.email,
+                subject: 'Reset your Splitcase password',
+                lines: [`Hello ${user.name},`, 'Someone (we hope you) asked to reset the password of your Splitcase account. The link works once, for one hour.', 'If it was not you, ignore this message; your password stays as it is.'],
+                linkLabel: 'Choose a new password',
+                url: `${deps.env.publicUrl}/reset-password?token=${token}`,
+              }),
+            );
+          });
+        }
+        return { ok: true as const, message: 'If an account exists for that address, a reset link is on its way.' };
+      },
+    ),
+    route(
+      {
+        method: 'post',
+        path: '/api/auth/password-reset/confirm',
+        tag: 'Auth',
+        summary: 'Set a new password with a reset link',
+        access: 'public',
+        body: resetConfirmBody,
+      },
+      async ({ em, body }) => {
+        await em.transactional(async (tx) => {
+          const rt = await tx.findOne(ResetTokenSchema, { tokenHash: hashToken(body.token) }, { populate: ['user'] });
+          if (!rt) throw new AppError('token_invalid', 'This reset link is not valid. Ask for a new one.', { token: 'Unknown link' });
+          if (rt.usedAt) throw new AppError('token_used', 'This reset link has already been used. Ask for a new one.', { token: 'Already used' });
+          if (rt.expiresAt.getTime() < Date.now()) throw new AppError('token_expired', 'This reset link has expired. Ask for a new one.', { token: 'Expired' });
+          const user = rt.user;
+          if (!user.active) throw new AppError('account_inactive', 'This account has been deactivated. Ask an admin to reactivate it.');
+          user.passwordHash = await hashPassword(body.password);
+          rt.usedAt = new Date();
+          recordAudit(tx, null, { action: 'password.reset', entityType: 'user', entityId: user.id, summary: `${user.email} reset their password by e-mail link` });
+          await tx.flush();
+        });
+        return undefined;
+      },
+    ),
+  ];
+}

@@ -1,0 +1,12 @@
+// Every API route, module by module. A new module adds its list here.
+import type { AppDeps } from '../http/deps';
+import type { RouteDef } from '../http/route';
+import { auditRoutes } from './audit/routes';
+import { authRoutes } from './auth/routes';
+import { mailRoutes } from './mail/routes';
+import { systemRoutes } from './system/routes';
+import { userRoutes } from './users/routes';
+
+export function allRoutes(deps: AppDeps, version: string): RouteDef[] {
+  return [...systemRoutes(version), ...authRoutes(deps), ...userRoutes, ...mailRoutes, ...auditRoutes];
+}

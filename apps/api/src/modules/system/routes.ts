@@ -1,0 +1,14 @@
+import { z } from 'zod';
+import { route } from '../../http/route';
+
+export const healthResponse = z.object({ ok: z.literal(true), version: z.string(), time: z.string() });
+
+export const systemRoutes = (version: string) => [
+  route(
+    { method: 'get', path: '/api/health', tag: 'System', summary: 'Liveness check (no sign-in)', access: 'public', response: healthResponse },
+    async ({ em }) => {
+      await em.getConnection().execute('select 1');
+      return { ok: true as const, version, time: new Date().toISOString() };
+    },
+  ),
+];

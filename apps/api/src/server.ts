@@ -1,0 +1,51 @@
+import type { Server } from 'node:http';
+import type { Env } from './config/env';
+import { migrate, openOrm, type Orm } from './db/orm';
+import { createApp, type CreateAppOptions } from './http/create-app';
+import type { AppDeps } from './http/deps';
+import { startCaptureServer, type CaptureServer } from './modules/mail/capture-server';
+import { createMailer } from './modules/mail/mailer';
+import { seedIfEmpty } from './seed/index';
+
+export interface Running {
+  url: string;
+  port: number;
+  orm: Orm;
+  deps: AppDeps;
+  seeded: boolean;
+  capture: CaptureServer | null;
+  close(): Promise<void>;
+}
+
+/** Open and migrate the database, optionally seed, start mail, build the app and listen. */
+export async function startServer(env: Env, options: CreateAppOptions & { seed?: boolean; log?: (...a: unknown[]) => void } = {}): Promise<Running> {
+  const log = options.log ?? ((...a: unknown[]) => console.error(...a));
+  const orm = await openOrm(env.dbPath);
+  await migrate(orm);
+  const seeded = options.seed ? await seedIfEmpty(orm, env) : false;
+  const capture = env.smtpUrl ? null : await startCaptureServer(orm, env.captureSmtpPort, log);
+  const mailer = createMailer({ smtpUrl: env.smtpUrl, capturePort: capture?.port, from: env.mailFrom });
+  const deps: AppDeps = { env, orm, mailer, outboxEnabled: capture !== null, log };
+  const app = createApp(deps, options);
+  const server: Server = await new Promise((resolve, reject) => {
+    const s = app.listen(env.port, env.host, () => resolve(s));
+    s.once('error', reject);
+  });
+  const address = server.address();
+  const port = typeof address === 'object' && address ? address.port : env.port;
+  return {
+    url: `http://localhost:${port}`,
+    port,
+    orm,
+    deps,
+    seeded,
+    capture,
+    async close() {
+      await new Promise<void>((resolve) => server.close(() => resolve()));
+      server.closeAllConnections?.();
+      mailer.close();
+      await capture?.close();
+      await orm.close();
+    },
+  };
+}

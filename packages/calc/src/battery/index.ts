@@ -1,0 +1,22 @@
+export {
+  type AirTransportClass,
+  AIR_TRANSPORT_CLASS_TEXT,
+  packEnergyWh,
+  runtimeHours,
+  cRate,
+  airTransportClass,
+  specificEnergyWhPerKg,
+} from './pack';
+export {
+  type CellChemistry,
+  type CellVoltages,
+  type PlausibilityResult,
+  CELL_CHEMISTRIES,
+  CELL_VOLTAGES,
+  SPECIFIC_ENERGY_LIMITS,
+  isLithiumChemistry,
+  typicalCellVoltages,
+  chargeVoltage,
+  labelCapacityPlausibility,
+} from './chemistry';
+export { type ChargeTimeEstimate, chargeTimeEstimate, chargeTimeHours } from './charge-time';

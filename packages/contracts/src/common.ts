@@ -1,0 +1,19 @@
+import { z } from 'zod';
+
+/** Trimmed, non-empty text with a length cap. */
+export const text = (max = 200) => z.string().trim().min(1, 'Required').max(max, `At most ${max} characters`);
+export const optionalText = (max = 2000) =>
+  z
+    .string()
+    .trim()
+    .max(max, `At most ${max} characters`)
+    .optional()
+    .transform((v) => (v === '' ? undefined : v));
+export const email = z.string().trim().toLowerCase().pipe(z.email('Enter a valid e-mail address').max(254));
+export const idParam = z.object({ id: z.coerce.number().int().positive('Must be a positive whole number') });
+export type IdParam = z.infer<typeof idParam>;
+export const isoDateTime = z.string();
+export const password = z
+  .string()
+  .min(10, 'At least 10 characters')
+  .max(200, 'At most 200 characters');

@@ -1,0 +1,6 @@
+// Shared request/response schemas and types: one schema per payload, used by forms and by the server.
+export * from './errors';
+export * from './roles';
+export * from './common';
+export * from './auth';
+export * from './admin';
