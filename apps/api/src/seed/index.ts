@@ -8,11 +8,11 @@ import { DEMO_USERS, demoEmail, seedUsers } from './users';
 export const SEED_STEPS: SeedStep[] = [{ name: 'users', run: seedUsers }];
 
 /** Seeds the invented demo workspace when the database has no users. Returns whether it seeded. */
-export async function seedIfEmpty(orm: Orm, env: Env, log: (line: string) => void = () => {}): Promise<boolean> {
+export async function seedIfEmpty(orm: Orm, env: Env, log: (line: string) => void = () => {}, steps: SeedStep[] = SEED_STEPS): Promise<boolean> {
   const em = orm.em.fork();
   if ((await em.count(UserSchema, {})) > 0) return false;
   const ctx: SeedContext = { env, em, users: {} as SeedContext['users'], refs: new Map(), log };
-  for (const step of SEED_STEPS) {
+  for (const step of steps) {
     await step.run(ctx);
     await em.flush();
     em.clear();

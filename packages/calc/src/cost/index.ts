@@ -1,1 +1,21 @@
-export {};
+// Should-cost: currency conversion, price breaks, BOM roll-up, landed cost and margins.
+export { convertCurrency, rateFor, normaliseCurrency, type RateTable } from './currency';
+export {
+  unitPriceAtQuantity,
+  validatePriceBreaks,
+  type PriceBreak,
+  type PriceBreakProblem,
+} from './price-breaks';
+export { landedCost, marginFromMarkup, markupFromMargin, type LandedCostInput, type LandedCostResult } from './landed';
+export {
+  rollUpCost,
+  costAtVolumes,
+  type CostModel,
+  type CostLineInput,
+  type CostLineResult,
+  type CostRollUp,
+  type CostStep,
+  type RollUpInput,
+  type PriceConfidence,
+  type MountKind,
+} from './roll-up';

@@ -17,7 +17,7 @@ export interface CutoffPoint {
   reason: CutoffReason;
 }
 
-export interface CutoffOptions {
+export interface CutoffRunOptions {
   /** End-of-discharge voltage, V. When given, the run ends at the first sample at or below it. */
   cutoffVolts?: number | undefined;
   /** Current (A) at or below which the load counts as off; default 2 % of the peak current (or power, if only p is logged). */
@@ -27,7 +27,7 @@ export interface CutoffOptions {
 /** Default share of the peak current below which the load counts as stopped. */
 export const LOAD_OFF_FRACTION = 0.02;
 
-function checkCutoffOptions(opts: CutoffOptions): { cutoffVolts: number | undefined; floor: number | undefined } {
+function checkCutoffOptions(opts: CutoffRunOptions): { cutoffVolts: number | undefined; floor: number | undefined } {
   const cutoffVolts = optionalFinite(opts.cutoffVolts, 'cutoffVolts');
   if (cutoffVolts !== undefined) requirePositive(cutoffVolts, 'cutoffVolts');
   const floor = optionalFinite(opts.currentFloorA, 'currentFloorA');
@@ -72,18 +72,21 @@ function findCutoff(series: RunSeries, n: number, cutoffVolts: number | undefine
  * the run never gets there), or without a cut-off the last sample before the
  * current falls to about zero, or the last sample.
  */
-export function detectCutoff(series: RunSeries, opts: CutoffOptions = {}): CutoffPoint | null {
+export function detectCutoff(series: RunSeries, opts: CutoffRunOptions = {}): CutoffPoint | null {
   const n = checkSeries(series, ['v'], 'finding the cut-off');
   const { cutoffVolts, floor } = checkCutoffOptions(opts);
   return findCutoff(series, n, cutoffVolts, floor);
 }
 
 /** Results of a discharge run analysed up to its cut-off. */
-export interface DischargeAnalysis {
+export interface DischargeRunAnalysis {
   ampHours: number;
   wattHours: number;
   durationS: number;
+  /** Charge-weighted mean voltage Wh/Ah, V. */
   averageVolts: number;
+  /** Time-weighted mean voltage ∫V dt / duration, V. */
+  timeAverageVolts: number;
   endVolts: number;
   minVolts: number;
   cutoff: CutoffPoint | null;
@@ -98,7 +101,7 @@ export interface DischargeAnalysis {
  * cut-off (or the whole run if the cut-off is never reached), with mean and
  * end voltages. Needs v and one of i or p.
  */
-export function analyseDischarge(series: RunSeries, opts: CutoffOptions = {}): DischargeAnalysis {
+export function analyseDischarge(series: RunSeries, opts: CutoffRunOptions = {}): DischargeRunAnalysis {
   const n = checkSeries(series, ['v'], 'a discharge analysis');
   if (!series.i && !series.p) {
     throw new RangeError(`${columnLabel('i')} or ${columnLabel('p')} is required for a discharge analysis.`);
@@ -124,6 +127,7 @@ export function analyseDischarge(series: RunSeries, opts: CutoffOptions = {}): D
     wattHours,
     durationS: totals.durationS,
     averageVolts: totals.averageVolts as number,
+    timeAverageVolts: totals.timeAverageVolts as number,
     endVolts: at(v, endIndex),
     minVolts,
     cutoff,
@@ -134,7 +138,7 @@ export function analyseDischarge(series: RunSeries, opts: CutoffOptions = {}): D
 }
 
 /** Output of a power bank measured at its USB port, against the energy of its cells. */
-export interface PowerBankAnalysis {
+export interface PowerBankRunAnalysis {
   wattHours: number;
   /** Charge delivered at the output voltage, Ah. */
   ampHours: number;
@@ -149,7 +153,7 @@ export interface PowerBankAnalysis {
 }
 
 /** Energy delivered at the output (Wh, Ah at the output voltage) and efficiency = output Wh / cell Wh. */
-export function analysePowerBank(series: RunSeries, opts: { cellEnergyWh: number }): PowerBankAnalysis {
+export function analysePowerBank(series: RunSeries, opts: { cellEnergyWh: number }): PowerBankRunAnalysis {
   const n = checkSeries(series, ['v'], 'a power-bank analysis');
   if (!series.i && !series.p) {
     throw new RangeError(`${columnLabel('i')} or ${columnLabel('p')} is required for a power-bank analysis.`);

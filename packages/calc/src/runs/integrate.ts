@@ -2,7 +2,14 @@
  * Delivered charge and energy of a bench run by the composite trapezoidal rule
  * [S: composite trapezoidal rule, numpy docs]: Ah = Σ ½(I_k + I_k+1)·Δt / 3600,
  * Wh = Σ ½(P_k + P_k+1)·Δt / 3600 with P_k = V_k·I_k taken per sample (never
- * mean V × mean I), and the time-weighted mean voltage ∫V dt / duration.
+ * mean V × mean I).
+ *
+ * Two mean voltages are reported. averageVolts is the charge-weighted mean
+ * Wh / Ah = ∫V·I dt / ∫I dt, the "average discharge voltage" of a capacity
+ * test and the value REFERENCES §8 gives (3.810667 V for Example A); it equals
+ * the time-weighted mean when the current is constant. timeAverageVolts is
+ * ∫V dt / duration (3.800000 V for Example A). With no charge moved (Ah = 0)
+ * averageVolts falls back to the time-weighted mean.
  */
 import { requireFinite } from '../shared/validate';
 import { at, checkSeriesShape, columnLabel, notFinite, notIncreasing, type RunSeries } from './series';
@@ -12,7 +19,10 @@ export interface RunTotals {
   ampHours: number;
   wattHours: number;
   durationS: number;
+  /** Charge-weighted mean voltage Wh/Ah, V. */
   averageVolts: number;
+  /** Time-weighted mean voltage ∫V dt / duration, V. */
+  timeAverageVolts: number;
 }
 
 /** Totals of a columnar run; null where the columns present cannot give the figure. */
@@ -20,11 +30,14 @@ export interface SeriesTotals {
   ampHours: number | null;
   wattHours: number | null;
   durationS: number;
+  /** Charge-weighted mean voltage Wh/Ah (time-weighted when Ah = 0), V. */
   averageVolts: number | null;
+  /** Time-weighted mean voltage ∫V dt / duration, V; null without a v column. */
+  timeAverageVolts: number | null;
   samples: number;
 }
 
-/** Trapezoidal Ah, Wh (V·I per sample), duration and time-weighted mean voltage of {t, v, i} samples. */
+/** Trapezoidal Ah, Wh (V·I per sample), duration and mean voltage (Wh/Ah, and ∫V dt / duration) of {t, v, i} samples. */
 export function integrateRun(samples: { t: number; v: number; i: number }[]): RunTotals {
   if (!Array.isArray(samples)) throw new RangeError('samples must be a list of {t, v, i} readings.');
   if (samples.length < 2) throw new RangeError(`samples needs at least 2 readings (got ${samples.length}).`);
@@ -50,6 +63,7 @@ export function integrateRun(samples: { t: number; v: number; i: number }[]): Ru
     wattHours: totals.wattHours as number,
     durationS: totals.durationS,
     averageVolts: totals.averageVolts as number,
+    timeAverageVolts: totals.timeAverageVolts as number,
   };
 }
 
@@ -128,11 +142,9 @@ export function integrateRange(series: RunSeries, from: number, to: number): Ser
     pPrev = pk;
   }
   const durationS = tPrev - t0;
-  return {
-    ampHours: hasCurrent ? charge / 7200 : null,
-    wattHours: hasPower ? energy / 7200 : null,
-    durationS,
-    averageVolts: v && durationS > 0 ? voltTime / 2 / durationS : null,
-    samples: to - from + 1,
-  };
+  const ampHours = hasCurrent ? charge / 7200 : null;
+  const wattHours = hasPower ? energy / 7200 : null;
+  const timeAverageVolts = v && durationS > 0 ? voltTime / 2 / durationS : null;
+  const averageVolts = ampHours !== null && wattHours !== null && ampHours !== 0 ? wattHours / ampHours : timeAverageVolts;
+  return { ampHours, wattHours, durationS, averageVolts, timeAverageVolts, samples: to - from + 1 };
 }

@@ -1,1 +1,16 @@
-export {};
+export {
+  type SurfaceMaterial,
+  type BurnThresholdRow,
+  SURFACE_MATERIALS,
+  BURN_THRESHOLDS,
+  burnThresholdDetail,
+  burnThresholdC,
+  touchMarginC,
+} from './touch';
+export {
+  DEFAULT_CONVECTION_H,
+  STEFAN_BOLTZMANN,
+  surfaceTemperatureRiseC,
+  radiativeHeatTransferCoefficient,
+  dutyForTargetTemperatureRise,
+} from './convection';

@@ -162,11 +162,12 @@ export function authRoutes(deps: AppDeps): RouteDef[] {
         const user = await em.findOne(UserSchema, { email: body.email, active: true });
         if (user) {
           const { token, hash } = newToken();
-          await em.transactional(async (tx) => {
+          const created = await em.transactional(async (tx) => {
             // Earlier unused links stop working when a new one is sent.
             await tx.nativeUpdate(ResetTokenSchema, { user: user.id, usedAt: null }, { usedAt: new Date() });
-            tx.create(ResetTokenSchema, { user, tokenHash: hash, expiresAt: new Date(Date.now() + RESET_TTL_MS) } as never);
-            await tx.flush();
+            return tx.create(ResetTokenSchema, { user, tokenHash: hash, expiresAt: new Date(Date.now() + RESET_TTL_MS) } as never);
+          });
+          try {
             await deps.mailer.send(
               linkMail({
                 to: user.email,
@@ -176,7 +177,11 @@ export function authRoutes(deps: AppDeps): RouteDef[] {
                 url: `${deps.env.publicUrl}/reset-password?token=${token}`,
               }),
             );
-          });
+          } catch (err) {
+            await em.nativeDelete(ResetTokenSchema, { id: created.id });
+            deps.log('Reset e-mail failed', err);
+            throw new AppError('internal', 'The reset e-mail could not be sent. Try again later.', undefined, undefined, 502);
+          }
         }
         return { ok: true as const, message: 'If an account exists for that address, a reset link is on its way.' };
       },

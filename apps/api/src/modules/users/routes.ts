@@ -124,8 +124,9 @@ export const userRoutes: RouteDef[] = [
         } as never);
         await tx.flush();
         recordAudit(tx, me, { action: 'invitation.created', entityType: 'invitation', entityId: inv.id, summary: `Invited ${body.email} as ${ROLE_LABELS[body.role]}` });
-        await tx.flush();
-        // Sent inside the transaction: if the mail server refuses, no invitation is left behind.
+        return inv;
+      });
+      try {
         await deps.mailer.send(
           linkMail({
             to: body.email,
@@ -139,8 +140,12 @@ export const userRoutes: RouteDef[] = [
             url: `${deps.env.publicUrl}/accept-invitation?token=${token}`,
           }),
         );
-        return inv;
-      });
+      } catch (err) {
+        // The mail server refused: take the invitation back so nothing is left half-done.
+        await em.nativeDelete(InvitationSchema, { id: invitation.id });
+        deps.log('Invitation e-mail failed', err);
+        throw new AppError('internal', 'The invitation e-mail could not be sent, so no invitation was created. Check the mail settings and try again.', undefined, undefined, 502);
+      }
       await em.populate(invitation, ['invitedBy']);
       return { invitation: toInvitationDto(invitation) };
     },

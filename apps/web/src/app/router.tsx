@@ -1,0 +1,42 @@
+import { createBrowserRouter, Outlet } from 'react-router';
+import { RouteError } from '@/components/error-boundary';
+import { AnonymousOnly, RequireAuth } from './guards';
+import { Shell } from './shell';
+
+/** One route module per URL, loaded lazily so the first page does not carry every feature. */
+export const router = createBrowserRouter([
+  {
+    errorElement: <RouteError />,
+    children: [
+      {
+        element: (
+          <AnonymousOnly>
+            <Outlet />
+          </AnonymousOnly>
+        ),
+        children: [
+          { path: '/sign-in', lazy: () => import('./routes/sign-in') },
+          { path: '/forgot-password', lazy: () => import('./routes/forgot-password') },
+        ],
+      },
+      // Reachable signed in or out: the link in an e-mail decides.
+      { path: '/accept-invitation', lazy: () => import('./routes/accept-invitation') },
+      { path: '/reset-password', lazy: () => import('./routes/reset-password') },
+      {
+        element: (
+          <RequireAuth>
+            <Shell />
+          </RequireAuth>
+        ),
+        children: [
+          { index: true, lazy: () => import('./routes/home') },
+          { path: '/admin/users', lazy: () => import('./routes/admin-users') },
+          { path: '/admin/invitations', lazy: () => import('./routes/admin-invitations') },
+          { path: '/admin/outbox', lazy: () => import('./routes/admin-outbox') },
+          { path: '/admin/audit', lazy: () => import('./routes/admin-audit') },
+          { path: '*', lazy: () => import('./routes/not-found') },
+        ],
+      },
+    ],
+  },
+]);

@@ -1,0 +1,14 @@
+import { RequireRole } from '@/app/guards';
+import { PageHeader } from '@/components/page';
+import { AdminTabs } from '@/features/admin/components/admin-tabs';
+import { UsersPanel } from '@/features/admin/components/users-panel';
+
+export function Component() {
+  return (
+    <RequireRole roles={['admin']}>
+      <PageHeader eyebrow="Admin" title="Users" />
+      <AdminTabs />
+      <UsersPanel />
+    </RequireRole>
+  );
+}

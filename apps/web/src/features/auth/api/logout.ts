@@ -1,0 +1,17 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api, resetCsrfToken } from '@/lib/api-client';
+import { meKey } from './get-me';
+
+export const logout = () => api.post<void>('/api/auth/logout');
+
+export function useLogout() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: logout,
+    onSettled: () => {
+      resetCsrfToken();
+      qc.clear();
+      qc.setQueryData(meKey, null);
+    },
+  });
+}

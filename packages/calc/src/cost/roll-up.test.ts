@@ -1,0 +1,353 @@
+import { describe, expect, it } from 'vitest';
+import { costAtVolumes, rollUpCost, type CostModel, type RollUpInput } from './roll-up';
+
+// REFERENCES §9 illustrative rates, units per 1 EUR [S: ECB convention; C].
+const rates = { base: 'EUR', rates: { USD: 1.0856, CNY: 7.85, GBP: 0.8567 } };
+// 1 CNY = 1.0856 / 7.85 USD = 0.138292994 USD (§9: CNY→USD 0.138293).
+const CNY = 1.0856 / 7.85;
+
+// Invented demo model, money in CNY.
+const model: CostModel = {
+  currency: 'CNY',
+  attritionByCategory: { passive: 0.03, ic: 0.01 },
+  defaultAttrition: 0.005,
+  smtCostPerPlacement: 0.08,
+  thtCostPerJoint: 0.05,
+  manualOperations: [
+    { label: 'Weld cell tabs', minutes: 1.5 },
+    { label: 'Fit heater film into shell', minutes: 2.5 },
+  ],
+  labourRatePerHour: 30,
+  testMinutes: 1,
+  packagingCost: 2,
+  firstPassYield: 0.98,
+  overheadFraction: 0.1,
+  freightFraction: 0.05,
+  insuranceFraction: 0.01,
+  dutyFraction: 0.027,
+  retailMarginFraction: 0.4,
+  platformMarginFraction: 0.15,
+  confidenceBand: { high: 0.05, medium: 0.1, low: 0.25 },
+};
+
+const input: RollUpInput = {
+  volume: 1000,
+  currency: 'USD',
+  rates,
+  model,
+  lines: [
+    {
+      partId: 'CELL-1',
+      category: 'cell',
+      quantity: 1,
+      mount: 'manual',
+      price: {
+        currency: 'USD',
+        confidence: 'medium',
+        breaks: [
+          { minQty: 1, unitPrice: 2.1 },
+          { minQty: 1000, unitPrice: 1.8 },
+          { minQty: 5000, unitPrice: 1.65 },
+        ],
+      },
+    },
+    {
+      partId: 'R-10K',
+      category: 'passive',
+      quantity: 6,
+      mount: 'smt',
+      price: {
+        currency: 'CNY',
+        confidence: 'high',
+        breaks: [
+          { minQty: 100, unitPrice: 0.02 },
+          { minQty: 5000, unitPrice: 0.01 },
+          { minQty: 10000, unitPrice: 0.008 },
+        ],
+      },
+    },
+    {
+      partId: 'IC-CHG',
+      category: 'ic',
+      quantity: 1,
+      mount: 'smt',
+      price: {
+        currency: 'CNY',
+        confidence: 'low',
+        breaks: [
+          { minQty: 1, unitPrice: 1.2 },
+          { minQty: 1000, unitPrice: 0.95 },
+        ],
+      },
+    },
+    { partId: 'J-USB', category: 'connector', quantity: 1, mount: 'tht' },
+  ],
+  retail: { amount: 19.99, currency: 'GBP' },
+};
+
+describe('rollUpCost — a small BOM worked by hand [C]', () => {
+  const r = rollUpCost(input);
+
+  it('prices each line at the break for quantity × volume, converted before attrition', () => {
+    // CELL-1: 1 × 1000 = 1000 pieces → break 1000 → 1.80 USD; 'cell' not listed → default attrition 0.005
+    //   extended = 1 × 1.80 × 1.005 = 1.809
+    // R-10K: 6 × 1000 = 6000 → break 5000 → 0.01 CNY = 0.00138293 USD; passive 0.03
+    //   extended = 6 × 0.00138293 × 1.03 = 0.00854651
+    // IC-CHG: 1000 → break 1000 → 0.95 CNY = 0.131378 USD; ic 0.01
+    //   extended = 0.131378 × 1.01 = 0.132692
+    // J-USB: no price → unpriced, adds nothing
+    const [cell, res, ic, usb] = r.lines;
+    expect(cell).toMatchObject({ buyQuantity: 1000, unitPrice: 1.8, attrition: 0.005, priced: true, confidence: 'medium' });
+    expect(cell!.extended).toBeCloseTo(1.809, 12);
+    expect(res!.buyQuantity).toBe(6000);
+    expect(res!.unitPrice).toBeCloseTo(0.01 * CNY, 12);
+    expect(res!.extended).toBeCloseTo(0.008546507, 9);
+    expect(ic!.unitPrice).toBeCloseTo(0.131378344, 9);
+    expect(ic!.extended).toBeCloseTo(0.132692127, 9);
+    expect(usb).toMatchObject({ unitPrice: null, extended: null, priced: false, confidence: null, attrition: 0.005 });
+    expect(r.unpricedPartIds).toEqual(['J-USB']);
+    // parts = 1.809 + 0.008546507 + 0.132692127 = 1.950238634
+    expect(r.partsTotal).toBeCloseTo(1.950238634, 9);
+    expect(r.byCategory).toEqual({
+      cell: cell!.extended,
+      passive: res!.extended,
+      ic: ic!.extended,
+      connector: 0,
+    });
+    expect(r.warnings).toEqual([]);
+  });
+
+  it('adds assembly, labour, test and packaging converted from the model currency', () => {
+    // placements = 6 + 1 = 7; joints = 1 THT part × 2 = 2
+    expect(r.placements).toBe(7);
+    expect(r.joints).toBe(2);
+    // assembly = (7 × 0.08 + 2 × 0.05) CNY = 0.66 CNY = 0.091273376 USD
+    expect(r.assembly).toBeCloseTo(0.66 * CNY, 12);
+    // labour = (1.5 + 2.5) min / 60 × 30 CNY/h = 2 CNY = 0.276585987 USD
+    expect(r.labour).toBeCloseTo(2 * CNY, 12);
+    // test = 1 min / 60 × 30 CNY/h = 0.5 CNY = 0.069146497 USD
+    expect(r.test).toBeCloseTo(0.5 * CNY, 12);
+    // packaging = 2 CNY = 0.276585987 USD
+    expect(r.packaging).toBeCloseTo(2 * CNY, 12);
+  });
+
+  it('rolls up yield loss, overhead, ex-works, freight, insurance, duty and landed cost', () => {
+    // yield loss = (1.950238634 + 0.091273376 + 0.276585987 + 0.069146497) × (1/0.98 − 1) = 0.048719275
+    expect(r.yieldLoss).toBeCloseTo(0.048719275, 8);
+    // overhead = 0.10 × (2.387244494 + 0.276585987 + 0.048719275) = 0.271254976
+    expect(r.overhead).toBeCloseTo(0.271254976, 8);
+    // ex-works = 2.712549757 + 0.271254976 = 2.983804733
+    expect(r.exWorks).toBeCloseTo(2.983804733, 8);
+    // freight = 0.05 × 2.983804733 = 0.149190237; insurance = 0.01 × 2.983804733 = 0.029838047
+    expect(r.freight).toBeCloseTo(0.149190237, 8);
+    expect(r.insurance).toBeCloseTo(0.029838047, 8);
+    // duty on CIF (REFERENCES §10) = 0.027 × (2.983804733 + 0.149190237 + 0.029838047) = 0.085396491
+    expect(r.duty).toBeCloseTo(0.085396491, 8);
+    // landed = 3.162833017 + 0.085396491 = 3.248229508
+    expect(r.landed).toBeCloseTo(3.248229508, 8);
+  });
+
+  it('gives the low/high range from each line’s confidence band', () => {
+    // low parts = 1.809 × 0.90 + 0.008546507 × 0.95 + 0.132692127 × 0.75; the rest recomputed → 2.986127144
+    expect(r.low).toBeCloseTo(2.986127144, 8);
+    // high parts = 1.809 × 1.10 + 0.008546507 × 1.05 + 0.132692127 × 1.25 → 3.510331872
+    expect(r.high).toBeCloseTo(3.510331872, 8);
+  });
+
+  it('works out the implied margin against a retail price in a third currency', () => {
+    // retail = 19.99 GBP / 0.8567 × 1.0856 = 25.331089063 USD
+    expect(r.retail!.amount).toBeCloseTo(25.331089063, 8);
+    // net to maker = 25.331089063 × (1 − 0.40) × (1 − 0.15) = 12.918855422
+    expect(r.retail!.netToMaker).toBeCloseTo(12.918855422, 8);
+    // implied margin = 12.918855422 − 3.248229508 = 9.670625914, i.e. 74.857 % of net
+    expect(r.impliedMargin!.amount).toBeCloseTo(9.670625914, 8);
+    expect(r.impliedMargin!.fraction).toBeCloseTo(0.748566773, 8);
+  });
+
+  it('lists the steps with their formulas', () => {
+    expect(r.steps.map((s) => s.key)).toEqual([
+      'parts',
+      'assembly',
+      'labour',
+      'test',
+      'packaging',
+      'yieldLoss',
+      'overhead',
+      'exWorks',
+      'freight',
+      'insurance',
+      'duty',
+      'landed',
+      'low',
+      'high',
+      'netToMaker',
+      'impliedMargin',
+    ]);
+    const step = Object.fromEntries(r.steps.map((s) => [s.key, s]));
+    expect(step.landed!.value).toBe(r.landed);
+    expect(step.assembly!.formula).toBe('7 placements × 0.0110634 + 2 joints × 0.00691465 = 0.0912734');
+    expect(step.parts!.formula).toMatch(/over 3 priced lines = 1\.95024$/);
+    expect(step.impliedMargin!.formula).toMatch(/\(74\.8567 % of net\)$/);
+  });
+});
+
+describe('rollUpCost — REFERENCES §10 examples', () => {
+  const bare: CostModel = {
+    currency: 'USD',
+    attritionByCategory: {},
+    defaultAttrition: 0.02,
+    smtCostPerPlacement: 0.01,
+    thtCostPerJoint: 0,
+    manualOperations: [],
+    labourRatePerHour: 0,
+    testMinutes: 0,
+    packagingCost: 0,
+    firstPassYield: 0.97,
+    overheadFraction: 0,
+    freightFraction: 0,
+    dutyFraction: 0,
+    retailMarginFraction: 0,
+    platformMarginFraction: 0,
+    confidenceBand: { high: 0, medium: 0, low: 0 },
+  };
+
+  it('BOM $10.00 + 2 % attrition + 200 placements at $0.01, 97 % yield → $12.5773 [CP; C]', () => {
+    const r = rollUpCost({
+      volume: 1,
+      currency: 'USD',
+      rates: { base: 'USD', rates: {} },
+      model: bare,
+      lines: [
+        { partId: 'BOM', category: 'bom', quantity: 1, mount: 'manual', price: { currency: 'USD', confidence: 'high', breaks: [{ minQty: 1, unitPrice: 10 }] } },
+        { partId: 'PLACEMENTS', category: 'placements', quantity: 200, mount: 'smt' },
+      ],
+    });
+    expect(r.partsTotal).toBeCloseTo(10.2, 12);
+    expect(r.assembly).toBeCloseTo(2, 12);
+    expect(r.exWorks).toBeCloseTo(12.5773, 4);
+    expect(r.landed).toBeCloseTo(12.5773, 4);
+    expect(r.retail).toBeNull();
+    expect(r.impliedMargin).toBeNull();
+    expect(r.steps.map((s) => s.key)).not.toContain('netToMaker');
+  });
+
+  it('keystone: a landed cost of $20 against a $40 retail price leaves a 50 % margin [S: marketing dictionaries]', () => {
+    const r = rollUpCost({
+      volume: 1,
+      currency: 'USD',
+      rates: { base: 'USD', rates: {} },
+      model: { ...bare, defaultAttrition: 0, firstPassYield: 1, smtCostPerPlacement: 0 },
+      lines: [{ partId: 'X', category: 'x', quantity: 1, mount: 'manual', price: { currency: 'USD', confidence: 'high', breaks: [{ minQty: 1, unitPrice: 20 }] } }],
+      retail: { amount: 40, currency: 'USD' },
+    });
+    expect(r.impliedMargin).toEqual({ amount: 20, fraction: 0.5 });
+    // With every margin taken by the channel there is nothing left to share.
+    const all = rollUpCost({
+      volume: 1,
+      currency: 'USD',
+      rates: { base: 'USD', rates: {} },
+      model: { ...bare, retailMarginFraction: 1 },
+      lines: [],
+      retail: { amount: 40, currency: 'USD' },
+    });
+    expect(all.impliedMargin!.fraction).toBeNull();
+  });
+});
+
+describe('rollUpCost — price breaks at the volume boundary', () => {
+  const line = (breaks: { minQty: number; unitPrice: number }[]) => ({
+    ...input,
+    currency: 'USD',
+    retail: null,
+    lines: [{ partId: 'P', category: 'ic', quantity: 2, mount: 'smt' as const, price: { currency: 'USD', confidence: 'high' as const, breaks } }],
+  });
+  const breaks = [
+    { minQty: 10, unitPrice: 1 },
+    { minQty: 2000, unitPrice: 0.5 },
+  ];
+
+  it('uses the break exactly at quantity × volume, and the one below just under it [CP]', () => {
+    expect(rollUpCost({ ...line(breaks), volume: 1000 }).lines[0]!.unitPrice).toBe(0.5); // 2 × 1000 = 2000
+    expect(rollUpCost({ ...line(breaks), volume: 999 }).lines[0]!.unitPrice).toBe(1); // 1998
+  });
+
+  it('prices below the first break at that break, with a warning', () => {
+    const r = rollUpCost({ ...line(breaks), volume: 4 }); // 8 pieces < 10
+    expect(r.lines[0]).toMatchObject({ unitPrice: 1, belowMinimumOrder: true });
+    expect(r.warnings[0]).toMatch(/P: 8 pieces is below the smallest price break \(10\)/);
+  });
+
+  it('gives the volume table in the order asked', () => {
+    const rows = costAtVolumes([1000, 999, 5000], line(breaks));
+    expect(rows.map((x) => [x.volume, x.lines[0]!.unitPrice])).toEqual([
+      [1000, 0.5],
+      [999, 1],
+      [5000, 0.5],
+    ]);
+    expect(() => costAtVolumes([], line(breaks))).toThrow(/volumes needs at least one/);
+    expect(() => costAtVolumes([100, 0], line(breaks))).toThrow(/volumes\[1\]/);
+  });
+});
+
+describe('rollUpCost — errors name the field', () => {
+  const withLine = (patch: object) => ({ ...input, lines: [{ ...input.lines[1]!, ...patch }] });
+
+  it('rejects volume, currency and rate problems', () => {
+    expect(() => rollUpCost({ ...input, volume: 0 })).toThrow(/volume must be a whole number of at least 1/);
+    expect(() => rollUpCost({ ...input, volume: 10.5 })).toThrow(/volume/);
+    expect(() => rollUpCost({ ...input, currency: 'JPY' })).toThrow(/^currency: no exchange rate for JPY/);
+    expect(() => rollUpCost({ ...input, model: { ...model, currency: 'CHF' } })).toThrow(/^model\.currency: no exchange rate for CHF/);
+    expect(() => rollUpCost({ ...input, retail: { amount: 10, currency: 'SEK' } })).toThrow(/^retail\.currency: no exchange rate for SEK/);
+    expect(() => rollUpCost({ ...input, retail: { amount: 0, currency: 'USD' } })).toThrow(/retail\.amount/);
+    expect(() => rollUpCost(withLine({ price: { currency: 'JPY', confidence: 'high', breaks: [{ minQty: 1, unitPrice: 1 }] } }))).toThrow(
+      /^lines\[0\]\.price\.currency: no exchange rate for JPY/,
+    );
+    expect(() => rollUpCost(null as never)).toThrow(/needs \{ volume/);
+  });
+
+  it('rejects bad lines and prices', () => {
+    expect(() => rollUpCost(withLine({ price: { currency: 'CNY', confidence: 'high', breaks: [{ minQty: 1, unitPrice: -1 }] } }))).toThrow(
+      /^lines\[0\]\.price\.breaks\[0\]\.unitPrice must be a number not below zero/,
+    );
+    expect(() =>
+      rollUpCost(
+        withLine({
+          price: {
+            currency: 'CNY',
+            confidence: 'high',
+            breaks: [
+              { minQty: 100, unitPrice: 1 },
+              { minQty: 50, unitPrice: 0.5 },
+            ],
+          },
+        }),
+      ),
+    ).toThrow(/^lines\[0\]\.price\.breaks\[1\]\.minQty: price breaks overlap or are out of order/);
+    expect(() => rollUpCost(withLine({ price: { currency: 'CNY', confidence: 'sure', breaks: [{ minQty: 1, unitPrice: 1 }] } }))).toThrow(
+      /lines\[0\]\.price\.confidence must be one of high, medium, low/,
+    );
+    expect(() => rollUpCost(withLine({ quantity: 0 }))).toThrow(/lines\[0\]\.quantity must be greater than zero/);
+    expect(() => rollUpCost(withLine({ mount: 'glue' }))).toThrow(/lines\[0\]\.mount must be one of smt, tht, manual/);
+    expect(() => rollUpCost(withLine({ partId: ' ' }))).toThrow(/lines\[0\]\.partId must be non-empty text/);
+    expect(() => rollUpCost(withLine({ category: undefined }))).toThrow(/lines\[0\]\.category/);
+    expect(() => rollUpCost({ ...input, lines: [null as never] })).toThrow(/lines\[0\] must be a BOM line/);
+    expect(() => rollUpCost({ ...input, lines: 'x' as never })).toThrow(/lines must be a list/);
+    // A price with no breaks yet counts as unpriced.
+    expect(rollUpCost(withLine({ price: { currency: 'CNY', confidence: 'high', breaks: [] } })).unpricedPartIds).toEqual(['R-10K']);
+  });
+
+  it('rejects bad model values', () => {
+    const bad = (patch: Partial<CostModel>) => () => rollUpCost({ ...input, model: { ...model, ...patch } });
+    expect(bad({ overheadFraction: 10 })).toThrow(/model\.overheadFraction must be between 0 and 1/);
+    expect(bad({ attritionByCategory: { passive: -0.1 } })).toThrow(/model\.attritionByCategory\.passive/);
+    expect(bad({ firstPassYield: 0 })).toThrow(/model\.firstPassYield must be greater than zero/);
+    expect(bad({ manualOperations: [{ label: '', minutes: 1 }] })).toThrow(/model\.manualOperations\[0\]\.label/);
+    expect(bad({ manualOperations: [{ label: 'Glue', minutes: -1 }] })).toThrow(/model\.manualOperations\[0\]\.minutes/);
+    expect(bad({ manualOperations: undefined as never })).toThrow(/model\.manualOperations must be a list/);
+    expect(bad({ confidenceBand: { high: 0.05, medium: 2, low: 0.2 } })).toThrow(/model\.confidenceBand\.medium/);
+    expect(bad({ confidenceBand: null as never })).toThrow(/model\.confidenceBand must give/);
+    expect(bad({ attritionByCategory: 5 as never })).toThrow(/model\.attritionByCategory must map/);
+    expect(bad({ smtCostPerPlacement: -0.01 })).toThrow(/model\.smtCostPerPlacement/);
+    expect(() => rollUpCost({ ...input, model: null as never })).toThrow(/model must be a cost model/);
+  });
+});

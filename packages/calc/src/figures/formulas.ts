@@ -1,0 +1,84 @@
+/** How a figure is obtained, for the UI: the formula and the source label (REFERENCES.md labels). */
+export interface FormulaEntry {
+  formula: string;
+  source: string;
+}
+
+/**
+ * Catalogue of every figure family and bench-tool result. Teardown figures keyed per record
+ * (load.<id>.power, trace.<id>.rating, heater.<id>.surfaceRise…) use the entry of their family
+ * (load.power, trace.rating, heater.surfaceRise…).
+ */
+const CATALOGUE = {
+  // electrical
+  'electrical.current': { formula: 'I = V / R', source: "Ohm's law [C]" },
+  'electrical.power': { formula: 'P = V² / R', source: "Joule's law [C]" },
+  'electrical.series': { formula: 'R_eq = R₁ + R₂ + … + Rₙ', source: 'Series combination [C]' },
+  'electrical.parallel': { formula: '1 / R_eq = 1/R₁ + 1/R₂ + … + 1/Rₙ', source: 'Parallel combination [C]' },
+  'electrical.pwmAveragePower': { formula: 'P_avg = D · P_peak', source: 'Ideal PWM of a resistive load [C]' },
+  'electrical.dutyForTargetPower': { formula: 'D = P_target / P_peak', source: 'Ideal PWM of a resistive load [C]' },
+  'electrical.rmsVoltage': { formula: 'V_rms = V · √D', source: 'Ideal PWM square wave [C]' },
+  'load.power': { formula: 'P = V² / R_eq, R_eq = n·R (series) or R/n (parallel)', source: "Joule's law [C]" },
+  'load.elementPower': { formula: 'P_e = V_e² / R_e, V_e = V/n (series) or V (parallel)', source: "Joule's law [C]" },
+  'load.current': {
+    formula: 'I_pack = Σ I_load (direct) + Σ P_load / (η · V_in) (through a converter)',
+    source: "Ohm's law; converter power balance [C]",
+  },
+  'load.averagePower': { formula: 'P_avg = Σ D · P_load', source: 'Ideal PWM [C]' },
+  // battery
+  'pack.energy': { formula: 'E = V_nom · Ah · S · P', source: "[S: cell makers' application guides] Wh = V_nom · Ah" },
+  'pack.transportClass': {
+    formula: 'E ≤ 100 Wh; 100 Wh < E ≤ 160 Wh; E > 160 Wh ("not exceeding")',
+    source: '[S: IATA DGR / ICAO TI] lithium-ion watt-hour limits',
+  },
+  'pack.specificEnergy': { formula: 'e = E / m', source: '[C]; commercial Li-ion cells 100–265 Wh/kg [S: encyclopedic data]' },
+  'pack.cRate': { formula: 'n = I / C_rated', source: '[S] C-rate definition' },
+  'runtime.hours': { formula: 't = E · η · u / P = E_pack / Σ (P_load · D / η)', source: 'Energy balance [C]' },
+  'battery.chargeTime': {
+    formula: 't = f·C / I + τ · ln(I / I_t), τ = (1 − f)·C / (I − I_t); f = 0.8, I_t = C/20',
+    source: 'Rough CC-CV model [CP]; termination C/10–C/30 [S, cell-specific]',
+  },
+  'charge.timeHours': {
+    formula: 't = f·C / I + τ · ln(I / I_t), τ = (1 − f)·C / (I − I_t); f = 0.8, I_t = C/20',
+    source: 'Rough CC-CV model [CP]; termination C/10–C/30 [S, cell-specific]',
+  },
+  'battery.plausibility': { formula: 'E_claimed / m ≤ e_max(chemistry)', source: '[CP] flag Li-ion cells claiming more than about 300 Wh/kg' },
+  'capacity.measuredVsLabel': { formula: 'Q_measured / Q_label · 100 %', source: '[M: IEC 61960-3] delivered capacity must reach the rated value' },
+  // converters
+  'converter.buckDuty': { formula: 'D = V_out / (V_in · η)', source: '[S: Erickson & Maksimović, Fundamentals of Power Electronics]' },
+  'converter.boostDuty': { formula: 'D = 1 − V_in · η / V_out', source: "[S] ideal; [M: semiconductor makers' application notes] with losses" },
+  'converter.loss': { formula: 'P_loss = P_out · (1/η − 1)', source: 'Power balance [C]' },
+  'powerbank.outputAh': { formula: 'Ah_out = V_cell · Ah_rated · η / V_out', source: '[CP] power-bank rating practice' },
+  // traces
+  'trace.resistance': { formula: 'R = ρ·L / (w·t) · [1 + α·(T − 20 °C)]', source: '[S: IEC 60028] IACS ρ = 1.7241e-8 Ω·m, α = 0.00393 /K' },
+  'trace.rating': { formula: 'I = k · ΔT^0.44 · (w·t)^0.725, k = 0.048 external / 0.024 internal, mil²', source: '[S: IPC-2221 curve fit]' },
+  'trace.minWidth': { formula: 'w = (I / (k · ΔT^0.44))^(1/0.725) / t, mil', source: '[S: IPC-2221 curve fit]' },
+  'heater.powerDensity': { formula: 'p = P / A', source: '[C]' },
+  // thermal
+  'heater.surfaceRise': { formula: 'ΔT = D · P / (h · A)', source: 'Newton cooling, steady state [C]; h 2–25 W/m²K free convection [S: Çengel]' },
+  'heater.touchMargin': {
+    formula: 'margin = T_burn(material, contact time) − (T_ambient + ΔT)',
+    source: '[M: ISO 13732-1] 1 min 51 °C, 10 min 48 °C, 8 h 43 °C; [S: ECMA-287] shorter contact',
+  },
+  'thermal.burnThreshold': {
+    formula: 'T_burn(material, next longer listed contact time)',
+    source: '[M: ISO 13732-1]; [S: ECMA-287]',
+  },
+  'thermal.dutyForRise': { formula: 'D = ΔT · h · A / P_peak', source: 'Newton cooling, steady state [C]' },
+  // markings
+  'marking.resistor': { formula: 'digits × 10^last digit; R = decimal point', source: '[S: instrument manual, distributor page]' },
+  'marking.eia96': { formula: 'E96 value at index nn × letter multiplier', source: '[S: EIA-96 decoders agree]' },
+  'marking.capacitor': { formula: 'two digits × 10^third digit pF (8: ×0.01, 9: ×0.1)', source: '[S]; [M] for 8 and 9' },
+  'marking.colourBands': { formula: 'digits × 10^multiplier, ± tolerance', source: '[S: IEC 60062:2016 summary pages]' },
+  'marking.nearestPreferred': { formula: 'v minimising |ln(x / v)| over the series', source: '[S: IEC 60063:2015] lists; log rule [C]' },
+} as const satisfies Record<string, FormulaEntry>;
+
+export type FormulaKey = keyof typeof CATALOGUE;
+
+/** Formula and source of every figure family, for the API and UI to show beside a value. */
+export const FORMULAS: Readonly<Record<string, FormulaEntry>> = CATALOGUE;
+
+/** The catalogue entry of a known figure family. */
+export function formulaOf(key: FormulaKey): FormulaEntry {
+  return CATALOGUE[key];
+}
