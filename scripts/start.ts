@@ -1,33 +1,15 @@
 // `npm start`: build the web app when it is missing or older than its sources, migrate the
 // database, seed the demo workspace when empty, and serve web app and API on one port.
-import { spawnSync } from 'node:child_process';
-import { existsSync, readdirSync, statSync } from 'node:fs';
-import { join } from 'node:path';
-import { fileURLToPath } from 'node:url';
 import { readEnv } from '../apps/api/src/config/env';
 import { demoSignIns } from '../apps/api/src/seed/index';
 import { startServer } from '../apps/api/src/server';
+import { ensureWebBuild, webDist } from './web-build';
 
-const root = fileURLToPath(new URL('..', import.meta.url));
-const webDist = join(root, 'apps/web/dist');
-
-function newest(path: string): number {
-  const st = statSync(path);
-  if (!st.isDirectory()) return st.mtimeMs;
-  return Math.max(st.mtimeMs, ...readdirSync(path).map((f) => newest(join(path, f))));
-}
-
-function webBuildIsStale(): boolean {
-  const index = join(webDist, 'index.html');
-  if (!existsSync(index)) return true;
-  const sources = [join(root, 'apps/web/src'), join(root, 'apps/web/index.html'), join(root, 'packages/contracts/src'), join(root, 'tailwind.config.ts'), join(root, 'vite.config.ts')];
-  return Math.max(...sources.filter(existsSync).map(newest)) > statSync(index).mtimeMs;
-}
-
-if (webBuildIsStale()) {
-  console.log('Building the web app…');
-  const r = spawnSync('npx', ['vite', 'build', '--logLevel', 'warn'], { cwd: root, stdio: 'inherit' });
-  if (r.status !== 0) process.exit(r.status ?? 1);
+try {
+  ensureWebBuild();
+} catch (err) {
+  console.error((err as Error).message);
+  process.exit(1);
 }
 
 const env = readEnv();

@@ -3,7 +3,7 @@ import { QueryClientProvider } from '@tanstack/react-query';
 import { RouterProvider } from 'react-router/dom';
 import { Toaster } from 'sonner';
 import { onUnauthenticated } from '@/lib/api-client';
-import { meKey } from '@/features/auth/api/get-me';
+import { meKey } from '@/lib/session';
 import { queryClient } from './query-client';
 import { router } from './router';
 

@@ -4,7 +4,7 @@ import type { Role } from '@splitcase/contracts';
 import { ErrorPanel } from '@/components/error-boundary';
 import { Spinner } from '@/components/page';
 import { paths } from '@/config/paths';
-import { useMe } from '@/features/auth/api/get-me';
+import { useMe } from '@/lib/session';
 
 /** Signed-in users only; others go to sign-in and come back afterwards. */
 export function RequireAuth({ children }: { children: ReactNode }) {

@@ -7,7 +7,7 @@ import { Spinner } from '@/components/page';
 import { WidgetBoundary } from '@/components/error-boundary';
 import { navFor } from '@/config/nav';
 import { paths } from '@/config/paths';
-import { useMe } from '@/features/auth/api/get-me';
+import { useMe } from '@/lib/session';
 import { useLogout } from '@/features/auth/api/logout';
 
 /** Left rail navigation; the content area is the workspace. */

@@ -2,7 +2,7 @@ import { Link } from 'react-router';
 import { ROLE_DESCRIPTIONS, ROLE_LABELS } from '@splitcase/contracts';
 import { Card, PageHeader } from '@/components/page';
 import { navFor } from '@/config/nav';
-import { useMe } from '@/features/auth/api/get-me';
+import { useMe } from '@/lib/session';
 
 export function Component() {
   const me = useMe().data!;

@@ -8,7 +8,7 @@ import { DataTable, type Column } from '@/components/data-table';
 import { ErrorPanel } from '@/components/error-boundary';
 import { Spinner } from '@/components/page';
 import { formatDateTime } from '@/lib/format';
-import { useMe } from '@/features/auth/api/get-me';
+import { useMe } from '@/lib/session';
 import { useUsers } from '../api/users';
 import { useUpdateUser } from '../api/update-user';
 
@@ -82,7 +82,6 @@ export function UsersPanel() {
           ),
       },
     ],
-    // eslint-disable-next-line react-hooks/exhaustive-deps
     [me?.id, update.isPending],
   );
 

@@ -1,7 +1,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { AcceptInvitationBody, Role, User } from '@splitcase/contracts';
 import { api, resetCsrfToken } from '@/lib/api-client';
-import { meKey } from './get-me';
+import { meKey } from '@/lib/session';
 
 export interface InvitationPreview {
   email: string;

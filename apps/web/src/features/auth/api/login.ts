@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { LoginBody, User } from '@splitcase/contracts';
 import { api, resetCsrfToken } from '@/lib/api-client';
-import { meKey } from './get-me';
+import { meKey } from '@/lib/session';
 
 export const login = (body: LoginBody) => api.post<{ user: User }>('/api/auth/login', body);
 

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api, resetCsrfToken } from '@/lib/api-client';
-import { meKey } from './get-me';
+import { meKey } from '@/lib/session';
 
 export const logout = () => api.post<void>('/api/auth/logout');
 
