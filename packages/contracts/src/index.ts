@@ -4,3 +4,5 @@ export * from './roles';
 export * from './common';
 export * from './auth';
 export * from './admin';
+export * from './domain';
+export * from './teardowns';

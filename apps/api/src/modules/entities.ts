@@ -2,7 +2,37 @@
 import { AuditEntrySchema } from './audit/audit-entry.entity';
 import { InvitationSchema } from './auth/invitation.entity';
 import { ResetTokenSchema } from './auth/reset-token.entity';
+import { DeviceSchema } from './devices/device.entity';
+import { FindingSchema } from './findings/finding.entity';
 import { OutboxMessageSchema } from './mail/outbox-message.entity';
+import { MeasurementSchema } from './measurements/measurement.entity';
+import { PartSchema } from './parts/part.entity';
+import { CalloutSchema } from './photos/callout.entity';
+import { PhotoSchema } from './photos/photo.entity';
+import { ConverterSchema } from './power/converter.entity';
+import { LoadSchema } from './power/load.entity';
+import { PackSchema } from './power/pack.entity';
+import { CommentSchema } from './teardowns/comment.entity';
+import { SuggestionDecisionSchema } from './teardowns/suggestion-decision.entity';
+import { TeardownSchema } from './teardowns/teardown.entity';
 import { UserSchema } from './users/user.entity';
 
-export const entities = [UserSchema, InvitationSchema, ResetTokenSchema, OutboxMessageSchema, AuditEntrySchema];
+export const entities = [
+  UserSchema,
+  InvitationSchema,
+  ResetTokenSchema,
+  OutboxMessageSchema,
+  AuditEntrySchema,
+  DeviceSchema,
+  TeardownSchema,
+  CommentSchema,
+  SuggestionDecisionSchema,
+  PartSchema,
+  PackSchema,
+  ConverterSchema,
+  LoadSchema,
+  MeasurementSchema,
+  PhotoSchema,
+  CalloutSchema,
+  FindingSchema,
+];

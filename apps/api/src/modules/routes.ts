@@ -5,8 +5,9 @@ import { auditRoutes } from './audit/routes';
 import { authRoutes } from './auth/routes';
 import { mailRoutes } from './mail/routes';
 import { systemRoutes } from './system/routes';
+import { teardownRoutes } from './teardowns/routes';
 import { userRoutes } from './users/routes';
 
 export function allRoutes(deps: AppDeps, version: string): RouteDef[] {
-  return [...systemRoutes(version), ...authRoutes(deps), ...userRoutes, ...mailRoutes, ...auditRoutes];
+  return [...systemRoutes(version), ...authRoutes(deps), ...userRoutes, ...mailRoutes, ...auditRoutes, ...teardownRoutes];
 }
