@@ -6,3 +6,4 @@ export * from './auth';
 export * from './admin';
 export * from './domain';
 export * from './teardowns';
+export * from './settings';

@@ -12,6 +12,7 @@ import { PhotoSchema } from './photos/photo.entity';
 import { ConverterSchema } from './power/converter.entity';
 import { LoadSchema } from './power/load.entity';
 import { PackSchema } from './power/pack.entity';
+import { SettingSchema } from './settings/setting.entity';
 import { CommentSchema } from './teardowns/comment.entity';
 import { SuggestionDecisionSchema } from './teardowns/suggestion-decision.entity';
 import { TeardownSchema } from './teardowns/teardown.entity';
@@ -35,4 +36,5 @@ export const entities = [
   PhotoSchema,
   CalloutSchema,
   FindingSchema,
+  SettingSchema,
 ];

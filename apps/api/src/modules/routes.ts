@@ -4,10 +4,11 @@ import type { RouteDef } from '../http/route';
 import { auditRoutes } from './audit/routes';
 import { authRoutes } from './auth/routes';
 import { mailRoutes } from './mail/routes';
+import { settingsRoutes } from './settings/routes';
 import { systemRoutes } from './system/routes';
 import { teardownRoutes } from './teardowns/routes';
 import { userRoutes } from './users/routes';
 
 export function allRoutes(deps: AppDeps, version: string): RouteDef[] {
-  return [...systemRoutes(version), ...authRoutes(deps), ...userRoutes, ...mailRoutes, ...auditRoutes, ...teardownRoutes];
+  return [...systemRoutes(version), ...authRoutes(deps), ...userRoutes, ...mailRoutes, ...auditRoutes, ...settingsRoutes, ...teardownRoutes];
 }

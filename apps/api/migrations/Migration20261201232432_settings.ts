@@ -1,0 +1,91 @@
+import { Migration } from '@mikro-orm/migrations';
+
+export class Migration20261201232432_settings extends Migration {
+
+  override async up(): Promise<void> {
+    this.addSql(`create table \`settings\` (\`key\` text not null, \`value\` json not null, \`updated_by_id\` integer null, \`updated_at\` datetime not null, constraint \`settings_updated_by_id_foreign\` foreign key(\`updated_by_id\`) references \`users\`(\`id\`) on delete set null on update cascade, primary key (\`key\`));`);
+    this.addSql(`create index \`settings_updated_by_id_index\` on \`settings\` (\`updated_by_id\`);`);
+
+    this.addSql(`pragma foreign_keys = off;`);
+    this.addSql(`create table \`users__temp_alter\` (\`id\` integer not null primary key autoincrement, \`email\` text not null, \`name\` text not null, \`role\` text check (\`role\` in ('admin', 'engineer', 'sourcing', 'lead', 'viewer')) not null, \`password_hash\` text not null, \`active\` integer not null default true, \`created_at\` datetime not null, \`updated_at\` datetime not null, \`last_sign_in_at\` datetime null);`);
+    this.addSql(`insert into \`users__temp_alter\` select \`id\`, \`email\`, \`name\`, \`role\`, \`password_hash\`, \`active\`, \`created_at\`, \`updated_at\`, \`last_sign_in_at\` from \`users\`;`);
+    this.addSql(`drop table \`users\`;`);
+    this.addSql(`alter table \`users__temp_alter\` rename to \`users\`;`);
+    this.addSql(`create unique index \`users_email_unique\` on \`users\` (\`email\`);`);
+    this.addSql(`pragma foreign_keys = on;pragma foreign_keys = off;`);
+    this.addSql(`create table \`invitations__temp_alter\` (\`id\` integer not null primary key autoincrement, \`email\` text not null, \`role\` text check (\`role\` in ('admin', 'engineer', 'sourcing', 'lead', 'viewer')) not null, \`token_hash\` text not null, \`invited_by_id\` integer null, \`created_at\` datetime not null, \`expires_at\` datetime not null, \`accepted_at\` datetime null, \`revoked_at\` datetime null, constraint \`invitations_invited_by_id_foreign\` foreign key(\`invited_by_id\`) references \`users\`(\`id\`) on delete set null on update cascade);`);
+    this.addSql(`insert into \`invitations__temp_alter\` select \`id\`, \`email\`, \`role\`, \`token_hash\`, \`invited_by_id\`, \`created_at\`, \`expires_at\`, \`accepted_at\`, \`revoked_at\` from \`invitations\`;`);
+    this.addSql(`drop table \`invitations\`;`);
+    this.addSql(`alter table \`invitations__temp_alter\` rename to \`invitations\`;`);
+    this.addSql(`create unique index \`invitations_token_hash_unique\` on \`invitations\` (\`token_hash\`);`);
+    this.addSql(`create index \`invitations_invited_by_id_index\` on \`invitations\` (\`invited_by_id\`);`);
+    this.addSql(`pragma foreign_keys = on;pragma foreign_keys = off;`);
+    this.addSql(`create table \`devices__temp_alter\` (\`id\` integer not null primary key autoincrement, \`maker\` text not null, \`model\` text not null, \`category\` text check (\`category\` in ('pocket-heater', 'power-bank', 'headlamp', 'usb-fan', 'toothbrush', 'speaker', 'other')) not null, \`retail_price\` double null, \`retail_currency\` text null, \`price_seen_on\` text null, \`where_bought\` text null, \`claim_capacity_ah\` double null, \`claim_capacity_wh\` double null, \`claim_output_text\` text null, \`claim_output_watts\` double null, \`claim_runtime_h\` double null, \`claim_power_w\` double null, \`entered\` json null, \`notes\` text null, \`created_by_id\` integer null, \`created_at\` datetime not null, \`updated_at\` datetime not null, constraint \`devices_created_by_id_foreign\` foreign key(\`created_by_id\`) references \`users\`(\`id\`) on delete set null on update cascade);`);
+    this.addSql(`insert into \`devices__temp_alter\` select \`id\`, \`maker\`, \`model\`, \`category\`, \`retail_price\`, \`retail_currency\`, \`price_seen_on\`, \`where_bought\`, \`claim_capacity_ah\`, \`claim_capacity_wh\`, \`claim_output_text\`, \`claim_output_watts\`, \`claim_runtime_h\`, \`claim_power_w\`, \`entered\`, \`notes\`, \`created_by_id\`, \`created_at\`, \`updated_at\` from \`devices\`;`);
+    this.addSql(`drop table \`devices\`;`);
+    this.addSql(`alter table \`devices__temp_alter\` rename to \`devices\`;`);
+    this.addSql(`create index \`devices_created_by_id_index\` on \`devices\` (\`created_by_id\`);`);
+    this.addSql(`create index \`devices_category_index\` on \`devices\` (\`category\`);`);
+    this.addSql(`create index \`devices_maker_index\` on \`devices\` (\`maker\`);`);
+    this.addSql(`pragma foreign_keys = on;pragma foreign_keys = off;`);
+    this.addSql(`create table \`teardowns__temp_alter\` (\`id\` integer not null primary key autoincrement, \`device_id\` integer not null, \`engineer_id\` integer not null, \`unit_label\` text null, \`date\` text not null, \`status\` text check (\`status\` in ('draft', 'in_review', 'published')) not null default 'draft', \`summary\` text null, \`safety_notes\` text null, \`contact_seconds\` integer null, \`version\` integer not null default 1, \`submitted_at\` datetime null, \`published_at\` datetime null, \`published_by_id\` integer null, \`last_review_note\` text null, \`created_at\` datetime not null, \`updated_at\` datetime not null, constraint \`teardowns_device_id_foreign\` foreign key(\`device_id\`) references \`devices\`(\`id\`) on delete cascade on update cascade, constraint \`teardowns_engineer_id_foreign\` foreign key(\`engineer_id\`) references \`users\`(\`id\`) on update cascade, constraint \`teardowns_published_by_id_foreign\` foreign key(\`published_by_id\`) references \`users\`(\`id\`) on delete set null on update cascade);`);
+    this.addSql(`insert into \`teardowns__temp_alter\` select \`id\`, \`device_id\`, \`engineer_id\`, \`unit_label\`, \`date\`, \`status\`, \`summary\`, \`safety_notes\`, \`contact_seconds\`, \`version\`, \`submitted_at\`, \`published_at\`, \`published_by_id\`, \`last_review_note\`, \`created_at\`, \`updated_at\` from \`teardowns\`;`);
+    this.addSql(`drop table \`teardowns\`;`);
+    this.addSql(`alter table \`teardowns__temp_alter\` rename to \`teardowns\`;`);
+    this.addSql(`create index \`teardowns_device_id_index\` on \`teardowns\` (\`device_id\`);`);
+    this.addSql(`create index \`teardowns_engineer_id_index\` on \`teardowns\` (\`engineer_id\`);`);
+    this.addSql(`create index \`teardowns_published_by_id_index\` on \`teardowns\` (\`published_by_id\`);`);
+    this.addSql(`create index \`teardowns_status_index\` on \`teardowns\` (\`status\`);`);
+    this.addSql(`pragma foreign_keys = on;pragma foreign_keys = off;`);
+    this.addSql(`create table \`parts__temp_alter\` (\`id\` integer not null primary key autoincrement, \`teardown_id\` integer not null, \`position\` integer not null default 0, \`designators\` text null, \`category\` text check (\`category\` in ('cell', 'ic', 'passive', 'inductor', 'semiconductor', 'connector', 'pcb', 'heater', 'sensor', 'switch', 'led', 'motor', 'wire', 'enclosure', 'fastener', 'label', 'packaging', 'other')) not null, \`description\` text not null, \`marking\` text null, \`decoded_value\` double null, \`decoded_unit\` text null, \`maker_part_number\` text null, \`package\` text null, \`quantity\` integer not null default 1, \`mount\` text check (\`mount\` in ('smt', 'tht', 'manual')) not null default 'smt', \`notes\` text null, \`created_at\` datetime not null, \`updated_at\` datetime not null, constraint \`parts_teardown_id_foreign\` foreign key(\`teardown_id\`) references \`teardowns\`(\`id\`) on delete cascade on update cascade);`);
+    this.addSql(`insert into \`parts__temp_alter\` select \`id\`, \`teardown_id\`, \`position\`, \`designators\`, \`category\`, \`description\`, \`marking\`, \`decoded_value\`, \`decoded_unit\`, \`maker_part_number\`, \`package\`, \`quantity\`, \`mount\`, \`notes\`, \`created_at\`, \`updated_at\` from \`parts\`;`);
+    this.addSql(`drop table \`parts\`;`);
+    this.addSql(`alter table \`parts__temp_alter\` rename to \`parts\`;`);
+    this.addSql(`create index \`parts_teardown_id_index\` on \`parts\` (\`teardown_id\`);`);
+    this.addSql(`create index \`parts_category_index\` on \`parts\` (\`category\`);`);
+    this.addSql(`pragma foreign_keys = on;pragma foreign_keys = off;`);
+    this.addSql(`create table \`packs__temp_alter\` (\`id\` integer not null primary key autoincrement, \`teardown_id\` integer not null, \`chemistry\` text check (\`chemistry\` in ('li-ion', 'li-po', 'lifepo4', 'lto', 'nimh', 'alkaline', 'other')) not null, \`cell_format\` text null, \`cell_nominal_volts\` double not null, \`cell_max_volts\` double null, \`cell_rated_ah\` double not null, \`cell_measured_ah\` double null, \`series\` integer not null default 1, \`parallel\` integer not null default 1, \`pack_mass_kg\` double null, \`protection\` integer not null default false, \`joining\` text check (\`joining\` in ('welded-tab', 'soldered', 'holder', 'connector', 'other')) null, \`entered\` json null, \`updated_at\` datetime not null, constraint \`packs_teardown_id_foreign\` foreign key(\`teardown_id\`) references \`teardowns\`(\`id\`) on delete cascade on update cascade);`);
+    this.addSql(`insert into \`packs__temp_alter\` select \`id\`, \`teardown_id\`, \`chemistry\`, \`cell_format\`, \`cell_nominal_volts\`, \`cell_max_volts\`, \`cell_rated_ah\`, \`cell_measured_ah\`, \`series\`, \`parallel\`, \`pack_mass_kg\`, \`protection\`, \`joining\`, \`entered\`, \`updated_at\` from \`packs\`;`);
+    this.addSql(`drop table \`packs\`;`);
+    this.addSql(`alter table \`packs__temp_alter\` rename to \`packs\`;`);
+    this.addSql(`create unique index \`packs_teardown_id_unique\` on \`packs\` (\`teardown_id\`);`);
+    this.addSql(`pragma foreign_keys = on;pragma foreign_keys = off;`);
+    this.addSql(`create table \`measurements__temp_alter\` (\`id\` integer not null primary key autoincrement, \`teardown_id\` integer not null, \`quantity\` text check (\`quantity\` in ('voltage', 'current', 'resistance', 'capacitance', 'inductance', 'power', 'energy', 'capacity', 'temperature', 'mass', 'length', 'time', 'frequency', 'other')) not null, \`value\` double not null, \`unit\` text not null, \`entered\` text not null, \`subject\` text not null, \`conditions\` text null, \`instrument\` text null, \`uncertainty\` text null, \`taken_by_id\` integer null, \`taken_at\` datetime not null, constraint \`measurements_teardown_id_foreign\` foreign key(\`teardown_id\`) references \`teardowns\`(\`id\`) on delete cascade on update cascade, constraint \`measurements_taken_by_id_foreign\` foreign key(\`taken_by_id\`) references \`users\`(\`id\`) on delete set null on update cascade);`);
+    this.addSql(`insert into \`measurements__temp_alter\` select \`id\`, \`teardown_id\`, \`quantity\`, \`value\`, \`unit\`, \`entered\`, \`subject\`, \`conditions\`, \`instrument\`, \`uncertainty\`, \`taken_by_id\`, \`taken_at\` from \`measurements\`;`);
+    this.addSql(`drop table \`measurements\`;`);
+    this.addSql(`alter table \`measurements__temp_alter\` rename to \`measurements\`;`);
+    this.addSql(`create index \`measurements_teardown_id_index\` on \`measurements\` (\`teardown_id\`);`);
+    this.addSql(`create index \`measurements_taken_by_id_index\` on \`measurements\` (\`taken_by_id\`);`);
+    this.addSql(`pragma foreign_keys = on;pragma foreign_keys = off;`);
+    this.addSql(`create table \`findings__temp_alter\` (\`id\` integer not null primary key autoincrement, \`teardown_id\` integer not null, \`kind\` text check (\`kind\` in ('cost-down', 'safety', 'reliability', 'manufacturability', 'user-experience', 'compliance', 'clever-idea')) not null, \`severity\` text check (\`severity\` in ('note', 'minor', 'major', 'critical')) not null, \`text\` text not null, \`tags\` json not null, \`suggestion_key\` text null, \`created_by_id\` integer null, \`created_at\` datetime not null, \`updated_at\` datetime not null, constraint \`findings_teardown_id_foreign\` foreign key(\`teardown_id\`) references \`teardowns\`(\`id\`) on delete cascade on update cascade, constraint \`findings_created_by_id_foreign\` foreign key(\`created_by_id\`) references \`users\`(\`id\`) on delete set null on update cascade);`);
+    this.addSql(`insert into \`findings__temp_alter\` select \`id\`, \`teardown_id\`, \`kind\`, \`severity\`, \`text\`, \`tags\`, \`suggestion_key\`, \`created_by_id\`, \`created_at\`, \`updated_at\` from \`findings\`;`);
+    this.addSql(`drop table \`findings\`;`);
+    this.addSql(`alter table \`findings__temp_alter\` rename to \`findings\`;`);
+    this.addSql(`create index \`findings_teardown_id_index\` on \`findings\` (\`teardown_id\`);`);
+    this.addSql(`create index \`findings_created_by_id_index\` on \`findings\` (\`created_by_id\`);`);
+    this.addSql(`create index \`findings_kind_index\` on \`findings\` (\`kind\`);`);
+    this.addSql(`create index \`findings_severity_index\` on \`findings\` (\`severity\`);`);
+    this.addSql(`pragma foreign_keys = on;pragma foreign_keys = off;`);
+    this.addSql(`create table \`converters__temp_alter\` (\`id\` integer not null primary key autoincrement, \`teardown_id\` integer not null, \`label\` text not null, \`topology\` text check (\`topology\` in ('buck', 'boost', 'buck-boost')) not null, \`role\` text check (\`role\` in ('charge', 'output', 'load')) not null, \`vin\` double not null, \`vout\` double not null, \`rated_current_a\` double null, \`charge_current_a\` double null, \`efficiency\` double null, \`efficiency_source\` text check (\`efficiency_source\` in ('measured', 'assumed')) not null default 'assumed', \`entered\` json null, \`created_at\` datetime not null, constraint \`converters_teardown_id_foreign\` foreign key(\`teardown_id\`) references \`teardowns\`(\`id\`) on delete cascade on update cascade);`);
+    this.addSql(`insert into \`converters__temp_alter\` select \`id\`, \`teardown_id\`, \`label\`, \`topology\`, \`role\`, \`vin\`, \`vout\`, \`rated_current_a\`, \`charge_current_a\`, \`efficiency\`, \`efficiency_source\`, \`entered\`, \`created_at\` from \`converters\`;`);
+    this.addSql(`drop table \`converters\`;`);
+    this.addSql(`alter table \`converters__temp_alter\` rename to \`converters\`;`);
+    this.addSql(`create index \`converters_teardown_id_index\` on \`converters\` (\`teardown_id\`);`);
+    this.addSql(`pragma foreign_keys = on;pragma foreign_keys = off;`);
+    this.addSql(`create table \`loads__temp_alter\` (\`id\` integer not null primary key autoincrement, \`teardown_id\` integer not null, \`kind\` text check (\`kind\` in ('heater', 'motor', 'led', 'usb-output', 'other')) not null, \`label\` text not null, \`resistance_ohms\` double null, \`current_amps\` double null, \`power_watts\` double null, \`supply_volts\` double null, \`count\` integer not null default 1, \`connection\` text check (\`connection\` in ('series', 'parallel')) not null default 'parallel', \`duty\` double not null default 1, \`converter_id\` integer null, \`heated_area_m2\` double null, \`surface_material\` text check (\`surface_material\` in ('metal', 'glass', 'plastic')) null, \`entered\` json null, \`created_at\` datetime not null, constraint \`loads_teardown_id_foreign\` foreign key(\`teardown_id\`) references \`teardowns\`(\`id\`) on delete cascade on update cascade, constraint \`loads_converter_id_foreign\` foreign key(\`converter_id\`) references \`converters\`(\`id\`) on delete set null on update cascade);`);
+    this.addSql(`insert into \`loads__temp_alter\` select \`id\`, \`teardown_id\`, \`kind\`, \`label\`, \`resistance_ohms\`, \`current_amps\`, \`power_watts\`, \`supply_volts\`, \`count\`, \`connection\`, \`duty\`, \`converter_id\`, \`heated_area_m2\`, \`surface_material\`, \`entered\`, \`created_at\` from \`loads\`;`);
+    this.addSql(`drop table \`loads\`;`);
+    this.addSql(`alter table \`loads__temp_alter\` rename to \`loads\`;`);
+    this.addSql(`create index \`loads_teardown_id_index\` on \`loads\` (\`teardown_id\`);`);
+    this.addSql(`create index \`loads_converter_id_index\` on \`loads\` (\`converter_id\`);`);
+    this.addSql(`pragma foreign_keys = on;pragma foreign_keys = off;`);
+    this.addSql(`create table \`comments__temp_alter\` (\`id\` integer not null primary key autoincrement, \`teardown_id\` integer not null, \`author_id\` integer null, \`kind\` text check (\`kind\` in ('comment', 'sent-back', 'approved', 'submitted')) not null default 'comment', \`body\` text not null, \`created_at\` datetime not null, constraint \`comments_teardown_id_foreign\` foreign key(\`teardown_id\`) references \`teardowns\`(\`id\`) on delete cascade on update cascade, constraint \`comments_author_id_foreign\` foreign key(\`author_id\`) references \`users\`(\`id\`) on delete set null on update cascade);`);
+    this.addSql(`insert into \`comments__temp_alter\` select \`id\`, \`teardown_id\`, \`author_id\`, \`kind\`, \`body\`, \`created_at\` from \`comments\`;`);
+    this.addSql(`drop table \`comments\`;`);
+    this.addSql(`alter table \`comments__temp_alter\` rename to \`comments\`;`);
+    this.addSql(`create index \`comments_teardown_id_index\` on \`comments\` (\`teardown_id\`);`);
+    this.addSql(`create index \`comments_author_id_index\` on \`comments\` (\`author_id\`);`);
+    this.addSql(`pragma foreign_keys = on;`);
+  }
+
+}

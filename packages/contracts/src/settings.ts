@@ -1,0 +1,21 @@
+import { z } from 'zod';
+
+export const currencyCode = z
+  .string()
+  .trim()
+  .toUpperCase()
+  .regex(/^[A-Z]{3}$/, 'Use a three-letter ISO 4217 code such as USD');
+
+/** Workspace-wide settings, with their defaults. */
+export const workspaceSettingsSchema = z.object({
+  /** Currency that cost figures and comparisons are reported in. */
+  reportingCurrency: currencyCode.default('USD'),
+  /** Measured capacity below this fraction of the label capacity raises a warning (0..1). */
+  capacityWarnFraction: z.number().min(0.5, 'At least 0.5').max(1, 'At most 1').default(0.9),
+  /** Contact time assumed for touch-temperature figures when a teardown does not set its own (s). */
+  defaultContactSeconds: z.number().int().min(1, 'At least 1 s').max(28800, 'At most 8 h').default(60),
+});
+export type WorkspaceSettings = z.infer<typeof workspaceSettingsSchema>;
+export const settingsResponse = z.object({ settings: workspaceSettingsSchema });
+export const updateSettingsBody = workspaceSettingsSchema.partial().refine((b) => Object.keys(b).length > 0, { message: 'Change at least one setting' });
+export type UpdateSettingsBody = z.infer<typeof updateSettingsBody>;
