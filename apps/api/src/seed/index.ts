@@ -3,9 +3,13 @@ import type { Env } from '../config/env';
 import { UserSchema } from '../modules/users/user.entity';
 import type { SeedContext, SeedStep } from './context';
 import { DEMO_USERS, demoEmail, seedUsers } from './users';
+import { seedWorkspace } from './workspace';
 
 /** Seed steps in order. Later features append their step here. */
-export const SEED_STEPS: SeedStep[] = [{ name: 'users', run: seedUsers }];
+export const SEED_STEPS: SeedStep[] = [
+  { name: 'users', run: seedUsers },
+  { name: 'workspace', run: seedWorkspace },
+];
 
 /** Seeds the invented demo workspace when the database has no users. Returns whether it seeded. */
 export async function seedIfEmpty(orm: Orm, env: Env, log: (line: string) => void = () => {}, steps: SeedStep[] = SEED_STEPS): Promise<boolean> {
