@@ -5,6 +5,8 @@ import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { CONFIRM_UNPUBLISH_HEADER, type PhotoDto } from '@splitcase/contracts';
 import { fileOps } from '../../apps/api/src/modules/photos/photo-files';
+import { matchPart } from '../../apps/api/src/seed/photos';
+import { DEMO_DEVICES } from '../../apps/api/src/seed/scenario';
 import { makeTestApp, type Agent, type TestApp } from '../support/test-app';
 import { readExifTags, TAG_GPS_POINTER } from '../support/exif';
 
@@ -442,5 +444,46 @@ describe('callouts', () => {
     expect(targets.body.parts).toEqual(expect.arrayContaining([{ id: partId, label: 'Buck-boost charger IC (demo)' }]));
     expect(targets.body.parts.find((p: { id: number }) => p.id === foreignPartId)).toBeUndefined();
     await (await t.as('viewer')).get(`/api/teardowns/${draftId}/callout-targets`).expect(404);
+  });
+});
+
+describe('demo photos', () => {
+  it('gives every demo teardown 2–4 processed illustrations with pins inside the picture', async () => {
+    const conn = t.orm.em.fork().getConnection();
+    const perTeardown = (await conn.execute(
+      "select teardown_id, count(*) as n from photos where original_name like 'demo-%' group by teardown_id",
+    )) as { teardown_id: number; n: number }[];
+    expect(perTeardown).toHaveLength(DEMO_DEVICES.length);
+    for (const row of perTeardown) {
+      expect(row.n).toBeGreaterThanOrEqual(2);
+      expect(row.n).toBeLessThanOrEqual(4);
+    }
+    const pins = (await conn.execute(
+      "select c.x, c.y, c.label, c.number from callouts c join photos p on p.id = c.photo_id where p.original_name like 'demo-%'",
+    )) as { x: number; y: number; label: string }[];
+    expect(pins.length).toBeGreaterThan(DEMO_DEVICES.length * 6);
+    for (const pin of pins) {
+      expect(pin.x).toBeGreaterThanOrEqual(0);
+      expect(pin.x).toBeLessThanOrEqual(1);
+      expect(pin.y).toBeGreaterThanOrEqual(0);
+      expect(pin.y).toBeLessThanOrEqual(1);
+      expect(pin.label.length).toBeGreaterThan(0);
+    }
+    // Stored through the upload path: random folder, the three files, no metadata.
+    const demo = (await conn.execute("select id, storage_key from photos where original_name like 'demo-halvix-duo-%' order by id limit 1")) as { id: number; storage_key: string }[];
+    expect(readdirSync(join(t.env.uploadsDir, demo[0]!.storage_key)).sort()).toEqual(['display.webp', 'original.jpg', 'thumb.webp']);
+    const original = binary(await getFile(engineer, `/api/photos/${demo[0]!.id}/original`).expect(200));
+    expect((await sharp(original).metadata()).exif).toBeUndefined();
+  });
+
+  it('links a pin to the part of the same category whose description matches', () => {
+    const part = (id: number, category: string, description: string) => ({ id, category, description, marking: null }) as never;
+    const parts = [part(1, 'ic', '8-bit microcontroller'), part(2, 'ic', 'Buck-boost charger IC'), part(3, 'heater', 'Flexible heater A')];
+    expect(matchPart(parts, { x: 0, y: 0, label: 'Charger', match: { category: 'ic', pattern: /charg|boost/i } })).toMatchObject({ id: 2 });
+    expect(matchPart(parts, { x: 0, y: 0, label: 'Heater', match: { category: 'heater' } })).toMatchObject({ id: 3 });
+    expect(matchPart(parts, { x: 0, y: 0, label: 'Protection', match: { category: 'ic', pattern: /protect/i } })).toBeNull();
+    expect(matchPart(parts, { x: 0, y: 0, label: 'Sensor', match: { category: 'sensor' } })).toBeNull();
+    expect(matchPart([], { x: 0, y: 0, label: 'Anything', match: { category: 'ic' } })).toBeNull();
+    expect(matchPart(parts, { x: 0, y: 0, label: 'No match wanted' })).toBeNull();
   });
 });

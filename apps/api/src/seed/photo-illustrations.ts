@@ -6,6 +6,8 @@ import type { DemoDevice } from './scenario';
 
 export const ILLUSTRATION_W = 1200;
 export const ILLUSTRATION_H = 900;
+/** Rendered width in pixels (drawn in 1200 × 900 units, rendered smaller to keep the seed quick). */
+export const RENDER_W = 1000;
 
 export interface IllustrationPin {
   /** Relative position 0..1 on the picture. */
@@ -67,7 +69,7 @@ function bench(body: string, title: string): string {
   const grid: string[] = [];
   for (let x = 0; x <= ILLUSTRATION_W; x += 40) grid.push(`<line x1="${x}" y1="0" x2="${x}" y2="${ILLUSTRATION_H}" stroke="#3b4a44" stroke-width="${x % 200 === 0 ? 1.6 : 0.7}"/>`);
   for (let y = 0; y <= ILLUSTRATION_H; y += 40) grid.push(`<line x1="0" y1="${y}" x2="${ILLUSTRATION_W}" y2="${y}" stroke="#3b4a44" stroke-width="${y % 200 === 0 ? 1.6 : 0.7}"/>`);
-  return `<svg xmlns="http://www.w3.org/2000/svg" width="${ILLUSTRATION_W}" height="${ILLUSTRATION_H}" viewBox="0 0 ${ILLUSTRATION_W} ${ILLUSTRATION_H}">
+  return `<svg xmlns="http://www.w3.org/2000/svg" width="${RENDER_W}" height="${Math.round((RENDER_W * ILLUSTRATION_H) / ILLUSTRATION_W)}" viewBox="0 0 ${ILLUSTRATION_W} ${ILLUSTRATION_H}">
   <defs>
     <linearGradient id="light" x1="0" y1="0" x2="1" y2="1"><stop offset="0" stop-color="#ffffff" stop-opacity="0.10"/><stop offset="1" stop-color="#000000" stop-opacity="0.18"/></linearGradient>
     <linearGradient id="cyl" x1="0" y1="0" x2="0" y2="1"><stop offset="0" stop-color="#ffffff" stop-opacity="0.28"/><stop offset="0.45" stop-color="#ffffff" stop-opacity="0.02"/><stop offset="1" stop-color="#000000" stop-opacity="0.35"/></linearGradient>
@@ -222,8 +224,8 @@ function boardScene(d: DemoDevice, p: Palette): Illustration {
       ${silk(760, 316, 'U1', p)}${silk(960, 292, 'L1', p)}${silk(850, 548, 'J1', p)}${hole(710, 250)}${hole(1070, 610)}`;
     pins.push(
       { ...rel(360, 420), label: 'Main LED on aluminium-core board', match: { category: 'led' } },
-      { ...rel(835, 385), label: `Driver IC, marked ${m.driver[0]}`, match: { category: 'ic', pattern: /driver|buck|led/i } },
-      { ...rel(1010, 350), label: 'Buck inductor 2R2', match: { category: 'inductor' } },
+      { ...rel(904, 336), label: `Driver IC, marked ${m.driver[0]}`, match: { category: 'ic', pattern: /driver|buck|led/i } },
+      { ...rel(1054, 306), label: 'Buck inductor 2R2', match: { category: 'inductor' } },
       { ...rel(896, 582), label: 'USB-C receptacle', match: { category: 'connector' } },
     );
     if (d.design.hasTemperatureSensor) pins.push({ ...rel(1020, 531), label: 'NTC thermistor for thermal step-down', match: { category: 'sensor' } });
@@ -245,14 +247,14 @@ function boardScene(d: DemoDevice, p: Palette): Illustration {
     const px = bx + bw * 0.45;
     const py = by + 60;
     body += chip(px, py, 170, 120, m.power, bank ? 6 : 4, bank ? 'qfn' : 'sop') + silk(px, py - 18, 'U2', p) + inductor(px + 210, py + 4, 110, bank ? '1R0' : '4R7') + silk(px + 210, py - 10, 'L1', p);
-    pins.push({ ...rel(px + 85, py + 60), label: `${bank ? 'Charge and boost' : fan ? 'Linear charger' : 'Buck-boost charger / output'} IC, marked ${m.power[0]}`, match: { category: 'ic', pattern: /charg|boost|buck|power|pmic/i } });
-    pins.push({ ...rel(px + 265, py + 59), label: `Power inductor ${bank ? '1R0' : '4R7'}`, match: { category: 'inductor' } });
+    pins.push({ ...rel(px + 164, py + 8), label: `${bank ? 'Charge and boost' : fan ? 'Linear charger' : 'Buck-boost charger / output'} IC, marked ${m.power[0]}`, match: { category: 'ic', pattern: /charg|boost|buck|power|pmic/i } });
+    pins.push({ ...rel(px + 312, py + 12), label: `Power inductor ${bank ? '1R0' : '4R7'}`, match: { category: 'inductor' } });
     // MCU (heaters, fans) or fuel-gauge LEDs (banks).
     const mx = bx + 90;
     const my = by + bh * 0.5 - 50;
     if (!bank) {
       body += chip(mx, my, 120, 90, [m.mcu[0]!], 4) + silk(mx, my - 18, 'U1', p);
-      pins.push({ ...rel(mx + 60, my + 45), label: `8-bit microcontroller, marked ${m.mcu[0]}`, match: { category: 'ic', pattern: /micro|mcu|controller/i } });
+      pins.push({ ...rel(mx + 114, my + 6), label: `8-bit microcontroller, marked ${m.mcu[0]}`, match: { category: 'ic', pattern: /micro|mcu|controller/i } });
     } else {
       body += [0, 1, 2, 3].map((i) => `<rect x="${mx + i * 46}" y="${my + 20}" width="28" height="18" rx="3" fill="#e8f6ff" stroke="#6fb6e2" stroke-width="3"/>`).join('') + silk(mx, my + 6, 'D1–D4', p);
       pins.push({ ...rel(mx + 80, my + 29), label: 'Charge-level LEDs D1–D4', match: { category: 'led' } });
@@ -262,7 +264,7 @@ function boardScene(d: DemoDevice, p: Palette): Illustration {
       const qx = bx + bw * 0.3;
       const qy = by + bh - 140;
       body += `<rect x="${qx}" y="${qy}" width="60" height="44" rx="3" fill="#1a1b1e"/>${[0, 1, 2].map((i) => `<rect x="${qx + 6 + i * 20}" y="${qy + 44}" width="8" height="12" fill="#c9cdd2"/>`).join('')}<text x="${qx + 30}" y="${qy + 28}" text-anchor="middle" ${MONO} font-size="13" fill="#b9bcc0">${m.mos}</text>${silk(qx, qy - 10, 'Q1', p)}`;
-      pins.push({ ...rel(qx + 30, qy + 22), label: `${fan ? 'Motor' : 'Heater'} switch MOSFET, marked ${m.mos}`, match: { category: 'semiconductor', pattern: /mosfet|transistor|fet/i } });
+      pins.push({ ...rel(qx + 58, qy + 2), label: `${fan ? 'Motor' : 'Heater'} switch MOSFET, marked ${m.mos}`, match: { category: 'semiconductor', pattern: /mosfet|transistor|fet/i } });
     }
     // Passives with codes.
     body += smd(bx + bw * 0.62, by + bh - 120, 'r', '103') + smd(bx + bw * 0.62 + 50, by + bh - 120, 'r', '4R7') + smd(bx + bw * 0.62 + 100, by + bh - 120, 'c', '') + smd(bx + bw * 0.62 + 140, by + bh - 128, 'c', '', true);

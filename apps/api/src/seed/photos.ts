@@ -17,7 +17,7 @@ const render = (svg: string) => {
 };
 
 /** The part a pin should point at: same category, description matching when a pattern is given. */
-function matchPart(parts: Part[], pin: IllustrationPin): Part | null {
+export function matchPart(parts: Part[], pin: IllustrationPin): Part | null {
   if (!pin.match) return null;
   const { category, pattern } = pin.match;
   const same = parts.filter((p) => p.category === category);
