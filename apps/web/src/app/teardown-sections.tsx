@@ -3,6 +3,7 @@
 import { lazy, type ComponentType, type LazyExoticComponent } from 'react';
 import type { LucideIcon } from 'lucide-react';
 import { FileText } from 'lucide-react';
+import { Camera } from 'lucide-react';
 import type { TeardownDto } from '@splitcase/contracts';
 import type { TeardownSection } from '@/config/paths';
 
@@ -26,5 +27,12 @@ export const SECTIONS: SectionDef[] = [
     icon: FileText,
     Component: lazy(() => import('@/features/teardowns/components/overview-section').then((m) => ({ default: m.OverviewSection }))),
     withFigures: true,
+  },
+  {
+    id: 'photos',
+    label: 'Photos',
+    icon: Camera,
+    Component: lazy(() => import('@/features/photos/components/photos-section').then((m) => ({ default: m.PhotosSection }))),
+    withFigures: false,
   },
 ];

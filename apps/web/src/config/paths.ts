@@ -19,4 +19,6 @@ export const paths = {
   api: {
     docs: () => '/api/docs',
   },
+  /** A photo on the stage of the photos section, optionally with one pin selected. */
+  teardownPhoto: (id: number, photoId: number, pinId?: number) => `/teardowns/${id}/photos?photo=${photoId}${pinId ? `&pin=${pinId}` : ''}`,
 } as const;

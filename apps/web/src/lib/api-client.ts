@@ -59,6 +59,8 @@ export interface RequestOptions {
   form?: FormData;
   /** Return the raw Response (downloads). */
   raw?: boolean;
+  /** Extra request headers (e.g. the confirm header for changing a published teardown). */
+  headers?: Record<string, string>;
 }
 
 export function buildUrl(path: string, query?: RequestOptions['query']): string {
@@ -73,7 +75,7 @@ export function buildUrl(path: string, query?: RequestOptions['query']): string 
 }
 
 async function request<T>(method: string, path: string, opts: RequestOptions = {}, retried = false): Promise<T> {
-  const headers: Record<string, string> = { Accept: 'application/json' };
+  const headers: Record<string, string> = { Accept: 'application/json', ...opts.headers };
   const changing = method !== 'GET';
   if (changing) headers['X-CSRF-Token'] = await getCsrfToken();
   let body: BodyInit | undefined;
@@ -115,14 +117,17 @@ export const api = {
    * Multipart upload with progress (XMLHttpRequest: fetch has no upload progress).
    * Resolves with the parsed JSON body; rejects with ApiError. `abort` cancels.
    */
-  upload<T>(path: string, form: FormData, onProgress: (fraction: number) => void): { promise: Promise<T>; abort: () => void } {
+  upload<T>(path: string, form: FormData, onProgress: (fraction: number) => void, headers: Record<string, string> = {}): { promise: Promise<T>; abort: () => void } {
     const xhr = new XMLHttpRequest();
+    let aborted = false;
     const promise = getCsrfToken().then(
       (token) =>
         new Promise<T>((resolve, reject) => {
+          if (aborted) return reject(new DOMException('Upload cancelled', 'AbortError'));
           xhr.open('POST', path);
           xhr.setRequestHeader('X-CSRF-Token', token);
           xhr.setRequestHeader('Accept', 'application/json');
+          for (const [name, value] of Object.entries(headers)) xhr.setRequestHeader(name, value);
           xhr.upload.onprogress = (e) => e.lengthComputable && onProgress(e.loaded / e.total);
           xhr.onload = () => {
             let parsed: unknown = null;
@@ -142,6 +147,12 @@ export const api = {
           xhr.send(form);
         }),
     );
-    return { promise, abort: () => xhr.abort() };
+    return {
+      promise,
+      abort: () => {
+        aborted = true;
+        xhr.abort();
+      },
+    };
   },
 };
