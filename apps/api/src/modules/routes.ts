@@ -7,8 +7,9 @@ import { mailRoutes } from './mail/routes';
 import { settingsRoutes } from './settings/routes';
 import { systemRoutes } from './system/routes';
 import { teardownRoutes } from './teardowns/routes';
+import { toolRoutes } from './tools/routes';
 import { userRoutes } from './users/routes';
 
 export function allRoutes(deps: AppDeps, version: string): RouteDef[] {
-  return [...systemRoutes(version), ...authRoutes(deps), ...userRoutes, ...mailRoutes, ...auditRoutes, ...settingsRoutes, ...teardownRoutes];
+  return [...systemRoutes(version), ...authRoutes(deps), ...userRoutes, ...mailRoutes, ...auditRoutes, ...settingsRoutes, ...teardownRoutes, ...toolRoutes];
 }
