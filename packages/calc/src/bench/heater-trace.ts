@@ -222,7 +222,8 @@ export function heaterTraceReport(p: HeaterTraceInput): HeaterTraceReport {
         warnings: areaWarnings,
       }),
     );
-    const rise = surfaceTemperatureRiseC({ watts, areaM2 });
+    // Both faces of a bare heater pad shed heat (REFERENCES §7 takes both faces of a slab).
+    const rise = surfaceTemperatureRiseC({ watts, areaM2: 2 * areaM2 });
     const surfaceC = BENCH_AMBIENT_C + rise;
     const touchWarnings: string[] = [];
     // The most severe contact time whose ISO 13732-1 threshold the estimate exceeds.
@@ -239,13 +240,17 @@ export function heaterTraceReport(p: HeaterTraceInput): HeaterTraceReport {
     figures.push(
       benchFigure({
         key: 'surfaceRise',
-        label: 'Steady surface rise (estimate)',
+        label: 'Steady surface rise, bare in still air (estimate)',
         value: rise,
         unit: '°C',
         formulaKey: 'thermal.surfaceRise',
-        inputs: [...areaInputs, { label: 'Heat-transfer coefficient h', value: DEFAULT_CONVECTION_H, unit: 'W/m²K' }],
+        inputs: [
+          ...areaInputs,
+          { label: 'Surface shedding heat (both faces)', value: 2 * areaM2, unit: 'm²' },
+          { label: 'Heat-transfer coefficient h', value: DEFAULT_CONVECTION_H, unit: 'W/m²K' },
+        ],
         assumptions: [
-          `h = ${DEFAULT_CONVECTION_H} W/m²K, free convection in still air (2–25 W/m²K [S: Çengel]); heat leaves through the heated area only.`,
+          `Heat leaves both faces of the heated area (2 × A) by free convection at h = ${DEFAULT_CONVECTION_H} W/m²K (2–25 W/m²K in air [S: Çengel]). Radiation, about 5.5 W/m²K more [C], is left out, so the estimate errs hot.`,
           `Surface temperature ≈ ${BENCH_AMBIENT_C} °C ambient + rise = ${plain(surfaceC, 3)} °C; a hand or pocket insulates, so a covered heater runs hotter.`,
         ],
         warnings: touchWarnings,

@@ -77,6 +77,8 @@ describe('the reading in words and the tolerance letter', () => {
     expect(readCapacitorMarking('4n7').meaning.join(' ')).toMatch(/means nF.*4\.7 nF/);
     expect(readCapacitorMarking('4R7').meaning[0]).toMatch(/"R".*pF on a capacitor/);
     expect(readCapacitorMarking('0.1u')).toMatchObject({ scheme: 'value-with-unit' });
+    expect(readCapacitorMarking('4u7').meaning[1]).toBe('4.7 µF = 4700 nF.');
+    expect(readCapacitorMarking('2n2').meaning[1]).toBe('2.2 nF = 2200 pF.');
     expect(readCapacitorMarking('47')).toMatchObject({ scheme: 'picofarads', farads: 47e-12 });
   });
 });

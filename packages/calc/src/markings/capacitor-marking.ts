@@ -58,7 +58,9 @@ export function readCapacitorMarking(code: string): CapacitorMarkingReading {
       toleranceLetter: null,
       meaning: [
         `"${unitLetter === 'r' ? 'R' : unitLetter}" stands for the decimal point and means ${UNIT_WORD[unitLetter]}${unitLetter === 'r' ? ' on a capacitor' : ''}.`,
-        `${plain(value, 6)} ${UNIT_WORD[unitLetter]} = ${withPrefix(farads, 'F')}.`,
+        unitLetter === 'p' || unitLetter === 'r'
+          ? `Read as ${plain(value, 6)} pF.`
+          : `${plain(value, 6)} ${UNIT_WORD[unitLetter]} = ${plain(value * 1e3, 6)} ${unitLetter === 'n' ? 'pF' : 'nF'}.`,
       ],
     };
   }

@@ -115,5 +115,6 @@ describe('the reading in words', () => {
   it('"4R7": R is the decimal point, 4.7 Ω [S]; "000" is a jumper [M]', () => {
     expect(readResistorMarking('4R7').meaning.join(' ')).toMatch(/"R" stands for the decimal point.*4\.7 Ω/);
     expect(readResistorMarking('000')).toMatchObject({ ohms: 0, scheme: 'jumper' });
+    expect(readResistorMarking('4K7').meaning).toEqual(['Letter-and-digit code: "K" stands for the decimal point and means kΩ.', '4.7 kΩ = 4700 Ω.']);
   });
 });

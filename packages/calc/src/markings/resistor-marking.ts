@@ -83,7 +83,7 @@ function readValue(s: string, code: string): Omit<ResistorMarkingReading, 'toler
       scheme: 'letter-and-digit',
       meaning: [
         `Letter-and-digit code: "${letter}" stands for the decimal point and means ${unit}.`,
-        `${rkm[1] || '0'}.${rkm[3] || '0'} ${unit} = ${withPrefix(ohms, 'Ω')}.`,
+        letter === 'R' ? `Read as ${withPrefix(ohms, 'Ω')}.` : `${plain(Number(`${rkm[1] || '0'}.${rkm[3] || '0'}`))} ${unit} = ${plain(ohms, 6)} Ω.`,
       ],
     };
   }
