@@ -34,6 +34,6 @@ export function formatFigure(value: number | string | boolean | null, unit = '')
   if (unit === 'kg' && Math.abs(value) < 1) return formatQuantity(value * 1000, 'g');
   if (unit === 'm²' && value !== 0 && Math.abs(value) < 0.1) return `${sig(value * 1e4)} cm²`;
   if (!PREFIXED.has(unit) && value !== 0 && (Math.abs(value) < 1e-3 || Math.abs(value) >= 1e6)) return scientific(value, unit);
-  if (unit === '') return sig(value);
+  if (unit === '') return Number.isInteger(value) ? String(value) : sig(value);
   return formatQuantity(value, unit);
 }
