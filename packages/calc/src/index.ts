@@ -11,3 +11,4 @@ export * from './figures/index';
 export * from './runs/index';
 export * from './cost/index';
 export * from './compare/index';
+export * from './bench/index';

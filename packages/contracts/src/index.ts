@@ -8,3 +8,4 @@ export * from './domain';
 export * from './teardowns';
 export * from './settings';
 export * from './photos';
+export * from './tools';

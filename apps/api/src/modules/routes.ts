@@ -1,15 +1,26 @@
-// Every API route, module by module. A new module adds its list here.
+// Every API route, module by module. A new module adds its list here (one line each).
 import type { AppDeps } from '../http/deps';
 import type { RouteDef } from '../http/route';
 import { auditRoutes } from './audit/routes';
 import { authRoutes } from './auth/routes';
 import { mailRoutes } from './mail/routes';
+import { photoRoutes } from './photos/routes';
 import { settingsRoutes } from './settings/routes';
 import { systemRoutes } from './system/routes';
 import { teardownRoutes } from './teardowns/routes';
+import { toolRoutes } from './tools/routes';
 import { userRoutes } from './users/routes';
-import { photoRoutes } from './photos/routes';
 
 export function allRoutes(deps: AppDeps, version: string): RouteDef[] {
-  return [...systemRoutes(version), ...authRoutes(deps), ...userRoutes, ...mailRoutes, ...auditRoutes, ...settingsRoutes, ...teardownRoutes, ...photoRoutes(deps)];
+  return [
+    ...systemRoutes(version),
+    ...authRoutes(deps),
+    ...userRoutes,
+    ...mailRoutes,
+    ...auditRoutes,
+    ...settingsRoutes,
+    ...teardownRoutes,
+    ...photoRoutes(deps),
+    ...toolRoutes,
+  ];
 }

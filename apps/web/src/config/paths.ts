@@ -1,6 +1,10 @@
 // Every URL of the web app comes from here.
 export type TeardownSection = 'overview' | 'photos' | 'parts' | 'power' | 'measurements' | 'runs' | 'findings' | 'cost' | 'comments' | 'history';
 
+/** Panels of the bench-tools page, in tab order. */
+export const TOOL_TABS = ['marking', 'heater-trace', 'runtime'] as const;
+export type ToolTab = (typeof TOOL_TABS)[number];
+
 export const paths = {
   home: () => '/',
   signIn: (next?: string) => (next && next !== '/' ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in'),
@@ -16,6 +20,7 @@ export const paths = {
     outbox: () => '/admin/outbox',
     audit: () => '/admin/audit',
   },
+  tools: (tool?: ToolTab) => (tool && tool !== 'marking' ? `/tools?tool=${tool}` : '/tools'),
   api: {
     docs: () => '/api/docs',
   },

@@ -8,6 +8,7 @@ describe('sig (three significant figures by default, LOOK.md)', () => {
     expect(sig(0.0012345)).toBe('0.00123');
     expect(sig(12345)).toBe('12,300');
     expect(sig(0)).toBe('0');
+    expect(sig(9.996)).toBe('10.0');
   });
 });
 

@@ -18,6 +18,8 @@ const CATALOGUE = {
   'electrical.pwmAveragePower': { formula: 'P_avg = D · P_peak', source: 'Ideal PWM of a resistive load [C]' },
   'electrical.dutyForTargetPower': { formula: 'D = P_target / P_peak', source: 'Ideal PWM of a resistive load [C]' },
   'electrical.rmsVoltage': { formula: 'V_rms = V · √D', source: 'Ideal PWM square wave [C]' },
+  'electrical.powerFromCurrent': { formula: 'P = I² · R', source: "Joule's law [C]" },
+  'electrical.voltageDrop': { formula: 'V = I · R', source: "Ohm's law [C]" },
   'load.power': { formula: 'P = V² / R_eq, R_eq = n·R (series) or R/n (parallel)', source: "Joule's law [C]" },
   'load.elementPower': { formula: 'P_e = V_e² / R_e, V_e = V/n (series) or V (parallel)', source: "Joule's law [C]" },
   'load.current': {
@@ -33,6 +35,8 @@ const CATALOGUE = {
   },
   'pack.specificEnergy': { formula: 'e = E / m', source: '[C]; commercial Li-ion cells 100–265 Wh/kg [S: encyclopedic data]' },
   'pack.cRate': { formula: 'n = I / C_rated', source: '[S] C-rate definition' },
+  'pack.current': { formula: 'I = P / (η · V_pack), V_pack = S · V_cell', source: 'Power balance at the pack [C]' },
+  'pack.loadFromCurrent': { formula: 'P = I · V_pack, V_pack = S · V_cell', source: 'Power balance at the pack [C]' },
   'runtime.hours': { formula: 't = E · η · u / P = E_pack / Σ (P_load · D / η)', source: 'Energy balance [C]' },
   'battery.chargeTime': {
     formula: 't = f·C / I + τ · ln(I / I_t), τ = (1 − f)·C / (I − I_t); f = 0.8, I_t = C/20',
@@ -54,6 +58,7 @@ const CATALOGUE = {
   'trace.rating': { formula: 'I = k · ΔT^0.44 · (w·t)^0.725, k = 0.048 external / 0.024 internal, mil²', source: '[S: IPC-2221 curve fit]' },
   'trace.minWidth': { formula: 'w = (I / (k · ΔT^0.44))^(1/0.725) / t, mil', source: '[S: IPC-2221 curve fit]' },
   'heater.powerDensity': { formula: 'p = P / A', source: '[C]' },
+  'trace.sheetResistance': { formula: 'R_□ = ρ / t', source: '[S: IEC 60028] IACS ρ = 1.7241e-8 Ω·m; [C]' },
   // thermal
   'heater.surfaceRise': { formula: 'ΔT = D · P / (h · A)', source: 'Newton cooling, steady state [C]; h 2–25 W/m²K free convection [S: Çengel]' },
   'heater.touchMargin': {
@@ -65,10 +70,56 @@ const CATALOGUE = {
     source: '[M: ISO 13732-1]; [S: ECMA-287]',
   },
   'thermal.dutyForRise': { formula: 'D = ΔT · h · A / P_peak', source: 'Newton cooling, steady state [C]' },
+  'thermal.surfaceRise': { formula: 'ΔT = P / (h · A)', source: 'Newton cooling, steady state [C]; h 2–25 W/m²K free convection [S: Çengel]' },
+  // bench runs
+  'run.integration': {
+    formula: 'Ah = Σ ½(I_k + I_k+1)·Δt / 3600; Wh = Σ ½(V_k·I_k + V_k+1·I_k+1)·Δt / 3600',
+    source: '[S: composite trapezoidal rule, numpy docs]; V·I per sample, never mean V × mean I [C]',
+  },
+  'run.averageVolts': { formula: 'V_avg = Wh / Ah (charge-weighted); ∫V dt / duration (time-weighted)', source: '[C]' },
+  'run.cutoff': {
+    formula: 'first sample with V ≤ V_cutoff, else last sample before I < 2 % of the peak',
+    source: '[M: IEC 61960-3] discharge to the end voltage the maker specifies',
+  },
+  'run.chargePhases': {
+    formula: 'CC until V reaches the CV plateau and I starts to fall; CV until I ≤ f · I_CC (f = 0.05)',
+    source: "[S: cell makers' application guides] CC-CV charging; termination C/10–C/30 [S, cell-specific]",
+  },
+  'run.steadyState': {
+    formula: '|slope of T over a sliding window| ≤ 0.1 °C/min held for the window; T_ss = median of the last window',
+    source: 'Sliding-window plateau criterion [C]',
+  },
+  // cost
+  'cost.unitPrice': { formula: 'price of the break with the largest minQty ≤ quantity', source: 'Quantity price breaks [CP]' },
+  'cost.currency': { formula: 'amount_B = amount_A / rate_A × rate_B (rates per 1 unit of the base)', source: '[S: ECB reference rates] cross rate through the base; round only at the end [CP]' },
+  'cost.rollUp': {
+    formula: 'Σ qty × unit price × (1 + attrition) + assembly + labour + test + packaging, ÷ yield, + overhead',
+    source: 'Should-cost build-up [CP]; attrition and yield rules of thumb [CP]',
+  },
+  'cost.landed': {
+    formula: 'CIF = FOB + freight + insurance; duty = d · CIF; VAT = v · (CIF + duty); landed = CIF + duty + VAT + brokerage',
+    source: '[S: customs-valuation guides] CIF duty basis',
+  },
+  'cost.margin': { formula: 'margin = markup / (1 + markup); markup = margin / (1 − margin)', source: '[S: marketing dictionaries] keystone = 100 % markup = 50 % margin; [C]' },
+  'cost.impliedMargin': {
+    formula: 'net = retail · (1 − m_retail) · (1 − m_platform); margin = net − landed cost',
+    source: 'Price build-down [CP]',
+  },
+  // comparison
+  'compare.whPerCurrency': { formula: 'Wh / retail price', source: 'Normalised metric [C]' },
+  'compare.pareto': { formula: 'points with no other point of lower-or-equal cost and higher-or-equal benefit (one strictly)', source: 'Pareto dominance [C]' },
+  'compare.weightedScore': {
+    formula: 'score = 100 · Σ w_k · n_k / Σ w_k, n_k = min-max normalised metric (1 = best)',
+    source: 'Weighted sum of min-max normalised metrics [C]',
+  },
   // markings
   'marking.resistor': { formula: 'digits × 10^last digit; R = decimal point', source: '[S: instrument manual, distributor page]' },
   'marking.eia96': { formula: 'E96 value at index nn × letter multiplier', source: '[S: EIA-96 decoders agree]' },
+  'marking.letterCode': { formula: 'R, K or M is the decimal point and the multiplier (× 1, × 10³, × 10⁶)', source: '[S: IEC 60062] letter-and-digit code' },
+  'marking.jumper': { formula: '0, 00, 000 or 0000 = 0 Ω link', source: '[M] jumper marking' },
   'marking.capacitor': { formula: 'two digits × 10^third digit pF (8: ×0.01, 9: ×0.1)', source: '[S]; [M] for 8 and 9' },
+  'marking.capacitorLetter': { formula: 'p, n, u (µ) or R is the decimal point and the unit (pF, nF, µF; R = pF)', source: '[S: IEC 60062] letter-and-digit code; [CP]' },
+  'marking.tolerance': { formula: 'letter → ± share of the value (pF under 10 pF for B, C, D, F)', source: '[S: IEC 60062] B C D F G J K M N Z, capacitor P; [M] W L, resistor P' },
   'marking.colourBands': { formula: 'digits × 10^multiplier, ± tolerance', source: '[S: IEC 60062:2016 summary pages]' },
   'marking.nearestPreferred': { formula: 'v minimising |ln(x / v)| over the series', source: '[S: IEC 60063:2015] lists; log rule [C]' },
 } as const satisfies Record<string, FormulaEntry>;

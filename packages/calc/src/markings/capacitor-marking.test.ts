@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { decodeCapacitorMarking } from './capacitor-marking';
+import { decodeCapacitorMarking, readCapacitorMarking } from './capacitor-marking';
 
 const pF = (code: string) => decodeCapacitorMarking(code) * 1e12;
 
@@ -58,5 +58,27 @@ describe('invalid capacitor markings', () => {
     expect(() => decodeCapacitorMarking('4m7')).toThrow(/Capacitor marking "4m7"/);
     expect(() => decodeCapacitorMarking('107')).toThrow(/last digit of 7/);
     expect(() => decodeCapacitorMarking(42 as never)).toThrow(/empty/);
+  });
+});
+
+describe('the reading in words and the tolerance letter', () => {
+  it('"104K": 10 × 10⁴ pF = 100 nF, tolerance letter K [S]', () => {
+    const r = readCapacitorMarking('104K');
+    expect(r).toMatchObject({ farads: 1e-7, scheme: 'three-digit', toleranceLetter: 'K' });
+    expect(r.meaning.join(' ')).toMatch(/"10" are the significant digits.*× 10000.*100000 pF = 100 nF/);
+  });
+  it('"339": 33 × 0.1 pF = 3.3 pF, the 9 rule marked [M]', () => {
+    const r = readCapacitorMarking('339');
+    expect(r.farads).toBeCloseTo(3.3e-12, 24);
+    expect(r.meaning[0]).toMatch(/× 0\.1 \[M\]/);
+  });
+  it('"4n7" is 4.7 nF with n as the decimal point; "4R7" is 4.7 pF; "0.1u" a value with its unit; "47" pF [S; CP]', () => {
+    expect(readCapacitorMarking('4n7')).toMatchObject({ scheme: 'letter-decimal', toleranceLetter: null });
+    expect(readCapacitorMarking('4n7').meaning.join(' ')).toMatch(/means nF.*4\.7 nF/);
+    expect(readCapacitorMarking('4R7').meaning[0]).toMatch(/"R".*pF on a capacitor/);
+    expect(readCapacitorMarking('0.1u')).toMatchObject({ scheme: 'value-with-unit' });
+    expect(readCapacitorMarking('4u7').meaning[1]).toBe('4.7 µF = 4700 nF.');
+    expect(readCapacitorMarking('2n2').meaning[1]).toBe('2.2 nF = 2200 pF.');
+    expect(readCapacitorMarking('47')).toMatchObject({ scheme: 'picofarads', farads: 47e-12 });
   });
 });

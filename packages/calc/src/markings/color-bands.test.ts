@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { decodeColorBands } from './color-bands';
+import { COLOUR_TOLERANCE_LETTER, decodeColorBands, readColorBands } from './color-bands';
 
 describe('IEC 60062 colour code (REFERENCES §1)', () => {
   it('yellow-violet-red-gold is 4 700 Ω ±5 % (4 465–4 935 Ω) [C]', () => {
@@ -70,5 +70,30 @@ describe('invalid colour codes', () => {
     expect(() => decodeColorBands(['red', 'red', 'red', 'red', 'brown', 'white'])).toThrow(/Band 6 \(temperature coefficient\)/);
     expect(() => decodeColorBands(['red', '', 'red', 'gold'])).toThrow(/Band 2 is empty/);
     expect(() => decodeColorBands('red' as never)).toThrow(RangeError);
+  });
+});
+
+describe('the colour code band by band', () => {
+  it('yellow-violet-red-gold: digits 4 7, × 100 = 4700 Ω, gold ±5 % (J) [C; S: IEC 60062]', () => {
+    const r = readColorBands(['Yellow', 'violet', 'red', 'gold']);
+    expect(r).toMatchObject({ ohms: 4700, tolerancePercent: 5, toleranceLetter: 'J', bands: ['yellow', 'violet', 'red', 'gold'] });
+    expect(r.meaning).toEqual([
+      'Bands 1–2 (yellow, violet) are the digits 4 7.',
+      'Band 3 (red) is the multiplier × 100: 47 × 100 = 4700 Ω.',
+      'Band 4 (gold) is the tolerance ±5 % (J).',
+    ]);
+  });
+  it('brown-black-orange has no tolerance band: ±20 % (M) [C; S]', () => {
+    const r = readColorBands(['brown', 'black', 'orange']);
+    expect(r).toMatchObject({ ohms: 10000, tolerancePercent: 20, toleranceLetter: 'M' });
+    expect(r.meaning.at(-1)).toMatch(/No tolerance band: ±20 %/);
+  });
+  it('6 bands name the temperature coefficient; one black band is a 0 Ω link [M; CP]', () => {
+    const r = readColorBands(['brown', 'black', 'black', 'red', 'brown', 'red']);
+    expect(r.meaning.at(-1)).toBe('Band 6 (red) is the temperature coefficient 50 ppm/K.');
+    expect(readColorBands(['black'])).toMatchObject({ ohms: 0, toleranceLetter: null });
+  });
+  it('each tolerance colour has its IEC 60062 letter (brown F, red G, green D, blue C, violet B, gold J, silver K) [S]', () => {
+    expect(COLOUR_TOLERANCE_LETTER).toMatchObject({ brown: 'F', red: 'G', green: 'D', blue: 'C', violet: 'B', gold: 'J', silver: 'K' });
   });
 });

@@ -32,11 +32,10 @@ function lookup(table: Record<string, number>, colour: string, role: string, pos
   return v;
 }
 
-/**
- * Resistance of a resistor colour code: 3 bands (2 digits, multiplier, ±20 %), 4 bands (2 digits, multiplier,
- * tolerance), 5 bands (3 digits, multiplier, tolerance) or 6 bands (5 bands plus temperature coefficient);
- * a single black band is a 0 Ω link. Colour names in English, lower-case ("grey" or "gray").
- */
+// 3 bands: 2 digits, multiplier, ±20 %; 4 bands: 2 digits, multiplier, tolerance; 5 bands: 3 digits, multiplier,
+// tolerance; 6 bands: 5 bands plus temperature coefficient. A single black band is a 0 Ω link. Colour names in
+// English, any case ("grey" or "gray").
+/** Resistance (Ω) and tolerance (±%) of a resistor colour code of 3 to 6 bands (a single black band is a 0 Ω link). */
 export function decodeColorBands(colors: string[]): ColourCodeResult {
   if (!Array.isArray(colors) || colors.length === 0) throw new RangeError('Colour bands: list at least one band.');
   const bands = colors.map((c, i) => {
@@ -67,4 +66,51 @@ export function decodeColorBands(colors: string[]): ColourCodeResult {
     result.temperatureCoefficientPpmPerK = lookup(COLOUR_TEMPCO_PPM_PER_K, bands[5] as string, 'temperature coefficient', 6);
   }
   return result;
+}
+
+/** IEC 60062 letter that each tolerance colour stands for (no band: M). */
+export const COLOUR_TOLERANCE_LETTER: Record<string, string> = {
+  brown: 'F', red: 'G', orange: 'W', yellow: 'P', green: 'D', blue: 'C', violet: 'B', grey: 'L', gold: 'J', silver: 'K',
+};
+
+/** A colour code decoded, with the colour names as read and the reading band by band in words. */
+export interface ColourCodeReading extends ColourCodeResult {
+  bands: string[];
+  toleranceLetter: string | null;
+  meaning: string[];
+}
+
+const plainNumber = (x: number) => String(Number(x.toPrecision(6)));
+
+/** Reads a resistor colour code band by band (see decodeColorBands), for showing what each band means. */
+export function readColorBands(colors: string[]): ColourCodeReading {
+  const result = decodeColorBands(colors);
+  const bands = colors.map((c) => {
+    const name = c.trim().toLowerCase();
+    return ALIASES[name] ?? name;
+  });
+  if (bands.length === 1) {
+    return { ...result, bands, toleranceLetter: null, meaning: ['A single black band marks a 0 Ω link (jumper).'] };
+  }
+  const digitCount = bands.length >= 5 ? 3 : 2;
+  const digits = bands.slice(0, digitCount).map((b) => COLOUR_DIGITS[b] as number);
+  const exponent = COLOUR_MULTIPLIER_EXPONENT[bands[digitCount] as string] as number;
+  const multiplier = exponent >= 0 ? 10 ** exponent : 1 / 10 ** -exponent;
+  const significand = Number(digits.join(''));
+  const meaning = [
+    `Bands 1–${digitCount} (${bands.slice(0, digitCount).join(', ')}) are the digits ${digits.join(' ')}.`,
+    `Band ${digitCount + 1} (${bands[digitCount]}) is the multiplier × ${plainNumber(multiplier)}: ${significand} × ${plainNumber(multiplier)} = ${plainNumber(result.ohms)} Ω.`,
+  ];
+  let toleranceLetter: string | null = 'M';
+  if (bands.length === 3) {
+    meaning.push('No tolerance band: ±20 % (M).');
+  } else {
+    const band = bands[digitCount + 1] as string;
+    toleranceLetter = COLOUR_TOLERANCE_LETTER[band] ?? null;
+    meaning.push(`Band ${digitCount + 2} (${band}) is the tolerance ±${plainNumber(result.tolerancePercent as number)} %${toleranceLetter ? ` (${toleranceLetter})` : ''}.`);
+  }
+  if (bands.length === 6) {
+    meaning.push(`Band 6 (${bands[5]}) is the temperature coefficient ${result.temperatureCoefficientPpmPerK} ppm/K.`);
+  }
+  return { ...result, bands, toleranceLetter, meaning };
 }

@@ -7,13 +7,41 @@ export {
   nextPreferredAtOrAbove,
   isPreferredValue,
 } from './e-series';
-export { EIA96_MULTIPLIER_EXPONENT, eia96Significand, decodeResistorMarking } from './resistor-marking';
-export { decodeCapacitorMarking } from './capacitor-marking';
+export {
+  type ResistorScheme,
+  type ResistorMarkingReading,
+  EIA96_MULTIPLIER_EXPONENT,
+  eia96Significand,
+  readResistorMarking,
+  decodeResistorMarking,
+} from './resistor-marking';
+export { type CapacitorScheme, type CapacitorMarkingReading, readCapacitorMarking, decodeCapacitorMarking } from './capacitor-marking';
 export {
   type ColourCodeResult,
+  type ColourCodeReading,
   COLOUR_DIGITS,
   COLOUR_MULTIPLIER_EXPONENT,
   COLOUR_TOLERANCE_PERCENT,
+  COLOUR_TOLERANCE_LETTER,
   COLOUR_TEMPCO_PPM_PER_K,
   decodeColorBands,
+  readColorBands,
 } from './color-bands';
+export {
+  type MarkedComponent,
+  type Tolerance,
+  TOLERANCE_LETTERS,
+  SMALL_CAPACITOR_LETTERS_PF,
+  decodeToleranceLetter,
+  percentTolerance,
+  toleranceRange,
+} from './letter-codes';
+export {
+  type MarkingKind,
+  type MarkingScheme,
+  type MarkingReading,
+  type MarkingReport,
+  type PreferredValueRow,
+  preferredValueRows,
+  explainMarking,
+} from './explain';

@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { decodeResistorMarking, eia96Significand } from './resistor-marking';
+import { decodeResistorMarking, eia96Significand, readResistorMarking } from './resistor-marking';
 
 describe('SMD resistor codes (REFERENCES §1) [S: instrument manual, distributor page]', () => {
   it.each([
@@ -57,13 +57,64 @@ describe('EIA-96 codes (REFERENCES §1)', () => {
 });
 
 describe('invalid resistor markings', () => {
-  it.each(['', '   ', 'ABC', '12345', 'R', '4K7', '00A', '97A', '1R2R', '12Q'])('"%s" throws a RangeError', (code) => {
+  it.each(['', '   ', 'ABC', '12345', 'R', 'K', '00A', '97A', '1R2R', '12Q', '4K7R', '68XJ', '4R7Q', 'J'])('"%s" throws a RangeError', (code) => {
     expect(() => decodeResistorMarking(code)).toThrow(RangeError);
   });
   it('messages name the code and say what is accepted', () => {
-    expect(() => decodeResistorMarking('4K7')).toThrow(/Resistor marking "4K7".*EIA-96/);
+    expect(() => decodeResistorMarking('4Q7')).toThrow(/Resistor marking "4Q7".*EIA-96/);
     expect(() => decodeResistorMarking('97A')).toThrow(/01 to 96/);
     expect(() => eia96Significand(0)).toThrow(/EIA-96 index/);
     expect(() => decodeResistorMarking(undefined as never)).toThrow(/empty/);
+  });
+});
+
+describe('IEC 60062 letter-and-digit code: R, K or M as the decimal point [S: IEC 60062; M for K and M on SMD parts]', () => {
+  it.each([
+    ['4K7', 4700],
+    ['2M2', 2.2e6],
+    ['K47', 470],
+    ['47K', 47000],
+    ['1M0', 1e6],
+    ['100K', 100000],
+    ['0R1', 0.1],
+  ])('%s is %d Ω', (code, ohms) => {
+    expect(decodeResistorMarking(code) / ohms).toBeCloseTo(1, 12);
+  });
+  it('lower-case k reads like K (as typed at the bench)', () => {
+    expect(decodeResistorMarking('4k7')).toBe(4700);
+  });
+});
+
+describe('trailing IEC 60062 tolerance letter [S: IEC 60062 letters]', () => {
+  it('"472J" is 4.7 kΩ with letter J; "4K7F" is 4.7 kΩ with letter F; "1002F" is 10.0 kΩ with F', () => {
+    expect(readResistorMarking('472J')).toMatchObject({ ohms: 4700, scheme: 'three-digit', toleranceLetter: 'J', valueCode: '472' });
+    expect(readResistorMarking('4K7F')).toMatchObject({ ohms: 4700, scheme: 'letter-and-digit', toleranceLetter: 'F' });
+    expect(readResistorMarking('1002F')).toMatchObject({ ohms: 10000, scheme: 'four-digit', toleranceLetter: 'F' });
+    expect(readResistorMarking('4R7K')).toMatchObject({ ohms: 4.7, toleranceLetter: 'K' });
+  });
+  it('a code that reads whole keeps its letter as part of the value ("47K" is 47 kΩ, not 47 ±10 %)', () => {
+    expect(readResistorMarking('47K')).toMatchObject({ ohms: 47000, toleranceLetter: null });
+  });
+});
+
+describe('the reading in words', () => {
+  it('"472": digits 47, × 100 = 4.7 kΩ [S]', () => {
+    const r = readResistorMarking('472');
+    expect(r.scheme).toBe('three-digit');
+    expect(r.meaning.join(' ')).toMatch(/"47" are the significant digits.*× 100.*47 × 100 = 4\.7 kΩ/);
+  });
+  it('"68X": index 68 → 499, X = × 0.1, 49.9 Ω [S]', () => {
+    const r = readResistorMarking('68X');
+    expect(r.scheme).toBe('eia-96');
+    expect(r.meaning).toEqual([
+      'EIA-96 code: "68" is the index into the E96 list, value 499.',
+      '"X" is the multiplier × 0.1.',
+      '499 × 0.1 = 49.9 Ω.',
+    ]);
+  });
+  it('"4R7": R is the decimal point, 4.7 Ω [S]; "000" is a jumper [M]', () => {
+    expect(readResistorMarking('4R7').meaning.join(' ')).toMatch(/"R" stands for the decimal point.*4\.7 Ω/);
+    expect(readResistorMarking('000')).toMatchObject({ ohms: 0, scheme: 'jumper' });
+    expect(readResistorMarking('4K7').meaning).toEqual(['Letter-and-digit code: "K" stands for the decimal point and means kΩ.', '4.7 kΩ = 4700 Ω.']);
   });
 });

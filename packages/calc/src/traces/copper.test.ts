@@ -1,5 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
+import { ipc2221ThicknessMil } from './ipc2221';
 import {
   COPPER_ALPHA_20,
   COPPER_RESISTIVITY_IACS,
@@ -60,5 +61,25 @@ describe('trace resistance R = ρL/(w·t)·[1 + α(T − 20)] (REFERENCES §2)',
     expect(() => copperTraceResistance({ ...trace, temperatureC: -250 })).toThrow(/Temperature/);
     expect(() => copperTraceResistance({ ...trace, temperatureC: Number.NaN })).toThrow(/Temperature/);
     expect(() => copperTraceResistance({ ...trace, resistivityOhmM: 0 })).toThrow(/Resistivity/);
+  });
+});
+
+describe('unit round trips (property)', () => {
+  it('oz/ft² → m → mil → oz/ft² returns the copper weight (1 oz = 35 µm = 1.378 mil [S])', () => {
+    fc.assert(
+      fc.property(fc.double({ min: 0.25, max: 10, noNaN: true }), (oz) => {
+        const metres = ozToMetres(oz);
+        expect(metres / 35e-6).toBeCloseTo(oz, 12);
+        expect(ipc2221ThicknessMil(metres) / 1.378).toBeCloseTo(oz, 12);
+      }),
+    );
+  });
+  it('m → mil → m is the identity (1 mil = 25.4 µm, exact by definition)', () => {
+    fc.assert(
+      fc.property(fc.double({ min: 1e-7, max: 1, noNaN: true }), (m) => {
+        expect(((m / METRES_PER_MIL) * METRES_PER_MIL) / m).toBeCloseTo(1, 14);
+      }),
+    );
+    expect(METRES_PER_MIL).toBe(25.4e-6);
   });
 });

@@ -16,10 +16,8 @@ export function ozToMetres(oz: number): number {
   return requirePositive(oz, 'Copper weight (oz/ft²)') * COPPER_OZ_THICKNESS_M;
 }
 
-/**
- * Resistance of a copper trace R = ρ·L / (w·t) · [1 + α·(T − 20 °C)] (Ω).
- * Defaults: IACS ρ = 1.7241e-8 Ω·m with α = 0.00393 /K, T = 20 °C.
- */
+// Defaults: IACS ρ = 1.7241e-8 Ω·m with α = 0.00393 /K (a consistent pair), T = 20 °C.
+/** Resistance of a copper trace R = ρ·L / (w·t) · [1 + α·(T − 20 °C)] (Ω), IACS copper unless ρ is given. */
 export function copperTraceResistance(p: {
   lengthM: number;
   widthM: number;

@@ -1,0 +1,97 @@
+// Typed inputs of the bench tools → SI numbers, with what was read from each field. Every bad field
+// is reported at once (400, fields named); the fields that did parse come back in details.parsed so
+// the page can still show their SI values.
+import type { ParsedToolInput } from '@splitcase/contracts';
+import { ozToMetres } from '@splitcase/calc';
+import { AppError, validationError } from '../../http/errors';
+import { parseQuantity, STORED_UNIT, type QuantityKind } from '../../lib/units';
+
+/** How to read one field: a quantity kind, a copper thickness (also "1 oz"), or a temperature difference. */
+export type ToolFieldKind = QuantityKind | 'copper-thickness' | 'temperature-rise';
+export type ToolCheck = 'positive' | 'fraction' | 'at-least-one' | 'finite';
+
+export interface ToolFieldSpec {
+  kind: ToolFieldKind;
+  check: ToolCheck;
+  required?: boolean;
+}
+
+type Raw = string | number | null | undefined;
+
+const COPPER_WEIGHT = /^(\d*\.?\d+)\s*oz(?:\s*\/\s*ft(?:²|2|\^2))?$/i;
+const RISE = /^([-+]?\d*\.?\d+)\s*(?:°\s*C|deg\s*C|C|K)?$/i;
+
+/** One field as SI: a copper weight in oz/ft² becomes metres (1 oz = 35 µm); a rise in °C or K stays a difference. */
+export function readToolField(raw: string | number, kind: ToolFieldKind): ParsedToolInput {
+  const entered = String(raw).trim();
+  if (kind === 'copper-thickness') {
+    const oz = typeof raw === 'string' ? COPPER_WEIGHT.exec(entered) : null;
+    if (oz) return { entered, value: ozToMetres(Number(oz[1])), unit: 'm' };
+    try {
+      return parseQuantity(raw, 'length');
+    } catch {
+      throw new Error(`Enter a copper thickness such as "35 µm" or a copper weight such as "1 oz" ("${entered}" is neither)`);
+    }
+  }
+  if (kind === 'temperature-rise') {
+    const m = RISE.exec(entered);
+    if (!m) throw new Error(`Enter a temperature rise such as "10 °C" or "10 K" ("${entered}" is not one)`);
+    return { entered, value: Number(m[1]), unit: '°C' };
+  }
+  return parseQuantity(raw, kind);
+}
+
+const CHECK_MESSAGE: Record<Exclude<ToolCheck, 'finite'>, string> = {
+  positive: 'Must be greater than zero',
+  fraction: 'Enter a fraction above 0 and at most 1, such as 0.9 or 90 %',
+  'at-least-one': 'Enter a whole number of at least 1',
+};
+
+function passes(value: number, check: ToolCheck): boolean {
+  if (!Number.isFinite(value)) return false;
+  if (check === 'positive') return value > 0;
+  if (check === 'fraction') return value > 0 && value <= 1;
+  if (check === 'at-least-one') return Number.isInteger(value) && value >= 1;
+  return true;
+}
+
+export interface ReadFields<K extends string> {
+  values: Partial<Record<K, number>>;
+  parsed: Record<string, ParsedToolInput>;
+  errors: Record<string, string>;
+}
+
+/** Reads every field of the spec that is given ('' and null mean "not given"); collects errors instead of throwing. */
+export function readToolFields<K extends string>(body: NoInfer<Partial<Record<K, Raw>>>, spec: Record<K, ToolFieldSpec>): ReadFields<K> {
+  const values: Partial<Record<K, number>> = {};
+  const parsed: Record<string, ParsedToolInput> = {};
+  const errors: Record<string, string> = {};
+  for (const key of Object.keys(spec) as K[]) {
+    const raw = body[key];
+    const { kind, check, required } = spec[key];
+    if (raw === undefined || raw === null || (typeof raw === 'string' && raw.trim() === '')) {
+      if (required) errors[key] = 'Required';
+      continue;
+    }
+    let q: ParsedToolInput;
+    try {
+      q = readToolField(raw, kind);
+    } catch (err) {
+      errors[key] = (err as Error).message;
+      continue;
+    }
+    const unit = kind === 'copper-thickness' ? 'm' : kind === 'temperature-rise' ? '°C' : STORED_UNIT[kind];
+    parsed[key] = { entered: String(raw).trim(), value: q.value, unit };
+    if (!passes(q.value, check)) {
+      errors[key] = check === 'finite' ? 'Enter a finite number' : CHECK_MESSAGE[check];
+      continue;
+    }
+    values[key] = q.value;
+  }
+  return { values, parsed, errors };
+}
+
+/** A 400 naming every bad field, carrying what did parse (details.parsed). */
+export function toolValidationError(errors: Record<string, string>, parsed: Record<string, ParsedToolInput>): AppError {
+  return new AppError('validation_failed', validationError(errors).message, errors, { parsed });
+}

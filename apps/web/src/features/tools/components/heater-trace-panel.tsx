@@ -1,0 +1,117 @@
+import { useState } from 'react';
+import { TRACE_LAYERS, TRACE_LAYER_LABELS, type HeaterTraceToolBody } from '@splitcase/contracts';
+import { Button } from '@/components/button';
+import { Caution } from '@/components/caution';
+import { useDebouncedValue } from '@/lib/use-debounced-value';
+import { useHeaterTrace } from '../api/heater-trace';
+import { FigureCard } from './figure-card';
+import { QuantityField } from './quantity-field';
+import { Segmented } from './segmented';
+import { ResultsState, ToolLayout } from './tool-layout';
+import { filledFields, useToolResult } from './use-tool-result';
+
+type Layer = (typeof TRACE_LAYERS)[number];
+type TextFields = 'length' | 'width' | 'thickness' | 'temperature' | 'supplyVoltage' | 'current' | 'temperatureRise' | 'area';
+
+const EMPTY: Record<TextFields, string> = {
+  length: '',
+  width: '',
+  thickness: '',
+  temperature: '',
+  supplyVoltage: '',
+  current: '',
+  temperatureRise: '',
+  area: '',
+};
+
+/** A pocket-heater trace to start from: about 3 Ω of 10 mil, 1 oz copper across one cell, over a 40 × 60 mm pad. */
+const EXAMPLE: Record<TextFields, string> = {
+  length: '1547 mm',
+  width: '10 mil',
+  thickness: '1 oz',
+  temperature: '',
+  supplyVoltage: '3.65 V',
+  current: '',
+  temperatureRise: '10 °C',
+  area: '24 cm²',
+};
+
+const FIELDS: { name: TextFields; label: string; placeholder: string; hint: string }[] = [
+  { name: 'length', label: 'Trace length', placeholder: '100 mm', hint: 'Along the trace, end to end.' },
+  { name: 'width', label: 'Trace width', placeholder: '0.254 mm or 10 mil', hint: 'mm, µm or mil.' },
+  { name: 'thickness', label: 'Copper thickness', placeholder: '35 µm or 1 oz', hint: 'A thickness, or a copper weight in oz/ft² (1 oz = 35 µm).' },
+  { name: 'temperature', label: 'Trace temperature', placeholder: '20 °C', hint: 'For the resistance; 20 °C if blank.' },
+  { name: 'supplyVoltage', label: 'Supply voltage', placeholder: '3.65 V', hint: 'Across the trace, for power and current.' },
+  { name: 'current', label: 'Current', placeholder: '1.2 A', hint: 'Optional: the design current, if not the supply’s.' },
+  { name: 'temperatureRise', label: 'Allowed rise (IPC-2221)', placeholder: '10 °C', hint: '10 °C if blank.' },
+  { name: 'area', label: 'Heated area', placeholder: '24 cm²', hint: 'For power density and the surface estimate.' },
+];
+
+/** Heater-trace calculator: resistance, power, IPC-2221 rating and width, power density. */
+export function HeaterTracePanel() {
+  const [fields, setFields] = useState(EMPTY);
+  const [layer, setLayer] = useState<Layer>('external');
+  const filled = filledFields(fields);
+  const body: HeaterTraceToolBody | null = filled.length && filled.width && filled.thickness ? { ...filled, length: filled.length, width: filled.width, thickness: filled.thickness, layer } : null;
+  const debounced = useDebouncedValue(body, 400);
+  const state = useToolResult(useHeaterTrace(debounced), debounced !== null);
+  const figures = state.result?.figures ?? [];
+  const set = (name: TextFields) => (value: string) => setFields((f) => ({ ...f, [name]: value }));
+
+  return (
+    <ToolLayout
+      title="Heater trace"
+      actions={
+        <div className="flex gap-1">
+          <Button size="sm" variant="quiet" onClick={() => setFields(EXAMPLE)}>
+            Example
+          </Button>
+          <Button size="sm" variant="ghost" onClick={() => setFields(EMPTY)}>
+            Clear
+          </Button>
+        </div>
+      }
+      inputs={
+        <>
+          {FIELDS.slice(0, 3).map((f) => (
+            <QuantityField key={f.name} {...f} value={fields[f.name]} onChange={set(f.name)} error={state.fieldErrors[f.name]} parsed={state.parsed[f.name]} />
+          ))}
+          <Segmented legend="Layer" value={layer} onChange={setLayer} options={TRACE_LAYERS.map((l) => ({ value: l, label: TRACE_LAYER_LABELS[l] }))} />
+          <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-1 xl:grid-cols-2">
+            {FIELDS.slice(3).map((f) => (
+              <QuantityField key={f.name} {...f} value={fields[f.name]} onChange={set(f.name)} error={state.fieldErrors[f.name]} parsed={state.parsed[f.name]} />
+            ))}
+          </div>
+          {state.fieldErrors.layer && (
+            <p className="text-sm text-brick-700" role="alert">
+              {state.fieldErrors.layer}
+            </p>
+          )}
+        </>
+      }
+    >
+      <ResultsState
+        empty="Type the trace’s length, width and copper thickness, with units as you write them (100 mm, 10 mil, 1 oz). Add a supply voltage for power."
+        hasResult={state.result !== undefined}
+        outdated={state.outdated}
+        busy={state.busy}
+        message={state.message}
+      >
+        <div className="gap-4 md:columns-2 [&>*]:mb-4 [&>*]:break-inside-avoid">
+          {figures.map((f) => (
+            <FigureCard key={f.key} figure={f}>
+              {f.key === 'powerDensity' && (
+                <div className="mt-3">
+                  <Caution title="Hot surfaces">
+                    Skin burns with long contact at temperatures that only feel warm: about 43 °C over hours, 48–51 °C within minutes (ISO 13732-1).
+                    Measure a running heater with a thermocouple, not by touch, keep it off flammable material and follow your lab’s safety rules.
+                  </Caution>
+                </div>
+              )}
+            </FigureCard>
+          ))}
+        </div>
+      </ResultsState>
+    </ToolLayout>
+  );
+}
