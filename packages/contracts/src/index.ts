@@ -7,3 +7,6 @@ export * from './admin';
 export * from './domain';
 export * from './teardowns';
 export * from './settings';
+export * from './parts';
+export * from './power';
+export * from './measurements';

@@ -8,7 +8,10 @@ import { settingsRoutes } from './settings/routes';
 import { systemRoutes } from './system/routes';
 import { teardownRoutes } from './teardowns/routes';
 import { userRoutes } from './users/routes';
+import { partRoutes } from './parts/routes';
+import { powerRoutes } from './power/routes';
+import { measurementRoutes } from './measurements/routes';
 
 export function allRoutes(deps: AppDeps, version: string): RouteDef[] {
-  return [...systemRoutes(version), ...authRoutes(deps), ...userRoutes, ...mailRoutes, ...auditRoutes, ...settingsRoutes, ...teardownRoutes];
+  return [...systemRoutes(version), ...authRoutes(deps), ...userRoutes, ...mailRoutes, ...auditRoutes, ...settingsRoutes, ...teardownRoutes, ...partRoutes, ...powerRoutes, ...measurementRoutes];
 }
