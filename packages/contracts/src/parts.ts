@@ -1,6 +1,11 @@
 // Bill of materials: one line per part of a teardown, CSV import/export.
 import { z } from 'zod';
-import { MOUNT_TYPE, PART_CATEGORY } from './domain';
+import { MOUNT_TYPE, PART_CATEGORY, type MountType, type PartCategory } from './domain';
+
+/** Categories put together by hand rather than placed on a board. */
+const MANUAL_CATEGORIES: readonly PartCategory[] = ['cell', 'pcb', 'enclosure', 'fastener', 'label', 'packaging', 'wire', 'heater', 'motor'];
+/** The mount a line gets when none is given: manual for cells, boards, heaters, motors, wires and mechanical parts; SMT otherwise. */
+export const defaultMountFor = (category: PartCategory): MountType => (MANUAL_CATEGORIES.includes(category) ? 'manual' : 'smt');
 
 const trimmed = (max: number) =>
   z
@@ -34,7 +39,7 @@ const partFields = {
   notes: trimmed(4000),
 };
 
-/** `mount` defaults to manual for cells, heaters, motors, wires, enclosures, fasteners, labels and packaging; SMT otherwise. */
+/** `mount` defaults to manual for cells, boards, heaters, motors, wires, enclosures, fasteners, labels and packaging; SMT otherwise. */
 export const createPartBody = z.object({ ...partFields, quantity: partFields.quantity.default(1), mount: partFields.mount.optional() });
 export type CreatePartBody = z.input<typeof createPartBody>;
 

@@ -61,9 +61,10 @@ export function demoParts(d: DemoDevice): Line[] {
   if (cells.joining === 'holder') lines.push({ designators: 'BH1', category: 'connector', description: 'Spring cell holder, single 18650', makerPartNumber: 'QN-HLD18S', mount: 'tht' });
   if (cells.joining === 'welded-tab') lines.push({ category: 'wire', description: 'Nickel strip 0.15 mm × 5 mm', quantity: cellCount > 1 ? 2 : 1 });
   if (cells.protection) {
-    lines.push({ designators: 'U3', category: 'ic', description: 'Single-cell protection IC (over-charge, over-discharge, over-current)', marking: 'PT1A', makerPartNumber: 'KV-PT61A', package: 'SOT-23-6' });
-    lines.push({ designators: 'Q3', category: 'semiconductor', description: 'Dual N-channel MOSFET, common drain, 20 V', marking: 'D20N', makerPartNumber: 'SNW-DN2006', package: 'TSSOP-8' });
-    lines.push({ designators: 'R9', category: 'passive', description: 'Chip resistor, protection IC supply filter', marking: '331', package: '0402' });
+    const onBoard = 'On the protection board at the cell';
+    lines.push({ designators: 'PU1', category: 'ic', description: 'Single-cell protection IC (over-charge, over-discharge, over-current)', marking: 'PT1A', makerPartNumber: 'KV-PT61A', package: 'SOT-23-6', notes: onBoard });
+    lines.push({ designators: 'PQ1', category: 'semiconductor', description: 'Dual N-channel MOSFET, common drain, 20 V', marking: 'D20N', makerPartNumber: 'SNW-DN2006', package: 'TSSOP-8', notes: onBoard });
+    lines.push({ designators: 'PR1', category: 'passive', description: 'Chip resistor, protection IC supply filter', marking: '331', package: '0402', notes: onBoard });
   }
 
   // Controller and power path.
@@ -232,8 +233,7 @@ async function seedTeardownBom(ctx: SeedContext, d: DemoDevice, teardownId: numb
   for (const c of converters) {
     const entered: Record<string, string> = { inputVolts: `${c.vin} V`, outputVolts: `${c.vout} V`, efficiency: pct(c.efficiency) };
     if (c.chargeA) entered.chargeCurrentAmps = `${c.chargeA} A`;
-    const label =
-      c.role === 'charge' ? `Charger (${c.topology}), USB input to the cell` : c.role === 'output' ? `Power-bank output (${c.topology}) to ${c.vout} V` : `LED driver (${c.topology})`;
+    const label = c.role === 'charge' ? `USB charger (${c.topology})` : c.role === 'output' ? `${c.vout} V output (${c.topology})` : `LED driver (${c.topology})`;
     const entity = em.create(ConverterSchema, {
       teardown,
       label,

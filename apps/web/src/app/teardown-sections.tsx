@@ -3,6 +3,7 @@
 import { lazy, type ComponentType, type LazyExoticComponent } from 'react';
 import type { LucideIcon } from 'lucide-react';
 import { FileText } from 'lucide-react';
+import { Gauge, ListTree, Zap } from 'lucide-react';
 import type { TeardownDto } from '@splitcase/contracts';
 import type { TeardownSection } from '@/config/paths';
 
@@ -25,6 +26,27 @@ export const SECTIONS: SectionDef[] = [
     label: 'Overview',
     icon: FileText,
     Component: lazy(() => import('@/features/teardowns/components/overview-section').then((m) => ({ default: m.OverviewSection }))),
+    withFigures: true,
+  },
+  {
+    id: 'parts',
+    label: 'Parts',
+    icon: ListTree,
+    Component: lazy(() => import('@/features/parts/components/parts-section').then((m) => ({ default: m.PartsSection }))),
+    withFigures: true,
+  },
+  {
+    id: 'power',
+    label: 'Power system',
+    icon: Zap,
+    Component: lazy(() => import('@/features/power/components/power-section').then((m) => ({ default: m.PowerSection }))),
+    withFigures: true,
+  },
+  {
+    id: 'measurements',
+    label: 'Measurements',
+    icon: Gauge,
+    Component: lazy(() => import('@/features/measurements/components/measurements-section').then((m) => ({ default: m.MeasurementsSection }))),
     withFigures: true,
   },
 ];

@@ -4,6 +4,7 @@ import {
   PART_CATEGORY,
   PART_CSV_COLUMNS,
   PART_CSV_COMPUTED,
+  defaultMountFor,
   type CsvRowError,
   type ImportPreviewRow,
   type MountType,
@@ -37,10 +38,8 @@ export function toPartDto(p: Part): PartDto {
   };
 }
 
-/** Categories put together by hand rather than placed on a board. */
-const MANUAL_CATEGORIES: readonly PartCategory[] = ['cell', 'enclosure', 'fastener', 'label', 'packaging', 'wire', 'heater', 'motor'];
 /** The mount a line gets when none is given. */
-export const defaultMount = (category: PartCategory): MountType => (MANUAL_CATEGORIES.includes(category) ? 'manual' : 'smt');
+export const defaultMount = defaultMountFor;
 
 /** The values a part line holds (what create, update and import write). */
 export interface PartValues {
