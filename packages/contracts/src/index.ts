@@ -9,3 +9,6 @@ export * from './teardowns';
 export * from './settings';
 export * from './photos';
 export * from './tools';
+export * from './parts';
+export * from './power';
+export * from './measurements';

@@ -10,6 +10,9 @@ import { systemRoutes } from './system/routes';
 import { teardownRoutes } from './teardowns/routes';
 import { toolRoutes } from './tools/routes';
 import { userRoutes } from './users/routes';
+import { partRoutes } from './parts/routes';
+import { powerRoutes } from './power/routes';
+import { measurementRoutes } from './measurements/routes';
 
 export function allRoutes(deps: AppDeps, version: string): RouteDef[] {
   return [
@@ -22,5 +25,8 @@ export function allRoutes(deps: AppDeps, version: string): RouteDef[] {
     ...teardownRoutes,
     ...photoRoutes(deps),
     ...toolRoutes,
+    ...partRoutes,
+    ...powerRoutes,
+    ...measurementRoutes,
   ];
 }

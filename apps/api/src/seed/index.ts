@@ -4,12 +4,14 @@ import { UserSchema } from '../modules/users/user.entity';
 import type { SeedContext, SeedStep } from './context';
 import { DEMO_USERS, demoEmail, seedUsers } from './users';
 import { seedWorkspace } from './workspace';
+import { seedBom } from './bom';
 import { seedPhotos } from './photos';
 
 /** Seed steps in order. Later features append their step here. */
 export const SEED_STEPS: SeedStep[] = [
   { name: 'users', run: seedUsers },
   { name: 'workspace', run: seedWorkspace },
+  { name: 'bom', run: seedBom },
   { name: 'photos', run: seedPhotos },
 ];
 

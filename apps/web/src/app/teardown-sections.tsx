@@ -4,6 +4,7 @@ import { lazy, type ComponentType, type LazyExoticComponent } from 'react';
 import type { LucideIcon } from 'lucide-react';
 import { FileText } from 'lucide-react';
 import { Camera } from 'lucide-react';
+import { Gauge, ListTree, Zap } from 'lucide-react';
 import type { TeardownDto } from '@splitcase/contracts';
 import type { TeardownSection } from '@/config/paths';
 
@@ -34,5 +35,26 @@ export const SECTIONS: SectionDef[] = [
     icon: Camera,
     Component: lazy(() => import('@/features/photos/components/photos-section').then((m) => ({ default: m.PhotosSection }))),
     withFigures: false,
+  },
+  {
+    id: 'parts',
+    label: 'Parts',
+    icon: ListTree,
+    Component: lazy(() => import('@/features/parts/components/parts-section').then((m) => ({ default: m.PartsSection }))),
+    withFigures: true,
+  },
+  {
+    id: 'power',
+    label: 'Power system',
+    icon: Zap,
+    Component: lazy(() => import('@/features/power/components/power-section').then((m) => ({ default: m.PowerSection }))),
+    withFigures: true,
+  },
+  {
+    id: 'measurements',
+    label: 'Measurements',
+    icon: Gauge,
+    Component: lazy(() => import('@/features/measurements/components/measurements-section').then((m) => ({ default: m.MeasurementsSection }))),
+    withFigures: true,
   },
 ];

@@ -1,4 +1,4 @@
-import { useMemo, useState, type ReactNode } from 'react';
+import { Fragment, useMemo, useState, type ReactNode } from 'react';
 import {
   columnFilteringFeature,
   createColumnHelper,
@@ -50,6 +50,10 @@ export function DataTable<T extends RowData>({
   empty,
   caption,
   maxHeight,
+  renderExpanded,
+  footer,
+  rowClassName,
+  dense,
 }: {
   rows: T[];
   columns: Column<T>[];
@@ -59,6 +63,14 @@ export function DataTable<T extends RowData>({
   empty?: ReactNode;
   caption?: string;
   maxHeight?: string;
+  /** Content of a full-width row under a row (null: none), e.g. details of an expanded row. */
+  renderExpanded?: (row: T) => ReactNode | null;
+  /** Rows appended after the data rows, never sorted or filtered (e.g. an entry row). Render <tr> elements. */
+  footer?: ReactNode;
+  /** Extra classes for a body row (e.g. the row being edited). */
+  rowClassName?: (row: T) => string;
+  /** Tighter cell padding, for tables with many columns. */
+  dense?: boolean;
 }) {
   const [sorting, setSorting] = useState<SortingState>(initialSort ? [{ id: initialSort.id, desc: Boolean(initialSort.desc) }] : []);
   const [filters, setFilters] = useState<ColumnFiltersState>([]);
@@ -108,7 +120,7 @@ export function DataTable<T extends RowData>({
                     key={header.id}
                     scope="col"
                     aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : 'none'}
-                    className={`h-8 border-b border-graphite-150 px-3 text-xs font-semibold uppercase tracking-wide text-graphite-600 ${col.align === 'right' ? 'text-right' : 'text-left'}`}
+                    className={`h-8 whitespace-nowrap border-b border-graphite-150 ${dense ? 'px-1.5' : 'px-3'} text-xs font-semibold uppercase tracking-wide text-graphite-600 ${col.align === 'right' ? 'text-right' : 'text-left'}`}
                   >
                     {header.column.getCanSort() ? (
                       <button
@@ -168,25 +180,45 @@ export function DataTable<T extends RowData>({
           )}
         </thead>
         <tbody>
-          {visible.map((row) => (
-            <tr
-              key={row.id}
-              onClick={onRowClick ? () => onRowClick(row.original) : undefined}
-              className={`h-8 border-b border-graphite-100 last:border-0 ${onRowClick ? 'cursor-pointer hover:bg-copper-50/60' : 'hover:bg-graphite-50/60'}`}
-            >
-              {row.getAllCells().map((cell) => {
-                const col = byId.get(cell.column.id)!;
-                return (
-                  <td key={cell.id} className={`px-3 py-1 align-middle ${col.align === 'right' ? 'num text-right' : ''} ${col.className ?? ''}`}>
-                    {col.cell ? col.cell(row.original) : (col.value(row.original) ?? <span className="text-graphite-400">—</span>)}
-                  </td>
-                );
-              })}
+          {visible.map((row) => {
+            const expanded = renderExpanded?.(row.original) ?? null;
+            return (
+              <Fragment key={row.id}>
+                <tr
+                  onClick={onRowClick ? () => onRowClick(row.original) : undefined}
+                  className={`h-8 border-b border-graphite-100 ${expanded === null ? 'last:border-0' : ''} ${onRowClick ? 'cursor-pointer hover:bg-copper-50/60' : 'hover:bg-graphite-50/60'} ${rowClassName?.(row.original) ?? ''}`}
+                >
+                  {row.getAllCells().map((cell) => {
+                    const col = byId.get(cell.column.id)!;
+                    return (
+                      <td key={cell.id} className={`${dense ? 'px-1.5 py-0.5' : 'px-3 py-1'} align-middle ${col.align === 'right' ? 'num text-right' : ''} ${col.className ?? ''}`}>
+                        {col.cell ? col.cell(row.original) : (col.value(row.original) ?? <span className="text-graphite-400">—</span>)}
+                      </td>
+                    );
+                  })}
+                </tr>
+                {expanded !== null && (
+                  <tr className="border-b border-graphite-100 bg-graphite-50/60">
+                    <td colSpan={columns.length} className="px-3 py-3">
+                      {/* Stays in view when a wide table is scrolled sideways. */}
+                      <div className="sticky left-3 w-fit max-w-[40rem]">{expanded}</div>
+                    </td>
+                  </tr>
+                )}
+              </Fragment>
+            );
+          })}
+          {footer && visible.length === 0 && (
+            <tr>
+              <td colSpan={columns.length} className="p-6 text-center text-sm text-graphite-500">
+                {rows.length === 0 ? (empty ?? 'Nothing here yet.') : 'No rows match the filters.'}
+              </td>
             </tr>
-          ))}
+          )}
+          {footer}
         </tbody>
       </table>
-      {visible.length === 0 && <div className="p-6 text-center text-sm text-graphite-500">{rows.length === 0 ? (empty ?? 'Nothing here yet.') : 'No rows match the filters.'}</div>}
+      {!footer && visible.length === 0 && <div className="p-6 text-center text-sm text-graphite-500">{rows.length === 0 ? (empty ?? 'Nothing here yet.') : 'No rows match the filters.'}</div>}
     </div>
   );
 }

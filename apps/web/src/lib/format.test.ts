@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatMoney, formatPercent, formatQuantity, sig } from './format';
+import { formatMoney, formatPercent, formatQuantity, formatStored, sameQuantityText, sig } from './format';
 
 describe('sig (three significant figures by default, LOOK.md)', () => {
   it('rounds to significant figures', () => {
@@ -33,5 +33,25 @@ describe('formatMoney and formatPercent', () => {
     expect(formatMoney(0.0123, 'EUR')).toBe('€0.0123');
     expect(formatPercent(0.8567)).toBe('85.7 %');
     expect(formatPercent(null)).toBe('—');
+  });
+});
+
+describe('formatStored (stored SI values as people read them)', () => {
+  it('shows grams and cm² for small masses and areas', () => {
+    expect(formatStored(0.046, 'kg')).toBe('46.0 g');
+    expect(formatStored(0.0027, 'm²')).toBe('27.0 cm²');
+    expect(formatStored(2.7, 'Ah')).toBe('2.70 Ah');
+    expect(formatStored(0.6, '')).toBe('0.600');
+    expect(formatStored(null, 'V')).toBe('—');
+  });
+});
+
+describe('sameQuantityText', () => {
+  it('ignores spaces, case and trailing zeros, not the unit or the prefix', () => {
+    expect(sameQuantityText('3.02 Ω', '3.020Ω')).toBe(true);
+    expect(sameQuantityText('3.7 V', '3.70 V')).toBe(true);
+    expect(sameQuantityText('10 kΩ', '10.0 kΩ')).toBe(true);
+    expect(sameQuantityText('2700 mAh', '2.70 Ah')).toBe(false);
+    expect(sameQuantityText('100 V', '1 V')).toBe(false);
   });
 });

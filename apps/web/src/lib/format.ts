@@ -11,15 +11,25 @@ const PREFIXES: [number, string][] = [
   [1e-12, 'p'],
 ];
 
-/** Significant-figure rounding without exponent notation for everyday magnitudes; keeps trailing zeros (2.70). */
+/** Significant-figure rounding without exponent notation for everyday magnitudes; trailing zeros kept ("2.70"). */
 export function sig(value: number, digits = 3): string {
   if (!Number.isFinite(value)) return '—';
   if (value === 0) return '0';
-  // Round first, then count decimals on the rounded value (9.996 → 10.0, not 10.00).
   const rounded = Number(value.toPrecision(digits));
   const magnitude = Math.floor(Math.log10(Math.abs(rounded)));
   const decimals = Math.min(Math.max(0, digits - 1 - magnitude), 12);
   return rounded.toLocaleString('en-GB', { minimumFractionDigits: decimals, maximumFractionDigits: decimals, useGrouping: Math.abs(rounded) >= 10000 });
+}
+
+/** Two quantity texts that read the same ("3.02 Ω" and "3.020Ω"): spaces, case and trailing zeros ignored. */
+export function sameQuantityText(a: string, b: string): boolean {
+  const norm = (s: string) =>
+    s
+      .replace(/\s/g, '')
+      .toLowerCase()
+      .replace(/(\.\d*?)0+(?=\D|$)/g, '$1')
+      .replace(/\.(?=\D|$)/g, '');
+  return norm(a) === norm(b);
 }
 
 /** Units that take SI prefixes when shown. Others (%, °C, h, Wh/kg, W/cm²) are shown as they are. */
@@ -62,4 +72,16 @@ export function formatDateTime(iso: string | null | undefined): string {
   return Number.isNaN(d.getTime())
     ? '—'
     : d.toLocaleString('en-GB', { year: 'numeric', month: 'short', day: 'numeric', hour: '2-digit', minute: '2-digit' });
+}
+
+/**
+ * A value in its stored unit (SI; Wh, Ah and °C as the trade uses them), shown the way people read it:
+ * kilograms below 1 kg as grams, square metres as cm², fractions (unit '') as a plain number.
+ */
+export function formatStored(value: number | null | undefined, unit: string, digits = 3): string {
+  if (value === null || value === undefined || !Number.isFinite(value)) return '—';
+  if (unit === 'kg' && Math.abs(value) < 1) return formatQuantity(value * 1000, 'g', digits);
+  if (unit === 'm²') return Math.abs(value) < 0.1 ? `${sig(value * 1e4, digits)} cm²` : `${sig(value, digits)} m²`;
+  if (unit === '') return sig(value, digits);
+  return formatQuantity(value, unit, digits);
 }

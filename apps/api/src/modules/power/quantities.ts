@@ -1,0 +1,81 @@
+// Read typed quantities for the power system: units through lib/units, then the range each field
+// allows. Every bad field is reported at once, named; nothing is applied unless all are good.
+import { validationError } from '../../http/errors';
+import { parseQuantity, type QuantityKind } from '../../lib/units';
+
+export interface FieldRule {
+  kind: QuantityKind;
+  /** Smallest allowed value; `above` makes it exclusive. */
+  min?: number;
+  above?: boolean;
+  max?: number;
+  /** Message when the value is above max. */
+  maxMessage?: string;
+  /** Says what the field is, for messages ("A cell's voltage"). */
+  required?: boolean;
+}
+
+export type Raw = string | number | null | undefined;
+
+export interface ReadResult<K extends string> {
+  /** SI values of the fields present in the body (null = cleared). */
+  values: Partial<Record<K, number | null>>;
+  /** Typed text of the fields given as text. */
+  entered: Partial<Record<K, string>>;
+  /** Fields present in the body (text or number or null). */
+  present: K[];
+}
+
+const UNIT_WORD: Partial<Record<QuantityKind, string>> = { voltage: 'V', current: 'A', resistance: 'Ω', power: 'W', capacity: 'Ah', mass: 'kg', area: 'm²' };
+
+export function readQuantities<K extends string>(body: Partial<Record<K, Raw>>, rules: Record<K, FieldRule>, extraErrors: Record<string, string> = {}): ReadResult<K> {
+  const values: Partial<Record<K, number | null>> = {};
+  const entered: Partial<Record<K, string>> = {};
+  const present: K[] = [];
+  const errors: Record<string, string> = { ...extraErrors };
+  for (const key of Object.keys(rules) as K[]) {
+    if (!(key in body)) {
+      if (rules[key].required) errors[key] = 'Required';
+      continue;
+    }
+    present.push(key);
+    const raw = body[key];
+    const rule = rules[key];
+    if (raw === null || raw === undefined || (typeof raw === 'string' && raw.trim() === '')) {
+      if (rule.required) errors[key] = 'Required';
+      else values[key] = null;
+      continue;
+    }
+    let value: number;
+    try {
+      value = parseQuantity(raw, rule.kind).value;
+    } catch (err) {
+      errors[key] = (err as Error).message;
+      continue;
+    }
+    const unit = UNIT_WORD[rule.kind] ?? '';
+    if (rule.min !== undefined && (rule.above ? value <= rule.min : value < rule.min)) {
+      errors[key] = rule.above ? `Must be more than ${rule.min}${unit ? ` ${unit}` : ''}` : `Must be at least ${rule.min}${unit ? ` ${unit}` : ''}`;
+      continue;
+    }
+    if (rule.max !== undefined && value > rule.max) {
+      errors[key] = rule.maxMessage ?? `At most ${rule.max}${unit ? ` ${unit}` : ''}`;
+      continue;
+    }
+    values[key] = value;
+    if (typeof raw === 'string') entered[key] = raw.trim();
+  }
+  if (Object.keys(errors).length) throw validationError(errors);
+  return { values, entered, present };
+}
+
+/** Merge typed text: fields given again replace their text; fields given as numbers or cleared lose it. */
+export function mergeEntered(previous: Record<string, string> | null | undefined, read: ReadResult<string>): Record<string, string> | null {
+  const out: Record<string, string> = { ...(previous ?? {}) };
+  for (const key of read.present) {
+    const text = read.entered[key];
+    if (text !== undefined) out[key] = text;
+    else delete out[key];
+  }
+  return Object.keys(out).length ? out : null;
+}

@@ -1,0 +1,19 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { PartDto } from '@splitcase/contracts';
+import { api } from '@/lib/api-client';
+import { teardownScope } from '@/lib/query-keys';
+import { partsKey } from './parts';
+
+export const reorderParts = ({ teardownId, ids, headers }: { teardownId: number; ids: number[]; headers?: Record<string, string> }) =>
+  api.put<{ parts: PartDto[] }>(`/api/teardowns/${teardownId}/parts/order`, { ids }, { headers }).then((r) => r.parts);
+
+export function useReorderParts(teardownId: number) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: reorderParts,
+    onSuccess: (parts) => {
+      qc.setQueryData(partsKey(teardownId), parts);
+      return qc.invalidateQueries({ queryKey: teardownScope(teardownId) });
+    },
+  });
+}

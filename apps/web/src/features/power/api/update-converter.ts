@@ -1,0 +1,12 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { ConverterDto, UpdateConverterBody } from '@splitcase/contracts';
+import { api } from '@/lib/api-client';
+import { teardownScope } from '@/lib/query-keys';
+
+export const updateConverter = ({ teardownId, id, body, headers }: { teardownId: number; id: number; body: UpdateConverterBody; headers?: Record<string, string> }) =>
+  api.patch<{ converter: ConverterDto }>(`/api/teardowns/${teardownId}/converters/${id}`, body, { headers }).then((r) => r.converter);
+
+export function useUpdateConverter(teardownId: number) {
+  const qc = useQueryClient();
+  return useMutation({ mutationFn: updateConverter, onSuccess: () => qc.invalidateQueries({ queryKey: teardownScope(teardownId) }) });
+}

@@ -1,0 +1,12 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { LoadDto, UpdateLoadBody } from '@splitcase/contracts';
+import { api } from '@/lib/api-client';
+import { teardownScope } from '@/lib/query-keys';
+
+export const updateLoad = ({ teardownId, id, body, headers }: { teardownId: number; id: number; body: UpdateLoadBody; headers?: Record<string, string> }) =>
+  api.patch<{ load: LoadDto }>(`/api/teardowns/${teardownId}/loads/${id}`, body, { headers }).then((r) => r.load);
+
+export function useUpdateLoad(teardownId: number) {
+  const qc = useQueryClient();
+  return useMutation({ mutationFn: updateLoad, onSuccess: () => qc.invalidateQueries({ queryKey: teardownScope(teardownId) }) });
+}

@@ -1,0 +1,245 @@
+import { useMemo, useState, type FormEvent } from 'react';
+import { toast } from 'sonner';
+import { Pencil, Plus, Trash2, X } from 'lucide-react';
+import { CONVERTER_ROLE, CONVERTER_TOPOLOGY, type ConverterDto, type ConverterRole, type ConverterTopology, type CreateConverterBody } from '@splitcase/contracts';
+import { Badge } from '@/components/badges';
+import { Button } from '@/components/button';
+import { DataTable, type Column } from '@/components/data-table';
+import { Field, Input, Select } from '@/components/field';
+import { Card } from '@/components/page';
+import type { EditGate } from '@/components/published-edit';
+import { ApiError } from '@/lib/api-client';
+import { formatStored, sameQuantityText } from '@/lib/format';
+import { useCreateConverter } from '../api/create-converter';
+import { useDeleteConverter } from '../api/delete-converter';
+import { useUpdateConverter } from '../api/update-converter';
+import { QuantityField, typedOr } from './quantity-field';
+
+const QUANTITIES = [
+  { key: 'inputVolts', label: 'Input voltage', unit: 'V', placeholder: '5 V' },
+  { key: 'outputVolts', label: 'Output voltage', unit: 'V', placeholder: '4.2 V' },
+  { key: 'ratedCurrentAmps', label: 'Rated output current', unit: 'A', placeholder: '2 A' },
+  { key: 'chargeCurrentAmps', label: 'Charge current (charger)', unit: 'A', placeholder: '1 A' },
+  { key: 'efficiency', label: 'Efficiency', unit: '', placeholder: '88 %' },
+] as const;
+type QKey = (typeof QUANTITIES)[number]['key'];
+
+interface Draft {
+  label: string;
+  topology: ConverterTopology;
+  role: ConverterRole;
+  efficiencySource: 'measured' | 'assumed';
+  q: Record<QKey, string>;
+}
+
+const draftOf = (c: ConverterDto | null): Draft => ({
+  label: c?.label ?? '',
+  topology: c?.topology ?? 'buck',
+  role: c?.role ?? 'charge',
+  efficiencySource: c?.efficiencySource ?? 'assumed',
+  q: Object.fromEntries(QUANTITIES.map((f) => [f.key, c ? typedOr(c.entered, f.key, c[f.key]) : ''])) as Record<QKey, string>,
+});
+
+const shown = (c: ConverterDto, key: QKey, unit: string) => {
+  const v = c[key];
+  if (v === null) return <span className="text-graphite-300">—</span>;
+  const si = key === 'efficiency' ? `${Math.round(v * 1000) / 10} %` : formatStored(v, unit);
+  const typed = c.entered[key];
+  return typed && !sameQuantityText(typed, si) ? (
+    <span>
+      {typed} <span className="text-graphite-400">· {si}</span>
+    </span>
+  ) : (
+    si
+  );
+};
+
+/** DC-DC stages with their efficiency, measured or assumed (the figures assume 0.90 when none is given). */
+export function ConvertersCard({ teardownId, converters, gate }: { teardownId: number; converters: ConverterDto[]; gate: EditGate }) {
+  const [editing, setEditing] = useState<ConverterDto | 'new' | null>(null);
+  const [confirmDelete, setConfirmDelete] = useState<number | null>(null);
+  const remove = useDeleteConverter(teardownId);
+
+  const columns = useMemo<Column<ConverterDto>[]>(
+    () => [
+      { id: 'label', header: 'Converter', value: (c) => c.label, filter: 'text', className: 'min-w-48 font-medium' },
+      { id: 'topology', header: 'Topology', value: (c) => CONVERTER_TOPOLOGY.labels[c.topology], filter: 'select', className: 'whitespace-nowrap' },
+      { id: 'role', header: 'Role', value: (c) => CONVERTER_ROLE.labels[c.role], filter: 'select', className: 'min-w-32' },
+      {
+        id: 'volts',
+        header: 'Vin → Vout',
+        value: (c) => c.outputVolts,
+        className: 'num whitespace-nowrap',
+        cell: (c) => (
+          <span>
+            {shown(c, 'inputVolts', 'V')} → {shown(c, 'outputVolts', 'V')}
+          </span>
+        ),
+      },
+      { id: 'current', header: 'Current', value: (c) => c.chargeCurrentAmps ?? c.ratedCurrentAmps ?? undefined, className: 'num whitespace-nowrap', cell: (c) => (c.role === 'charge' ? shown(c, 'chargeCurrentAmps', 'A') : shown(c, 'ratedCurrentAmps', 'A')) },
+      {
+        id: 'efficiency',
+        header: 'Efficiency',
+        value: (c) => c.efficiency ?? undefined,
+        className: 'num whitespace-nowrap',
+        cell: (c) =>
+          c.efficiency === null ? (
+            <span className="text-graphite-500">not given (0.90 assumed)</span>
+          ) : (
+            <span className="inline-flex items-center gap-2">
+              {shown(c, 'efficiency', '')}
+              <Badge tone={c.efficiencySource === 'measured' ? 'cell' : 'neutral'}>{c.efficiencySource}</Badge>
+            </span>
+          ),
+      },
+      {
+        id: 'actions',
+        header: '',
+        value: () => '',
+        sortable: false,
+        align: 'right',
+        className: 'whitespace-nowrap',
+        cell: (c) =>
+          !gate.canEdit ? null : confirmDelete === c.id ? (
+            <span className="inline-flex items-center gap-1">
+              <Button size="sm" variant="danger" className="h-7" busy={remove.isPending} onClick={() => remove.mutate({ teardownId, id: c.id, headers: gate.headers }, { onSuccess: () => toast.success(`Removed ${c.label}.`), onError: (e) => toast.error(e.message), onSettled: () => setConfirmDelete(null) })}>
+                Delete
+              </Button>
+              <button type="button" className="rounded p-1 text-graphite-500 hover:bg-graphite-100" aria-label="Keep the converter" onClick={() => setConfirmDelete(null)}>
+                <X className="size-4" />
+              </button>
+            </span>
+          ) : (
+            <span className="inline-flex">
+              <button type="button" className="rounded p-1.5 text-graphite-500 hover:bg-graphite-100" aria-label={`Edit ${c.label}`} onClick={() => setEditing(c)}>
+                <Pencil className="size-3.5" />
+              </button>
+              <button type="button" className="rounded p-1.5 text-graphite-500 hover:bg-graphite-100" aria-label={`Delete ${c.label}`} onClick={() => setConfirmDelete(c.id)}>
+                <Trash2 className="size-3.5" />
+              </button>
+            </span>
+          ),
+      },
+    ],
+    [gate, confirmDelete, remove, teardownId],
+  );
+
+  return (
+    <Card
+      title="Converters"
+      actions={
+        gate.canEdit &&
+        editing === null && (
+          <Button size="sm" onClick={() => setEditing('new')}>
+            <Plus className="size-4" aria-hidden /> Add converter
+          </Button>
+        )
+      }
+    >
+      <div className="space-y-3 p-2">
+        <DataTable caption="Converters" rows={converters} columns={columns} rowId={(c) => String(c.id)} empty={gate.canEdit ? 'No converters yet: add the charger and any boost or buck stage.' : 'No converters recorded.'} />
+        {editing !== null && <ConverterForm key={editing === 'new' ? 'new' : editing.id} teardownId={teardownId} converter={editing === 'new' ? null : editing} gate={gate} onDone={() => setEditing(null)} />}
+      </div>
+    </Card>
+  );
+}
+
+function ConverterForm({ teardownId, converter, gate, onDone }: { teardownId: number; converter: ConverterDto | null; gate: EditGate; onDone: () => void }) {
+  const create = useCreateConverter(teardownId);
+  const update = useUpdateConverter(teardownId);
+  const [draft, setDraft] = useState<Draft>(() => draftOf(converter));
+  const [errors, setErrors] = useState<Record<string, string>>({});
+  const [formError, setFormError] = useState<string | null>(null);
+
+  const submit = async (e: FormEvent) => {
+    e.preventDefault();
+    setErrors({});
+    setFormError(null);
+    const q = Object.fromEntries(QUANTITIES.map((f) => [f.key, draft.q[f.key].trim() === '' ? null : draft.q[f.key]])) as Record<QKey, string | null>;
+    const body: CreateConverterBody = {
+      label: draft.label.trim() || null,
+      topology: draft.topology,
+      role: draft.role,
+      efficiencySource: draft.efficiencySource,
+      ...q,
+      inputVolts: q.inputVolts ?? '',
+      outputVolts: q.outputVolts ?? '',
+    };
+    try {
+      if (converter) await update.mutateAsync({ teardownId, id: converter.id, body, headers: gate.headers });
+      else await create.mutateAsync({ teardownId, body, headers: gate.headers });
+      toast.success(converter ? 'Converter saved.' : 'Converter added.');
+      onDone();
+    } catch (err) {
+      if (err instanceof ApiError && Object.keys(err.fields).length) setErrors(err.fields);
+      else setFormError(err instanceof Error ? err.message : 'The converter was not saved.');
+    }
+  };
+
+  return (
+    <form onSubmit={submit} onKeyDown={(e) => e.key === 'Escape' && onDone()} noValidate className="space-y-4 rounded-md border border-graphite-150 bg-graphite-50/60 p-4" aria-label={converter ? `Edit ${converter.label}` : 'New converter'}>
+      <h3 className="text-sm font-semibold">{converter ? `Edit ${converter.label}` : 'New converter'}</h3>
+      {formError && (
+        <p role="alert" className="rounded-md bg-brick-50 px-3 py-2 text-sm text-brick-800">
+          {formError}
+        </p>
+      )}
+      <div className="grid gap-4 sm:grid-cols-2 xl:grid-cols-3">
+        <Field label="Topology" error={errors.topology}>
+          {(p) => (
+            <Select {...p} value={draft.topology} onChange={(e) => setDraft({ ...draft, topology: e.target.value as ConverterTopology })} autoFocus>
+              {CONVERTER_TOPOLOGY.values.map((v) => (
+                <option key={v} value={v}>
+                  {CONVERTER_TOPOLOGY.labels[v]}
+                </option>
+              ))}
+            </Select>
+          )}
+        </Field>
+        <Field label="Role" error={errors.role}>
+          {(p) => (
+            <Select {...p} value={draft.role} onChange={(e) => setDraft({ ...draft, role: e.target.value as ConverterRole })}>
+              {CONVERTER_ROLE.values.map((v) => (
+                <option key={v} value={v}>
+                  {CONVERTER_ROLE.labels[v]}
+                </option>
+              ))}
+            </Select>
+          )}
+        </Field>
+        <Field label="Label" error={errors.label} hint="Blank: named from topology and role" className="sm:col-span-2 xl:col-span-1">
+          {(p) => <Input {...p} value={draft.label} onChange={(e) => setDraft({ ...draft, label: e.target.value })} />}
+        </Field>
+        {QUANTITIES.map((f) => (
+          <QuantityField
+            key={f.key}
+            name={f.key}
+            label={f.label}
+            unit={f.unit}
+            placeholder={f.placeholder}
+            value={draft.q[f.key]}
+            error={errors[f.key]}
+            saved={converter ? { value: converter[f.key], text: typedOr(converter.entered, f.key, converter[f.key]) } : undefined}
+            onChange={(v) => setDraft({ ...draft, q: { ...draft.q, [f.key]: v } })}
+          />
+        ))}
+        <Field label="Efficiency is" error={errors.efficiencySource}>
+          {(p) => (
+            <Select {...p} value={draft.efficiencySource} onChange={(e) => setDraft({ ...draft, efficiencySource: e.target.value as 'measured' | 'assumed' })}>
+              <option value="assumed">Assumed</option>
+              <option value="measured">Measured</option>
+            </Select>
+          )}
+        </Field>
+      </div>
+      <div className="flex gap-2">
+        <Button type="submit" variant="primary" busy={create.isPending || update.isPending}>
+          {converter ? 'Save converter' : 'Add converter'}
+        </Button>
+        <Button variant="ghost" onClick={onDone}>
+          Cancel
+        </Button>
+      </div>
+    </form>
+  );
+}

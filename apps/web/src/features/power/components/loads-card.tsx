@@ -1,0 +1,288 @@
+import { useMemo, useState, type FormEvent } from 'react';
+import { toast } from 'sonner';
+import { Pencil, Plus, Trash2, X } from 'lucide-react';
+import { CONNECTION, LOAD_KIND, SURFACE_MATERIAL, type Connection, type ConverterDto, type CreateLoadBody, type LoadDto, type LoadKind, type SurfaceMaterial } from '@splitcase/contracts';
+import { Button } from '@/components/button';
+import { DataTable, type Column } from '@/components/data-table';
+import { Field, Input, Select } from '@/components/field';
+import { Card } from '@/components/page';
+import type { EditGate } from '@/components/published-edit';
+import { ApiError } from '@/lib/api-client';
+import { formatStored, sameQuantityText } from '@/lib/format';
+import { useCreateLoad } from '../api/create-load';
+import { useDeleteLoad } from '../api/delete-load';
+import { useUpdateLoad } from '../api/update-load';
+import { QuantityField, typedOr } from './quantity-field';
+
+const QUANTITIES = [
+  { key: 'resistanceOhms', label: 'Resistance (per element)', unit: 'Ω', placeholder: '3R0 or 3.0 Ω' },
+  { key: 'currentAmps', label: 'Current (per element)', unit: 'A', placeholder: '350 mA' },
+  { key: 'powerWatts', label: 'Power (per element)', unit: 'W', placeholder: '4.4 W' },
+  { key: 'supplyVolts', label: 'Supply voltage', unit: 'V', placeholder: '3.65 V' },
+  { key: 'count', label: 'Count', unit: '', placeholder: '2' },
+  { key: 'duty', label: 'Duty', unit: '', placeholder: '60 %' },
+  { key: 'heatedAreaM2', label: 'Heated area', unit: 'm²', placeholder: '27 cm²' },
+] as const;
+type QKey = (typeof QUANTITIES)[number]['key'];
+
+interface Draft {
+  kind: LoadKind;
+  label: string;
+  connection: Connection;
+  converterId: string;
+  surfaceMaterial: SurfaceMaterial | '';
+  q: Record<QKey, string>;
+}
+
+const draftOf = (l: LoadDto | null): Draft => ({
+  kind: l?.kind ?? 'heater',
+  label: l?.label ?? '',
+  connection: l?.connection ?? 'parallel',
+  converterId: l?.converterId ? String(l.converterId) : '',
+  surfaceMaterial: l?.surfaceMaterial ?? '',
+  q: Object.fromEntries(QUANTITIES.map((f) => [f.key, l ? typedOr(l.entered, f.key, l[f.key]) : f.key === 'count' || f.key === 'duty' ? '1' : ''])) as Record<QKey, string>,
+});
+
+const shown = (l: LoadDto, key: QKey, unit: string) => {
+  const v = l[key];
+  if (v === null) return null;
+  const typed = l.entered[key];
+  const si = key === 'duty' ? `${Math.round(v * 1000) / 10} %` : formatStored(v, unit);
+  return typed && !sameQuantityText(typed, si) ? (
+    <span>
+      {typed} <span className="text-graphite-400">· {si}</span>
+    </span>
+  ) : (
+    <span>{si}</span>
+  );
+};
+
+/** Loads: heater elements, motors, LEDs, USB outputs, each per element with count and connection. */
+export function LoadsCard({ teardownId, loads, converters, gate }: { teardownId: number; loads: LoadDto[]; converters: ConverterDto[]; gate: EditGate }) {
+  const [editing, setEditing] = useState<LoadDto | 'new' | null>(null);
+  const [confirmDelete, setConfirmDelete] = useState<number | null>(null);
+  const remove = useDeleteLoad(teardownId);
+  const converterName = useMemo(() => new Map(converters.map((c) => [c.id, c.label])), [converters]);
+
+  const columns = useMemo<Column<LoadDto>[]>(
+    () => [
+      {
+        id: 'load',
+        header: 'Load',
+        value: (l) => l.label,
+        filter: 'text',
+        className: 'min-w-52',
+        cell: (l) => (
+          <span className="block py-0.5 leading-tight">
+            <span className="font-medium">{l.label}</span>
+            <span className="block text-xs text-graphite-500">{LOAD_KIND.labels[l.kind]}</span>
+          </span>
+        ),
+      },
+      {
+        id: 'element',
+        header: 'Per element',
+        value: (l) => l.resistanceOhms ?? l.currentAmps ?? l.powerWatts ?? undefined,
+        cell: (l) => shown(l, 'resistanceOhms', 'Ω') ?? shown(l, 'currentAmps', 'A') ?? shown(l, 'powerWatts', 'W'),
+        className: 'whitespace-nowrap num',
+      },
+      { id: 'supply', header: 'Supply', value: (l) => l.supplyVolts ?? undefined, cell: (l) => shown(l, 'supplyVolts', 'V') ?? <span className="text-graphite-400">from source</span>, className: 'whitespace-nowrap num' },
+      { id: 'count', header: 'Count', value: (l) => l.count, cell: (l) => `${l.count} × ${CONNECTION.labels[l.connection].toLowerCase()}`, className: 'whitespace-nowrap' },
+      { id: 'duty', header: 'Duty', value: (l) => l.duty, cell: (l) => shown(l, 'duty', ''), align: 'right' },
+      { id: 'via', header: 'Fed through', value: (l) => (l.converterId ? converterName.get(l.converterId) : 'Pack'), filter: 'select', className: 'min-w-40', cell: (l) => (l.converterId ? converterName.get(l.converterId) : <span className="text-graphite-500">the pack, directly</span>) },
+      {
+        id: 'area',
+        header: 'Heated area',
+        value: (l) => l.heatedAreaM2 ?? undefined,
+        className: 'whitespace-nowrap',
+        cell: (l) =>
+          l.heatedAreaM2 === null ? (
+            <span className="text-graphite-300">—</span>
+          ) : (
+            <span className="block leading-tight">
+              {shown(l, 'heatedAreaM2', 'm²')}
+              {l.surfaceMaterial && <span className="block text-xs text-graphite-500">{SURFACE_MATERIAL.labels[l.surfaceMaterial]} surface</span>}
+            </span>
+          ),
+      },
+      {
+        id: 'actions',
+        header: '',
+        value: () => '',
+        sortable: false,
+        align: 'right',
+        className: 'whitespace-nowrap',
+        cell: (l) =>
+          !gate.canEdit ? null : confirmDelete === l.id ? (
+            <span className="inline-flex items-center gap-1">
+              <Button size="sm" variant="danger" className="h-7" busy={remove.isPending} onClick={() => remove.mutate({ teardownId, id: l.id, headers: gate.headers }, { onSuccess: () => toast.success(`Removed ${l.label}.`), onError: (e) => toast.error(e.message), onSettled: () => setConfirmDelete(null) })}>
+                Delete
+              </Button>
+              <button type="button" className="rounded p-1 text-graphite-500 hover:bg-graphite-100" aria-label="Keep the load" onClick={() => setConfirmDelete(null)}>
+                <X className="size-4" />
+              </button>
+            </span>
+          ) : (
+            <span className="inline-flex">
+              <button type="button" className="rounded p-1.5 text-graphite-500 hover:bg-graphite-100" aria-label={`Edit ${l.label}`} onClick={() => setEditing(l)}>
+                <Pencil className="size-3.5" />
+              </button>
+              <button type="button" className="rounded p-1.5 text-graphite-500 hover:bg-graphite-100" aria-label={`Delete ${l.label}`} onClick={() => setConfirmDelete(l.id)}>
+                <Trash2 className="size-3.5" />
+              </button>
+            </span>
+          ),
+      },
+    ],
+    [gate, confirmDelete, remove, teardownId, converterName],
+  );
+
+  return (
+    <Card
+      title="Loads"
+      actions={
+        gate.canEdit &&
+        editing === null && (
+          <Button size="sm" onClick={() => setEditing('new')}>
+            <Plus className="size-4" aria-hidden /> Add load
+          </Button>
+        )
+      }
+    >
+      <div className="space-y-3 p-2">
+        <DataTable caption="Loads" rows={loads} columns={columns} rowId={(l) => String(l.id)} empty={gate.canEdit ? 'No loads yet: add the heater elements, motors, LEDs or USB outputs the pack feeds.' : 'No loads recorded.'} />
+        {editing !== null && (
+          <LoadForm key={editing === 'new' ? 'new' : editing.id} teardownId={teardownId} load={editing === 'new' ? null : editing} converters={converters} gate={gate} onDone={() => setEditing(null)} />
+        )}
+      </div>
+    </Card>
+  );
+}
+
+function LoadForm({ teardownId, load, converters, gate, onDone }: { teardownId: number; load: LoadDto | null; converters: ConverterDto[]; gate: EditGate; onDone: () => void }) {
+  const create = useCreateLoad(teardownId);
+  const update = useUpdateLoad(teardownId);
+  const [draft, setDraft] = useState<Draft>(() => draftOf(load));
+  const [errors, setErrors] = useState<Record<string, string>>({});
+  const [formError, setFormError] = useState<string | null>(null);
+
+  const submit = async (e: FormEvent) => {
+    e.preventDefault();
+    setErrors({});
+    setFormError(null);
+    const body: CreateLoadBody = {
+      kind: draft.kind,
+      label: draft.label.trim() || null,
+      connection: draft.connection,
+      converterId: draft.converterId ? Number(draft.converterId) : null,
+      surfaceMaterial: draft.surfaceMaterial || null,
+      ...(Object.fromEntries(QUANTITIES.map((f) => [f.key, draft.q[f.key].trim() === '' ? null : draft.q[f.key]])) as Record<QKey, string | null>),
+      count: draft.q.count.trim() || '1',
+      duty: draft.q.duty.trim() || '1',
+    };
+    try {
+      if (load) await update.mutateAsync({ teardownId, id: load.id, body, headers: gate.headers });
+      else await create.mutateAsync({ teardownId, body, headers: gate.headers });
+      toast.success(load ? 'Load saved.' : 'Load added.');
+      onDone();
+    } catch (err) {
+      if (err instanceof ApiError && Object.keys(err.fields).length) setErrors(err.fields);
+      else setFormError(err instanceof Error ? err.message : 'The load was not saved.');
+    }
+  };
+
+  return (
+    <form onSubmit={submit} onKeyDown={(e) => e.key === 'Escape' && onDone()} noValidate className="space-y-4 rounded-md border border-graphite-150 bg-graphite-50/60 p-4" aria-label={load ? `Edit ${load.label}` : 'New load'}>
+      <h3 className="text-sm font-semibold">{load ? `Edit ${load.label}` : 'New load'}</h3>
+      {formError && (
+        <p role="alert" className="rounded-md bg-brick-50 px-3 py-2 text-sm text-brick-800">
+          {formError}
+        </p>
+      )}
+      <div className="grid gap-4 sm:grid-cols-2 xl:grid-cols-3">
+        <Field label="Kind" error={errors.kind}>
+          {(p) => (
+            <Select {...p} value={draft.kind} onChange={(e) => setDraft({ ...draft, kind: e.target.value as LoadKind })} autoFocus>
+              {LOAD_KIND.values.map((v) => (
+                <option key={v} value={v}>
+                  {LOAD_KIND.labels[v]}
+                </option>
+              ))}
+            </Select>
+          )}
+        </Field>
+        <Field label="Label" error={errors.label} hint="e.g. Heater elements, front and back" className="xl:col-span-2">
+          {(p) => <Input {...p} value={draft.label} onChange={(e) => setDraft({ ...draft, label: e.target.value })} />}
+        </Field>
+        {QUANTITIES.slice(0, 4).map((f) => (
+          <QuantityField
+            key={f.key}
+            name={f.key}
+            label={f.label}
+            unit={f.unit}
+            placeholder={f.placeholder}
+            value={draft.q[f.key]}
+            error={errors[f.key]}
+            saved={load ? { value: load[f.key], text: typedOr(load.entered, f.key, load[f.key]) } : undefined}
+            onChange={(v) => setDraft({ ...draft, q: { ...draft.q, [f.key]: v } })}
+          />
+        ))}
+        <QuantityField name="count" label="Count" unit="" value={draft.q.count} error={errors.count} placeholder="2" onChange={(v) => setDraft({ ...draft, q: { ...draft.q, count: v } })} />
+        <Field label="Connection" error={errors.connection}>
+          {(p) => (
+            <Select {...p} value={draft.connection} onChange={(e) => setDraft({ ...draft, connection: e.target.value as Connection })}>
+              {CONNECTION.values.map((v) => (
+                <option key={v} value={v}>
+                  {CONNECTION.labels[v]}
+                </option>
+              ))}
+            </Select>
+          )}
+        </Field>
+        <QuantityField name="duty" label="Duty" unit="" value={draft.q.duty} error={errors.duty} placeholder="60 %" onChange={(v) => setDraft({ ...draft, q: { ...draft.q, duty: v } })} />
+        <Field label="Fed through" error={errors.converterId}>
+          {(p) => (
+            <Select {...p} value={draft.converterId} onChange={(e) => setDraft({ ...draft, converterId: e.target.value })}>
+              <option value="">Straight from the pack</option>
+              {converters.map((c) => (
+                <option key={c.id} value={c.id}>
+                  {c.label}
+                </option>
+              ))}
+            </Select>
+          )}
+        </Field>
+        <QuantityField
+          name="heatedAreaM2"
+          label="Heated area"
+          unit="m²"
+          value={draft.q.heatedAreaM2}
+          error={errors.heatedAreaM2}
+          placeholder="27 cm²"
+          saved={load ? { value: load.heatedAreaM2, text: typedOr(load.entered, 'heatedAreaM2', load.heatedAreaM2) } : undefined}
+          onChange={(v) => setDraft({ ...draft, q: { ...draft.q, heatedAreaM2: v } })}
+        />
+        <Field label="Surface material" error={errors.surfaceMaterial} hint="Sets the touch-temperature limit">
+          {(p) => (
+            <Select {...p} value={draft.surfaceMaterial} onChange={(e) => setDraft({ ...draft, surfaceMaterial: e.target.value as SurfaceMaterial | '' })}>
+              <option value="">Not a touch surface</option>
+              {SURFACE_MATERIAL.values.map((v) => (
+                <option key={v} value={v}>
+                  {SURFACE_MATERIAL.labels[v]}
+                </option>
+              ))}
+            </Select>
+          )}
+        </Field>
+      </div>
+      <div className="flex gap-2">
+        <Button type="submit" variant="primary" busy={create.isPending || update.isPending}>
+          {load ? 'Save load' : 'Add load'}
+        </Button>
+        <Button variant="ghost" onClick={onDone}>
+          Cancel
+        </Button>
+      </div>
+    </form>
+  );
+}

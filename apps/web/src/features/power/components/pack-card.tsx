@@ -1,0 +1,205 @@
+import { useState, type FormEvent } from 'react';
+import { toast } from 'sonner';
+import { Battery } from 'lucide-react';
+import { CHEMISTRY, JOINING, type Chemistry, type Joining, type PackDto } from '@splitcase/contracts';
+import { Button } from '@/components/button';
+import { Field, Input, Select } from '@/components/field';
+import { Card } from '@/components/page';
+import type { EditGate } from '@/components/published-edit';
+import { ApiError } from '@/lib/api-client';
+import { formatStored, sameQuantityText } from '@/lib/format';
+import { useDeletePack } from '../api/delete-pack';
+import { useSavePack } from '../api/save-pack';
+import { QuantityField, typedOr } from './quantity-field';
+
+const QUANTITIES = [
+  { key: 'nominalVolts', label: 'Nominal voltage (per cell)', unit: 'V', placeholder: '3.7 V', pick: (p: PackDto) => p.nominalVolts },
+  { key: 'maxVolts', label: 'Charge voltage (per cell)', unit: 'V', placeholder: '4.2 V', pick: (p: PackDto) => p.maxVolts },
+  { key: 'capacityAh', label: 'Rated capacity (per cell)', unit: 'Ah', placeholder: '2700 mAh', pick: (p: PackDto) => p.capacityAh },
+  { key: 'measuredCapacityAh', label: 'Measured capacity (per cell)', unit: 'Ah', placeholder: '2620 mAh', pick: (p: PackDto) => p.measuredCapacityAh },
+  { key: 'series', label: 'Cells in series', unit: '', placeholder: '1', pick: (p: PackDto) => p.series },
+  { key: 'parallel', label: 'Cells in parallel', unit: '', placeholder: '1', pick: (p: PackDto) => p.parallel },
+  { key: 'massKg', label: 'Pack mass', unit: 'kg', placeholder: '46 g', pick: (p: PackDto) => p.massKg },
+] as const;
+type QKey = (typeof QUANTITIES)[number]['key'];
+
+interface Draft {
+  chemistry: Chemistry;
+  cellFormat: string;
+  protection: boolean;
+  joining: Joining | '';
+  q: Record<QKey, string>;
+}
+
+const draftOf = (p: PackDto | null): Draft => ({
+  chemistry: p?.chemistry ?? 'li-ion',
+  cellFormat: p?.cellFormat ?? '',
+  protection: p?.protection ?? false,
+  joining: p?.joining ?? '',
+  q: Object.fromEntries(QUANTITIES.map((f) => [f.key, p ? typedOr(p.entered, f.key, f.pick(p)) : f.key === 'series' || f.key === 'parallel' ? '1' : ''])) as Record<QKey, string>,
+});
+
+/**
+ * The pack (one per teardown): typed with units, stored in SI, the typed text shown back. Give it
+ * `key={pack?.updatedAt}` so a saved pack refreshes the form.
+ */
+export function PackCard({ teardownId, pack, gate }: { teardownId: number; pack: PackDto | null; gate: EditGate }) {
+  const save = useSavePack(teardownId);
+  const remove = useDeletePack(teardownId);
+  const [draft, setDraft] = useState<Draft>(() => draftOf(pack));
+  const [errors, setErrors] = useState<Record<string, string>>({});
+  const [formError, setFormError] = useState<string | null>(null);
+  const [confirmRemove, setConfirmRemove] = useState(false);
+
+  const submit = async (e: FormEvent) => {
+    e.preventDefault();
+    setErrors({});
+    setFormError(null);
+    try {
+      await save.mutateAsync({
+        teardownId,
+        headers: gate.headers,
+        body: {
+          chemistry: draft.chemistry,
+          cellFormat: draft.cellFormat.trim() || null,
+          protection: draft.protection,
+          joining: draft.joining || null,
+          nominalVolts: draft.q.nominalVolts,
+          maxVolts: draft.q.maxVolts || null,
+          capacityAh: draft.q.capacityAh,
+          measuredCapacityAh: draft.q.measuredCapacityAh || null,
+          series: draft.q.series || 1,
+          parallel: draft.q.parallel || 1,
+          massKg: draft.q.massKg || null,
+        },
+      });
+      toast.success('Pack saved.');
+    } catch (err) {
+      if (err instanceof ApiError && Object.keys(err.fields).length) setErrors(err.fields);
+      else setFormError(err instanceof Error ? err.message : 'The pack was not saved.');
+    }
+  };
+
+  if (!gate.canEdit) {
+    return (
+      <Card title="Cells and pack">
+        {pack ? <PackSummary pack={pack} /> : <p className="p-4 text-sm text-graphite-500">No pack recorded yet.</p>}
+      </Card>
+    );
+  }
+
+  return (
+    <Card
+      title="Cells and pack"
+      actions={
+        pack &&
+        (confirmRemove ? (
+          <span className="flex items-center gap-2 text-sm">
+            Remove the pack record?
+            <Button size="sm" variant="danger" busy={remove.isPending} onClick={() => remove.mutate({ teardownId, headers: gate.headers }, { onSuccess: () => toast.success('Pack removed.'), onSettled: () => setConfirmRemove(false), onError: (e) => toast.error(e.message) })}>
+              Remove
+            </Button>
+            <Button size="sm" variant="ghost" onClick={() => setConfirmRemove(false)}>
+              Keep
+            </Button>
+          </span>
+        ) : (
+          <Button size="sm" variant="ghost" onClick={() => setConfirmRemove(true)}>
+            Remove pack
+          </Button>
+        ))
+      }
+    >
+      <form onSubmit={submit} noValidate className="space-y-4 p-4" aria-label="Pack">
+        {!pack && (
+          <p className="flex items-center gap-2 text-sm text-graphite-600">
+            <Battery className="size-4 text-graphite-400" aria-hidden /> Record the cells: chemistry, voltage and capacity per cell, and how many in series and parallel.
+          </p>
+        )}
+        {formError && (
+          <p role="alert" className="rounded-md bg-brick-50 px-3 py-2 text-sm text-brick-800">
+            {formError}
+          </p>
+        )}
+        <div className="grid gap-4 sm:grid-cols-2 xl:grid-cols-3">
+          <Field label="Chemistry" error={errors.chemistry}>
+            {(p) => (
+              <Select {...p} value={draft.chemistry} onChange={(e) => setDraft({ ...draft, chemistry: e.target.value as Chemistry })}>
+                {CHEMISTRY.values.map((v) => (
+                  <option key={v} value={v}>
+                    {CHEMISTRY.labels[v]}
+                  </option>
+                ))}
+              </Select>
+            )}
+          </Field>
+          <Field label="Cell format" error={errors.cellFormat} hint="18650, pouch 503450…">
+            {(p) => <Input {...p} value={draft.cellFormat} onChange={(e) => setDraft({ ...draft, cellFormat: e.target.value })} />}
+          </Field>
+          <Field label="Joining" error={errors.joining}>
+            {(p) => (
+              <Select {...p} value={draft.joining} onChange={(e) => setDraft({ ...draft, joining: e.target.value as Joining | '' })}>
+                <option value="">Not recorded</option>
+                {JOINING.values.map((v) => (
+                  <option key={v} value={v}>
+                    {JOINING.labels[v]}
+                  </option>
+                ))}
+              </Select>
+            )}
+          </Field>
+          {QUANTITIES.map((f) => (
+            <QuantityField
+              key={f.key}
+              name={f.key}
+              label={f.label}
+              unit={f.unit}
+              placeholder={f.placeholder}
+              value={draft.q[f.key]}
+              error={errors[f.key]}
+              saved={pack ? { value: f.pick(pack), text: typedOr(pack.entered, f.key, f.pick(pack)) } : undefined}
+              onChange={(v) => setDraft({ ...draft, q: { ...draft.q, [f.key]: v } })}
+            />
+          ))}
+          <label className="flex items-center gap-2 self-end pb-2 text-sm font-medium text-graphite-800">
+            <input type="checkbox" checked={draft.protection} onChange={(e) => setDraft({ ...draft, protection: e.target.checked })} className="size-4 accent-copper-600" />
+            Protection circuit present
+          </label>
+        </div>
+        <div className="flex items-center gap-3">
+          <Button type="submit" variant="primary" busy={save.isPending}>
+            {pack ? 'Save pack' : 'Record pack'}
+          </Button>
+          <p className="text-xs text-graphite-500">Type values with their units; plain numbers are read in V, Ah and kg.</p>
+        </div>
+      </form>
+    </Card>
+  );
+}
+
+function PackSummary({ pack }: { pack: PackDto }) {
+  const rows: [string, string][] = [
+    ['Chemistry', CHEMISTRY.labels[pack.chemistry]],
+    ['Cell format', pack.cellFormat ?? '—'],
+    ['Arrangement', `${pack.series}S${pack.parallel}P (${pack.series * pack.parallel} cell${pack.series * pack.parallel === 1 ? '' : 's'})`],
+    ...QUANTITIES.filter((f) => f.key !== 'series' && f.key !== 'parallel').map((f): [string, string] => {
+      const v = f.pick(pack);
+      const typed = pack.entered[f.key];
+      const si = formatStored(v, f.unit);
+      const same = typed !== undefined && sameQuantityText(typed, si);
+      return [f.label, typed && !same ? `${typed} (${si})` : si];
+    }),
+    ['Protection circuit', pack.protection ? 'Present' : 'None found'],
+    ['Joining', pack.joining ? JOINING.labels[pack.joining] : '—'],
+  ];
+  return (
+    <dl className="grid grid-cols-[12rem_minmax(0,1fr)] gap-x-4 gap-y-1.5 p-4 text-sm">
+      {rows.map(([k, v]) => (
+        <div key={k} className="contents">
+          <dt className="text-graphite-500">{k}</dt>
+          <dd className="num">{v}</dd>
+        </div>
+      ))}
+    </dl>
+  );
+}

@@ -1,0 +1,28 @@
+import type { TeardownDto } from '@splitcase/contracts';
+import { ErrorPanel } from '@/components/error-boundary';
+import { Spinner } from '@/components/page';
+import { PublishedEditNotice, useEditGate } from '@/components/published-edit';
+import { usePower } from '../api/power';
+import { ConvertersCard } from './converters-card';
+import { HeaterCaution, LithiumCaution } from './lithium-caution';
+import { LoadsCard } from './loads-card';
+import { PackCard } from './pack-card';
+
+/** The power system of a teardown: the pack, its loads and converters. The figures panel derives the numbers. */
+export function PowerSection({ teardown }: { teardown: TeardownDto }) {
+  const power = usePower(teardown.id);
+  const gate = useEditGate(teardown);
+  if (power.isPending) return <Spinner />;
+  if (power.isError) return <ErrorPanel error={power.error} onRetry={() => power.refetch()} />;
+  const { pack, loads, converters } = power.data;
+  return (
+    <div className="space-y-4">
+      <PublishedEditNotice gate={gate} />
+      {(pack === null || pack.lithium) && <LithiumCaution />}
+      <PackCard key={pack?.updatedAt ?? 'none'} teardownId={teardown.id} pack={pack} gate={gate} />
+      {loads.some((l) => l.kind === 'heater') && <HeaterCaution />}
+      <LoadsCard teardownId={teardown.id} loads={loads} converters={converters} gate={gate} />
+      <ConvertersCard teardownId={teardown.id} converters={converters} gate={gate} />
+    </div>
+  );
+}

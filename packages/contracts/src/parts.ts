@@ -1,0 +1,159 @@
+// Bill of materials: one line per part of a teardown, CSV import/export.
+import { z } from 'zod';
+import { MOUNT_TYPE, PART_CATEGORY, type MountType, type PartCategory } from './domain';
+
+/** Categories put together by hand rather than placed on a board. */
+const MANUAL_CATEGORIES: readonly PartCategory[] = ['cell', 'pcb', 'enclosure', 'fastener', 'label', 'packaging', 'wire', 'heater', 'motor'];
+/** The mount a line gets when none is given: manual for cells, boards, heaters, motors, wires and mechanical parts; SMT otherwise. */
+export const defaultMountFor = (category: PartCategory): MountType => (MANUAL_CATEGORIES.includes(category) ? 'manual' : 'smt');
+
+const trimmed = (max: number) =>
+  z
+    .string()
+    .trim()
+    .max(max, `At most ${max} characters`)
+    .optional()
+    .nullable()
+    .transform((v) => (v === '' ? null : v));
+
+export const partCategorySchema = z.enum(PART_CATEGORY.values, { error: `Choose a category: ${PART_CATEGORY.values.join(', ')}` });
+export const mountTypeSchema = z.enum(MOUNT_TYPE.values, { error: 'Choose smt, tht or manual' });
+
+const partFields = {
+  /** Reference designators as printed on the board, e.g. "R1, R2" (free text). */
+  designators: trimmed(300),
+  /** The singular form is accepted too (same meaning). */
+  designator: trimmed(300),
+  category: partCategorySchema,
+  description: z.string({ error: 'Required' }).trim().min(1, 'Required').max(500, 'At most 500 characters'),
+  quantity: z
+    .number({ error: 'Enter a whole number of at least 1' })
+    .int('Enter a whole number')
+    .min(1, 'At least 1')
+    .max(100_000, 'At most 100 000'),
+  mount: mountTypeSchema,
+  /** The marking as read off the part ("472", "4R7", "68X", "104"). */
+  marking: trimmed(120),
+  makerPartNumber: trimmed(120),
+  package: trimmed(80),
+  notes: trimmed(4000),
+};
+
+/** `mount` defaults to manual for cells, boards, heaters, motors, wires, enclosures, fasteners, labels and packaging; SMT otherwise. */
+export const createPartBody = z.object({ ...partFields, quantity: partFields.quantity.default(1), mount: partFields.mount.optional() });
+export type CreatePartBody = z.input<typeof createPartBody>;
+
+export const updatePartBody = z
+  .object(partFields)
+  .partial()
+  .refine((b) => Object.keys(b).length > 0, { message: 'Change at least one field' });
+export type UpdatePartBody = z.input<typeof updatePartBody>;
+
+export const reorderPartsBody = z.object({
+  ids: z.array(z.number().int().positive()).min(1, 'Give the part ids in their new order').max(5000),
+});
+export type ReorderPartsBody = z.infer<typeof reorderPartsBody>;
+
+export const partSchema = z.object({
+  id: z.number().int(),
+  teardownId: z.number().int(),
+  position: z.number().int(),
+  designators: z.string().nullable(),
+  category: partCategorySchema,
+  description: z.string(),
+  marking: z.string().nullable(),
+  /** Decoded from the marking (SI: Ω or F) when it reads as a resistor or capacitor code. */
+  decodedValue: z.number().nullable(),
+  decodedUnit: z.enum(['Ω', 'F']).nullable(),
+  /** Why a resistor/capacitor marking gave no value (null when decoded or not applicable). */
+  decodeNote: z.string().nullable(),
+  makerPartNumber: z.string().nullable(),
+  package: z.string().nullable(),
+  quantity: z.number().int(),
+  mount: mountTypeSchema,
+  notes: z.string().nullable(),
+  updatedAt: z.string(),
+});
+export type PartDto = z.infer<typeof partSchema>;
+export const partResponse = z.object({ part: partSchema });
+export const partsResponse = z.object({ parts: z.array(partSchema) });
+
+// ---- CSV ----
+
+/**
+ * Columns of the parts CSV, in export order. Import matches headers case-insensitively, ignoring
+ * spaces, '_', '-' and '.', and accepts the aliases listed.
+ */
+export const PART_CSV_COLUMNS = [
+  { key: 'designators', header: 'Designators', aliases: ['designator', 'ref', 'refs', 'refdes', 'reference'], required: false },
+  { key: 'category', header: 'Category', aliases: ['type'], required: true },
+  { key: 'description', header: 'Description', aliases: ['desc', 'name'], required: true },
+  { key: 'marking', header: 'Marking', aliases: ['code', 'markingcode'], required: false },
+  { key: 'decodedValue', header: 'Decoded value', aliases: [], required: false },
+  { key: 'decodedUnit', header: 'Decoded unit', aliases: [], required: false },
+  { key: 'makerPartNumber', header: 'Maker part number', aliases: ['mpn', 'partnumber', 'pn', 'manufacturerpartnumber'], required: false },
+  { key: 'package', header: 'Package', aliases: ['footprint', 'case'], required: false },
+  { key: 'quantity', header: 'Quantity', aliases: ['qty', 'count'], required: false },
+  { key: 'mount', header: 'Mount', aliases: ['mounting', 'mounttype', 'assembly'], required: false },
+  { key: 'notes', header: 'Notes', aliases: ['note', 'comment', 'comments', 'remarks'], required: false },
+] as const;
+export type PartCsvKey = (typeof PART_CSV_COLUMNS)[number]['key'];
+/** Export-only columns: read back on import, but recomputed from the marking. */
+export const PART_CSV_COMPUTED: readonly PartCsvKey[] = ['decodedValue', 'decodedUnit'];
+
+export const importPartsBody = z.object({
+  /** The CSV text (UTF-8; a BOM is fine). Comma, semicolon or tab separated; quoted fields allowed. */
+  csv: z.string({ error: 'Paste or upload a CSV file' }).min(1, 'The CSV is empty').max(900_000, 'The CSV is larger than 900 kB; split it'),
+  /** append (default) keeps the current parts; replace swaps the whole list in one transaction. */
+  mode: z.enum(['append', 'replace'], { error: 'Choose append or replace' }).default('append'),
+});
+export type ImportPartsBody = z.input<typeof importPartsBody>;
+export const importPartsQuery = z.object({
+  dryRun: z
+    .enum(['1', '0', 'true', 'false'], { error: 'Use dryRun=1 for a preview' })
+    .optional()
+    .transform((v) => v === '1' || v === 'true'),
+});
+
+export const csvRowErrorSchema = z.object({
+  /** Row number as a spreadsheet shows it: the header is row 1, the first part row 2. */
+  row: z.number().int(),
+  /** The column as headed in the file (or the expected header when it is missing). */
+  column: z.string(),
+  message: z.string(),
+});
+export type CsvRowError = z.infer<typeof csvRowErrorSchema>;
+
+export const importPreviewRowSchema = z.object({
+  row: z.number().int(),
+  part: z.object({
+    designators: z.string().nullable(),
+    category: z.string(),
+    description: z.string(),
+    marking: z.string().nullable(),
+    decodedValue: z.number().nullable(),
+    decodedUnit: z.enum(['Ω', 'F']).nullable(),
+    makerPartNumber: z.string().nullable(),
+    package: z.string().nullable(),
+    quantity: z.number().nullable(),
+    mount: z.string(),
+    notes: z.string().nullable(),
+  }),
+  errors: z.array(csvRowErrorSchema),
+});
+export type ImportPreviewRow = z.infer<typeof importPreviewRowSchema>;
+
+export const importPartsResponse = z.object({
+  dryRun: z.boolean(),
+  /** Nothing is saved unless every row is valid. */
+  valid: z.boolean(),
+  delimiter: z.string(),
+  columns: z.object({ recognised: z.array(z.string()), ignored: z.array(z.string()) }),
+  rows: z.array(importPreviewRowSchema),
+  errors: z.array(csvRowErrorSchema),
+  warnings: z.array(z.string()),
+  /** Parts saved (0 on a dry run). */
+  imported: z.number().int(),
+  parts: z.array(partSchema).optional(),
+});
+export type ImportPartsResponse = z.infer<typeof importPartsResponse>;

@@ -1,0 +1,183 @@
+// Power system of a teardown: the pack (one per teardown), loads and converters.
+// Numeric inputs take a number in SI or text with a unit ("2700 mAh", "3.65V", "3R0", "60 %"); the
+// server stores SI and keeps the typed text in `entered`, keyed by the field name.
+import { z } from 'zod';
+import { CHEMISTRY, CONNECTION, CONVERTER_ROLE, CONVERTER_TOPOLOGY, JOINING, LOAD_KIND, SURFACE_MATERIAL } from './domain';
+
+/** A number (SI) or text with a unit. Blank or null clears an optional value. */
+export const quantityInput = z.union([z.number(), z.string().trim().max(40, 'At most 40 characters')], {
+  error: (issue) => (issue.input === undefined ? 'Required' : 'Enter a number or a value with its unit'),
+});
+const required = quantityInput;
+const optional = quantityInput.nullable().optional();
+
+const choice = <T extends readonly [string, ...string[]]>(values: T) => z.enum(values, { error: `Choose one of: ${values.join(', ')}` });
+
+const label = (max: number) =>
+  z
+    .string()
+    .trim()
+    .max(max, `At most ${max} characters`)
+    .nullable()
+    .optional()
+    .transform((v) => (v === '' ? null : v));
+
+// ---- pack ----
+
+export const packBody = z.object({
+  chemistry: choice(CHEMISTRY.values),
+  /** "18650", "pouch 503450"… */
+  cellFormat: label(60),
+  /** Cell nominal voltage. */
+  nominalVolts: required,
+  /** Cell charge (maximum) voltage. */
+  maxVolts: optional,
+  /** Rated capacity of one cell. */
+  capacityAh: required,
+  /** Measured capacity of one cell. */
+  measuredCapacityAh: optional,
+  series: quantityInput.default(1),
+  parallel: quantityInput.default(1),
+  /** Mass of the whole pack. */
+  massKg: optional,
+  protection: z.boolean({ error: 'Yes or no' }).default(false),
+  joining: choice(JOINING.values).nullable().optional(),
+});
+export type PackBody = z.input<typeof packBody>;
+
+export const packSchema = z.object({
+  id: z.number().int(),
+  teardownId: z.number().int(),
+  chemistry: choice(CHEMISTRY.values),
+  cellFormat: z.string().nullable(),
+  nominalVolts: z.number(),
+  maxVolts: z.number().nullable(),
+  capacityAh: z.number(),
+  measuredCapacityAh: z.number().nullable(),
+  series: z.number().int(),
+  parallel: z.number().int(),
+  massKg: z.number().nullable(),
+  protection: z.boolean(),
+  joining: choice(JOINING.values).nullable(),
+  /** What the user typed, by field ("capacityAh": "2700 mAh"). */
+  entered: z.record(z.string(), z.string()),
+  /** A lithium chemistry: the section shows the lithium cautions. */
+  lithium: z.boolean(),
+  updatedAt: z.string(),
+});
+export type PackDto = z.infer<typeof packSchema>;
+export const packResponse = z.object({ pack: packSchema.nullable() });
+
+export const LITHIUM_CHEMISTRIES: readonly string[] = ['li-ion', 'li-po', 'lifepo4', 'lto'];
+
+// ---- converters ----
+
+const converterFields = {
+  label: label(120),
+  topology: choice(CONVERTER_TOPOLOGY.values),
+  role: choice(CONVERTER_ROLE.values),
+  inputVolts: required,
+  outputVolts: required,
+  ratedCurrentAmps: optional,
+  /** For a charge converter: the constant-current phase current into the pack. */
+  chargeCurrentAmps: optional,
+  /** 0..1, or "88 %". Absent: the figures assume 0.90 and say so. */
+  efficiency: optional,
+  efficiencySource: choice(['measured', 'assumed'] as const),
+};
+export const createConverterBody = z.object({
+  ...converterFields,
+  role: converterFields.role.default('load'),
+  efficiencySource: converterFields.efficiencySource.default('assumed'),
+});
+export type CreateConverterBody = z.input<typeof createConverterBody>;
+export const updateConverterBody = z
+  .object(converterFields)
+  .partial()
+  .refine((b) => Object.keys(b).length > 0, { message: 'Change at least one field' });
+export type UpdateConverterBody = z.input<typeof updateConverterBody>;
+
+export const converterSchema = z.object({
+  id: z.number().int(),
+  teardownId: z.number().int(),
+  label: z.string(),
+  topology: choice(CONVERTER_TOPOLOGY.values),
+  role: choice(CONVERTER_ROLE.values),
+  inputVolts: z.number(),
+  outputVolts: z.number(),
+  ratedCurrentAmps: z.number().nullable(),
+  chargeCurrentAmps: z.number().nullable(),
+  efficiency: z.number().nullable(),
+  efficiencySource: z.enum(['measured', 'assumed']),
+  entered: z.record(z.string(), z.string()),
+  createdAt: z.string(),
+});
+export type ConverterDto = z.infer<typeof converterSchema>;
+export const converterResponse = z.object({ converter: converterSchema });
+export const convertersResponse = z.object({ converters: z.array(converterSchema) });
+
+// ---- loads ----
+
+const loadFields = {
+  kind: choice(LOAD_KIND.values),
+  label: label(120),
+  /** Per element. */
+  resistanceOhms: optional,
+  /** Per element. */
+  currentAmps: optional,
+  /** Per element. */
+  powerWatts: optional,
+  /** Voltage across the load; absent: the converter's output or the pack's nominal voltage. */
+  supplyVolts: optional,
+  count: quantityInput,
+  connection: choice(CONNECTION.values),
+  /** PWM duty 0..1, or "60 %". */
+  duty: quantityInput,
+  /** The converter the load is fed through (same teardown); null: straight from the pack. */
+  converterId: z.number({ error: 'Choose a converter of this teardown' }).int().positive().nullable().optional(),
+  /** Area that sheds the heat. */
+  heatedAreaM2: optional,
+  surfaceMaterial: choice(SURFACE_MATERIAL.values).nullable().optional(),
+};
+export const createLoadBody = z.object({
+  ...loadFields,
+  count: loadFields.count.default(1),
+  connection: loadFields.connection.default('parallel'),
+  duty: loadFields.duty.default(1),
+});
+export type CreateLoadBody = z.input<typeof createLoadBody>;
+export const updateLoadBody = z
+  .object(loadFields)
+  .partial()
+  .refine((b) => Object.keys(b).length > 0, { message: 'Change at least one field' });
+export type UpdateLoadBody = z.input<typeof updateLoadBody>;
+
+export const loadSchema = z.object({
+  id: z.number().int(),
+  teardownId: z.number().int(),
+  kind: choice(LOAD_KIND.values),
+  label: z.string(),
+  resistanceOhms: z.number().nullable(),
+  currentAmps: z.number().nullable(),
+  powerWatts: z.number().nullable(),
+  supplyVolts: z.number().nullable(),
+  count: z.number().int(),
+  connection: choice(CONNECTION.values),
+  duty: z.number(),
+  converterId: z.number().int().nullable(),
+  heatedAreaM2: z.number().nullable(),
+  surfaceMaterial: choice(SURFACE_MATERIAL.values).nullable(),
+  entered: z.record(z.string(), z.string()),
+  createdAt: z.string(),
+});
+export type LoadDto = z.infer<typeof loadSchema>;
+export const loadResponse = z.object({ load: loadSchema });
+export const loadsResponse = z.object({ loads: z.array(loadSchema) });
+
+export const powerSystemResponse = z.object({ pack: packSchema.nullable(), loads: z.array(loadSchema), converters: z.array(converterSchema) });
+export type PowerSystemDto = z.infer<typeof powerSystemResponse>;
+
+export const childIdParams = z.object({
+  id: z.coerce.number().int().positive('Must be a positive whole number'),
+  childId: z.coerce.number().int().positive('Must be a positive whole number'),
+});

@@ -1,0 +1,108 @@
+// An engineer at the bench: adds a part inline, imports a CSV (preview with row errors, then
+// commit), records a reading typed with its unit, and edits the pack with "2700 mAh".
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { launch, signedInPage } from './browser';
+
+let browser: Browser;
+let page: Page;
+let teardownId: number;
+
+/** The demo draft teardown of the Stackcell 20 PD (found through the API, not by a fixed id). */
+async function findTeardown(p: Page, model: string): Promise<number> {
+  for (let id = 1; id <= 40; id++) {
+    const res = await p.request.get(`/api/teardowns/${id}`);
+    if (res.ok() && (await res.json()).teardown.device.model === model) return id;
+  }
+  throw new Error(`No teardown of ${model}`);
+}
+
+beforeAll(async () => {
+  browser = await launch();
+  page = await signedInPage(browser, 'engineer');
+  teardownId = await findTeardown(page, 'Stackcell 20 PD');
+});
+afterAll(() => browser?.close());
+
+const row = (p: Page, text: string) => p.getByRole('row').filter({ hasText: text });
+
+describe('parts, measurements and the pack at the bench', () => {
+  it('adds a part inline: Enter saves the line and the entry row is ready for the next', async () => {
+    await page.goto(`/teardowns/${teardownId}/parts`);
+    await page.getByLabel('New part: designators').fill('R42');
+    await page.getByLabel('New part: category').selectOption('passive');
+    await page.getByLabel('New part: description').fill('E2E chip resistor, pull-down');
+    await page.getByLabel('New part: marking').fill('103');
+    await page.getByLabel('New part: marking').press('Enter');
+    const added = row(page, 'E2E chip resistor, pull-down');
+    await added.waitFor();
+    // 103 = 10 × 10³ Ω [S: REFERENCES.md §1, SMD resistor codes]
+    await expect(added.textContent()).resolves.toContain('10.0 kΩ');
+    await expect(page.getByLabel('New part: description').inputValue()).resolves.toBe('');
+    await expect(page.evaluate(() => document.activeElement?.getAttribute('aria-label'))).resolves.toBe('New part: designators');
+  });
+
+  it('edits a line in place: Enter saves, the decoded value follows the marking', async () => {
+    await row(page, 'E2E chip resistor, pull-down').getByRole('button', { name: /^Edit R42/ }).click();
+    const marking = page.getByRole('textbox', { name: 'Marking', exact: true });
+    await marking.fill('4R7');
+    await marking.press('Enter');
+    await expect
+      .poll(async () => row(page, 'E2E chip resistor, pull-down').textContent(), { timeout: 10_000 })
+      .toContain('4.70 Ω');
+  });
+
+  it('imports a CSV: the preview names the bad row and column, nothing is saved until it is fixed', async () => {
+    await page.getByRole('button', { name: 'Import CSV' }).click();
+    const paste = page.getByLabel('…or paste it here');
+    await paste.fill('Designators;Category;Description;Marking;Qty\nJ9;connector;E2E header 2 pins;;1\nX9;gizmo;E2E mystery;;1\n');
+    await page.getByRole('button', { name: 'Preview' }).click();
+    const problems = page.getByRole('list', { name: 'Problems in the file' });
+    await problems.waitFor();
+    await expect(problems.textContent()).resolves.toMatch(/Row 3, Category: Unknown category "gizmo"/);
+    await expect(page.getByRole('button', { name: /^Import/ }).last().isDisabled()).resolves.toBe(true);
+
+    await paste.fill('Designators;Category;Description;Marking;Qty\nJ9;connector;E2E header 2 pins;;1\nC99;capacitor;E2E bulk capacitor;226;2\n');
+    await page.getByRole('button', { name: 'Preview' }).click();
+    await page.getByText('2 rows ready to import').waitFor();
+    await page.getByRole('button', { name: 'Import 2 parts' }).click();
+    await row(page, 'E2E bulk capacitor').waitFor();
+    // 226 = 22 × 10⁶ pF = 22 µF [S: REFERENCES.md §1, capacitor 3-digit code]
+    await expect(row(page, 'E2E bulk capacitor').textContent()).resolves.toContain('22.0 µF');
+    await row(page, 'E2E header 2 pins').waitFor();
+  });
+
+  it('records a reading typed with its unit and sees it in the table', async () => {
+    await page.goto(`/teardowns/${teardownId}/measurements`);
+    await page.getByRole('combobox', { name: 'Quantity' }).first().selectOption('resistance');
+    await page.getByRole('textbox', { name: 'What was measured', exact: true }).fill('E2E heater element, front');
+    await page.getByRole('textbox', { name: 'Value with unit' }).fill('3.02 Ω');
+    await page.getByRole('textbox', { name: 'Value with unit' }).press('Enter');
+    const reading = row(page, 'E2E heater element, front');
+    await reading.waitFor();
+    await expect(reading.textContent()).resolves.toContain('3.02 Ω');
+    // Ready for the next reading: the value is cleared and focused.
+    await expect(page.getByRole('textbox', { name: 'Value with unit' }).inputValue()).resolves.toBe('');
+
+    // A voltage typed for a current is refused, naming the field.
+    await page.getByRole('combobox', { name: 'Quantity' }).first().selectOption('current');
+    await page.getByRole('textbox', { name: 'Value with unit' }).fill('3.7 V');
+    await page.getByRole('textbox', { name: 'Value with unit' }).press('Enter');
+    await expect(page.getByRole('alert').filter({ hasText: 'Value' }).first().textContent()).resolves.toMatch(/current/);
+  });
+
+  it('edits the pack with "2700 mAh": stored as 2.7 Ah, the typed text shown back', async () => {
+    await page.goto(`/teardowns/${teardownId}/power`);
+    await page.getByText('Lithium cells: before and while you open the pack').waitFor();
+    const capacity = page.getByLabel('Rated capacity (per cell)');
+    await capacity.fill('2700 mAh');
+    await page.getByRole('button', { name: 'Save pack' }).click();
+    await page.getByText('Pack saved.').waitFor();
+    await page.reload();
+    await expect(page.getByLabel('Rated capacity (per cell)').inputValue()).resolves.toBe('2700 mAh');
+    await page.getByText('= 2.70 Ah').waitFor();
+    const pack = await (await page.request.get(`/api/teardowns/${teardownId}/pack`)).json();
+    expect(pack.pack.capacityAh).toBeCloseTo(2.7, 12);
+    expect(pack.pack.entered.capacityAh).toBe('2700 mAh');
+  });
+});
