@@ -1,6 +1,7 @@
 import { fileURLToPath } from 'node:url';
 import { defineConfig, type Options } from '@mikro-orm/sqlite';
 import { Migrator } from '@mikro-orm/migrations';
+import './sqlite-enum-fix';
 import { entities } from '../modules/entities';
 
 export const migrationsPath = fileURLToPath(new URL('../../migrations', import.meta.url));
