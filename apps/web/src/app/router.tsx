@@ -35,6 +35,7 @@ export const router = createBrowserRouter([
           { path: '/admin/invitations', lazy: () => import('./routes/admin-invitations') },
           { path: '/admin/outbox', lazy: () => import('./routes/admin-outbox') },
           { path: '/admin/audit', lazy: () => import('./routes/admin-audit') },
+          { path: '/rates', lazy: () => import('./routes/rates') },
           { path: '*', lazy: () => import('./routes/not-found') },
         ],
       },

@@ -3,6 +3,7 @@
 import { lazy, type ComponentType, type LazyExoticComponent } from 'react';
 import type { LucideIcon } from 'lucide-react';
 import { FileText } from 'lucide-react';
+import { Calculator } from 'lucide-react';
 import type { TeardownDto } from '@splitcase/contracts';
 import type { TeardownSection } from '@/config/paths';
 
@@ -26,5 +27,12 @@ export const SECTIONS: SectionDef[] = [
     icon: FileText,
     Component: lazy(() => import('@/features/teardowns/components/overview-section').then((m) => ({ default: m.OverviewSection }))),
     withFigures: true,
+  },
+  {
+    id: 'cost',
+    label: 'Cost',
+    icon: Calculator,
+    Component: lazy(() => import('@/features/cost/components/cost-section').then((m) => ({ default: m.CostSection }))),
+    withFigures: false,
   },
 ];

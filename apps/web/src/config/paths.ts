@@ -19,4 +19,5 @@ export const paths = {
   api: {
     docs: () => '/api/docs',
   },
+  rates: () => '/rates',
 } as const;
