@@ -132,7 +132,8 @@ export async function teardownCost(em: EntityManager, teardown: Teardown, query:
   // calc names lines by id; say which part a warning is about in words.
   warnings.unshift(...r.warnings.map((w) => w.replace(/^(\d+):/, (_m, id: string) => `${partLabel(id)}:`)));
   if (r.unpricedPartIds.length) {
-    warnings.push(`${r.unpricedPartIds.length} of ${items.length} parts have no price and add nothing to the totals.`);
+    const n = r.unpricedPartIds.length;
+    warnings.push(`${n} of ${items.length} parts ${n === 1 ? 'has' : 'have'} no price and ${n === 1 ? 'adds' : 'add'} nothing to the totals.`);
   }
 
   const used = new Set<string>([model.currency, ...items.flatMap((i) => (i.price ? [i.price.currency] : [])), ...(retail ? [retail.currency] : [])]);

@@ -18,14 +18,14 @@ import { plain } from './display';
 function RateList({ table }: { table: RateTableDto }) {
   const entries = Object.entries(table.rates);
   return (
-    <div className="grid grid-cols-[repeat(auto-fill,minmax(9rem,1fr))] gap-x-4 gap-y-1 text-sm">
+    <dl className="grid grid-cols-[repeat(auto-fill,minmax(8.5rem,10rem))] gap-x-6 gap-y-0.5 text-sm" aria-label={`Rates per 1 ${table.base}`}>
       {entries.map(([code, rate]) => (
-        <div key={code} className="flex items-baseline justify-between gap-2 border-b border-graphite-100 py-1">
-          <span className="font-mono text-graphite-700">{code}</span>
-          <span className="num">{plain(rate)}</span>
+        <div key={code} className="flex items-baseline justify-between gap-3 border-b border-graphite-100 py-1">
+          <dt className="font-mono text-graphite-600">{code}</dt>
+          <dd className="num font-medium">{plain(rate)}</dd>
         </div>
       ))}
-    </div>
+    </dl>
   );
 }
 
@@ -240,6 +240,7 @@ export function RatesPanel() {
                 </span>
               </div>
               {current.note && <p className="text-sm text-graphite-600">{current.note}</p>}
+              <p className="text-xs text-graphite-500">Units of each currency per 1 {current.base}; other pairs are crossed through {current.base}.</p>
               <RateList table={current} />
             </>
           ) : (
