@@ -483,3 +483,47 @@ describe('costed-BOM CSV export and price CSV import', () => {
     expect(audit[0].changes.price.from).toBe('GBP 500@0.17 (marketplace, low, ' + new Date().toISOString().slice(0, 10) + ')');
   });
 });
+
+describe('the demo seed step prices the parts that exist and creates none', () => {
+  it('gives every part an invented price, two demo rate tables (base EUR) and the workspace model; the roll-up then works', async () => {
+    const { seedCost } = await import('../../apps/api/src/seed/cost');
+    const app = await makeTestApp({ seed: 'users' });
+    try {
+      const em = app.orm.em.fork();
+      const users = Object.fromEntries(
+        await Promise.all(['admin', 'engineer', 'sourcing', 'lead', 'viewer'].map(async (r) => [r, await em.findOneOrFail(UserSchema, { email: `${r}@splitcase.test` })])),
+      );
+      const device = em.create(DeviceSchema, { maker: 'Seedwell (invented)', model: 'S1', category: 'power-bank', retailPrice: 19.99, retailCurrency: 'USD' } as never);
+      const teardown = em.create(TeardownSchema, { device, engineer: users.engineer, date: '2026-11-01', status: 'published', publishedAt: new Date() } as never);
+      const categories = ['cell', 'ic', 'passive', 'pcb', 'heater', 'enclosure', 'packaging', 'connector'] as const;
+      categories.forEach((category, k) =>
+        em.create(PartSchema, { teardown, position: k + 1, category, description: `Demo ${category}`, designators: `X${k + 1}`, quantity: k + 1, mount: k % 2 ? 'smt' : 'manual' } as never),
+      );
+      await em.flush();
+      const partsBefore = await em.count(PartSchema, {});
+      await seedCost({ env: app.env, em, users: users as never, refs: new Map(), log: () => {} });
+      await em.flush();
+      const check = app.orm.em.fork();
+      expect(await check.count(PartSchema, {})).toBe(partsBefore);
+      const { PartPriceSchema } = await import('../../apps/api/src/modules/cost/part-price.entity');
+      const prices = await check.find(PartPriceSchema, {});
+      expect(prices).toHaveLength(categories.length);
+      for (const p of prices) {
+        expect(p.note).toMatch(/demo/i);
+        expect(p.breaks.length).toBeGreaterThan(0);
+        for (let k = 1; k < p.breaks.length; k++) expect(p.breaks[k]!.minQty).toBeGreaterThan(p.breaks[k - 1]!.minQty);
+      }
+      const sourcing = await app.as('sourcing');
+      const rates = (await sourcing.get('/api/rates').expect(200)).body;
+      expect(rates.history).toHaveLength(2);
+      expect(rates.current).toMatchObject({ base: 'EUR', kind: 'demo', source: 'Demo rates (invented)' });
+      for (const code of ['USD', 'GBP', 'CNY', 'JPY']) expect(rates.current.rates[code]).toBeGreaterThan(0);
+      const c = await cost(sourcing, teardown.id, '');
+      expect(c.unpricedPartIds).toEqual([]);
+      expect(c.model.source).toBe('workspace');
+      expect(c.landed).toBeGreaterThan(c.partsTotal);
+    } finally {
+      await app.close();
+    }
+  });
+});
