@@ -12,3 +12,4 @@ export * from './tools';
 export * from './parts';
 export * from './power';
 export * from './measurements';
+export * from './cost';

@@ -17,6 +17,9 @@ import { CommentSchema } from './teardowns/comment.entity';
 import { SuggestionDecisionSchema } from './teardowns/suggestion-decision.entity';
 import { TeardownSchema } from './teardowns/teardown.entity';
 import { UserSchema } from './users/user.entity';
+import { CostModelSchema } from './cost/cost-model.entity';
+import { PartPriceSchema } from './cost/part-price.entity';
+import { RateTableSchema } from './cost/rate-table.entity';
 
 export const entities = [
   UserSchema,
@@ -37,4 +40,7 @@ export const entities = [
   CalloutSchema,
   FindingSchema,
   SettingSchema,
+  PartPriceSchema,
+  RateTableSchema,
+  CostModelSchema,
 ];

@@ -3,16 +3,17 @@ import type { AppDeps } from '../http/deps';
 import type { RouteDef } from '../http/route';
 import { auditRoutes } from './audit/routes';
 import { authRoutes } from './auth/routes';
+import { costRoutes } from './cost/routes';
 import { mailRoutes } from './mail/routes';
+import { measurementRoutes } from './measurements/routes';
+import { partRoutes } from './parts/routes';
 import { photoRoutes } from './photos/routes';
+import { powerRoutes } from './power/routes';
 import { settingsRoutes } from './settings/routes';
 import { systemRoutes } from './system/routes';
 import { teardownRoutes } from './teardowns/routes';
 import { toolRoutes } from './tools/routes';
 import { userRoutes } from './users/routes';
-import { partRoutes } from './parts/routes';
-import { powerRoutes } from './power/routes';
-import { measurementRoutes } from './measurements/routes';
 
 export function allRoutes(deps: AppDeps, version: string): RouteDef[] {
   return [
@@ -28,5 +29,6 @@ export function allRoutes(deps: AppDeps, version: string): RouteDef[] {
     ...partRoutes,
     ...powerRoutes,
     ...measurementRoutes,
+    ...costRoutes,
   ];
 }

@@ -6,6 +6,7 @@ import { DEMO_USERS, demoEmail, seedUsers } from './users';
 import { seedWorkspace } from './workspace';
 import { seedBom } from './bom';
 import { seedPhotos } from './photos';
+import { seedCost } from './cost';
 
 /** Seed steps in order. Later features append their step here. */
 export const SEED_STEPS: SeedStep[] = [
@@ -13,6 +14,7 @@ export const SEED_STEPS: SeedStep[] = [
   { name: 'workspace', run: seedWorkspace },
   { name: 'bom', run: seedBom },
   { name: 'photos', run: seedPhotos },
+  { name: 'cost', run: seedCost },
 ];
 
 /** Seeds the invented demo workspace when the database has no users. Returns whether it seeded. */

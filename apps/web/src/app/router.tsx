@@ -36,6 +36,7 @@ export const router = createBrowserRouter([
           { path: '/admin/outbox', lazy: () => import('./routes/admin-outbox') },
           { path: '/admin/audit', lazy: () => import('./routes/admin-audit') },
           { path: '/tools', lazy: () => import('./routes/bench-tools') },
+          { path: '/rates', lazy: () => import('./routes/rates') },
           { path: '*', lazy: () => import('./routes/not-found') },
         ],
       },

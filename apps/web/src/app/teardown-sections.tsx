@@ -5,6 +5,7 @@ import type { LucideIcon } from 'lucide-react';
 import { FileText } from 'lucide-react';
 import { Camera } from 'lucide-react';
 import { Gauge, ListTree, Zap } from 'lucide-react';
+import { Calculator } from 'lucide-react';
 import type { TeardownDto } from '@splitcase/contracts';
 import type { TeardownSection } from '@/config/paths';
 
@@ -56,5 +57,12 @@ export const SECTIONS: SectionDef[] = [
     icon: Gauge,
     Component: lazy(() => import('@/features/measurements/components/measurements-section').then((m) => ({ default: m.MeasurementsSection }))),
     withFigures: true,
+  },
+  {
+    id: 'cost',
+    label: 'Cost',
+    icon: Calculator,
+    Component: lazy(() => import('@/features/cost/components/cost-section').then((m) => ({ default: m.CostSection }))),
+    withFigures: false,
   },
 ];

@@ -1,6 +1,6 @@
 import type { Role } from '@splitcase/contracts';
 import type { LucideIcon } from 'lucide-react';
-import { House, ShieldCheck, Wrench } from 'lucide-react';
+import { Coins, House, ShieldCheck, Wrench } from 'lucide-react';
 import { paths } from './paths';
 
 export interface NavItem {
@@ -14,11 +14,12 @@ export interface NavItem {
 
 const ALL = 'all' as const;
 
-/** The left rail. Each page that is added appears here with the roles that may open it. */
+/** The left rail, in order. Each page that is added appears here with the roles that may open it. */
 export const NAV: NavItem[] = [
   { label: 'Home', to: paths.home(), icon: House, roles: ALL },
-  { label: 'Admin', to: paths.admin.users(), icon: ShieldCheck, roles: ['admin'], prefix: '/admin' },
   { label: 'Bench tools', to: paths.tools(), icon: Wrench, roles: ALL, prefix: '/tools' },
+  { label: 'Rates & cost model', to: paths.rates(), icon: Coins, roles: ['admin', 'sourcing'] },
+  { label: 'Admin', to: paths.admin.users(), icon: ShieldCheck, roles: ['admin'], prefix: '/admin' },
 ];
 
 export const navFor = (role: Role) => NAV.filter((n) => n.roles === 'all' || n.roles.includes(role));

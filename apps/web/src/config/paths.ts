@@ -26,4 +26,5 @@ export const paths = {
   },
   /** A photo on the stage of the photos section, optionally with one pin selected. */
   teardownPhoto: (id: number, photoId: number, pinId?: number) => `/teardowns/${id}/photos?photo=${photoId}${pinId ? `&pin=${pinId}` : ''}`,
+  rates: () => '/rates',
 } as const;

@@ -68,3 +68,11 @@ export function convertCurrency(amount: number, from: string, to: string, table:
   if (a === b) return amount;
   return (amount / rateFor(table, a, 'from')) * rateFor(table, b, 'to');
 }
+
+/** Units of `to` per 1 unit of `from`, through the base: rate_to / rate_from [S: ECB convention; C]. */
+export function crossRate(table: RateTable, from: string, to: string): number {
+  const a = normaliseCurrency(from, 'from');
+  const b = normaliseCurrency(to, 'to');
+  if (a === b) return 1;
+  return rateFor(table, b, 'to') / rateFor(table, a, 'from');
+}

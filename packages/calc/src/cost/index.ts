@@ -1,5 +1,7 @@
 // Should-cost: currency conversion, price breaks, BOM roll-up, landed cost and margins.
-export { convertCurrency, rateFor, normaliseCurrency, type RateTable } from './currency';
+export { convertCurrency, crossRate, rateFor, normaliseCurrency, type RateTable } from './currency';
+export { referenceRatesFromTree, type ReferenceRates } from './reference-rates';
+export { costWaterfall, type WaterfallBar } from './waterfall';
 export {
   unitPriceAtQuantity,
   validatePriceBreaks,

@@ -97,14 +97,15 @@ describe('rollUpCost — a small BOM worked by hand [C]', () => {
     //   extended = 0.131378 × 1.01 = 0.132692
     // J-USB: no price → unpriced, adds nothing
     const [cell, res, ic, usb] = r.lines;
-    expect(cell).toMatchObject({ buyQuantity: 1000, unitPrice: 1.8, attrition: 0.005, priced: true, confidence: 'medium' });
+    expect(cell).toMatchObject({ buyQuantity: 1000, unitPrice: 1.8, attrition: 0.005, priced: true, confidence: 'medium', breakMinQty: 1000 });
     expect(cell!.extended).toBeCloseTo(1.809, 12);
     expect(res!.buyQuantity).toBe(6000);
+    expect(res!.breakMinQty).toBe(5000);
     expect(res!.unitPrice).toBeCloseTo(0.01 * CNY, 12);
     expect(res!.extended).toBeCloseTo(0.008546507, 9);
     expect(ic!.unitPrice).toBeCloseTo(0.131378344, 9);
     expect(ic!.extended).toBeCloseTo(0.132692127, 9);
-    expect(usb).toMatchObject({ unitPrice: null, extended: null, priced: false, confidence: null, attrition: 0.005 });
+    expect(usb).toMatchObject({ unitPrice: null, extended: null, priced: false, confidence: null, attrition: 0.005, breakMinQty: null });
     expect(r.unpricedPartIds).toEqual(['J-USB']);
     // parts = 1.809 + 0.008546507 + 0.132692127 = 1.950238634
     expect(r.partsTotal).toBeCloseTo(1.950238634, 9);
@@ -162,6 +163,12 @@ describe('rollUpCost — a small BOM worked by hand [C]', () => {
     // implied margin = 12.918855422 − 3.248229508 = 9.670625914, i.e. 74.857 % of net
     expect(r.impliedMargin!.amount).toBeCloseTo(9.670625914, 8);
     expect(r.impliedMargin!.fraction).toBeCloseTo(0.748566773, 8);
+    // retailer's share = 25.331089063 × 0.40 = 10.132435625
+    expect(r.retail!.retailerShare).toBeCloseTo(10.132435625, 8);
+    // platform fee on what the retailer passes on = (25.331089063 − 10.132435625) × 0.15 = 2.279798016
+    expect(r.retail!.platformShare).toBeCloseTo(2.279798016, 8);
+    // the three shares give back the retail price: 12.918855422 + 2.279798016 + 10.132435625 = 25.331089063
+    expect(r.retail!.netToMaker + r.retail!.platformShare + r.retail!.retailerShare).toBeCloseTo(r.retail!.amount, 12);
   });
 
   it('lists the steps with their formulas', () => {
@@ -188,6 +195,32 @@ describe('rollUpCost — a small BOM worked by hand [C]', () => {
     expect(step.assembly!.formula).toBe('7 placements × 0.0110634 + 2 joints × 0.00691465 = 0.0912734');
     expect(step.parts!.formula).toMatch(/over 3 priced lines = 1\.95024$/);
     expect(step.impliedMargin!.formula).toMatch(/\(74\.8567 % of net\)$/);
+  });
+
+  it('gives each step the inputs its formula used, with units', () => {
+    const step = Object.fromEntries(r.steps.map((s) => [s.key, s]));
+    expect(step.assembly!.inputs).toEqual([
+      { label: 'SMT placements per unit', value: 7, unit: '' },
+      { label: 'Cost per placement', value: 0.08 * CNY, unit: 'USD' },
+      { label: 'Through-hole joints per unit', value: 2, unit: '' },
+      { label: 'Cost per joint', value: 0.05 * CNY, unit: 'USD' },
+    ]);
+    expect(step.labour!.inputs).toEqual([
+      { label: 'Manual operations', value: 4, unit: 'min' },
+      { label: 'Labour rate', value: 30 * CNY, unit: 'USD/h' },
+    ]);
+    expect(step.parts!.inputs).toContainEqual({ label: 'Unpriced lines (left out)', value: 1, unit: '' });
+    // duty base is CIF = 2.983804733 + 0.149190237 + 0.029838047 = 3.162833017
+    expect(step.duty!.inputs[0]!.value).toBeCloseTo(3.162833017, 8);
+    expect(step.duty!.inputs[1]).toEqual({ label: 'Duty', value: 2.7, unit: '%' });
+    expect(step.yieldLoss!.inputs[1]).toEqual({ label: 'First-pass yield', value: 98, unit: '%' });
+    expect(step.overhead!.inputs[0]!.value).toBeCloseTo(2.712549757, 8);
+    expect(step.netToMaker!.inputs).toEqual([
+      { label: 'Retail price', value: r.retail!.amount, unit: 'USD' },
+      { label: 'Retailer margin', value: 40, unit: '%' },
+      { label: 'Platform fee', value: 15, unit: '%' },
+    ]);
+    for (const s of r.steps) expect(s.inputs.length, s.key).toBeGreaterThan(0);
   });
 });
 
@@ -273,7 +306,7 @@ describe('rollUpCost — price breaks at the volume boundary', () => {
 
   it('prices below the first break at that break, with a warning', () => {
     const r = rollUpCost({ ...line(breaks), volume: 4 }); // 8 pieces < 10
-    expect(r.lines[0]).toMatchObject({ unitPrice: 1, belowMinimumOrder: true });
+    expect(r.lines[0]).toMatchObject({ unitPrice: 1, belowMinimumOrder: true, breakMinQty: 10 });
     expect(r.warnings[0]).toMatch(/P: 8 pieces is below the smallest price break \(10\)/);
   });
 

@@ -4,6 +4,7 @@
  * freight, insurance, duty and landed cost at one production volume, in one
  * currency, with a confidence range and the margin implied by a retail price.
  */
+import type { FigureInput } from '../shared/explained';
 import { requireFraction, requireInteger, requireNonNegative, requirePositive } from '../shared/validate';
 import { normaliseCurrency, rateFor, type RateTable } from './currency';
 import { assertPriceBreaks, breakIndexAt, type PriceBreak } from './price-breaks';
@@ -86,6 +87,8 @@ export interface CostLineResult {
   confidence: PriceConfidence | null;
   /** True when buyQuantity is below the first break and the first break's price was used. */
   belowMinimumOrder: boolean;
+  /** minQty of the break that set the price; null when unpriced. */
+  breakMinQty: number | null;
 }
 
 export interface CostStep {
@@ -93,6 +96,8 @@ export interface CostStep {
   label: string;
   value: number;
   formula: string;
+  /** The numbers the formula used, each with its unit (the reporting currency, %, min…). */
+  inputs: FigureInput[];
 }
 
 export interface CostRollUp {
@@ -120,7 +125,8 @@ export interface CostRollUp {
   low: number;
   /** Landed cost with every priced unit price × (1 + its confidence band). */
   high: number;
-  retail: { amount: number; netToMaker: number } | null;
+  /** Retail price in the reporting currency, split into the retailer's share, the platform's fee and what reaches the maker. */
+  retail: { amount: number; retailerShare: number; platformShare: number; netToMaker: number } | null;
   impliedMargin: { amount: number; fraction: number | null } | null;
   unpricedPartIds: string[];
   warnings: string[];
@@ -268,6 +274,7 @@ export function rollUpCost(p: RollUpInput): CostRollUp {
         priced: false,
         confidence: null,
         belowMinimumOrder: false,
+        breakMinQty: null,
       });
       return;
     }
@@ -303,6 +310,7 @@ export function rollUpCost(p: RollUpInput): CostRollUp {
       priced: true,
       confidence: price.confidence,
       belowMinimumOrder,
+      breakMinQty: (price.breaks[index] as PriceBreak).minQty,
     });
   });
 
@@ -320,80 +328,156 @@ export function rollUpCost(p: RollUpInput): CostRollUp {
   const low = afterParts(partsLow, fixed, m).landed;
   const high = afterParts(partsHigh, fixed, m).landed;
 
+  const cur = currency;
+  const pct = (f: number) => f * 100;
+  const pricedCount = lines.length - unpricedPartIds.length;
   const steps: CostStep[] = [
     {
       key: 'parts',
       label: 'Parts with attrition',
       value: partsTotal,
-      formula: `Σ quantity × unit price × (1 + attrition) over ${lines.length - unpricedPartIds.length} priced lines = ${fmt(partsTotal)}`,
+      formula: `Σ quantity × unit price × (1 + attrition) over ${pricedCount} priced lines = ${fmt(partsTotal)}`,
+      inputs: [
+        { label: 'Priced lines', value: pricedCount, unit: '' },
+        { label: 'Unpriced lines (left out)', value: unpricedPartIds.length, unit: '' },
+        { label: 'Volume', value: volume, unit: 'units' },
+      ],
     },
     {
       key: 'assembly',
       label: 'Assembly',
       value: fixed.assembly,
       formula: `${fmt(placements)} placements × ${fmt(smtCost)} + ${fmt(joints)} joints × ${fmt(thtCost)} = ${fmt(fixed.assembly)}`,
+      inputs: [
+        { label: 'SMT placements per unit', value: placements, unit: '' },
+        { label: 'Cost per placement', value: smtCost, unit: cur },
+        { label: 'Through-hole joints per unit', value: joints, unit: '' },
+        { label: 'Cost per joint', value: thtCost, unit: cur },
+      ],
     },
     {
       key: 'labour',
       label: 'Manual labour',
       value: fixed.labour,
       formula: `${fmt(m.manualMinutes)} min ÷ 60 × ${fmt(labourRate)} per hour = ${fmt(fixed.labour)}`,
+      inputs: [
+        { label: 'Manual operations', value: m.manualMinutes, unit: 'min' },
+        { label: 'Labour rate', value: labourRate, unit: `${cur}/h` },
+      ],
     },
     {
       key: 'test',
       label: 'Test',
       value: fixed.test,
       formula: `${fmt(m.testMinutes)} min ÷ 60 × ${fmt(labourRate)} per hour = ${fmt(fixed.test)}`,
+      inputs: [
+        { label: 'Test time', value: m.testMinutes, unit: 'min' },
+        { label: 'Labour rate', value: labourRate, unit: `${cur}/h` },
+      ],
     },
-    { key: 'packaging', label: 'Packaging', value: fixed.packaging, formula: `${fmt(fixed.packaging)}` },
+    {
+      key: 'packaging',
+      label: 'Packaging',
+      value: fixed.packaging,
+      formula: `${fmt(fixed.packaging)}`,
+      inputs: [{ label: 'Packaging per unit', value: fixed.packaging, unit: cur }],
+    },
     {
       key: 'yieldLoss',
       label: 'Yield loss',
       value: mid.yieldLoss,
       formula: `(parts + assembly + labour + test) × (1 ÷ ${fmt(m.yield)} − 1) = ${fmt(mid.yieldLoss)}`,
+      inputs: [
+        { label: 'Parts + assembly + labour + test', value: partsTotal + fixed.assembly + fixed.labour + fixed.test, unit: cur },
+        { label: 'First-pass yield', value: pct(m.yield), unit: '%' },
+      ],
     },
     {
       key: 'overhead',
       label: 'Overhead',
       value: mid.overhead,
       formula: `${fmt(m.overhead)} × (${fmt(partsTotal)} + ${fmt(fixed.assembly)} + ${fmt(fixed.labour)} + ${fmt(fixed.test)} + ${fmt(fixed.packaging)} + ${fmt(mid.yieldLoss)}) = ${fmt(mid.overhead)}`,
+      inputs: [
+        { label: 'Cost before overhead', value: mid.exWorks - mid.overhead, unit: cur },
+        { label: 'Overhead', value: pct(m.overhead), unit: '%' },
+      ],
     },
     {
       key: 'exWorks',
       label: 'Ex-works cost',
       value: mid.exWorks,
       formula: `parts + assembly + labour + test + packaging + yield loss + overhead = ${fmt(mid.exWorks)}`,
+      inputs: [
+        { label: 'Parts', value: partsTotal, unit: cur },
+        { label: 'Assembly, labour and test', value: fixed.assembly + fixed.labour + fixed.test, unit: cur },
+        { label: 'Packaging', value: fixed.packaging, unit: cur },
+        { label: 'Yield loss', value: mid.yieldLoss, unit: cur },
+        { label: 'Overhead', value: mid.overhead, unit: cur },
+      ],
     },
-    { key: 'freight', label: 'Freight', value: mid.freight, formula: `${fmt(m.freight)} × ${fmt(mid.exWorks)} = ${fmt(mid.freight)}` },
+    {
+      key: 'freight',
+      label: 'Freight',
+      value: mid.freight,
+      formula: `${fmt(m.freight)} × ${fmt(mid.exWorks)} = ${fmt(mid.freight)}`,
+      inputs: [
+        { label: 'Ex-works cost', value: mid.exWorks, unit: cur },
+        { label: 'Freight', value: pct(m.freight), unit: '%' },
+      ],
+    },
     {
       key: 'insurance',
       label: 'Insurance',
       value: mid.insurance,
       formula: `${fmt(m.insurance)} × ${fmt(mid.exWorks)} = ${fmt(mid.insurance)}`,
+      inputs: [
+        { label: 'Ex-works cost', value: mid.exWorks, unit: cur },
+        { label: 'Insurance', value: pct(m.insurance), unit: '%' },
+      ],
     },
     {
       key: 'duty',
       label: 'Duty (CIF basis)',
       value: mid.duty,
       formula: `${fmt(m.duty)} × (${fmt(mid.exWorks)} + ${fmt(mid.freight)} + ${fmt(mid.insurance)}) = ${fmt(mid.duty)}`,
+      inputs: [
+        { label: 'CIF value', value: mid.exWorks + mid.freight + mid.insurance, unit: cur },
+        { label: 'Duty', value: pct(m.duty), unit: '%' },
+      ],
     },
     {
       key: 'landed',
       label: 'Landed cost',
       value: mid.landed,
       formula: `ex-works + freight + insurance + duty = ${fmt(mid.landed)}`,
+      inputs: [
+        { label: 'Ex-works cost', value: mid.exWorks, unit: cur },
+        { label: 'Freight', value: mid.freight, unit: cur },
+        { label: 'Insurance', value: mid.insurance, unit: cur },
+        { label: 'Duty', value: mid.duty, unit: cur },
+      ],
     },
     {
       key: 'low',
       label: 'Landed cost, low',
       value: low,
       formula: `landed cost with each priced unit price × (1 − its confidence band) = ${fmt(low)}`,
+      inputs: [
+        { label: 'Band, high confidence', value: pct(m.band.high), unit: '%' },
+        { label: 'Band, medium confidence', value: pct(m.band.medium), unit: '%' },
+        { label: 'Band, low confidence', value: pct(m.band.low), unit: '%' },
+      ],
     },
     {
       key: 'high',
       label: 'Landed cost, high',
       value: high,
       formula: `landed cost with each priced unit price × (1 + its confidence band) = ${fmt(high)}`,
+      inputs: [
+        { label: 'Band, high confidence', value: pct(m.band.high), unit: '%' },
+        { label: 'Band, medium confidence', value: pct(m.band.medium), unit: '%' },
+        { label: 'Band, low confidence', value: pct(m.band.low), unit: '%' },
+      ],
     },
   ];
 
@@ -402,9 +486,11 @@ export function rollUpCost(p: RollUpInput): CostRollUp {
   if (p.retail) {
     const retailCurrency = normaliseCurrency(p.retail.currency, 'retail.currency');
     const amount = toReport(requirePositive(p.retail.amount, 'retail.amount'), retailCurrency, 'retail.currency');
+    const retailerShare = amount * m.retailMargin;
+    const platformShare = (amount - retailerShare) * m.platformMargin;
     const netToMaker = amount * (1 - m.retailMargin) * (1 - m.platformMargin);
     const marginAmount = netToMaker - mid.landed;
-    retail = { amount, netToMaker };
+    retail = { amount, retailerShare, platformShare, netToMaker };
     impliedMargin = { amount: marginAmount, fraction: netToMaker > 0 ? marginAmount / netToMaker : null };
     steps.push(
       {
@@ -412,6 +498,11 @@ export function rollUpCost(p: RollUpInput): CostRollUp {
         label: 'Net to maker',
         value: netToMaker,
         formula: `${fmt(amount)} × (1 − ${fmt(m.retailMargin)}) × (1 − ${fmt(m.platformMargin)}) = ${fmt(netToMaker)}`,
+        inputs: [
+          { label: 'Retail price', value: amount, unit: cur },
+          { label: 'Retailer margin', value: pct(m.retailMargin), unit: '%' },
+          { label: 'Platform fee', value: pct(m.platformMargin), unit: '%' },
+        ],
       },
       {
         key: 'impliedMargin',
@@ -420,6 +511,10 @@ export function rollUpCost(p: RollUpInput): CostRollUp {
         formula: `${fmt(netToMaker)} − ${fmt(mid.landed)} = ${fmt(marginAmount)}${
           impliedMargin.fraction === null ? '' : ` (${fmt(impliedMargin.fraction * 100)} % of net)`
         }`,
+        inputs: [
+          { label: 'Net to maker', value: netToMaker, unit: cur },
+          { label: 'Landed cost', value: mid.landed, unit: cur },
+        ],
       },
     );
   }

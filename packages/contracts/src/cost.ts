@@ -1,0 +1,352 @@
+// Should-cost: part prices, currency rate tables, cost models and the roll-up of a teardown.
+// Shares are fractions (0.03 = 3 %); money is in the currency named beside it.
+import { z } from 'zod';
+import { optionalText } from './common';
+import { PART_CATEGORY, MOUNT_TYPE } from './domain';
+import { currencyCode } from './settings';
+
+const labelled = <const T extends readonly string[]>(values: T, labels: Record<T[number], string>) => ({ values, labels, schema: z.enum(values) });
+
+export const PRICE_SOURCE = labelled(['quote', 'catalogue', 'marketplace', 'estimate'] as const, {
+  quote: 'Supplier quote',
+  catalogue: 'Distributor catalogue',
+  marketplace: 'Marketplace listing',
+  estimate: 'Estimate',
+});
+export type PriceSource = (typeof PRICE_SOURCE.values)[number];
+
+export const PRICE_CONFIDENCE = labelled(['high', 'medium', 'low'] as const, { high: 'High', medium: 'Medium', low: 'Low' });
+export type PriceConfidence = (typeof PRICE_CONFIDENCE.values)[number];
+
+export const RATE_TABLE_KIND = labelled(['import', 'manual', 'demo'] as const, {
+  import: 'Reference-rate file',
+  manual: 'Entered by hand',
+  demo: 'Demo (invented)',
+});
+export type RateTableKind = (typeof RATE_TABLE_KIND.values)[number];
+
+/** A calendar date YYYY-MM-DD that exists. */
+export const isoDate = z
+  .string()
+  .trim()
+  .regex(/^\d{4}-\d{2}-\d{2}$/, 'Use the form YYYY-MM-DD')
+  .refine((s) => {
+    const d = new Date(`${s}T00:00:00Z`);
+    return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === s;
+  }, 'Not a calendar date');
+
+const money = (what: string) => z.number({ error: `${what} must be a number` }).min(0, `${what} must not be negative`);
+const fraction = (what: string) =>
+  z.number({ error: `${what} must be a number` }).min(0, `${what} must not be below 0 %`).max(1, `${what} must not be above 100 %`);
+
+export const priceBreakSchema = z.object({
+  minQty: z.number({ error: 'Minimum quantity must be a number' }).gt(0, 'Minimum quantity must be greater than zero'),
+  unitPrice: money('Unit price'),
+});
+export type PriceBreakDto = z.infer<typeof priceBreakSchema>;
+
+/** Price breaks by increasing minimum quantity, each quantity once (no overlap). */
+export const priceBreaksSchema = z
+  .array(priceBreakSchema)
+  .min(1, 'Give at least one price break')
+  .max(20, 'At most 20 price breaks')
+  .superRefine((breaks, ctx) => {
+    for (let k = 1; k < breaks.length; k++) {
+      const prev = breaks[k - 1]!.minQty;
+      const cur = breaks[k]!.minQty;
+      if (cur <= prev) {
+        ctx.addIssue({
+          code: 'custom',
+          path: [k, 'minQty'],
+          message: `Price breaks overlap or are out of order: ${cur} comes after ${prev}. List them by increasing quantity, each once.`,
+        });
+      }
+    }
+  });
+
+export const partPriceBody = z.object({
+  currency: currencyCode,
+  breaks: priceBreaksSchema,
+  source: PRICE_SOURCE.schema,
+  confidence: PRICE_CONFIDENCE.schema,
+  /** The day the price was seen or quoted; today when left out. */
+  priceDate: isoDate.optional(),
+  note: optionalText(300),
+});
+export type PartPriceBody = z.input<typeof partPriceBody>;
+
+export const partPriceSchema = z.object({
+  partId: z.number().int(),
+  currency: z.string(),
+  breaks: z.array(priceBreakSchema),
+  source: PRICE_SOURCE.schema,
+  confidence: PRICE_CONFIDENCE.schema,
+  priceDate: z.string(),
+  note: z.string().nullable(),
+  updatedBy: z.string().nullable(),
+  updatedAt: z.string(),
+});
+export type PartPriceDto = z.infer<typeof partPriceSchema>;
+export const partPriceResponse = z.object({ price: partPriceSchema });
+
+// ---- Rate tables ----
+
+export const rateTableSchema = z.object({
+  id: z.number().int(),
+  base: z.string(),
+  /** The day the rates are for. */
+  date: z.string(),
+  source: z.string(),
+  kind: RATE_TABLE_KIND.schema,
+  /** Units of each currency per 1 unit of base (the base itself is 1 and not listed). */
+  rates: z.record(z.string(), z.number()),
+  note: z.string().nullable(),
+  createdBy: z.string().nullable(),
+  createdAt: z.string(),
+  /** The latest saved table is the current one. */
+  current: z.boolean(),
+});
+export type RateTableDto = z.infer<typeof rateTableSchema>;
+export const ratesListResponse = z.object({ current: rateTableSchema.nullable(), history: z.array(rateTableSchema) });
+export type RatesList = z.infer<typeof ratesListResponse>;
+export const rateTableResponse = z.object({
+  rates: rateTableSchema,
+  /** Things to know about the new table, e.g. a currency in use that it has no rate for. */
+  warnings: z.array(z.string()),
+});
+export type RateTableResponse = z.infer<typeof rateTableResponse>;
+
+/** A manual rate table: saved as a new version; the history keeps the old ones. */
+export const manualRatesBody = z
+  .object({
+    base: currencyCode,
+    date: isoDate,
+    source: z.string().trim().min(1, 'Say where the rates come from').max(200, 'At most 200 characters'),
+    rates: z.record(
+      z.string().trim().toUpperCase().regex(/^[A-Z]{3}$/, 'Currency codes have three letters'),
+      z.number({ error: 'A rate must be a number' }).gt(0, 'A rate must be greater than zero'),
+    ),
+    note: optionalText(300),
+  })
+  .superRefine((b, ctx) => {
+    if (b.base in b.rates && b.rates[b.base] !== 1) {
+      ctx.addIssue({ code: 'custom', path: ['rates', b.base], message: `${b.base} is the base: its rate is 1 by definition` });
+    }
+  });
+export type ManualRatesBody = z.input<typeof manualRatesBody>;
+
+// ---- Cost models ----
+
+export const manualOperationSchema = z.object({
+  label: z.string().trim().min(1, 'Name the operation').max(120, 'At most 120 characters'),
+  minutes: z.number({ error: 'Minutes must be a number' }).min(0, 'Minutes must not be negative').max(600, 'At most 600 minutes'),
+});
+
+export const costModelSchema = z.object({
+  /** Currency of the money amounts of the model (placement, joint, labour rate, packaging). */
+  currency: currencyCode,
+  /** Production volumes for the volume table, increasing. */
+  volumes: z
+    .array(z.number({ error: 'A volume must be a number' }).int('A volume is a whole number of units').min(1, 'A volume must be at least 1 unit').max(100_000_000, 'At most 100 million units'))
+    .min(1, 'Give at least one volume')
+    .max(8, 'At most 8 volumes')
+    .superRefine((v, ctx) => {
+      for (let k = 1; k < v.length; k++) {
+        if (v[k]! <= v[k - 1]!) ctx.addIssue({ code: 'custom', path: [k], message: 'List volumes from small to large, each once' });
+      }
+    }),
+  /** Extra parts bought per category to cover losses [CP: passives 1–5 %, ICs 0.5–1 %]. */
+  attritionByCategory: z.partialRecord(PART_CATEGORY.schema, fraction('Attrition')),
+  /** Attrition of categories not listed. */
+  defaultAttrition: fraction('Attrition'),
+  smtCostPerPlacement: money('Cost per placement'),
+  thtCostPerJoint: money('Cost per joint'),
+  thtJointsPerPart: z.number().min(0, 'Must not be negative').max(200, 'At most 200').default(2),
+  manualOperations: z.array(manualOperationSchema).max(20, 'At most 20 operations'),
+  labourRatePerHour: money('Labour rate'),
+  testMinutes: z.number({ error: 'Test minutes must be a number' }).min(0, 'Must not be negative').max(600, 'At most 600 minutes'),
+  packagingCost: money('Packaging'),
+  /** Share of units passing first time [CP: 95–99 %]. */
+  firstPassYield: z.number().gt(0, 'Yield must be above 0 %').max(1, 'Yield must not be above 100 %').default(1),
+  overheadFraction: fraction('Overhead'),
+  freightFraction: fraction('Freight'),
+  insuranceFraction: fraction('Insurance').default(0),
+  dutyFraction: fraction('Duty'),
+  retailMarginFraction: fraction('Retailer margin'),
+  platformMarginFraction: fraction('Platform fee'),
+  /** ± share of the unit price per confidence level, for the low/high band. */
+  confidenceBand: z.object({ high: fraction('Band'), medium: fraction('Band'), low: fraction('Band') }),
+});
+export type CostModelDto = z.output<typeof costModelSchema>;
+export type CostModelBody = z.input<typeof costModelSchema>;
+
+export const costModelResponse = z.object({ model: costModelSchema, updatedAt: z.string().nullable(), updatedBy: z.string().nullable() });
+export const teardownCostModelResponse = z.object({
+  /** The model the teardown is costed with. */
+  model: costModelSchema,
+  source: z.enum(['workspace', 'teardown']),
+  defaults: costModelSchema,
+  updatedAt: z.string().nullable(),
+  updatedBy: z.string().nullable(),
+});
+export type TeardownCostModel = z.infer<typeof teardownCostModelResponse>;
+
+// ---- The roll-up ----
+
+export const costQuery = z.object({
+  volume: z.coerce
+    .number({ error: 'The volume must be a number' })
+    .int('The volume is a whole number of units')
+    .min(1, 'The volume must be at least 1 unit')
+    .max(100_000_000, 'At most 100 million units')
+    .optional(),
+  currency: currencyCode.optional(),
+});
+export type CostQuery = z.infer<typeof costQuery>;
+
+const figureInput = z.object({ label: z.string(), value: z.union([z.number(), z.string(), z.boolean(), z.null()]), unit: z.string().optional() });
+
+export const costLineSchema = z.object({
+  partId: z.number().int(),
+  position: z.number().int(),
+  designators: z.string().nullable(),
+  description: z.string(),
+  category: PART_CATEGORY.schema,
+  makerPartNumber: z.string().nullable(),
+  mount: MOUNT_TYPE.schema,
+  quantity: z.number(),
+  /** quantity × volume: the quantity bought, which picks the price break. */
+  buyQuantity: z.number(),
+  /** Price of the break at this volume, converted to the reporting currency, before attrition. */
+  unitPrice: z.number().nullable(),
+  /** quantity × unitPrice × (1 + attrition). */
+  extended: z.number().nullable(),
+  attrition: z.number(),
+  priced: z.boolean(),
+  breakMinQty: z.number().nullable(),
+  belowMinimumOrder: z.boolean(),
+  price: partPriceSchema.nullable(),
+});
+export type CostLine = z.infer<typeof costLineSchema>;
+
+export const costStepSchema = z.object({ key: z.string(), label: z.string(), value: z.number(), formula: z.string(), inputs: z.array(figureInput) });
+export type CostStepDto = z.infer<typeof costStepSchema>;
+
+export const waterfallBarSchema = z.object({
+  key: z.string(),
+  label: z.string(),
+  kind: z.enum(['step', 'subtotal', 'total']),
+  value: z.number(),
+  start: z.number(),
+  end: z.number(),
+});
+export type WaterfallBarDto = z.infer<typeof waterfallBarSchema>;
+
+const impliedMargin = z.object({ amount: z.number(), fraction: z.number().nullable() }).nullable();
+
+export const volumeRowSchema = z.object({
+  volume: z.number().int(),
+  partsTotal: z.number(),
+  exWorks: z.number(),
+  landed: z.number(),
+  low: z.number(),
+  high: z.number(),
+  impliedMargin,
+});
+export type VolumeRow = z.infer<typeof volumeRowSchema>;
+
+export const costResponse = z.object({
+  teardownId: z.number().int(),
+  volume: z.number().int(),
+  currency: z.string(),
+  /** Date of the rate table every converted figure used; null when nothing needed converting and no table exists. */
+  rateDate: z.string().nullable(),
+  rateTable: z.object({ id: z.number().int(), base: z.string(), date: z.string(), source: z.string() }).nullable(),
+  /** Rates of the currencies this teardown uses: per 1 base, and the cross rate into the reporting currency. */
+  ratesUsed: z.array(z.object({ currency: z.string(), perBase: z.number(), toReporting: z.number() })),
+  model: z.object({ source: z.enum(['workspace', 'teardown']), currency: z.string(), volumes: z.array(z.number().int()) }),
+  lines: z.array(costLineSchema),
+  partsTotal: z.number(),
+  byCategory: z.array(z.object({ category: PART_CATEGORY.schema, total: z.number(), share: z.number().nullable(), lines: z.number().int() })),
+  placements: z.number(),
+  joints: z.number(),
+  assembly: z.number(),
+  labour: z.number(),
+  test: z.number(),
+  packaging: z.number(),
+  yieldLoss: z.number(),
+  overhead: z.number(),
+  exWorks: z.number(),
+  freight: z.number(),
+  insurance: z.number(),
+  duty: z.number(),
+  landed: z.number(),
+  low: z.number(),
+  high: z.number(),
+  retail: z
+    .object({
+      amount: z.number(),
+      retailerShare: z.number(),
+      platformShare: z.number(),
+      netToMaker: z.number(),
+      seen: z.object({ amount: z.number(), currency: z.string(), on: z.string().nullable() }),
+    })
+    .nullable(),
+  impliedMargin,
+  steps: z.array(costStepSchema),
+  waterfall: z.array(waterfallBarSchema),
+  volumes: z.array(volumeRowSchema),
+  unpricedPartIds: z.array(z.number().int()),
+  warnings: z.array(z.string()),
+});
+export type CostRollUpDto = z.infer<typeof costResponse>;
+
+// ---- Price CSV import ----
+
+export const priceImportQuery = z.object({
+  /** preview: check and show what would change, save nothing; apply: save all rows or none. */
+  mode: z.enum(['preview', 'apply']).default('preview'),
+});
+
+export const priceImportRowSchema = z.object({
+  /** Line number in the file (the header is line 1). */
+  line: z.number().int(),
+  partId: z.number().int(),
+  description: z.string(),
+  designators: z.string().nullable(),
+  matchedBy: z.enum(['designators', 'makerPartNumber', 'description']),
+  before: partPriceSchema.omit({ partId: true, updatedBy: true, updatedAt: true }).nullable(),
+  after: partPriceSchema.omit({ partId: true, updatedBy: true, updatedAt: true }),
+});
+export type PriceImportRow = z.infer<typeof priceImportRowSchema>;
+
+export const priceImportResponse = z.object({
+  mode: z.enum(['preview', 'apply']),
+  rows: z.array(priceImportRowSchema),
+  /** Lines left alone because they carry no price (e.g. unpriced lines of an export). */
+  skipped: z.array(z.object({ line: z.number().int(), reason: z.string() })),
+  saved: z.number().int(),
+});
+export type PriceImportResult = z.infer<typeof priceImportResponse>;
+
+/** Columns of the costed-BOM CSV; the price import reads the same names (others are ignored). */
+export const COSTED_BOM_COLUMNS = [
+  'designators',
+  'maker_part_number',
+  'description',
+  'category',
+  'mount',
+  'quantity',
+  'currency',
+  'breaks',
+  'source',
+  'confidence',
+  'price_date',
+  'note',
+  'volume',
+  'report_currency',
+  'rate_date',
+  'unit_price',
+  'attrition_pct',
+  'extended',
+] as const;
