@@ -7,3 +7,4 @@ export * from './admin';
 export * from './domain';
 export * from './teardowns';
 export * from './settings';
+export * from './runs';

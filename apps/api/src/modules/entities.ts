@@ -17,6 +17,7 @@ import { CommentSchema } from './teardowns/comment.entity';
 import { SuggestionDecisionSchema } from './teardowns/suggestion-decision.entity';
 import { TeardownSchema } from './teardowns/teardown.entity';
 import { UserSchema } from './users/user.entity';
+import { BenchRunSchema } from './runs/bench-run.entity';
 
 export const entities = [
   UserSchema,
@@ -37,4 +38,5 @@ export const entities = [
   CalloutSchema,
   FindingSchema,
   SettingSchema,
+  BenchRunSchema,
 ];
