@@ -220,11 +220,13 @@ describe('upload and analysis of each run kind', () => {
     expect(run.analysis.wattHours).toBeCloseTo(31.45, 9);
     expect(run.analysis.powerBank.efficiency).toBeCloseTo(0.85, 9);
     expect(run.analysis.powerBank.ampHoursAt5V).toBeCloseTo(6.29, 9);
-    // Without the option, the cell energy comes from the label (the Stackcell 20 PD states 74 Wh).
-    const fromLabel = (await upload(a, ids[DRAFT]!, lines.join('\n'), mapping).expect(201)).body.run;
-    expect(fromLabel.analysis.powerBank.cellEnergyWh).toBe(74);
-    expect(fromLabel.analysis.powerBank.cellEnergySource).toMatch(/label energy/);
-    expect(fromLabel.comparison.labelEnergy).toMatchObject({ claimedWh: 74, percent: expect.closeTo((31.45 / 74) * 100, 6), warning: true });
+    // Without the option, the cell energy is what the cells delivered in this unit's latest discharge run.
+    const latest = (await a.get(`/api/teardowns/${ids[DRAFT]}/runs`).expect(200)).body.runs.find((r: { kind: string }) => r.kind === 'discharge');
+    const fromRun = (await upload(a, ids[DRAFT]!, lines.join('\n'), mapping).expect(201)).body.run;
+    expect(fromRun.analysis.powerBank.cellEnergyWh).toBeCloseTo(latest.analysis.wattHours, 9);
+    expect(fromRun.analysis.powerBank.cellEnergySource).toMatch(/discharge run of this unit \(".*"\)/);
+    // The Stackcell 20 PD label states 74 Wh: 31.45 Wh at the output is under 80 % of it.
+    expect(fromRun.comparison.labelEnergy).toMatchObject({ claimedWh: 74, percent: expect.closeTo((31.45 / 74) * 100, 6), warning: true });
   });
 });
 
@@ -320,15 +322,35 @@ describe('bad input: a clear message naming the row and column, and nothing stor
     expect(await stored()).toEqual(before);
   });
 
-  it('asks for the cell energy of a power-bank run when nothing gives it', async () => {
-    // The demo devices all state a capacity; a teardown of a device without one needs the option.
+  it('takes the cell energy from the label without a discharge run, and asks for it when nothing gives it', async () => {
     const em = t.orm.em.fork();
-    await em.getConnection().execute('update devices set claim_capacity_ah = null, claim_capacity_wh = null where model = ?', ['Breeze Neck 2']);
+    const id = ids['Breeze Neck 2']!;
+    await em.getConnection().execute("delete from bench_runs where teardown_id = ? and kind = 'discharge'", [id]);
     const a = await t.as('engineer');
+    const mapping = { kind: 'power-bank', time: { column: 't', unit: 's' }, voltage: { column: 'v', unit: 'V' }, current: { column: 'i', unit: 'A' } };
+    const log = 't,v,i\n0,5,1\n3600,5,1\n';
+    // The Breeze Neck 2 label states 4 Ah and no Wh: 4 Ah × 3.7 V nominal (assumed) = 14.8 Wh.
+    const fromLabel = (await upload(a, id, log, mapping).expect(201)).body.run;
+    expect(fromLabel.analysis.powerBank.cellEnergyWh).toBeCloseTo(14.8, 9);
+    expect(fromLabel.analysis.powerBank.efficiency).toBeCloseTo(5 / 14.8, 9);
+    expect(fromLabel.analysis.powerBank.cellEnergySource).toMatch(/3\.7 V \(nominal voltage assumed\)/);
+    await em.getConnection().execute('update devices set claim_capacity_ah = null, claim_capacity_wh = null where model = ?', ['Breeze Neck 2']);
     const before = await stored();
-    const res = await upload(a, ids['Breeze Neck 2']!, 't,v,i\n0,5,1\n60,5,1\n', { kind: 'power-bank', time: { column: 't', unit: 's' }, voltage: { column: 'v', unit: 'V' }, current: { column: 'i', unit: 'A' } }).expect(422);
+    const res = await upload(a, id, log, mapping).expect(422);
     expect(res.body.error.fields['options.cellEnergyWh']).toMatch(/Give the energy of the cells/);
     expect(await stored()).toEqual(before);
+
+    // With a pack record (1S2P of 3.7 V, 2.0 Ah cells = 14.8 Wh) the rating gives the cell energy, and a discharge is compared with it.
+    await em
+      .getConnection()
+      .execute("insert into packs (teardown_id, chemistry, cell_nominal_volts, cell_rated_ah, series, parallel, protection, updated_at) values (?, 'li-ion', 3.7, 2.0, 1, 2, 1, ?)", [id, new Date().toISOString()]);
+    const fromPack = (await upload(a, id, log, mapping).expect(201)).body.run;
+    expect(fromPack.analysis.powerBank.cellEnergyWh).toBeCloseTo(14.8, 9);
+    expect(fromPack.analysis.powerBank.cellEnergySource).toMatch(/pack record: 1S2P/);
+    const discharge = (await upload(a, id, constantDischarge(), dischargeMapping()).expect(201)).body.run;
+    // 1.000 Ah against 2 × 2.0 Ah rated = 25 %; no label claim left to compare with.
+    expect(discharge.comparison.label).toBeNull();
+    expect(discharge.comparison.rated).toMatchObject({ ratedAh: 4, percent: expect.closeTo(25, 9), warning: true, basis: expect.stringMatching(/2 cells of 2 Ah in parallel/) });
   });
 });
 

@@ -35,6 +35,7 @@ export const router = createBrowserRouter([
           { path: '/admin/invitations', lazy: () => import('./routes/admin-invitations') },
           { path: '/admin/outbox', lazy: () => import('./routes/admin-outbox') },
           { path: '/admin/audit', lazy: () => import('./routes/admin-audit') },
+          { path: '/bench/runs', lazy: () => import('./routes/bench-runs') },
           { path: '*', lazy: () => import('./routes/not-found') },
         ],
       },

@@ -3,6 +3,7 @@
 import { lazy, type ComponentType, type LazyExoticComponent } from 'react';
 import type { LucideIcon } from 'lucide-react';
 import { FileText } from 'lucide-react';
+import { Activity } from 'lucide-react';
 import type { TeardownDto } from '@splitcase/contracts';
 import type { TeardownSection } from '@/config/paths';
 
@@ -25,6 +26,13 @@ export const SECTIONS: SectionDef[] = [
     label: 'Overview',
     icon: FileText,
     Component: lazy(() => import('@/features/teardowns/components/overview-section').then((m) => ({ default: m.OverviewSection }))),
+    withFigures: true,
+  },
+  {
+    id: 'runs',
+    label: 'Bench runs',
+    icon: Activity,
+    Component: lazy(() => import('@/features/runs/components/runs-section').then((m) => ({ default: m.RunsSection }))),
     withFigures: true,
   },
 ];

@@ -59,6 +59,8 @@ export interface RequestOptions {
   form?: FormData;
   /** Return the raw Response (downloads). */
   raw?: boolean;
+  /** Extra request headers (e.g. the confirm header for changing a published teardown). */
+  headers?: Record<string, string>;
 }
 
 export function buildUrl(path: string, query?: RequestOptions['query']): string {
@@ -73,7 +75,7 @@ export function buildUrl(path: string, query?: RequestOptions['query']): string 
 }
 
 async function request<T>(method: string, path: string, opts: RequestOptions = {}, retried = false): Promise<T> {
-  const headers: Record<string, string> = { Accept: 'application/json' };
+  const headers: Record<string, string> = { Accept: 'application/json', ...opts.headers };
   const changing = method !== 'GET';
   if (changing) headers['X-CSRF-Token'] = await getCsrfToken();
   let body: BodyInit | undefined;
@@ -115,7 +117,7 @@ export const api = {
    * Multipart upload with progress (XMLHttpRequest: fetch has no upload progress).
    * Resolves with the parsed JSON body; rejects with ApiError. `abort` cancels.
    */
-  upload<T>(path: string, form: FormData, onProgress: (fraction: number) => void): { promise: Promise<T>; abort: () => void } {
+  upload<T>(path: string, form: FormData, onProgress: (fraction: number) => void, headers: Record<string, string> = {}): { promise: Promise<T>; abort: () => void } {
     const xhr = new XMLHttpRequest();
     const promise = getCsrfToken().then(
       (token) =>
@@ -123,6 +125,7 @@ export const api = {
           xhr.open('POST', path);
           xhr.setRequestHeader('X-CSRF-Token', token);
           xhr.setRequestHeader('Accept', 'application/json');
+          for (const [name, value] of Object.entries(headers)) xhr.setRequestHeader(name, value);
           xhr.upload.onprogress = (e) => e.lengthComputable && onProgress(e.loaded / e.total);
           xhr.onload = () => {
             let parsed: unknown = null;

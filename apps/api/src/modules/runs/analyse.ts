@@ -24,6 +24,8 @@ export interface AnalysisContext {
   pack: { cellNominalVolts: number; cellRatedAh: number; series: number; parallel: number } | null;
   /** Surface material of the teardown's heater load, when recorded. */
   heaterMaterial: SurfaceMaterial | null;
+  /** Energy the cells delivered in the latest discharge run of the same teardown, when there is one. */
+  measuredCells: { wattHours: number; label: string } | null;
   /** Contact time of the teardown, else the workspace default (s). */
   teardownContactSeconds: number | null;
   defaultContactSeconds: number;
@@ -45,9 +47,16 @@ function optionError(field: string, message: string): AppError {
   return new AppError('unprocessable', message, { [`options.${field}`]: message });
 }
 
-/** Cell energy for a power-bank run: the option, else the pack record, else the label. */
+/**
+ * Cell energy for a power-bank run: the option; else what the cells delivered in a discharge run of
+ * the same unit (so the efficiency is the conversion alone, not a weak cell as well); else the pack
+ * record's rating; else the label.
+ */
 export function cellEnergy(options: RunOptions, ctx: AnalysisContext): { wh: number; source: string } {
-  if (options.cellEnergyWh) return { wh: options.cellEnergyWh, source: `given with the run: ${fmt(options.cellEnergyWh)} Wh` };
+  if (options.cellEnergyWh) return { wh: options.cellEnergyWh, source: `value given with the run: ${fmt(options.cellEnergyWh)} Wh` };
+  if (ctx.measuredCells && ctx.measuredCells.wattHours > 0) {
+    return { wh: ctx.measuredCells.wattHours, source: `discharge run of this unit ("${ctx.measuredCells.label}"): ${fmt(ctx.measuredCells.wattHours)} Wh delivered by the cells` };
+  }
   if (ctx.pack) {
     const { cellNominalVolts, cellRatedAh, series, parallel } = ctx.pack;
     const wh = packEnergyWh({ cellNominalVolts, cellCapacityAh: cellRatedAh, series, parallel });

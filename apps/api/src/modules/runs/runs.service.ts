@@ -29,12 +29,15 @@ export async function analysisContext(em: EntityManager, teardown: Teardown): Pr
   const pack = await em.findOne(PackSchema, { teardown: teardown.id });
   const heater = await em.findOne(LoadSchema, { teardown: teardown.id, kind: 'heater', surfaceMaterial: { $ne: null } }, { orderBy: { id: 'asc' } });
   const settings = await getSettings(em);
+  const discharge = await em.findOne(BenchRunSchema, { teardown: teardown.id, kind: 'discharge' }, { orderBy: { createdAt: 'desc', id: 'desc' } });
+  const dischargeWh = discharge?.analysis.wattHours;
   return {
     device: { claimCapacityAh: numberOrNull(device.claimCapacityAh), claimCapacityWh: numberOrNull(device.claimCapacityWh) },
     pack: pack
       ? { cellNominalVolts: Number(pack.cellNominalVolts), cellRatedAh: Number(pack.cellRatedAh), series: pack.series, parallel: pack.parallel }
       : null,
     heaterMaterial: heater?.surfaceMaterial ?? null,
+    measuredCells: discharge && typeof dischargeWh === 'number' ? { wattHours: dischargeWh, label: discharge.label } : null,
     teardownContactSeconds: teardown.contactSeconds ?? null,
     defaultContactSeconds: settings.defaultContactSeconds,
   };
