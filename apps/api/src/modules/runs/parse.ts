@@ -176,6 +176,7 @@ export async function parseRunFile(path: string, mapping: RunMapping): Promise<P
   const plans: ColumnPlan[] = [];
   let timePlan: ColumnPlan | null = null;
   let header: string[] = [];
+  let maxIndex = -1;
   let row = 0;
   let samples = 0;
   let firstTime = Number.NaN;
@@ -214,6 +215,7 @@ export async function parseRunFile(path: string, mapping: RunMapping): Promise<P
       const plan: ColumnPlan = { quantity, name: m.column, index, unit: m.unit, builder: new ColumnBuilder(estimate), seenUnit: null, seenUnitRow: 0 };
       if (quantity === 'time') timePlan = plan;
       else plans.push(plan);
+      maxIndex = Math.max(maxIndex, index);
     }
   };
 
@@ -257,10 +259,10 @@ export async function parseRunFile(path: string, mapping: RunMapping): Promise<P
   const readRow = (cells: string[]) => {
     const tp = timePlan as ColumnPlan | null;
     if (!tp) return;
-    for (const plan of [tp, ...plans]) {
-      if (plan.index >= cells.length) {
-        fail(`Row ${row} has ${cells.length} field${cells.length === 1 ? '' : 's'}, so column ${quote(plan.name)} (field ${plan.index + 1}) is missing.`, { row, column: plan.name });
-      }
+    if (cells.length <= maxIndex) {
+      // Name the first mapped column the row is too short for.
+      const plan = [tp, ...plans].filter((p) => p.index >= cells.length).sort((a, b) => a.index - b.index)[0]!;
+      fail(`Row ${row} has ${cells.length} field${cells.length === 1 ? '' : 's'}, so column ${quote(plan.name)} (field ${plan.index + 1}) is missing.`, { row, column: plan.name });
     }
     // Time: elapsed in the mapped unit, or a timestamp turned into seconds from the first row.
     const timeText = cells[tp.index] as string;
@@ -296,7 +298,7 @@ export async function parseRunFile(path: string, mapping: RunMapping): Promise<P
   };
 
   await new Promise<void>((resolve, reject) => {
-    const stream = createReadStream(path, { encoding: 'utf8', highWaterMark: 1 << 20 });
+    const stream = createReadStream(path, { encoding: 'utf8', highWaterMark: 1 << 16 });
     let settled = false;
     const finish = (err?: unknown) => {
       if (settled) return;
