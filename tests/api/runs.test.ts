@@ -591,3 +591,22 @@ describe('a 1,000,000-row log', () => {
     expect(s.traces.v.t.length).toBe(3000);
   }, 120_000);
 });
+
+describe('the upload limit', () => {
+  it('refuses a log over SPLITCASE_RUN_UPLOAD_MAX_MB with 413 and keeps no partial file', async () => {
+    const small = await makeTestApp({ seed: 'demo', env: { runUploadMaxBytes: 4096 } });
+    try {
+      const a = await small.as('engineer');
+      const [row] = (await small.orm.em.fork().getConnection().execute("select t.id from teardowns t join devices d on d.id = t.device_id where d.model = 'Stackcell 20 PD'")) as { id: number }[];
+      const res = await a
+        .upload(`/api/teardowns/${row!.id}/runs`)
+        .field('mapping', JSON.stringify(dischargeMapping()))
+        .attach('file', Buffer.from(constantDischarge()), 'big.csv');
+      expect(res.status).toBe(413);
+      expect(res.body.error.code).toBe('payload_too_large');
+      expect(readdirSync(join(small.env.uploadsDir, 'runs', '.incoming'))).toEqual([]);
+    } finally {
+      await small.close();
+    }
+  });
+});

@@ -120,6 +120,7 @@ function ReadOut({ active, label, runs, traces, unit }: { active?: boolean; labe
 function markersFor(run: RunDto, key: TraceKey): ReactNode[] {
   const a = run.analysis;
   const out: ReactNode[] = [];
+  // For a horizontal line, insideBottom… puts the text above the line and insideTop… below it.
   const label = (value: string, position: 'insideTopRight' | 'insideTopLeft' | 'insideBottomRight' = 'insideTopRight') => ({ value, position, fontSize: 11, fill: 'currentColor' });
   if (key === 'v' && a.discharge) {
     if (a.discharge.cutoffVolts) out.push(<ReferenceLine key="cutoff-v" y={a.discharge.cutoffVolts} className="text-graphite-400" stroke="currentColor" strokeDasharray="4 3" label={label(`cut-off ${sig(a.discharge.cutoffVolts, 3)} V`, 'insideBottomRight')} />);
@@ -127,15 +128,15 @@ function markersFor(run: RunDto, key: TraceKey): ReactNode[] {
   }
   if (a.charge) {
     if (a.charge.transitionS !== null && (key === 'v' || key === 'i')) out.push(<ReferenceLine key="cv" x={a.charge.transitionS} className="text-graphite-500" stroke="currentColor" strokeDasharray="4 3" label={label('CC → CV', 'insideTopRight')} />);
-    if (key === 'i') out.push(<ReferenceLine key="term" y={a.charge.terminationCurrentA} className="text-graphite-400" stroke="currentColor" strokeDasharray="4 3" label={label(`termination ${sig(a.charge.terminationCurrentA, 3)} A`)} />);
+    if (key === 'i') out.push(<ReferenceLine key="term" y={a.charge.terminationCurrentA} className="text-graphite-400" stroke="currentColor" strokeDasharray="4 3" label={label(`termination ${sig(a.charge.terminationCurrentA, 3)} A`, 'insideBottomRight')} />);
   }
   if (key === 'temp' && a.thermal) {
     const th = a.thermal;
     if (th.steadyState.reached && th.steadyState.fromS !== null && th.steadyState.toS !== null) {
       out.push(<ReferenceArea key="steady" x1={th.steadyState.fromS} x2={th.steadyState.toS} className="text-cell-400" fill="currentColor" fillOpacity={0.08} label={label('steady state', 'insideBottomRight')} />);
     }
-    out.push(<ReferenceLine key="burn" y={th.burnThreshold.temperatureC} className="text-brick-600" stroke="currentColor" strokeDasharray="5 3" label={label(`burn threshold ${th.burnThreshold.temperatureC} °C`)} />);
-    if (th.thresholdC !== null) out.push(<ReferenceLine key="threshold" y={th.thresholdC} className="text-graphite-400" stroke="currentColor" strokeDasharray="2 3" label={label(`${sig(th.thresholdC, 3)} °C`, 'insideBottomRight')} />);
+    out.push(<ReferenceLine key="burn" y={th.burnThreshold.temperatureC} className="text-brick-600" stroke="currentColor" strokeDasharray="5 3" label={label(`burn threshold ${th.burnThreshold.temperatureC} °C`, 'insideBottomRight')} />);
+    if (th.thresholdC !== null) out.push(<ReferenceLine key="threshold" y={th.thresholdC} className="text-graphite-400" stroke="currentColor" strokeDasharray="2 3" label={label(`${sig(th.thresholdC, 3)} °C`, 'insideTopRight')} />);
   }
   return out;
 }
