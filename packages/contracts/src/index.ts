@@ -13,3 +13,4 @@ export * from './parts';
 export * from './power';
 export * from './measurements';
 export * from './cost';
+export * from './runs';

@@ -17,6 +17,7 @@ const schema = z.object({
   SPLITCASE_MAIL_FROM: z.string().default('Splitcase <no-reply@splitcase.test>'),
   SPLITCASE_CAPTURE_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(0),
   SPLITCASE_UPLOAD_MAX_MB: z.coerce.number().positive().default(25),
+  SPLITCASE_RUN_UPLOAD_MAX_MB: z.coerce.number().positive().default(200),
   SPLITCASE_LOGIN_LIMIT_IP: z.coerce.number().int().positive().default(30),
   SPLITCASE_LOGIN_LIMIT_ACCOUNT: z.coerce.number().int().positive().default(8),
   SPLITCASE_SECURE_COOKIES: z.enum(['true', 'false']).optional(),
@@ -36,6 +37,8 @@ export interface Env {
   mailFrom: string;
   captureSmtpPort: number;
   uploadMaxBytes: number;
+  /** Largest bench-run log accepted (a 1,000,000-row log with five columns is about 40 MB). */
+  runUploadMaxBytes: number;
   loginLimitPerIp: number;
   loginLimitPerAccount: number;
   secureCookies: boolean;
@@ -63,6 +66,7 @@ export function readEnv(source: NodeJS.ProcessEnv = process.env): Env {
     mailFrom: e.SPLITCASE_MAIL_FROM,
     captureSmtpPort: e.SPLITCASE_CAPTURE_SMTP_PORT,
     uploadMaxBytes: Math.round(e.SPLITCASE_UPLOAD_MAX_MB * 1024 * 1024),
+    runUploadMaxBytes: Math.round(e.SPLITCASE_RUN_UPLOAD_MAX_MB * 1024 * 1024),
     loginLimitPerIp: e.SPLITCASE_LOGIN_LIMIT_IP,
     loginLimitPerAccount: e.SPLITCASE_LOGIN_LIMIT_ACCOUNT,
     secureCookies: e.SPLITCASE_SECURE_COOKIES === 'true',

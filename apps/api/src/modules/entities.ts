@@ -20,6 +20,7 @@ import { UserSchema } from './users/user.entity';
 import { CostModelSchema } from './cost/cost-model.entity';
 import { PartPriceSchema } from './cost/part-price.entity';
 import { RateTableSchema } from './cost/rate-table.entity';
+import { BenchRunSchema } from './runs/bench-run.entity';
 
 export const entities = [
   UserSchema,
@@ -43,4 +44,5 @@ export const entities = [
   PartPriceSchema,
   RateTableSchema,
   CostModelSchema,
+  BenchRunSchema,
 ];

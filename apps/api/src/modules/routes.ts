@@ -14,6 +14,7 @@ import { systemRoutes } from './system/routes';
 import { teardownRoutes } from './teardowns/routes';
 import { toolRoutes } from './tools/routes';
 import { userRoutes } from './users/routes';
+import { runRoutes } from './runs/routes';
 
 export function allRoutes(deps: AppDeps, version: string): RouteDef[] {
   return [
@@ -30,5 +31,6 @@ export function allRoutes(deps: AppDeps, version: string): RouteDef[] {
     ...powerRoutes,
     ...measurementRoutes,
     ...costRoutes,
+    ...runRoutes(deps),
   ];
 }

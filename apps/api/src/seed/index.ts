@@ -7,6 +7,7 @@ import { seedWorkspace } from './workspace';
 import { seedBom } from './bom';
 import { seedPhotos } from './photos';
 import { seedCost } from './cost';
+import { seedRuns } from './runs';
 
 /** Seed steps in order. Later features append their step here. */
 export const SEED_STEPS: SeedStep[] = [
@@ -15,6 +16,7 @@ export const SEED_STEPS: SeedStep[] = [
   { name: 'bom', run: seedBom },
   { name: 'photos', run: seedPhotos },
   { name: 'cost', run: seedCost },
+  { name: 'runs', run: seedRuns },
 ];
 
 /** Seeds the invented demo workspace when the database has no users. Returns whether it seeded. */

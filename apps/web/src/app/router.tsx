@@ -37,6 +37,7 @@ export const router = createBrowserRouter([
           { path: '/admin/audit', lazy: () => import('./routes/admin-audit') },
           { path: '/tools', lazy: () => import('./routes/bench-tools') },
           { path: '/rates', lazy: () => import('./routes/rates') },
+          { path: '/bench/runs', lazy: () => import('./routes/bench-runs') },
           { path: '*', lazy: () => import('./routes/not-found') },
         ],
       },

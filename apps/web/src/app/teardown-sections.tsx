@@ -6,6 +6,7 @@ import { FileText } from 'lucide-react';
 import { Camera } from 'lucide-react';
 import { Gauge, ListTree, Zap } from 'lucide-react';
 import { Calculator } from 'lucide-react';
+import { Activity } from 'lucide-react';
 import type { TeardownDto } from '@splitcase/contracts';
 import type { TeardownSection } from '@/config/paths';
 
@@ -56,6 +57,13 @@ export const SECTIONS: SectionDef[] = [
     label: 'Measurements',
     icon: Gauge,
     Component: lazy(() => import('@/features/measurements/components/measurements-section').then((m) => ({ default: m.MeasurementsSection }))),
+    withFigures: true,
+  },
+  {
+    id: 'runs',
+    label: 'Bench runs',
+    icon: Activity,
+    Component: lazy(() => import('@/features/runs/components/runs-section').then((m) => ({ default: m.RunsSection }))),
     withFigures: true,
   },
   {

@@ -14,6 +14,8 @@ export const paths = {
   devices: () => '/devices',
   device: (id: number) => `/devices/${id}`,
   teardown: (id: number, section: TeardownSection = 'overview') => (section === 'overview' ? `/teardowns/${id}` : `/teardowns/${id}/${section}`),
+  teardownRun: (teardownId: number, runId: number) => `/teardowns/${teardownId}/runs?run=${runId}`,
+  benchRuns: () => '/bench/runs',
   admin: {
     users: () => '/admin/users',
     invitations: () => '/admin/invitations',

@@ -14,6 +14,7 @@ export {
 } from './discharge';
 export {
   analyseCharge,
+  DEFAULT_TERMINATION_FRACTION,
   type ChargeRunOptions,
   type ChargeRunAnalysis,
 } from './charge';
@@ -38,3 +39,16 @@ export {
   type ChargeSimulation,
   type HeaterSimulation,
 } from './models';
+export {
+  RUN_TIME_UNITS,
+  RUN_VOLTAGE_UNITS,
+  RUN_CURRENT_UNITS,
+  RUN_POWER_UNITS,
+  RUN_TEMPERATURE_UNITS,
+  RUN_STORED_UNIT,
+  runUnitConversion,
+  toStoredUnit,
+  convertColumnInPlace,
+  type RunQuantity,
+} from './units';
+export { timeToLevel, timeToTemperature } from './crossing';

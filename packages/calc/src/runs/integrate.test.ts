@@ -142,6 +142,23 @@ describe('integrateSeries', () => {
     expect(rest.averageVolts).toBeCloseTo(4.1, 12);
   });
 
+  it('matches the closed form ∫I₀e^(−t/τ)dt = I₀τ(1 − e^(−T/τ)) within the trapezoid error bound [C]', () => {
+    // I₀ = 2 A, τ = 1800 s, T = 7200 s, h = 1 s. Exact: 2 × 1800 × (1 − e^−4) / 3600 = 0.981684 Ah.
+    // Trapezoid error = (T·h²/12)·max|I''| = 7200/12 × 2/1800² = 3.7e−4 A·s at most [C].
+    const n = 7201;
+    const t = new Float64Array(n);
+    const i = new Float64Array(n);
+    for (let k = 0; k < n; k++) {
+      t[k] = k;
+      i[k] = 2 * Math.exp(-k / 1800);
+    }
+    const r = integrateSeries({ t, i });
+    const exact = (2 * 1800 * (1 - Math.exp(-4))) / 3600;
+    expect(exact).toBeCloseTo(0.981684, 6);
+    expect(Math.abs(r.ampHours! - exact) * 3600).toBeLessThan(3.7e-4);
+    expect(r.ampHours!).toBeGreaterThan(exact); // a convex curve: the trapezoid over-estimates
+  });
+
   it('handles 1,000,000 samples of a known linear load [C]', () => {
     const n = 1_000_000;
     const t = new Float64Array(n);

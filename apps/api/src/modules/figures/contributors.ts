@@ -1,6 +1,7 @@
 import type { EntityManager } from '@mikro-orm/sqlite';
 import type { TeardownFigureInput } from '@splitcase/calc';
 import type { Teardown } from '../teardowns/teardown.entity';
+import { benchRunFigureInput } from '../runs/figures';
 
 /** Adds to the inputs of a teardown's figures from another module's records (e.g. a bench run's measured capacity). */
 export type FigureInputContributor = (em: EntityManager, teardown: Teardown) => Promise<Partial<TeardownFigureInput>>;
@@ -9,4 +10,6 @@ export type FigureInputContributor = (em: EntityManager, teardown: Teardown) => 
  * Modules that contribute to the figures. The figures service builds the base input from the
  * power system and parts, then merges each contribution over it in this order.
  */
-export const FIGURE_CONTRIBUTORS: FigureInputContributor[] = [];
+export const FIGURE_CONTRIBUTORS: FigureInputContributor[] = [
+  benchRunFigureInput,
+];

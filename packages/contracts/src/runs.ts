@@ -1,0 +1,291 @@
+// Bench runs: logs from an electronic load, a USB meter or a thermocouple logger, uploaded to a
+// teardown with a column mapping, analysed on the server and plotted from downsampled series.
+import { z } from 'zod';
+import { SURFACE_MATERIAL } from './domain';
+
+const labelled = <const T extends readonly string[]>(values: T, labels: Record<T[number], string>) => ({ values, labels, schema: z.enum(values) });
+
+export const RUN_KIND = labelled(['discharge', 'charge', 'thermal', 'power-bank'] as const, {
+  discharge: 'Discharge',
+  charge: 'Charge',
+  thermal: 'Thermal',
+  'power-bank': 'Power-bank output',
+});
+export type RunKind = (typeof RUN_KIND.values)[number];
+
+/** What each kind of run is, in one line (shown beside the kind picker). */
+export const RUN_KIND_HINTS: Record<RunKind, string> = {
+  discharge: 'Cell or pack on an electronic load down to its cut-off: delivered Ah and Wh.',
+  charge: 'Charger log (USB meter or charger output): constant-current and constant-voltage phases.',
+  thermal: 'Thermocouple on a surface: peak, time to a temperature, steady state, burn-threshold margin.',
+  'power-bank': 'Load on the USB output until the bank shuts off: energy out versus the energy of its cells.',
+};
+
+/** Units a column may be logged in. Time may also be a timestamp (ISO 8601, or Unix epoch in s or ms). */
+export const TIME_UNIT = labelled(['s', 'ms', 'min', 'h', 'iso', 'epoch-s', 'epoch-ms'] as const, {
+  s: 'seconds elapsed',
+  ms: 'milliseconds elapsed',
+  min: 'minutes elapsed',
+  h: 'hours elapsed',
+  iso: 'timestamp (ISO 8601)',
+  'epoch-s': 'timestamp (Unix seconds)',
+  'epoch-ms': 'timestamp (Unix milliseconds)',
+});
+export const VOLTAGE_UNIT = labelled(['V', 'mV'] as const, { V: 'V', mV: 'mV' });
+export const CURRENT_UNIT = labelled(['A', 'mA'] as const, { A: 'A', mA: 'mA' });
+export const POWER_UNIT = labelled(['W', 'mW'] as const, { W: 'W', mW: 'mW' });
+export const TEMPERATURE_UNIT = labelled(['°C', '°F'] as const, { '°C': '°C', '°F': '°F' });
+export type TimeUnit = (typeof TIME_UNIT.values)[number];
+
+export const RUN_DELIMITER = labelled([',', ';', '\t', '|'] as const, { ',': 'comma', ';': 'semicolon', '\t': 'tab', '|': 'vertical bar' });
+export type RunDelimiter = (typeof RUN_DELIMITER.values)[number];
+
+/** The quantities a column can be mapped to, in the order the mapping form shows them. */
+export const RUN_QUANTITIES = ['time', 'voltage', 'current', 'power', 'temperature'] as const;
+export type RunQuantityName = (typeof RUN_QUANTITIES)[number];
+export const RUN_QUANTITY_LABELS: Record<RunQuantityName, string> = {
+  time: 'Time',
+  voltage: 'Voltage',
+  current: 'Current',
+  power: 'Power',
+  temperature: 'Temperature',
+};
+
+const columnName = z.string().trim().min(1, 'Choose a column').max(200, 'At most 200 characters');
+const mapped = <U extends z.ZodType>(unit: U) => z.object({ column: columnName, unit });
+
+/** Which column holds which quantity, in which unit; plus how the file is laid out. */
+export const runMappingSchema = z
+  .object({
+    kind: RUN_KIND.schema,
+    time: mapped(TIME_UNIT.schema),
+    voltage: mapped(VOLTAGE_UNIT.schema).optional(),
+    current: mapped(CURRENT_UNIT.schema).optional(),
+    power: mapped(POWER_UNIT.schema).optional(),
+    temperature: mapped(TEMPERATURE_UNIT.schema).optional(),
+    /** Field separator; detected from the file when absent. */
+    delimiter: RUN_DELIMITER.schema.optional(),
+    /** Numbers written with a decimal comma ("3,712"); needs a delimiter other than the comma. */
+    decimalComma: z.boolean().optional(),
+    /** Line of the file that holds the column names (loggers often write a preamble first); default 1. */
+    headerRow: z.number().int().min(1, 'At least 1').max(1000, 'At most 1000').optional(),
+  })
+  .superRefine((m, ctx) => {
+    const need = (q: RunQuantityName, why: string) => {
+      if (!m[q]) ctx.addIssue({ code: 'custom', path: [q, 'column'], message: why });
+    };
+    if (m.kind === 'discharge' || m.kind === 'power-bank') {
+      need('voltage', `A ${RUN_KIND.labels[m.kind].toLowerCase()} run needs a voltage column`);
+      if (!m.current && !m.power) ctx.addIssue({ code: 'custom', path: ['current', 'column'], message: 'Map a current column (or a power column)' });
+    }
+    if (m.kind === 'charge') {
+      need('voltage', 'A charge run needs a voltage column');
+      need('current', 'A charge run needs a current column');
+    }
+    if (m.kind === 'thermal') need('temperature', 'A thermal run needs a temperature column');
+    const seen = new Map<string, RunQuantityName>();
+    for (const q of RUN_QUANTITIES) {
+      const c = m[q];
+      if (!c) continue;
+      const other = seen.get(c.column);
+      if (other) ctx.addIssue({ code: 'custom', path: [q, 'column'], message: `"${c.column}" is already mapped to ${RUN_QUANTITY_LABELS[other].toLowerCase()}` });
+      seen.set(c.column, q);
+    }
+    if (m.decimalComma && (m.delimiter ?? ',') === ',') {
+      ctx.addIssue({ code: 'custom', path: ['decimalComma'], message: 'A decimal comma needs a delimiter other than the comma (usually a semicolon)' });
+    }
+  });
+export type RunMapping = z.infer<typeof runMappingSchema>;
+
+/** Analysis settings the engineer chooses; changing them re-analyses the stored series. */
+export const runOptionsSchema = z.object({
+  /** Discharge: end-of-discharge voltage (V). Without it the run ends where the load stops. */
+  cutoffVolts: z.number().positive('Must be above 0 V').max(100, 'At most 100 V').nullable().optional(),
+  /** Charge: charge (CV) voltage (V); estimated from the log when absent. */
+  cvVolts: z.number().positive('Must be above 0 V').max(100, 'At most 100 V').nullable().optional(),
+  /** Charge: termination current as a fraction of the CC current; default 0.05. */
+  terminationFraction: z.number().gt(0, 'Must be above 0').max(0.5, 'At most 0.5').nullable().optional(),
+  /** Thermal: the surface material touched. */
+  material: SURFACE_MATERIAL.schema.nullable().optional(),
+  /** Thermal: contact time for the burn threshold (s); default the teardown's, else the workspace's. */
+  contactSeconds: z.number().int('Whole seconds').min(1, 'At least 1 s').max(28800, 'At most 8 h').nullable().optional(),
+  /** Thermal: a temperature whose first crossing is timed (°C). */
+  thresholdC: z.number().min(-50, 'At least −50 °C').max(500, 'At most 500 °C').nullable().optional(),
+  /** Power bank: energy of the cells (Wh); default from the pack record or the label. */
+  cellEnergyWh: z.number().positive('Must be above 0 Wh').max(10000, 'At most 10 000 Wh').nullable().optional(),
+});
+export type RunOptions = z.infer<typeof runOptionsSchema>;
+
+export const runLabel = z.string().trim().min(1, 'Required').max(160, 'At most 160 characters');
+
+export const updateRunBody = z
+  .object({ label: runLabel.optional(), options: runOptionsSchema.optional() })
+  .refine((b) => b.label !== undefined || b.options !== undefined, { message: 'Change the label or the options' });
+export type UpdateRunBody = z.infer<typeof updateRunBody>;
+
+const cutoffSchema = z.object({ index: z.number().int(), t: z.number(), volts: z.number(), reason: z.enum(['cutoff-voltage', 'current-stopped', 'end-of-run']) });
+
+/** Results of the analysis. Totals are at the top; each kind adds its own block. */
+export const runAnalysisSchema = z.object({
+  /** Delivered (or taken-in) charge, Ah; null when the log has no current or power with voltage. */
+  ampHours: z.number().nullable(),
+  wattHours: z.number().nullable(),
+  durationS: z.number(),
+  /** Charge-weighted mean voltage Wh/Ah, V. */
+  averageVolts: z.number().nullable(),
+  endVolts: z.number().nullable(),
+  samples: z.number().int(),
+  discharge: z
+    .object({
+      cutoffVolts: z.number().nullable(),
+      cutoff: cutoffSchema.nullable(),
+      minVolts: z.number(),
+      timeAverageVolts: z.number(),
+      averageCurrentA: z.number(),
+      averagePowerW: z.number(),
+      /** Time up to which the totals run, s. */
+      analysedToS: z.number(),
+    })
+    .optional(),
+  charge: z
+    .object({
+      cc: z.object({ startS: z.number(), endS: z.number(), currentA: z.number() }),
+      cv: z.object({ startS: z.number(), endS: z.number(), volts: z.number() }).nullable(),
+      transitionS: z.number().nullable(),
+      terminationCurrentA: z.number(),
+      terminationFraction: z.number(),
+      terminated: z.boolean(),
+      chargeTimeS: z.number(),
+      plateauVolts: z.number(),
+    })
+    .optional(),
+  thermal: z
+    .object({
+      startC: z.number(),
+      maxC: z.number(),
+      maxAtS: z.number(),
+      thresholdC: z.number().nullable(),
+      timeToThresholdS: z.number().nullable(),
+      steadyState: z.object({
+        reached: z.boolean(),
+        temperatureC: z.number().nullable(),
+        fromS: z.number().nullable(),
+        toS: z.number().nullable(),
+        criterion: z.string(),
+      }),
+      burnThreshold: z.object({ temperatureC: z.number(), material: SURFACE_MATERIAL.schema, contactSeconds: z.number(), listedSeconds: z.number(), source: z.string() }),
+      /** Burn threshold − peak surface temperature, °C; below zero the surface got hot enough to burn for that contact. */
+      marginC: z.number(),
+      timeToBurnThresholdS: z.number().nullable(),
+    })
+    .optional(),
+  powerBank: z
+    .object({
+      ampHoursAt5V: z.number(),
+      cellEnergyWh: z.number(),
+      cellEnergySource: z.string(),
+      efficiency: z.number(),
+    })
+    .optional(),
+  /** Assumptions the analysis made, in words. */
+  notes: z.array(z.string()),
+  warnings: z.array(z.string()),
+});
+export type RunAnalysis = z.infer<typeof runAnalysisSchema>;
+
+/** Measured against what the label (and the cell ratings) claim; computed at read time with the current settings. */
+export const runComparisonSchema = z.object({
+  warnBelowPercent: z.number(),
+  label: z.object({ claimedAh: z.number(), measuredAh: z.number(), percent: z.number(), warning: z.boolean() }).nullable(),
+  rated: z.object({ ratedAh: z.number(), measuredAh: z.number(), percent: z.number(), warning: z.boolean(), basis: z.string() }).nullable(),
+  labelEnergy: z.object({ claimedWh: z.number(), measuredWh: z.number(), percent: z.number(), warning: z.boolean() }).nullable(),
+});
+export type RunComparison = z.infer<typeof runComparisonSchema>;
+
+export const runColumnsSchema = z.object({ v: z.boolean(), i: z.boolean(), p: z.boolean(), temp: z.boolean() });
+
+export const runSchema = z.object({
+  id: z.number().int(),
+  teardownId: z.number().int(),
+  device: z.object({ id: z.number().int(), maker: z.string(), model: z.string() }),
+  unitLabel: z.string().nullable(),
+  teardownStatus: z.string(),
+  kind: RUN_KIND.schema,
+  label: z.string(),
+  fileName: z.string(),
+  fileBytes: z.number().int(),
+  mapping: z.record(z.string(), z.unknown()),
+  samples: z.number().int(),
+  durationS: z.number(),
+  columns: runColumnsSchema,
+  options: runOptionsSchema,
+  analysis: runAnalysisSchema,
+  comparison: runComparisonSchema,
+  createdBy: z.object({ id: z.number().int(), name: z.string() }).nullable(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+});
+export type RunDto = z.infer<typeof runSchema>;
+export const runResponse = z.object({ run: runSchema });
+export const runListResponse = z.object({ runs: z.array(runSchema) });
+
+export const runListQuery = z.object({
+  kind: RUN_KIND.schema.optional(),
+  /** Words to find in the device, unit or run label. */
+  q: z.string().trim().max(100, 'At most 100 characters').optional(),
+});
+
+export const MAX_SERIES_POINTS = 5000;
+export const DEFAULT_SERIES_POINTS = 2000;
+
+export const runSeriesQuery = z
+  .object({
+    maxPoints: z.coerce
+      .number()
+      .int('A whole number')
+      .min(10, 'At least 10')
+      .max(MAX_SERIES_POINTS, `At most ${MAX_SERIES_POINTS}`)
+      .default(DEFAULT_SERIES_POINTS),
+    from: z.coerce.number().min(0, 'At least 0 s').optional(),
+    to: z.coerce.number().min(0, 'At least 0 s').optional(),
+  })
+  .refine((q) => q.from === undefined || q.to === undefined || q.to > q.from, { path: ['to'], message: 'Must be later than from' });
+export type RunSeriesQuery = z.infer<typeof runSeriesQuery>;
+
+const trace = z.object({ t: z.array(z.number()), y: z.array(z.number()) });
+export const runSeriesResponse = z.object({
+  runId: z.number().int(),
+  kind: RUN_KIND.schema,
+  /** The whole run, s. */
+  range: z.object({ fromS: z.number(), toS: z.number() }),
+  /** The window returned, s. */
+  window: z.object({ fromS: z.number(), toS: z.number() }),
+  /** Samples in the window on the server; each trace has at most maxPoints of them (LTTB). */
+  samplesInWindow: z.number().int(),
+  maxPoints: z.number().int(),
+  traces: z.object({ v: trace.optional(), i: trace.optional(), p: trace.optional(), temp: trace.optional() }),
+  units: z.object({ t: z.literal('s'), v: z.literal('V'), i: z.literal('A'), p: z.literal('W'), temp: z.literal('°C') }),
+});
+export type RunSeries = z.infer<typeof runSeriesResponse>;
+
+export const runPreviewResponse = z.object({
+  delimiter: RUN_DELIMITER.schema,
+  decimalComma: z.boolean(),
+  headerRow: z.number().int(),
+  columns: z.array(z.string()),
+  /** The first data rows (at most 20), as text. */
+  rows: z.array(z.array(z.string())),
+  /** A first guess at the mapping, for the user to check. */
+  guess: z.object({
+    kind: RUN_KIND.schema,
+    time: mapped(TIME_UNIT.schema).optional(),
+    voltage: mapped(VOLTAGE_UNIT.schema).optional(),
+    current: mapped(CURRENT_UNIT.schema).optional(),
+    power: mapped(POWER_UNIT.schema).optional(),
+    temperature: mapped(TEMPERATURE_UNIT.schema).optional(),
+  }),
+});
+export type RunPreview = z.infer<typeof runPreviewResponse>;
+
+/** Bytes of the start of a file the preview needs; the web app sends only this much. */
+export const RUN_PREVIEW_BYTES = 64 * 1024;
