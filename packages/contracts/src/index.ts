@@ -7,3 +7,8 @@ export * from './admin';
 export * from './domain';
 export * from './teardowns';
 export * from './settings';
+export * from './inputs';
+export * from './devices';
+export * from './findings';
+export * from './figures';
+export * from './cautions';

@@ -2,6 +2,9 @@
 import type { AppDeps } from '../http/deps';
 import type { RouteDef } from '../http/route';
 import { auditRoutes } from './audit/routes';
+import { deviceRoutes } from './devices/routes';
+import { figureRoutes } from './figures/routes';
+import { findingRoutes } from './findings/routes';
 import { authRoutes } from './auth/routes';
 import { mailRoutes } from './mail/routes';
 import { settingsRoutes } from './settings/routes';
@@ -10,5 +13,5 @@ import { teardownRoutes } from './teardowns/routes';
 import { userRoutes } from './users/routes';
 
 export function allRoutes(deps: AppDeps, version: string): RouteDef[] {
-  return [...systemRoutes(version), ...authRoutes(deps), ...userRoutes, ...mailRoutes, ...auditRoutes, ...settingsRoutes, ...teardownRoutes];
+  return [...systemRoutes(version), ...authRoutes(deps), ...userRoutes, ...mailRoutes, ...auditRoutes, ...settingsRoutes, ...teardownRoutes, ...deviceRoutes, ...findingRoutes, ...figureRoutes];
 }

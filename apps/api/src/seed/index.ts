@@ -4,11 +4,13 @@ import { UserSchema } from '../modules/users/user.entity';
 import type { SeedContext, SeedStep } from './context';
 import { DEMO_USERS, demoEmail, seedUsers } from './users';
 import { seedWorkspace } from './workspace';
+import { seedFindings } from './findings';
 
 /** Seed steps in order. Later features append their step here. */
 export const SEED_STEPS: SeedStep[] = [
   { name: 'users', run: seedUsers },
   { name: 'workspace', run: seedWorkspace },
+  { name: 'findings', run: seedFindings },
 ];
 
 /** Seeds the invented demo workspace when the database has no users. Returns whether it seeded. */
