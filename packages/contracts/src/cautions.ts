@@ -4,6 +4,8 @@
 /** Before opening a device with a lithium cell (or one that may have one). */
 export const LITHIUM_CELL_CAUTION = {
   title: 'Lithium cell: before you open the case',
+  /** The points in one line, for places where the full list is one click away. */
+  summary: 'Discharge it first; no puncturing or bending pouch cells; insulated tools; a fire-safe surface; stop at any swelling.',
   points: [
     'Discharge the cell first (about 3.0 V per cell for Li-ion) and measure it before cutting or desoldering anything.',
     'Do not puncture, bend or crush pouch cells; lift them with plastic tools, never a blade or a screwdriver.',

@@ -2,7 +2,7 @@
 // section, its icon, the component (lazy) and whether the figures panel stays beside it.
 import { lazy, type ComponentType, type LazyExoticComponent } from 'react';
 import type { LucideIcon } from 'lucide-react';
-import { FileText } from 'lucide-react';
+import { FileText, History, Lightbulb, MessageSquare } from 'lucide-react';
 import type { TeardownDto } from '@splitcase/contracts';
 import type { TeardownSection } from '@/config/paths';
 
@@ -26,5 +26,26 @@ export const SECTIONS: SectionDef[] = [
     icon: FileText,
     Component: lazy(() => import('@/features/teardowns/components/overview-section').then((m) => ({ default: m.OverviewSection }))),
     withFigures: true,
+  },
+  {
+    id: 'findings',
+    label: 'Findings',
+    icon: Lightbulb,
+    Component: lazy(() => import('@/features/findings/components/findings-section').then((m) => ({ default: m.FindingsSection }))),
+    withFigures: true,
+  },
+  {
+    id: 'comments',
+    label: 'Comments',
+    icon: MessageSquare,
+    Component: lazy(() => import('@/features/teardowns/components/comments-section').then((m) => ({ default: m.CommentsSection }))),
+    withFigures: false,
+  },
+  {
+    id: 'history',
+    label: 'History',
+    icon: History,
+    Component: lazy(() => import('@/features/teardowns/components/history-section').then((m) => ({ default: m.HistorySection }))),
+    withFigures: false,
   },
 ];

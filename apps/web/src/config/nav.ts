@@ -1,6 +1,6 @@
 import type { Role } from '@splitcase/contracts';
 import type { LucideIcon } from 'lucide-react';
-import { House, ShieldCheck } from 'lucide-react';
+import { Boxes, House, ShieldCheck } from 'lucide-react';
 import { paths } from './paths';
 
 export interface NavItem {
@@ -18,6 +18,7 @@ const ALL = 'all' as const;
 export const NAV: NavItem[] = [
   { label: 'Home', to: paths.home(), icon: House, roles: ALL },
   { label: 'Admin', to: paths.admin.users(), icon: ShieldCheck, roles: ['admin'], prefix: '/admin' },
+  { label: 'Devices', to: paths.devices(), icon: Boxes, roles: ALL, prefix: '/devices' },
 ];
 
 export const navFor = (role: Role) => NAV.filter((n) => n.roles === 'all' || n.roles.includes(role));

@@ -9,6 +9,8 @@ export const paths = {
   acceptInvitation: () => '/accept-invitation',
   devices: () => '/devices',
   device: (id: number) => `/devices/${id}`,
+  newDevice: () => '/devices/new',
+  editDevice: (id: number) => `/devices/${id}/edit`,
   teardown: (id: number, section: TeardownSection = 'overview') => (section === 'overview' ? `/teardowns/${id}` : `/teardowns/${id}/${section}`),
   admin: {
     users: () => '/admin/users',

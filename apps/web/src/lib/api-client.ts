@@ -59,6 +59,8 @@ export interface RequestOptions {
   form?: FormData;
   /** Return the raw Response (downloads). */
   raw?: boolean;
+  /** Extra request headers (e.g. the confirm-unpublish header, see lib/unpublish-confirm.ts). */
+  headers?: Record<string, string>;
 }
 
 export function buildUrl(path: string, query?: RequestOptions['query']): string {
@@ -73,7 +75,7 @@ export function buildUrl(path: string, query?: RequestOptions['query']): string 
 }
 
 async function request<T>(method: string, path: string, opts: RequestOptions = {}, retried = false): Promise<T> {
-  const headers: Record<string, string> = { Accept: 'application/json' };
+  const headers: Record<string, string> = { Accept: 'application/json', ...opts.headers };
   const changing = method !== 'GET';
   if (changing) headers['X-CSRF-Token'] = await getCsrfToken();
   let body: BodyInit | undefined;
