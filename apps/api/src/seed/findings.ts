@@ -1,11 +1,13 @@
 // Demo findings, comments and review history for every demo teardown, coherent with each device's
 // design in scenario.ts. Invented wording. Parts are linked when the parts step has recorded them
-// (matched by category and description); without parts the findings stand alone.
+// (matched by category and description), photos when the photos step has made them (matched by
+// caption); without them the findings stand alone.
 import type { FindingKind, PartCategory, Role, Severity } from '@splitcase/contracts';
 import { AuditEntrySchema } from '../modules/audit/audit-entry.entity';
 import { findingSummary } from '../modules/findings/finding.service';
 import { FindingSchema } from '../modules/findings/finding.entity';
 import { PartSchema, type Part } from '../modules/parts/part.entity';
+import { PhotoSchema } from '../modules/photos/photo.entity';
 import { CommentSchema } from '../modules/teardowns/comment.entity';
 import { SuggestionDecisionSchema } from '../modules/teardowns/suggestion-decision.entity';
 import { TeardownSchema, type Teardown } from '../modules/teardowns/teardown.entity';
@@ -24,6 +26,8 @@ interface DemoFinding {
   parts?: { category: PartCategory; match?: RegExp }[];
   /** Accepted from this suggested-finding rule. */
   suggestionKey?: string;
+  /** Photos to link, by a word of their caption (when the photos step has made any). */
+  photos?: RegExp;
 }
 
 interface DemoEvent {
@@ -42,6 +46,7 @@ const FINDINGS: Record<string, DemoFinding[]> = {
       text: 'No temperature sensor anywhere: not on the board, not on either heater flex. The three heat levels are fixed PWM duties, so nothing limits the surface temperature when the heater is covered or pressed against skin. We saw 55 °C on the highest level after 10 minutes in free air.',
       tags: ['thermal', 'sensing'],
       parts: [{ category: 'heater' }, { category: 'ic', match: /micro|mcu|controller/i }],
+      photos: /heater|flex/i,
     },
     {
       kind: 'user-experience',
@@ -64,6 +69,7 @@ const FINDINGS: Record<string, DemoFinding[]> = {
       text: 'Cell tabs are spot-welded to nickel strip, not soldered: no heat goes into the can during assembly and the joint stays low-resistance at the 2.4 A heater current.',
       tags: ['cell-joining', 'assembly'],
       parts: [{ category: 'cell' }],
+      photos: /cell|tab|weld/i,
     },
     {
       kind: 'clever-idea',
@@ -71,6 +77,7 @@ const FINDINGS: Record<string, DemoFinding[]> = {
       text: 'One bidirectional buck-boost IC with a single shared inductor does both the USB charging (buck) and the 5 V power-bank output (boost): one IC and one inductor where most designs use a charger plus a separate boost stage.',
       tags: ['power-path', 'bom-reduction'],
       parts: [{ category: 'ic', match: /buck|boost|charg/i }, { category: 'inductor' }],
+      photos: /board|pcb|inductor/i,
     },
     {
       kind: 'cost-down',
@@ -413,6 +420,7 @@ export async function seedFindings(ctx: SeedContext): Promise<void> {
     audit(day('T09:00'), author, 'teardown.created', 'teardown', t.id, `Started a teardown of ${d.maker} ${d.model} (${t.unitLabel ?? 'unit'}) dated ${t.date}`);
 
     const parts = await em.find(PartSchema, { teardown: t.id }, { orderBy: { position: 'asc', id: 'asc' } });
+    const photos = await em.find(PhotoSchema, { teardown: t.id }, { orderBy: { layer: 'asc', step: 'asc', id: 'asc' } });
     let minute = 0;
     for (const f of FINDINGS[d.key] ?? []) {
       const at = new Date(day('T09:30').getTime() + minute * 60_000);
@@ -429,6 +437,7 @@ export async function seedFindings(ctx: SeedContext): Promise<void> {
         updatedAt: at,
       } as never);
       finding.parts.set(pickParts(parts, f.parts));
+      if (f.photos) finding.photos.set(photos.filter((p) => f.photos!.test(p.caption ?? '')).slice(0, 2));
       await em.flush();
       if (f.suggestionKey) {
         em.create(SuggestionDecisionSchema, { teardown: t, key: f.suggestionKey, status: 'accepted', findingId: finding.id, decidedBy: author, decidedAt: at } as never);

@@ -11,14 +11,15 @@ const PREFIXES: [number, string][] = [
   [1e-12, 'p'],
 ];
 
-/** Significant-figure rounding without exponent notation for everyday magnitudes. */
+/** Significant-figure rounding without exponent notation for everyday magnitudes (keeps trailing zeros: 2.70). */
 export function sig(value: number, digits = 3): string {
   if (!Number.isFinite(value)) return '—';
   if (value === 0) return '0';
-  const magnitude = Math.floor(Math.log10(Math.abs(value)));
-  const decimals = Math.max(0, digits - 1 - magnitude);
-  const rounded = Number(value.toFixed(Math.min(decimals, 12)));
-  return rounded.toLocaleString('en-GB', { maximumFractionDigits: Math.min(decimals, 12), useGrouping: Math.abs(rounded) >= 10000 });
+  // Round first: the magnitude can change in rounding (9.9995 → 10.0).
+  const rounded = Number(value.toPrecision(digits));
+  const magnitude = Math.floor(Math.log10(Math.abs(rounded)));
+  const decimals = Math.min(Math.max(0, digits - 1 - magnitude), 12);
+  return rounded.toLocaleString('en-GB', { minimumFractionDigits: decimals, maximumFractionDigits: decimals, useGrouping: Math.abs(rounded) >= 10000 });
 }
 
 /** Units that take SI prefixes when shown. Others (%, °C, h, Wh/kg, W/cm²) are shown as they are. */

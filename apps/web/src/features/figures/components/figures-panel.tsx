@@ -29,6 +29,7 @@ const ENERGY_UNITS = new Set(['W', 'Wh', 'Ah', 'h', 'Wh/kg', 'A', 'W/cm²']);
 
 export function figureValue(value: number | string, unit: string): string {
   if (typeof value === 'string') return VALUE_WORDS[value] ?? value;
+  if (unit === '' && Number.isInteger(value)) return String(value);
   return formatQuantity(value, unit);
 }
 
@@ -36,7 +37,8 @@ function inputValue(i: FigureInputDto): string {
   if (i.value === null) return '—';
   if (typeof i.value === 'boolean') return i.value ? 'yes' : 'no';
   if (typeof i.value === 'string') return VALUE_WORDS[i.value] ?? i.value;
-  return i.unit ? formatQuantity(i.value, i.unit) : sig(i.value);
+  if (i.unit) return formatQuantity(i.value, i.unit);
+  return Number.isInteger(i.value) ? String(i.value) : sig(i.value);
 }
 
 /** Figures grouped by what they describe (the key's first word). */

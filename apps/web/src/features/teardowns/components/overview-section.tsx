@@ -70,7 +70,7 @@ function RecordView({ teardown: t }: { teardown: TeardownDto }) {
           <dd>{t.unitLabel ?? '—'}</dd>
         </div>
         <div>
-          <dt className="text-graphite-500">Contact time for touch figures</dt>
+          <dt className="text-graphite-500">Touch contact time</dt>
           <dd className="num">{t.contactSeconds === null ? 'Workspace default' : `${t.contactSeconds} s`}</dd>
         </div>
         <div className="sm:col-span-3">
