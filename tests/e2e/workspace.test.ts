@@ -33,6 +33,18 @@ async function recordPowerSystem(teardownId: number) {
 
 const figure = (page: Page, label: string) => page.locator('aside[aria-label="Figures"] li', { has: page.getByRole('button', { name: new RegExp(`^${label}`) }) }).getByTestId('figure-value');
 
+describe('left rail', () => {
+  it('every role has Devices in the rail', async () => {
+    for (const role of ['admin', 'engineer', 'sourcing', 'lead', 'viewer']) {
+      const page = await signedInPage(browser, role);
+      await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Devices', exact: true }).click();
+      await page.getByRole('heading', { name: 'Devices' }).waitFor();
+      await expect(page.getByRole('button', { name: 'New device' }).count(), role).resolves.toBe(role === 'engineer' || role === 'admin' ? 1 : 0);
+      await page.context().close();
+    }
+  });
+});
+
 describe('teardown workspace', () => {
   let teardownUrl = '';
 
@@ -42,10 +54,11 @@ describe('teardown workspace', () => {
     await page.getByRole('heading', { name: 'Devices' }).waitFor();
     await page.getByRole('row', { name: /HandGlow Duo 10/ }).waitFor();
     await page.getByRole('button', { name: 'New device' }).click();
+    await page.getByRole('heading', { name: 'New device' }).waitFor();
 
-    await page.getByLabel('Maker').fill('Testwright');
-    await page.getByLabel('Model').fill('Pocketwarm E2E');
-    await page.getByLabel('Category').selectOption('pocket-heater');
+    await page.getByLabel('Maker', { exact: true }).fill('Testwright');
+    await page.getByLabel('Model', { exact: true }).fill('Pocketwarm E2E');
+    await page.getByLabel('Category', { exact: true }).selectOption('pocket-heater');
     await page.getByLabel('Retail price').fill('19.50');
     await page.getByLabel('Currency').fill('usd');
     await page.getByLabel('Capacity on the label').fill('4000 bananas');
