@@ -19,6 +19,8 @@ export async function setup(project: TestProject) {
   running = await startServer(env, { seed: true, webDist, log: () => {} });
   env.publicUrl = running.url;
   project.provide('baseUrl', running.url);
+  // Browser tests may add records the UI of their branch cannot make yet (e.g. a power system).
+  project.provide('dbPath', env.dbPath);
 }
 
 export async function teardown() {
@@ -29,5 +31,6 @@ export async function teardown() {
 declare module 'vitest' {
   export interface ProvidedContext {
     baseUrl: string;
+    dbPath: string;
   }
 }

@@ -14,3 +14,8 @@ export * from './power';
 export * from './measurements';
 export * from './cost';
 export * from './runs';
+export * from './inputs';
+export * from './devices';
+export * from './findings';
+export * from './figures';
+export * from './cautions';

@@ -5,11 +5,12 @@ import { z } from 'zod';
 import { CHEMISTRY, CONNECTION, CONVERTER_ROLE, CONVERTER_TOPOLOGY, JOINING, LOAD_KIND, SURFACE_MATERIAL } from './domain';
 
 /** A number (SI) or text with a unit. Blank or null clears an optional value. */
-export const quantityInput = z.union([z.number(), z.string().trim().max(40, 'At most 40 characters')], {
+/** A number in SI or a value with its unit ("2700 mAh"), parsed by the server. */
+const powerQuantity = z.union([z.number(), z.string().trim().max(40, 'At most 40 characters')], {
   error: (issue) => (issue.input === undefined ? 'Required' : 'Enter a number or a value with its unit'),
 });
-const required = quantityInput;
-const optional = quantityInput.nullable().optional();
+const required = powerQuantity;
+const optional = powerQuantity.nullable().optional();
 
 const choice = <T extends readonly [string, ...string[]]>(values: T) => z.enum(values, { error: `Choose one of: ${values.join(', ')}` });
 
@@ -36,8 +37,8 @@ export const packBody = z.object({
   capacityAh: required,
   /** Measured capacity of one cell. */
   measuredCapacityAh: optional,
-  series: quantityInput.default(1),
-  parallel: quantityInput.default(1),
+  series: powerQuantity.default(1),
+  parallel: powerQuantity.default(1),
   /** Mass of the whole pack. */
   massKg: optional,
   protection: z.boolean({ error: 'Yes or no' }).default(false),
@@ -129,10 +130,10 @@ const loadFields = {
   powerWatts: optional,
   /** Voltage across the load; absent: the converter's output or the pack's nominal voltage. */
   supplyVolts: optional,
-  count: quantityInput,
+  count: powerQuantity,
   connection: choice(CONNECTION.values),
   /** PWM duty 0..1, or "60 %". */
-  duty: quantityInput,
+  duty: powerQuantity,
   /** The converter the load is fed through (same teardown); null: straight from the pack. */
   converterId: z.number({ error: 'Choose a converter of this teardown' }).int().positive().nullable().optional(),
   /** Area that sheds the heat. */

@@ -1,5 +1,8 @@
 import { z } from 'zod';
-import { DEVICE_CATEGORY, TEARDOWN_STATUS } from './domain';
+import { auditEntrySchema } from './admin';
+import { text } from './common';
+import { CHEMISTRY, DEVICE_CATEGORY, TEARDOWN_STATUS } from './domain';
+import { calendarDay, clearableNumber, clearableText } from './inputs';
 
 /** What the signed-in user may do with a teardown (computed by the server). */
 export const teardownPermissionsSchema = z.object({
@@ -26,6 +29,8 @@ export const teardownSchema = z.object({
   lastReviewNote: z.string().nullable(),
   updatedAt: z.string(),
   permissions: teardownPermissionsSchema,
+  /** The recorded cells, if any: lets the pages place the lithium cautions where they matter. */
+  cell: z.object({ chemistry: CHEMISTRY.schema, lithium: z.boolean() }).nullable().default(null),
 });
 export type TeardownDto = z.infer<typeof teardownSchema>;
 export const teardownResponse = z.object({ teardown: teardownSchema });
@@ -35,3 +40,71 @@ export const teardownResponse = z.object({ teardown: teardownSchema });
  * (`details.reason = 'published'`) unless the request carries this header with the value `yes`.
  */
 export const CONFIRM_UNPUBLISH_HEADER = 'X-Confirm-Unpublish';
+
+const teardownFields = {
+  date: calendarDay,
+  unitLabel: clearableText(80),
+  summary: clearableText(20_000),
+  safetyNotes: clearableText(5_000),
+  /** Contact time for the touch-temperature figures (s); empty = the workspace default. */
+  contactSeconds: clearableNumber({ min: 1, max: 28_800, integer: true, what: 'a contact time in seconds, such as 60' }),
+};
+
+/** POST /api/teardowns: start a teardown of a device (the date defaults to today). */
+export const createTeardownBody = z.object({
+  deviceId: z.coerce.number({ error: 'Choose a device' }).int().positive('Choose a device'),
+  ...teardownFields,
+  date: calendarDay.optional(),
+});
+export type CreateTeardownBody = z.infer<typeof createTeardownBody>;
+export type CreateTeardownForm = z.input<typeof createTeardownBody>;
+
+/** PATCH /api/teardowns/:id: the version the edit started from, and any subset of the fields. */
+export const updateTeardownBody = z
+  .object({
+    version: z.number({ error: 'Send the version you edited' }).int().positive(),
+    date: teardownFields.date.optional(),
+    unitLabel: teardownFields.unitLabel,
+    summary: teardownFields.summary,
+    safetyNotes: teardownFields.safetyNotes,
+    contactSeconds: teardownFields.contactSeconds,
+  })
+  .refine((b) => Object.entries(b).some(([k, v]) => k !== 'version' && v !== undefined), { message: 'Change at least one field' });
+export type UpdateTeardownBody = z.infer<typeof updateTeardownBody>;
+export type UpdateTeardownForm = z.input<typeof updateTeardownBody>;
+
+/** Teardown fields the overview edits, with their labels (used to show a version conflict field by field). */
+export const TEARDOWN_FIELD_LABELS = {
+  date: 'Date opened',
+  unitLabel: 'Unit',
+  contactSeconds: 'Contact time for touch figures',
+  summary: 'Summary',
+  safetyNotes: 'Safety notes',
+} as const;
+export type TeardownEditableField = keyof typeof TEARDOWN_FIELD_LABELS;
+
+/** Body of a stale-version 409 on a teardown: the record as it is now. */
+export const teardownConflictDetails = z.object({ current: teardownSchema });
+
+export const submitTeardownBody = z.object({ note: clearableText(5_000) });
+export const approveTeardownBody = z.object({ note: clearableText(5_000) });
+export const sendBackTeardownBody = z.object({ comment: text(5_000) });
+export type SendBackTeardownBody = z.infer<typeof sendBackTeardownBody>;
+
+export const COMMENT_KIND = ['comment', 'submitted', 'sent-back', 'approved'] as const;
+export type CommentKind = (typeof COMMENT_KIND)[number];
+export const commentSchema = z.object({
+  id: z.number().int(),
+  kind: z.enum(COMMENT_KIND),
+  body: z.string(),
+  author: z.object({ id: z.number().int(), name: z.string() }).nullable(),
+  createdAt: z.string(),
+});
+export type CommentDto = z.infer<typeof commentSchema>;
+export const commentsResponse = z.object({ comments: z.array(commentSchema) });
+export const commentResponse = z.object({ comment: commentSchema });
+export const createCommentBody = z.object({ body: text(5_000) });
+export type CreateCommentBody = z.infer<typeof createCommentBody>;
+
+/** GET /api/teardowns/:id/history: the audit entries scoped to the teardown, newest first. */
+export const teardownHistoryResponse = z.object({ entries: z.array(auditEntrySchema) });

@@ -2,6 +2,9 @@
 import type { AppDeps } from '../http/deps';
 import type { RouteDef } from '../http/route';
 import { auditRoutes } from './audit/routes';
+import { deviceRoutes } from './devices/routes';
+import { figureRoutes } from './figures/routes';
+import { findingRoutes } from './findings/routes';
 import { authRoutes } from './auth/routes';
 import { costRoutes } from './cost/routes';
 import { mailRoutes } from './mail/routes';
@@ -25,6 +28,9 @@ export function allRoutes(deps: AppDeps, version: string): RouteDef[] {
     ...auditRoutes,
     ...settingsRoutes,
     ...teardownRoutes,
+    ...deviceRoutes,
+    ...findingRoutes,
+    ...figureRoutes,
     ...photoRoutes(deps),
     ...toolRoutes,
     ...partRoutes,

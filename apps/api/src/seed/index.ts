@@ -8,6 +8,7 @@ import { seedBom } from './bom';
 import { seedPhotos } from './photos';
 import { seedCost } from './cost';
 import { seedRuns } from './runs';
+import { seedFindings } from './findings';
 
 /** Seed steps in order. Later features append their step here. */
 export const SEED_STEPS: SeedStep[] = [
@@ -17,6 +18,7 @@ export const SEED_STEPS: SeedStep[] = [
   { name: 'photos', run: seedPhotos },
   { name: 'cost', run: seedCost },
   { name: 'runs', run: seedRuns },
+  { name: 'findings', run: seedFindings },
 ];
 
 /** Seeds the invented demo workspace when the database has no users. Returns whether it seeded. */

@@ -2,6 +2,7 @@ import { useEffect } from 'react';
 import { QueryClientProvider } from '@tanstack/react-query';
 import { RouterProvider } from 'react-router/dom';
 import { Toaster } from 'sonner';
+import { ConfirmHost } from '@/components/dialog';
 import { onUnauthenticated } from '@/lib/api-client';
 import { meKey } from '@/lib/session';
 import { queryClient } from './query-client';
@@ -13,6 +14,7 @@ export function App() {
   return (
     <QueryClientProvider client={queryClient}>
       <RouterProvider router={router} />
+      <ConfirmHost />
       <Toaster position="bottom-right" richColors closeButton toastOptions={{ className: 'font-sans' }} />
     </QueryClientProvider>
   );

@@ -2,11 +2,7 @@
 // section, its icon, the component (lazy) and whether the figures panel stays beside it.
 import { lazy, type ComponentType, type LazyExoticComponent } from 'react';
 import type { LucideIcon } from 'lucide-react';
-import { FileText } from 'lucide-react';
-import { Camera } from 'lucide-react';
-import { Gauge, ListTree, Zap } from 'lucide-react';
-import { Calculator } from 'lucide-react';
-import { Activity } from 'lucide-react';
+import { Activity, Calculator, Camera, FileText, Gauge, History, Lightbulb, ListTree, MessageSquare, Zap } from 'lucide-react';
 import type { TeardownDto } from '@splitcase/contracts';
 import type { TeardownSection } from '@/config/paths';
 
@@ -23,6 +19,23 @@ export interface SectionDef {
   withFigures: boolean;
 }
 
+// Parts and findings show the photo pins that point at them (the photos feature's PinsFor).
+const PartsWithPins = lazy(async () => {
+  const [{ PartsSection }, { PinsFor }] = await Promise.all([import('@/features/parts/components/parts-section'), import('@/features/photos/components/pins-for')]);
+  return {
+    default: ({ teardown }: SectionProps) => <PartsSection teardown={teardown} renderPartExtras={(partId) => <PinsFor teardownId={teardown.id} partId={partId} />} />,
+  };
+});
+
+const FindingsWithPins = lazy(async () => {
+  const [{ FindingsSection }, { PinsFor }] = await Promise.all([import('@/features/findings/components/findings-section'), import('@/features/photos/components/pins-for')]);
+  return {
+    default: ({ teardown }: SectionProps) => (
+      <FindingsSection teardown={teardown} renderFindingExtras={(findingId) => <PinsFor teardownId={teardown.id} findingId={findingId} />} />
+    ),
+  };
+});
+
 export const SECTIONS: SectionDef[] = [
   {
     id: 'overview',
@@ -38,13 +51,7 @@ export const SECTIONS: SectionDef[] = [
     Component: lazy(() => import('@/features/photos/components/photos-section').then((m) => ({ default: m.PhotosSection }))),
     withFigures: false,
   },
-  {
-    id: 'parts',
-    label: 'Parts',
-    icon: ListTree,
-    Component: lazy(() => import('@/features/parts/components/parts-section').then((m) => ({ default: m.PartsSection }))),
-    withFigures: true,
-  },
+  { id: 'parts', label: 'Parts', icon: ListTree, Component: PartsWithPins, withFigures: true },
   {
     id: 'power',
     label: 'Power system',
@@ -66,11 +73,26 @@ export const SECTIONS: SectionDef[] = [
     Component: lazy(() => import('@/features/runs/components/runs-section').then((m) => ({ default: m.RunsSection }))),
     withFigures: true,
   },
+  { id: 'findings', label: 'Findings', icon: Lightbulb, Component: FindingsWithPins, withFigures: true },
   {
     id: 'cost',
     label: 'Cost',
     icon: Calculator,
     Component: lazy(() => import('@/features/cost/components/cost-section').then((m) => ({ default: m.CostSection }))),
+    withFigures: false,
+  },
+  {
+    id: 'comments',
+    label: 'Comments',
+    icon: MessageSquare,
+    Component: lazy(() => import('@/features/teardowns/components/comments-section').then((m) => ({ default: m.CommentsSection }))),
+    withFigures: false,
+  },
+  {
+    id: 'history',
+    label: 'History',
+    icon: History,
+    Component: lazy(() => import('@/features/teardowns/components/history-section').then((m) => ({ default: m.HistorySection }))),
     withFigures: false,
   },
 ];

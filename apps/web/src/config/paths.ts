@@ -13,6 +13,8 @@ export const paths = {
   acceptInvitation: () => '/accept-invitation',
   devices: () => '/devices',
   device: (id: number) => `/devices/${id}`,
+  newDevice: () => '/devices/new',
+  editDevice: (id: number) => `/devices/${id}/edit`,
   teardown: (id: number, section: TeardownSection = 'overview') => (section === 'overview' ? `/teardowns/${id}` : `/teardowns/${id}/${section}`),
   teardownRun: (teardownId: number, runId: number) => `/teardowns/${teardownId}/runs?run=${runId}`,
   benchRuns: () => '/bench/runs',

@@ -3,8 +3,8 @@ import type { AuthUser } from '../../http/route';
 import { permissionsFor } from './access';
 import type { Teardown } from './teardown.entity';
 
-/** Teardown → DTO (device and engineer must be loaded). */
-export function toTeardownDto(t: Teardown, user: AuthUser): TeardownDto {
+/** Teardown → DTO (device and engineer must be loaded). `cell` comes from the pack, when one is recorded. */
+export function toTeardownDto(t: Teardown, user: AuthUser, cell: TeardownDto['cell'] = null): TeardownDto {
   return {
     id: t.id,
     device: { id: t.device.id, maker: t.device.maker, model: t.device.model, category: t.device.category },
@@ -21,5 +21,6 @@ export function toTeardownDto(t: Teardown, user: AuthUser): TeardownDto {
     lastReviewNote: t.lastReviewNote ?? null,
     updatedAt: t.updatedAt.toISOString(),
     permissions: permissionsFor(user),
+    cell,
   };
 }

@@ -6,7 +6,9 @@ import { Spinner } from '@/components/page';
 import { StatusBadge } from '@/components/status';
 import { paths, type TeardownSection } from '@/config/paths';
 import { formatDate } from '@/lib/format';
+import { FiguresPanel } from '@/features/figures/components/figures-panel';
 import { useTeardown } from '@/features/teardowns/api/get-teardown';
+import { ReviewActions } from '@/features/teardowns/components/review-actions';
 import { SECTIONS } from '../teardown-sections';
 
 /** The teardown workspace: header, section rail, the section being edited, and the figures panel beside it. */
@@ -48,6 +50,7 @@ export function Component() {
             </span>
           </div>
         </div>
+        <ReviewActions teardown={t} />
       </header>
       <div className="grid gap-6 xl:grid-cols-[10rem_minmax(0,1fr)_20rem] lg:grid-cols-[10rem_minmax(0,1fr)]">
         <nav aria-label="Teardown sections" className="no-print">
@@ -75,6 +78,15 @@ export function Component() {
             </Suspense>
           </WidgetBoundary>
         </div>
+        {section.withFigures && (
+          <div className="min-w-0 lg:col-start-2 xl:col-start-auto">
+            <div className="xl:sticky xl:top-4">
+              <WidgetBoundary name="figures">
+                <FiguresPanel teardownId={t.id} canEdit={t.permissions.edit} />
+              </WidgetBoundary>
+            </div>
+          </div>
+        )}
       </div>
     </div>
   );

@@ -1,0 +1,139 @@
+import { findingResponse, figuresResponse, idParam, suggestionParams, suggestionResponse } from '@splitcase/contracts';
+import { AppError, notFound } from '../../http/errors';
+import { route, type RouteDef } from '../../http/route';
+import { recordAudit } from '../audit/audit.service';
+import { createFinding, FINDING_POPULATE, toFindingDto } from '../findings/finding.service';
+import { UserSchema } from '../users/user.entity';
+import { CONTENT_EDITORS, editableTeardown, readableTeardown } from '../teardowns/access';
+import { SuggestionDecisionSchema } from '../teardowns/suggestion-decision.entity';
+import { teardownFiguresFor } from './figures.service';
+
+export const figureRoutes: RouteDef[] = [
+  route(
+    {
+      method: 'get',
+      path: '/api/teardowns/:id/figures',
+      tag: 'Figures',
+      summary: 'Derived figures (value, unit, formula, source, inputs, assumptions, warnings) and suggested findings, computed from the stored records',
+      access: 'signed-in',
+      params: idParam,
+      response: figuresResponse,
+    },
+    async ({ em, user, params }) => {
+      const t = await readableTeardown(em, user, params.id);
+      const { figures, suggestions, note } = await teardownFiguresFor(em, t);
+      return { figures, suggestions, note };
+    },
+  ),
+  route(
+    {
+      method: 'post',
+      path: '/api/teardowns/:id/suggestions/:key/accept',
+      tag: 'Figures',
+      summary: 'Accept a suggested finding: it becomes a finding (kind, severity, text = the suggestion detail)',
+      access: CONTENT_EDITORS,
+      params: suggestionParams,
+      response: findingResponse,
+      status: 201,
+    },
+    async (ctx) => {
+      const { em, user, params } = ctx;
+      const t = await editableTeardown(ctx, params.id);
+      const { raw } = await teardownFiguresFor(em, t);
+      const s = raw.suggestions.find((x) => x.key === params.key);
+      if (!s) throw notFound(`The suggestion "${params.key}" (the records of this teardown do not raise it)`);
+      const decision = await em.findOne(SuggestionDecisionSchema, { teardown: t.id, key: s.key });
+      if (decision?.status === 'accepted') {
+        throw new AppError('conflict', `This suggestion was already accepted as finding #${decision.findingId}.`, undefined, { findingId: decision.findingId });
+      }
+      const finding = await em.transactional(async (tx) => {
+        const f = await createFinding(tx, user, t, { kind: s.kind, severity: s.severity, text: s.detail, tags: [s.key.split('.')[0]!, 'suggested'], suggestionKey: s.key });
+        if (decision) {
+          decision.status = 'accepted';
+          decision.findingId = f.id;
+          decision.decidedBy = tx.getReference(UserSchema, user.id);
+          decision.decidedAt = new Date();
+        } else {
+          tx.create(SuggestionDecisionSchema, { teardown: t, key: s.key, status: 'accepted', findingId: f.id, decidedBy: tx.getReference(UserSchema, user.id) } as never);
+        }
+        recordAudit(tx, user, {
+          action: 'suggestion.accepted',
+          entityType: 'suggestion',
+          entityId: s.key,
+          scope: { type: 'teardown', id: t.id },
+          summary: `Accepted the suggestion "${s.title}" as finding #${f.id}`,
+        });
+        return f;
+      });
+      await em.populate(finding, [...FINDING_POPULATE]);
+      return { finding: toFindingDto(finding) };
+    },
+  ),
+  route(
+    {
+      method: 'post',
+      path: '/api/teardowns/:id/suggestions/:key/dismiss',
+      tag: 'Figures',
+      summary: 'Dismiss a suggested finding (remembered; reopen undoes it)',
+      access: CONTENT_EDITORS,
+      params: suggestionParams,
+      response: suggestionResponse,
+    },
+    async (ctx) => {
+      const { em, user, params } = ctx;
+      const t = await editableTeardown(ctx, params.id);
+      const figures = await teardownFiguresFor(em, t);
+      const s = figures.suggestions.find((x) => x.key === params.key);
+      if (!s) throw notFound(`The suggestion "${params.key}" (the records of this teardown do not raise it)`);
+      if (s.status === 'accepted') {
+        throw new AppError('conflict', `This suggestion was accepted as finding #${s.findingId}; delete that finding to reopen it.`, undefined, { findingId: s.findingId });
+      }
+      if (s.status === 'open') {
+        em.create(SuggestionDecisionSchema, { teardown: t, key: s.key, status: 'dismissed', decidedBy: em.getReference(UserSchema, user.id) } as never);
+        recordAudit(em, user, {
+          action: 'suggestion.dismissed',
+          entityType: 'suggestion',
+          entityId: s.key,
+          scope: { type: 'teardown', id: t.id },
+          summary: `Dismissed the suggestion "${s.title}"`,
+        });
+      }
+      await em.flush();
+      return { suggestion: { ...s, status: 'dismissed' as const, decidedBy: s.decidedBy ?? user.name, decidedAt: s.decidedAt ?? new Date().toISOString() } };
+    },
+  ),
+  route(
+    {
+      method: 'post',
+      path: '/api/teardowns/:id/suggestions/:key/reopen',
+      tag: 'Figures',
+      summary: 'Reopen a dismissed suggestion',
+      access: CONTENT_EDITORS,
+      params: suggestionParams,
+      response: suggestionResponse,
+    },
+    async (ctx) => {
+      const { em, user, params } = ctx;
+      const t = await editableTeardown(ctx, params.id);
+      const figures = await teardownFiguresFor(em, t);
+      const s = figures.suggestions.find((x) => x.key === params.key);
+      if (!s) throw notFound(`The suggestion "${params.key}" (the records of this teardown do not raise it)`);
+      if (s.status === 'accepted') {
+        throw new AppError('conflict', `This suggestion was accepted as finding #${s.findingId}; delete that finding to reopen it.`, undefined, { findingId: s.findingId });
+      }
+      if (s.status === 'dismissed') {
+        await em.transactional(async (tx) => {
+          await tx.nativeDelete(SuggestionDecisionSchema, { teardown: t.id, key: s.key });
+          recordAudit(tx, user, {
+            action: 'suggestion.reopened',
+            entityType: 'suggestion',
+            entityId: s.key,
+            scope: { type: 'teardown', id: t.id },
+            summary: `Reopened the suggestion "${s.title}"`,
+          });
+        });
+      } else await em.flush();
+      return { suggestion: { ...s, status: 'open' as const, decidedBy: null, decidedAt: null, findingId: null } };
+    },
+  ),
+];

@@ -1,0 +1,81 @@
+import { commentResponse, commentsResponse, createCommentBody, idParam, teardownHistoryResponse } from '@splitcase/contracts';
+import { route, type RouteDef } from '../../http/route';
+import { AuditEntrySchema } from '../audit/audit-entry.entity';
+import { recordAudit } from '../audit/audit.service';
+import { toAuditDto } from '../audit/routes';
+import { UserSchema } from '../users/user.entity';
+import { COMMENTERS, readableTeardown } from './access';
+import { CommentSchema, type Comment } from './comment.entity';
+
+export const toCommentDto = (c: Comment) => ({
+  id: c.id,
+  kind: c.kind,
+  body: c.body,
+  author: c.author ? { id: c.author.id, name: c.author.name } : null,
+  createdAt: c.createdAt.toISOString(),
+});
+
+export const commentRoutes: RouteDef[] = [
+  route(
+    {
+      method: 'get',
+      path: '/api/teardowns/:id/comments',
+      tag: 'Teardowns',
+      summary: 'Comments on a teardown, oldest first (review decisions are comments of their kind)',
+      access: 'signed-in',
+      params: idParam,
+      response: commentsResponse,
+    },
+    async ({ em, user, params }) => {
+      const t = await readableTeardown(em, user, params.id);
+      const rows = await em.find(CommentSchema, { teardown: t.id }, { orderBy: { createdAt: 'asc', id: 'asc' }, populate: ['author'] });
+      return { comments: rows.map(toCommentDto) };
+    },
+  ),
+  route(
+    {
+      method: 'post',
+      path: '/api/teardowns/:id/comments',
+      tag: 'Teardowns',
+      summary: 'Comment on a teardown (every role but viewer)',
+      access: COMMENTERS,
+      params: idParam,
+      body: createCommentBody,
+      response: commentResponse,
+      status: 201,
+    },
+    async ({ em, user, params, body }) => {
+      const t = await readableTeardown(em, user, params.id);
+      const comment = await em.transactional(async (tx) => {
+        const c = tx.create(CommentSchema, { teardown: t.id, author: tx.getReference(UserSchema, user.id), kind: 'comment', body: body.body } as never);
+        await tx.flush();
+        recordAudit(tx, user, {
+          action: 'comment.created',
+          entityType: 'comment',
+          entityId: c.id,
+          scope: { type: 'teardown', id: t.id },
+          summary: `Commented: ${body.body.length > 120 ? `${body.body.slice(0, 117)}…` : body.body}`,
+        });
+        return c;
+      });
+      await em.populate(comment, ['author']);
+      return { comment: toCommentDto(comment) };
+    },
+  ),
+  route(
+    {
+      method: 'get',
+      path: '/api/teardowns/:id/history',
+      tag: 'Teardowns',
+      summary: 'Every change to a teardown and its records (who, when, what), newest first',
+      access: 'signed-in',
+      params: idParam,
+      response: teardownHistoryResponse,
+    },
+    async ({ em, user, params }) => {
+      const t = await readableTeardown(em, user, params.id);
+      const rows = await em.find(AuditEntrySchema, { scopeType: 'teardown', scopeId: String(t.id) }, { orderBy: { at: 'desc', id: 'desc' }, limit: 1000, populate: ['actor'] });
+      return { entries: rows.map(toAuditDto) };
+    },
+  ),
+];

@@ -1,0 +1,205 @@
+// The review workflow: draft → in_review (leads get an e-mail) → published, or back to draft with a
+// comment (the engineer gets an e-mail). Each step is audited and kept as a comment of its kind.
+import type { EntityManager } from '@mikro-orm/sqlite';
+import { approveTeardownBody, idParam, sendBackTeardownBody, submitTeardownBody, teardownResponse, TEARDOWN_STATUS, type TeardownStatus } from '@splitcase/contracts';
+import { AppError } from '../../http/errors';
+import type { AppDeps } from '../../http/deps';
+import { route, type AuthUser, type RouteDef } from '../../http/route';
+import { recordAudit } from '../audit/audit.service';
+import type { OutgoingMail } from '../mail/mailer';
+import { linkMail } from '../mail/templates';
+import { UserSchema } from '../users/user.entity';
+import { CONTENT_EDITORS, readableTeardown, REVIEWERS } from './access';
+import { CommentSchema } from './comment.entity';
+import { teardownDto, teardownName } from './teardown.service';
+import type { Teardown } from './teardown.entity';
+
+function requireStatus(t: Teardown, wanted: TeardownStatus, action: string): void {
+  if (t.status !== wanted) {
+    throw new AppError(
+      'conflict',
+      `This teardown is ${TEARDOWN_STATUS.labels[t.status as TeardownStatus].toLowerCase()}; only a teardown that is ${TEARDOWN_STATUS.labels[wanted].toLowerCase()} can be ${action}.`,
+      undefined,
+      { status: t.status },
+    );
+  }
+}
+
+/**
+ * Send after the commit; if the mail server refuses, put the teardown back as it was (and say so in
+ * its history) so nothing is left half-done, then answer 502.
+ */
+async function sendOrUndo(deps: AppDeps, mail: OutgoingMail, undo: () => Promise<void>, what: string): Promise<void> {
+  try {
+    await deps.mailer.send(mail);
+  } catch (err) {
+    deps.log(`Review e-mail failed (${what})`, err);
+    await undo();
+    throw new AppError('internal', `The e-mail could not be sent, so the teardown was not ${what}. Check the mail settings and try again.`, undefined, undefined, 502);
+  }
+}
+
+function addReviewComment(em: EntityManager, t: Teardown, user: AuthUser, kind: 'submitted' | 'approved' | 'sent-back', body: string) {
+  return em.create(CommentSchema, { teardown: t, author: em.getReference(UserSchema, user.id), kind, body } as never);
+}
+
+const link = (deps: AppDeps, t: Teardown) => `${deps.env.publicUrl}/teardowns/${t.id}`;
+
+export const reviewRoutes: RouteDef[] = [
+  route(
+    {
+      method: 'post',
+      path: '/api/teardowns/:id/submit',
+      tag: 'Teardowns',
+      summary: 'Submit a draft for review; every active lead gets an e-mail with a link',
+      access: CONTENT_EDITORS,
+      params: idParam,
+      body: submitTeardownBody,
+      response: teardownResponse,
+    },
+    async ({ em, user, params, body, deps }) => {
+      const t = await readableTeardown(em, user, params.id);
+      requireStatus(t, 'draft', 'submitted for review');
+      const previous = { submittedAt: t.submittedAt ?? null, lastReviewNote: t.lastReviewNote ?? null };
+      t.status = 'in_review';
+      t.submittedAt = new Date();
+      const comment = addReviewComment(em, t, user, 'submitted', body.note ?? 'Submitted for review.');
+      recordAudit(em, user, {
+        action: 'teardown.submitted',
+        entityType: 'teardown',
+        entityId: t.id,
+        scope: { type: 'teardown', id: t.id },
+        summary: `Submitted for review${body.note ? `: ${body.note}` : ''}`,
+        changes: { status: { from: 'draft', to: 'in_review' } },
+      });
+      await em.flush();
+      const leads = await em.find(UserSchema, { role: 'lead', active: true }, { orderBy: { id: 'asc' } });
+      if (leads.length > 0) {
+        await sendOrUndo(
+          deps,
+          linkMail({
+            to: leads.map((l) => l.email).join(', '),
+            subject: `Review requested: ${teardownName(t)}`,
+            lines: [
+              'Hello,',
+              `${user.name} submitted the teardown of ${teardownName(t)}, opened on ${t.date}, for review.`,
+              ...(body.note ? [`Their note: “${body.note}”`] : []),
+              'Open it to approve and publish it, or send it back with a comment.',
+            ],
+            linkLabel: 'Open the teardown',
+            url: link(deps, t),
+          }),
+          async () => {
+            t.status = 'draft';
+            t.submittedAt = previous.submittedAt;
+            em.remove(comment);
+            recordAudit(em, user, {
+              action: 'teardown.submit-undone',
+              entityType: 'teardown',
+              entityId: t.id,
+              scope: { type: 'teardown', id: t.id },
+              summary: 'Submission undone: the e-mail to the leads could not be sent',
+              changes: { status: { from: 'in_review', to: 'draft' } },
+            });
+            await em.flush();
+          },
+          'submitted',
+        );
+      }
+      return { teardown: await teardownDto(em, t, user) };
+    },
+  ),
+  route(
+    {
+      method: 'post',
+      path: '/api/teardowns/:id/approve',
+      tag: 'Teardowns',
+      summary: 'Approve a teardown in review: it is published (viewers can read it)',
+      access: REVIEWERS,
+      params: idParam,
+      body: approveTeardownBody,
+      response: teardownResponse,
+    },
+    async ({ em, user, params, body }) => {
+      const t = await readableTeardown(em, user, params.id);
+      requireStatus(t, 'in_review', 'approved');
+      t.status = 'published';
+      t.publishedAt = new Date();
+      t.publishedBy = em.getReference(UserSchema, user.id);
+      t.lastReviewNote = body.note ?? null;
+      addReviewComment(em, t, user, 'approved', body.note ?? 'Approved and published.');
+      recordAudit(em, user, {
+        action: 'teardown.approved',
+        entityType: 'teardown',
+        entityId: t.id,
+        scope: { type: 'teardown', id: t.id },
+        summary: `Approved and published${body.note ? `: ${body.note}` : ''}`,
+        changes: { status: { from: 'in_review', to: 'published' } },
+      });
+      await em.flush();
+      return { teardown: await teardownDto(em, t, user) };
+    },
+  ),
+  route(
+    {
+      method: 'post',
+      path: '/api/teardowns/:id/send-back',
+      tag: 'Teardowns',
+      summary: 'Send a teardown in review back to draft with a comment; its engineer gets an e-mail',
+      access: REVIEWERS,
+      params: idParam,
+      body: sendBackTeardownBody,
+      response: teardownResponse,
+    },
+    async ({ em, user, params, body, deps }) => {
+      const t = await readableTeardown(em, user, params.id);
+      requireStatus(t, 'in_review', 'sent back');
+      const previousNote = t.lastReviewNote ?? null;
+      t.status = 'draft';
+      t.lastReviewNote = body.comment;
+      const comment = addReviewComment(em, t, user, 'sent-back', body.comment);
+      recordAudit(em, user, {
+        action: 'teardown.sent-back',
+        entityType: 'teardown',
+        entityId: t.id,
+        scope: { type: 'teardown', id: t.id },
+        summary: `Sent back to draft: ${body.comment}`,
+        changes: { status: { from: 'in_review', to: 'draft' } },
+      });
+      await em.flush();
+      if (t.engineer.active) {
+        await sendOrUndo(
+          deps,
+          linkMail({
+            to: t.engineer.email,
+            subject: `Sent back: ${teardownName(t)}`,
+            lines: [
+              `Hello ${t.engineer.name.split(' ')[0]},`,
+              `${user.name} sent your teardown of ${teardownName(t)} back to draft with this comment:`,
+              `“${body.comment}”`,
+              'Make the changes, then submit it for review again.',
+            ],
+            linkLabel: 'Open the teardown',
+            url: link(deps, t),
+          }),
+          async () => {
+            t.status = 'in_review';
+            t.lastReviewNote = previousNote;
+            em.remove(comment);
+            recordAudit(em, user, {
+              action: 'teardown.send-back-undone',
+              entityType: 'teardown',
+              entityId: t.id,
+              scope: { type: 'teardown', id: t.id },
+              summary: 'Send-back undone: the e-mail to the engineer could not be sent',
+              changes: { status: { from: 'draft', to: 'in_review' } },
+            });
+            await em.flush();
+          },
+          'sent back',
+        );
+      }
+      return { teardown: await teardownDto(em, t, user) };
+    },
+  ),
+];

@@ -1,0 +1,106 @@
+import { z } from 'zod';
+import { text } from './common';
+import { DEVICE_CATEGORY, TEARDOWN_STATUS } from './domain';
+import { clearableDay, clearableNumber, clearableText, quantityInput } from './inputs';
+import { currencyCode } from './settings';
+
+/**
+ * Label claims a device carries, typed with units. Each maps to the stored SI value (Ah, Wh, W, h)
+ * and the text typed is kept in `entered` under the same name.
+ */
+export const DEVICE_CLAIM_FIELDS = {
+  claimCapacityAh: { label: 'Capacity on the label', unit: 'Ah', example: '5000 mAh' },
+  claimCapacityWh: { label: 'Energy on the label', unit: 'Wh', example: '18.5 Wh' },
+  claimOutputWatts: { label: 'Output power', unit: 'W', example: '10 W' },
+  claimRuntimeH: { label: 'Runtime claimed', unit: 'h', example: '6 h' },
+  claimPowerW: { label: 'Power claimed', unit: 'W', example: '9 W' },
+} as const;
+export type DeviceClaimField = keyof typeof DEVICE_CLAIM_FIELDS;
+
+const currencyInput = z
+  .union([z.literal(''), z.null(), currencyCode])
+  .optional()
+  .transform((v) => (v === '' ? null : v));
+
+const deviceFields = z.object({
+  maker: text(120),
+  model: text(160),
+  category: DEVICE_CATEGORY.schema,
+  retailPrice: clearableNumber({ min: 0, max: 10_000_000, what: 'a price such as 24.99' }),
+  currency: currencyInput,
+  priceSeenOn: clearableDay,
+  whereBought: clearableText(300),
+  claimCapacityAh: quantityInput,
+  claimCapacityWh: quantityInput,
+  claimOutputWatts: quantityInput,
+  claimRuntimeH: quantityInput,
+  claimPowerW: quantityInput,
+  claimOutputText: clearableText(200),
+  notes: clearableText(5000),
+});
+
+/** POST /api/devices. A price needs its currency. */
+export const createDeviceBody = deviceFields.superRefine((b, ctx) => {
+  if (b.retailPrice !== undefined && b.retailPrice !== null && !b.currency) {
+    ctx.addIssue({ code: 'custom', path: ['currency'], message: 'Give the currency of the price, such as USD' });
+  }
+});
+export type CreateDeviceBody = z.infer<typeof createDeviceBody>;
+export type DeviceFormValues = z.input<typeof createDeviceBody>;
+
+/** PATCH /api/devices/:id: any subset of the fields. */
+export const updateDeviceBody = deviceFields.partial().refine((b) => Object.values(b).some((v) => v !== undefined), { message: 'Change at least one field' });
+export type UpdateDeviceBody = z.infer<typeof updateDeviceBody>;
+
+export const deviceListQuery = z.object({
+  category: DEVICE_CATEGORY.schema.optional(),
+  maker: z.string().trim().max(120).optional(),
+  /** Free text over maker and model. */
+  q: z.string().trim().max(120).optional(),
+});
+export type DeviceListQuery = z.infer<typeof deviceListQuery>;
+
+export const teardownBriefSchema = z.object({
+  id: z.number().int(),
+  date: z.string(),
+  unitLabel: z.string().nullable(),
+  status: TEARDOWN_STATUS.schema,
+});
+
+export const deviceSchema = z.object({
+  id: z.number().int(),
+  maker: z.string(),
+  model: z.string(),
+  category: DEVICE_CATEGORY.schema,
+  retailPrice: z.number().nullable(),
+  currency: z.string().nullable(),
+  priceSeenOn: z.string().nullable(),
+  whereBought: z.string().nullable(),
+  claimCapacityAh: z.number().nullable(),
+  claimCapacityWh: z.number().nullable(),
+  claimOutputWatts: z.number().nullable(),
+  claimRuntimeH: z.number().nullable(),
+  claimPowerW: z.number().nullable(),
+  claimOutputText: z.string().nullable(),
+  /** The text typed for each claim, by field name (e.g. claimCapacityAh → "5000 mAh"). */
+  entered: z.record(z.string(), z.string()),
+  notes: z.string().nullable(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+  /** The latest teardown the caller may see (viewers: published only). */
+  latestTeardown: teardownBriefSchema.nullable(),
+  teardownCount: z.number().int(),
+});
+export type DeviceDto = z.infer<typeof deviceSchema>;
+
+export const deviceTeardownSchema = teardownBriefSchema.extend({
+  engineer: z.object({ id: z.number().int(), name: z.string() }),
+  summary: z.string().nullable(),
+  findingCount: z.number().int(),
+  updatedAt: z.string(),
+});
+export type DeviceTeardown = z.infer<typeof deviceTeardownSchema>;
+
+export const devicesResponse = z.object({ devices: z.array(deviceSchema) });
+export const deviceResponse = z.object({ device: deviceSchema });
+export const deviceDetailResponse = z.object({ device: deviceSchema, teardowns: z.array(deviceTeardownSchema) });
