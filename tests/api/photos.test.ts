@@ -97,7 +97,8 @@ const getFile = (agent: Agent, url: string) =>
     res.on('end', () => cb(null, Buffer.concat(chunks)));
   });
 
-const storageFolders = (app: TestApp) => (existsSync(app.env.uploadsDir) ? readdirSync(app.env.uploadsDir) : []);
+const photoDir = (app: TestApp) => join(app.env.uploadsDir, 'photos');
+const storageFolders = (app: TestApp) => (existsSync(photoDir(app)) ? readdirSync(photoDir(app)) : []);
 
 let draftId: number;
 let otherDraftId: number;
@@ -143,7 +144,7 @@ describe('upload', () => {
     // Every folder is a 32-hex random key holding exactly the three files.
     const row = (await t.orm.em.fork().getConnection().execute('select storage_key from photos where id = ?', [photo.id])) as { storage_key: string }[];
     expect(row[0]!.storage_key).toMatch(/^[a-f0-9]{32}$/);
-    expect(readdirSync(join(t.env.uploadsDir, row[0]!.storage_key)).sort()).toEqual(['display.webp', 'original.jpg', 'thumb.webp']);
+    expect(readdirSync(join(photoDir(t), row[0]!.storage_key)).sort()).toEqual(['display.webp', 'original.jpg', 'thumb.webp']);
   });
 
   it('accepts WebP, and photos are ordered by layer then step', async () => {
@@ -349,10 +350,10 @@ describe('caption, layer, step and delete', () => {
     const photo = (await uploadAs(engineer, draftId, await jpegFixture(), 'gone.jpg').expect(201)).body.photo as PhotoDto;
     const pin = (await engineer.post(`/api/photos/${photo.id}/callouts`, { x: 0.5, y: 0.5, label: 'Temporary' }).expect(201)).body.callout;
     const key = ((await t.orm.em.fork().getConnection().execute('select storage_key from photos where id = ?', [photo.id])) as { storage_key: string }[])[0]!.storage_key;
-    expect(existsSync(join(t.env.uploadsDir, key))).toBe(true);
+    expect(existsSync(join(photoDir(t), key))).toBe(true);
     await (await t.as('sourcing')).delete(`/api/photos/${photo.id}`).expect(403);
     await engineer.delete(`/api/photos/${photo.id}`).expect(204);
-    expect(existsSync(join(t.env.uploadsDir, key))).toBe(false);
+    expect(existsSync(join(photoDir(t), key))).toBe(false);
     await engineer.get(photo.urls.thumb).expect(404);
     await engineer.patch(`/api/callouts/${pin.id}`, { label: 'x' }).expect(404);
     await engineer.delete(`/api/photos/${photo.id}`).expect(404);
@@ -471,7 +472,7 @@ describe('demo photos', () => {
     }
     // Stored through the upload path: random folder, the three files, no metadata.
     const demo = (await conn.execute("select id, storage_key from photos where original_name like 'demo-halvix-duo-%' order by id limit 1")) as { id: number; storage_key: string }[];
-    expect(readdirSync(join(t.env.uploadsDir, demo[0]!.storage_key)).sort()).toEqual(['display.webp', 'original.jpg', 'thumb.webp']);
+    expect(readdirSync(join(photoDir(t), demo[0]!.storage_key)).sort()).toEqual(['display.webp', 'original.jpg', 'thumb.webp']);
     const original = binary(await getFile(engineer, `/api/photos/${demo[0]!.id}/original`).expect(200));
     expect((await sharp(original).metadata()).exif).toBeUndefined();
   });

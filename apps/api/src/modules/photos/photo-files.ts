@@ -121,9 +121,12 @@ export const fileOps = { mkdir, writeFile, rm };
 /** A fresh storage key: 32 hex characters from the OS random source, never derived from the client's name. */
 export const newStorageKey = () => randomBytes(16).toString('hex');
 
+/** Photos live in uploads/photos/<key>/ (bench runs keep their own folder beside it). */
+export const photosRoot = (uploadsDir: string) => resolve(uploadsDir, 'photos');
+
 function folderOf(uploadsDir: string, storageKey: string): string {
   if (!/^[a-f0-9]{32}$/.test(storageKey)) throw new Error(`Bad storage key ${storageKey}`);
-  const root = resolve(uploadsDir);
+  const root = photosRoot(uploadsDir);
   const dir = resolve(root, storageKey);
   if (!dir.startsWith(root + sep)) throw new Error('Storage folder outside uploads');
   return dir;
@@ -135,7 +138,7 @@ export const variantPath = (uploadsDir: string, storageKey: string, variant: Pho
 /** Write the three files into a new folder; if any write fails, remove the folder and rethrow. */
 export async function writePhotoFiles(uploadsDir: string, storageKey: string, p: ProcessedPhoto): Promise<void> {
   const dir = folderOf(uploadsDir, storageKey);
-  await fileOps.mkdir(resolve(uploadsDir), { recursive: true });
+  await fileOps.mkdir(photosRoot(uploadsDir), { recursive: true });
   await fileOps.mkdir(dir); // not recursive: fails if the key somehow exists already
   try {
     await fileOps.writeFile(join(dir, VARIANT_FILES.original(p.original.ext)), p.original.data, { flag: 'wx' });
