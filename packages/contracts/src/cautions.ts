@@ -13,6 +13,7 @@ export const LITHIUM_CELL_CAUTION = {
     'Work on a fire-safe surface with a lidded metal box or sand within reach.',
     'A swollen, hot, hissing or smelling cell: stop, move it into the fire-safe box away from people, and do not charge it again.',
   ],
+  defer: "These notes do not replace your lab's safety rules, local codes or licensed practice.",
 } as const;
 
 /** When the cells are not recorded yet: most devices in this workspace run on lithium cells. */

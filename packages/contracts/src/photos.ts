@@ -123,8 +123,6 @@ export type UploadLimits = z.infer<typeof uploadLimitsSchema>;
 export const photosResponse = z.object({
   photos: z.array(photoSchema),
   limits: uploadLimitsSchema,
-  /** Whether the recorded pack has a lithium chemistry; null while no pack is recorded. */
-  lithiumCell: z.boolean().nullable(),
 });
 export type PhotosResponse = z.infer<typeof photosResponse>;
 export const photoResponse = z.object({ photo: photoSchema });

@@ -12,11 +12,14 @@ export function LithiumCaution({ cell, collapsed = false }: { cell: { chemistry:
   if (cell && !cell.lithium) return null;
   const intro = cell ? `${CHEMISTRY.labels[cell.chemistry]} cell recorded.` : UNKNOWN_CELL_NOTE;
   const points = (
-    <ul className="mt-1 list-disc space-y-0.5 pl-4">
-      {LITHIUM_CELL_CAUTION.points.map((p) => (
-        <li key={p}>{p}</li>
-      ))}
-    </ul>
+    <>
+      <ul className="mt-1 list-disc space-y-0.5 pl-4">
+        {LITHIUM_CELL_CAUTION.points.map((p) => (
+          <li key={p}>{p}</li>
+        ))}
+      </ul>
+      <p className="mt-1.5 text-xs">{LITHIUM_CELL_CAUTION.defer}</p>
+    </>
   );
   return (
     <Caution title={LITHIUM_CELL_CAUTION.title}>

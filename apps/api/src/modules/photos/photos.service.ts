@@ -5,7 +5,6 @@ import type { AuthUser } from '../../http/route';
 import { recordAudit } from '../audit/audit.service';
 import { FindingSchema, type Finding } from '../findings/finding.entity';
 import { PartSchema, type Part } from '../parts/part.entity';
-import { PackSchema } from '../power/pack.entity';
 import type { Teardown } from '../teardowns/teardown.entity';
 import { UserSchema } from '../users/user.entity';
 import { CalloutSchema, type Callout } from './callout.entity';
@@ -61,12 +60,6 @@ export async function teardownPhotos(em: EntityManager, teardownId: number): Pro
   return photos.map((p) => toPhotoDto(p, callouts));
 }
 
-/** true/false from the recorded pack's chemistry; null when no pack is recorded yet. */
-export async function hasLithiumCell(em: EntityManager, teardownId: number): Promise<boolean | null> {
-  const pack = await em.findOne(PackSchema, { teardown: teardownId });
-  if (!pack) return null;
-  return ['li-ion', 'li-po', 'lifepo4', 'lto'].includes(pack.chemistry);
-}
 
 /** Check that a part / finding to link belongs to this teardown (400 naming the field otherwise). */
 export async function resolveLinks(

@@ -30,7 +30,6 @@ import { removePhotoFiles, uploadLimits, variantMime, variantPath } from './phot
 import { PhotoSchema, type Photo } from './photo.entity';
 import {
   findingLabel,
-  hasLithiumCell,
   nextCalloutNumber,
   partLabel,
   photoUrls,
@@ -110,7 +109,7 @@ export function photoRoutes(deps: AppDeps): RouteDef[] {
       },
       async ({ em, user, params }) => {
         const t = await readableTeardown(em, user, params.id);
-        return { photos: await teardownPhotos(em, t.id), limits: uploadLimits(deps.env.uploadMaxBytes), lithiumCell: await hasLithiumCell(em, t.id) };
+        return { photos: await teardownPhotos(em, t.id), limits: uploadLimits(deps.env.uploadMaxBytes) };
       },
     ),
     route(

@@ -13,7 +13,7 @@ import { useDeleteCallout } from '../api/delete-callout';
 import { useUpdatePhoto } from '../api/update-photo';
 import { useDeletePhoto } from '../api/delete-photo';
 import { Filmstrip } from './filmstrip';
-import { LithiumCautions } from './lithium-cautions';
+import { LithiumCaution } from '@/components/safety';
 import { PhotoDetails, type PhotoValues } from './photo-details';
 import { PhotoStage } from './photo-stage';
 import { PinPanel, type PinValues } from './pin-panel';
@@ -63,7 +63,7 @@ export function PhotosSection({ teardown }: { teardown: TeardownDto }) {
 
   if (photos.isPending) return <Spinner />;
   if (photos.isError) return <ErrorPanel error={photos.error} onRetry={() => photos.refetch()} />;
-  const { limits, lithiumCell } = photos.data;
+  const { limits } = photos.data;
 
   const withHeaders = async <T,>(run: (headers: Record<string, string>) => Promise<T>): Promise<T | undefined> => {
     const headers = await headersFor();
@@ -104,7 +104,7 @@ export function PhotosSection({ teardown }: { teardown: TeardownDto }) {
 
   return (
     <div className="space-y-4">
-      {canEdit && <LithiumCautions lithium={lithiumCell} open={list.length === 0} />}
+      {canEdit && <LithiumCaution cell={teardown.cell} collapsed={list.length > 0} />}
       {upload}
       {!current ? (
         <Card>

@@ -4,7 +4,9 @@ import { Spinner } from '@/components/page';
 import { PublishedEditNotice, useEditGate } from '@/components/published-edit';
 import { usePower } from '../api/power';
 import { ConvertersCard } from './converters-card';
-import { HeaterCaution, LithiumCaution } from './lithium-caution';
+import { HOT_SURFACE_CAUTION } from '@splitcase/contracts';
+import { Caution } from '@/components/caution';
+import { LithiumCaution } from '@/components/safety';
 import { LoadsCard } from './loads-card';
 import { PackCard } from './pack-card';
 
@@ -18,9 +20,9 @@ export function PowerSection({ teardown }: { teardown: TeardownDto }) {
   return (
     <div className="space-y-4">
       <PublishedEditNotice gate={gate} />
-      {(pack === null || pack.lithium) && <LithiumCaution />}
+      <LithiumCaution cell={pack ? { chemistry: pack.chemistry, lithium: pack.lithium } : null} />
       <PackCard key={pack?.updatedAt ?? 'none'} teardownId={teardown.id} pack={pack} gate={gate} />
-      {loads.some((l) => l.kind === 'heater') && <HeaterCaution />}
+      {loads.some((l) => l.kind === 'heater') && <Caution title="Hot surfaces">{HOT_SURFACE_CAUTION}</Caution>}
       <LoadsCard teardownId={teardown.id} loads={loads} converters={converters} gate={gate} />
       <ConvertersCard teardownId={teardown.id} converters={converters} gate={gate} />
     </div>
