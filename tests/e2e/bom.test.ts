@@ -93,7 +93,7 @@ describe('parts, measurements and the pack at the bench', () => {
 
   it('edits the pack with "2700 mAh": stored as 2.7 Ah, the typed text shown back', async () => {
     await page.goto(`/teardowns/${teardownId}/power`);
-    await page.getByText('Lithium cells: before and while you open the pack').waitFor();
+    await page.getByText('Lithium cell: before you open the case').waitFor();
     const capacity = page.getByLabel('Rated capacity (per cell)');
     await capacity.fill('2700 mAh');
     await page.getByRole('button', { name: 'Save pack' }).click();

@@ -9,12 +9,13 @@ beforeAll(async () => {
 afterAll(() => browser?.close());
 
 /** What the left rail shows to each role (the server enforces the same rules). */
+const EVERYONE = ['Home', 'Devices', 'Bench tools', 'Bench runs'];
 const EXPECTED: Record<string, { shows: string[]; hides: string[] }> = {
-  admin: { shows: ['Home', 'Admin'], hides: [] },
-  engineer: { shows: ['Home'], hides: ['Admin'] },
-  sourcing: { shows: ['Home'], hides: ['Admin'] },
-  lead: { shows: ['Home'], hides: ['Admin'] },
-  viewer: { shows: ['Home'], hides: ['Admin'] },
+  admin: { shows: [...EVERYONE, 'Rates & cost model', 'Admin'], hides: [] },
+  engineer: { shows: EVERYONE, hides: ['Rates & cost model', 'Admin'] },
+  sourcing: { shows: [...EVERYONE, 'Rates & cost model'], hides: ['Admin'] },
+  lead: { shows: EVERYONE, hides: ['Rates & cost model', 'Admin'] },
+  viewer: { shows: EVERYONE, hides: ['Rates & cost model', 'Admin'] },
 };
 
 describe('sign-in and navigation per role', () => {

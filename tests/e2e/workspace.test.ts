@@ -1,12 +1,11 @@
-// The teardown workspace end to end: an engineer adds a device and starts a teardown, edits it, sees
-// the figures panel follow the records, accepts a suggested finding and submits; a lead approves; a
+// The teardown workspace end to end, through the screens: an engineer adds a device and starts a
+// teardown, records a part, uploads two photos (progress to 100 %), pins a callout linked to the part,
+// records the pack and the heater load with units, enters a measurement with its unit, sees the
+// figures panel follow the records, accepts a suggested finding and submits; a lead approves; a
 // viewer reads it published.
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { inject } from 'vitest';
-import { openOrm } from '../../apps/api/src/db/orm';
-import { LoadSchema } from '../../apps/api/src/modules/power/load.entity';
-import { PackSchema } from '../../apps/api/src/modules/power/pack.entity';
+import sharp from 'sharp';
 import { launch, signedInPage } from './browser';
 
 let browser: Browser;
@@ -15,21 +14,16 @@ beforeAll(async () => {
 });
 afterAll(() => browser?.close());
 
-/**
- * The power system of the new teardown, written straight to the database (this branch has no power
- * system screen): one 2.7 Ah 3.7 V Li-ion cell, two 3.0 Ω heater elements in parallel at 3.65 V.
- */
-async function recordPowerSystem(teardownId: number) {
-  const orm = await openOrm(inject('dbPath'));
-  try {
-    const em = orm.em.fork();
-    em.create(PackSchema, { teardown: teardownId, chemistry: 'li-ion', cellNominalVolts: 3.7, cellRatedAh: 2.7, series: 1, parallel: 1, packMassKg: 0.046, protection: true } as never);
-    em.create(LoadSchema, { teardown: teardownId, kind: 'heater', label: 'Heater flexes', resistanceOhms: 3, supplyVolts: 3.65, count: 2, connection: 'parallel', duty: 1 } as never);
-    await em.flush();
-  } finally {
-    await orm.close();
-  }
+/** A JPEG of about a megabyte (noise compresses badly), so an upload shows more than one progress event. */
+async function benchJpeg(seed: number): Promise<Buffer> {
+  const w = 1400;
+  const h = 1000;
+  const raw = Buffer.alloc(w * h * 3);
+  for (let i = 0; i < raw.length; i++) raw[i] = ((i * 2654435761 + seed * 97) >>> 24) & 0xff;
+  return sharp(raw, { raw: { width: w, height: h, channels: 3 } }).jpeg({ quality: 80 }).toBuffer();
 }
+
+const section = (page: Page, name: string) => page.getByRole('navigation', { name: 'Teardown sections' }).getByRole('link', { name, exact: true }).click();
 
 const figure = (page: Page, label: string) => page.locator('aside[aria-label="Figures"] li', { has: page.getByRole('button', { name: new RegExp(`^${label}`) }) }).getByTestId('figure-value');
 
@@ -48,7 +42,7 @@ describe('left rail', () => {
 describe('teardown workspace', () => {
   let teardownUrl = '';
 
-  it('an engineer adds a device, starts a teardown, edits it, accepts a suggested finding and submits it', async () => {
+  it('an engineer adds a device and a teardown, a part, two photos with a pinned callout, the power system and a measurement with units, sees the figures, accepts a suggested finding and submits', async () => {
     const page = await signedInPage(browser, 'engineer');
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Devices' }).click();
     await page.getByRole('heading', { name: 'Devices' }).waitFor();
@@ -86,13 +80,78 @@ describe('teardown workspace', () => {
     await expect(panel.getByText(/not certification results/).count()).resolves.toBe(1);
 
     await page.getByLabel('Summary').fill('Single-cell pocket heater, two flexible heaters in parallel, no sensor found yet.');
-    await recordPowerSystem(teardownId);
     await page.getByRole('button', { name: 'Save', exact: true }).click();
     await page.getByText('Saved.').waitFor();
 
-    // The save invalidated the teardown's queries: the panel now shows the figures of the new records.
+    // A part, added inline in the parts list.
+    await section(page, 'Parts');
+    await page.getByLabel('New part: designators').fill('HT1, HT2');
+    await page.getByLabel('New part: category').selectOption('heater');
+    await page.getByLabel('New part: description').fill('Flexible PCB heater element, 3 Ω');
+    await page.getByLabel('New part: description').press('Enter');
+    await page.getByRole('row').filter({ hasText: 'Flexible PCB heater element' }).waitFor();
+    const parts = (await (await page.request.get(`/api/teardowns/${teardownId}/parts`)).json()).parts as { id: number; description: string }[];
+    const heaterPart = parts.find((x) => x.description.startsWith('Flexible PCB heater element'))!;
+
+    // Two photos through the drop zone's file chooser: each shows its progress up to 100 %.
+    await section(page, 'Photos');
+    await page.getByTestId('photo-file-input').setInputFiles([
+      { name: 'e2e-case-open.jpg', mimeType: 'image/jpeg', buffer: await benchJpeg(3) },
+      { name: 'e2e-heater-flex.jpg', mimeType: 'image/jpeg', buffer: await benchJpeg(4) },
+    ]);
+    const uploads = page.getByTestId('upload-row');
+    for (const name of ['e2e-case-open.jpg', 'e2e-heater-flex.jpg']) {
+      const row = uploads.filter({ hasText: name });
+      await row.getByText('Stored').waitFor({ timeout: 60_000 });
+      await expect(row.getByRole('progressbar').getAttribute('aria-valuenow')).resolves.toBe('100');
+    }
+    await expect(page.getByTestId('upload-overall').textContent()).resolves.toBe('100 %');
+
+    // A numbered pin on the heater photo, linked to the heater part.
+    const photos = (await (await page.request.get(`/api/teardowns/${teardownId}/photos`)).json()).photos as { id: number; name: string }[];
+    const flexPhoto = photos.find((x) => x.name === 'e2e-heater-flex.jpg')!;
+    await page.getByTestId(`thumb-${flexPhoto.id}`).click();
+    const stage = page.getByTestId('photo-stage');
+    await stage.locator('img').waitFor();
+    const box = (await stage.boundingBox())!;
+    await page.mouse.click(box.x + box.width * 0.5, box.y + box.height * 0.5);
+    await page.getByLabel('Label of pin 1').fill('Heater flex, front');
+    await page.getByLabel('Part').selectOption(String(heaterPart.id));
+    await page.getByRole('button', { name: 'Place pin' }).click();
+    await page.getByTestId('stage-pin-1').waitFor();
+    const pins = (await (await page.request.get(`/api/photos/${flexPhoto.id}/callouts`)).json()).callouts as { part: { id: number } | null }[];
+    expect(pins[0]?.part?.id).toBe(heaterPart.id);
+
+    // The power system, typed with units: one 2700 mAh cell, two 3R0 elements in parallel at 3.65 V.
+    await section(page, 'Power system');
+    await page.getByLabel('Chemistry').selectOption('li-ion');
+    await page.getByLabel('Nominal voltage (per cell)').fill('3.7 V');
+    await page.getByLabel('Rated capacity (per cell)').fill('2700 mAh');
+    await page.getByLabel('Pack mass').fill('46 g');
+    await page.getByRole('button', { name: 'Record pack' }).click();
+    await page.getByText('Pack saved.').waitFor();
+    await page.getByRole('button', { name: 'Add load' }).click();
+    const loadForm = page.getByRole('form', { name: 'New load' });
+    await loadForm.getByLabel('Kind').selectOption('heater');
+    await loadForm.getByLabel('Label').fill('Heater flexes, front and back');
+    await loadForm.getByLabel('Resistance (per element)').fill('3R0');
+    await loadForm.getByLabel('Supply voltage').fill('3.65 V');
+    await loadForm.getByLabel('Count').fill('2');
+    await loadForm.getByLabel('Connection').selectOption('parallel');
+    await loadForm.getByRole('button', { name: 'Add load' }).click();
+    await page.getByRole('row').filter({ hasText: 'Heater flexes, front and back' }).waitFor();
+
+    // A measurement with its unit.
+    await section(page, 'Measurements');
+    await page.getByRole('combobox', { name: 'Quantity' }).first().selectOption('resistance');
+    await page.getByRole('textbox', { name: 'What was measured', exact: true }).fill('Heater flex, front, cold');
+    await page.getByRole('textbox', { name: 'Value with unit' }).fill('3.02 Ω');
+    await page.getByRole('textbox', { name: 'Value with unit' }).press('Enter');
+    await page.getByRole('row').filter({ hasText: 'Heater flex, front, cold' }).waitFor();
+
+    // The figures panel followed every record.
     // [REFERENCES §3; C] 2 × 3.0 Ω in parallel at 3.65 V: 8.881667 W, 2.433333 A; [C] 3.7 V × 2.7 Ah = 9.99 Wh
-    await expect(figure(page, 'Total load power').textContent()).resolves.toBe('8.88 W');
+    await expect.poll(() => figure(page, 'Total load power').textContent(), { timeout: 15_000 }).toBe('8.88 W');
     await expect(figure(page, 'Current from the pack').textContent()).resolves.toBe('2.43 A');
     await expect(figure(page, 'Pack energy').textContent()).resolves.toBe('9.99 Wh');
     await expect(figure(page, 'Air-transport class').textContent()).resolves.toBe('Up to 100 Wh');
