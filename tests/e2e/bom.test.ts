@@ -66,6 +66,8 @@ describe('parts, measurements and the pack at the bench', () => {
     await page.getByRole('button', { name: 'Preview' }).click();
     await page.getByText('2 rows ready to import').waitFor();
     await page.getByRole('button', { name: 'Import 2 parts' }).click();
+    // The preview (which lists the same rows) closes once the import is committed.
+    await page.getByRole('button', { name: 'Import 2 parts' }).waitFor({ state: 'detached' });
     await row(page, 'E2E bulk capacitor').waitFor();
     // 226 = 22 × 10⁶ pF = 22 µF [S: REFERENCES.md §1, capacitor 3-digit code]
     await expect(row(page, 'E2E bulk capacitor').textContent()).resolves.toContain('22.0 µF');

@@ -77,7 +77,9 @@ describe('photos and callouts in the browser', () => {
 
     // Click on the stage to place pin 1, label it (and link the part when there is one).
     const stage = page.getByTestId('photo-stage');
-    await stage.locator('img').waitFor();
+    // Wait for the stage to show the photo just opened (not the one shown before the click).
+    await stage.locator(`img[src*="/api/photos/${uploaded.id}/"]`).waitFor();
+    await stage.scrollIntoViewIfNeeded();
     const box = (await stage.boundingBox())!;
     await page.mouse.click(box.x + box.width * 0.3, box.y + box.height * 0.4);
     await page.getByLabel('Label of pin 1').fill('Charger IC');

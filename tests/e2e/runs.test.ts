@@ -52,7 +52,7 @@ describe('bench runs', () => {
     const energy = page.locator('dt', { hasText: 'Delivered energy' }).locator('xpath=following-sibling::dd[1]');
     await expect(energy.textContent()).resolves.toBe('5.55 Wh');
     // Against the 20 Ah on the label: 7.5 %, below the 90 % warning threshold.
-    await expect(page.getByRole('region', { name: 'Comparison with the label' }).textContent()).resolves.toMatch(/7\.5 %\s*of the label/);
+    await expect(page.getByRole('region', { name: 'Comparison with the label' }).textContent()).resolves.toMatch(/7\.50? %\s*of the label/);
 
     const chart = page.getByRole('figure', { name: 'Voltage against time' });
     await chart.locator('.recharts-line-curve').first().waitFor();

@@ -112,7 +112,9 @@ describe('teardown workspace', () => {
     const flexPhoto = photos.find((x) => x.name === 'e2e-heater-flex.jpg')!;
     await page.getByTestId(`thumb-${flexPhoto.id}`).click();
     const stage = page.getByTestId('photo-stage');
-    await stage.locator('img').waitFor();
+    // Wait for the stage to show the photo just opened (not the one shown before the click).
+    await stage.locator(`img[src*="/api/photos/${flexPhoto.id}/"]`).waitFor();
+    await stage.scrollIntoViewIfNeeded();
     const box = (await stage.boundingBox())!;
     await page.mouse.click(box.x + box.width * 0.5, box.y + box.height * 0.5);
     await page.getByLabel('Label of pin 1').fill('Heater flex, front');
