@@ -1,6 +1,7 @@
 // Quantities typed by people ("2700 mAh", "3.65V", "3R0", "4k7", "35 µm", "60 %") → SI numbers,
 // through mathjs's unit system. The server stores SI and keeps the text the user typed.
 import { unit as mathUnit } from 'mathjs';
+import { SI_UNIT } from '@splitcase/contracts';
 import { validationError } from '../http/errors';
 
 export type QuantityKind =
@@ -21,22 +22,10 @@ export type QuantityKind =
   | 'fraction'
   | 'count';
 
-/** Stored unit per kind: SI, except Wh and Ah (the trade's units for energy and charge) and °C. */
+/** Stored unit per kind: SI, except Wh and Ah (the trade's units for energy and charge) and °C (contracts' SI_UNIT). */
 export const STORED_UNIT: Record<QuantityKind, string> = {
-  voltage: 'V',
-  current: 'A',
-  resistance: 'Ω',
-  capacitance: 'F',
-  inductance: 'H',
-  power: 'W',
-  energy: 'Wh',
-  capacity: 'Ah',
-  temperature: '°C',
-  mass: 'kg',
-  length: 'm',
+  ...(({ other: _other, ...measured }) => measured)(SI_UNIT),
   area: 'm²',
-  time: 's',
-  frequency: 'Hz',
   fraction: '',
   count: '',
 };

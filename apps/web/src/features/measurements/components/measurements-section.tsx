@@ -1,8 +1,9 @@
 import { useMemo, useRef, useState, type KeyboardEvent } from 'react';
 import { toast } from 'sonner';
-import { Download, Pencil, Trash2, X } from 'lucide-react';
+import { Download } from 'lucide-react';
 import { MEASURED_QUANTITY, SI_UNIT, type MeasuredQuantity, type MeasurementDto, type TeardownDto } from '@splitcase/contracts';
 import { Button } from '@/components/button';
+import { RowActions } from '@/components/row-actions';
 import { DataTable, type Column } from '@/components/data-table';
 import { ErrorPanel } from '@/components/error-boundary';
 import { inputClass } from '@/components/field';
@@ -106,25 +107,19 @@ export function MeasurementsSection({ teardown }: { teardown: TeardownDto }) {
         align: 'right',
         className: 'whitespace-nowrap',
         cell: (m) =>
-          !gate.canEdit ? null : confirmDelete === m.id ? (
-            <span className="inline-flex items-center gap-1">
-              <Button size="sm" variant="danger" className="h-7" busy={remove.isPending} onClick={() => remove.mutate({ id: m.id, headers: gate.headers }, { onSuccess: () => toast.success('Reading removed.'), onError: (e) => toast.error(e.message), onSettled: () => setConfirmDelete(null) })}>
-                Delete
-              </Button>
-              <button type="button" className="rounded p-1 text-graphite-500 hover:bg-graphite-100" aria-label="Keep the reading" onClick={() => setConfirmDelete(null)}>
-                <X className="size-4" />
-              </button>
-            </span>
-          ) : (
-            <span className="inline-flex">
-              <button type="button" className="rounded p-1.5 text-graphite-500 hover:bg-graphite-100" aria-label={`Correct the reading of ${m.subject}`} onClick={() => setEditing(m)}>
-                <Pencil className="size-3.5" />
-              </button>
-              <button type="button" className="rounded p-1.5 text-graphite-500 hover:bg-graphite-100" aria-label={`Delete the reading of ${m.subject}`} onClick={() => setConfirmDelete(m.id)}>
-                <Trash2 className="size-3.5" />
-              </button>
-            </span>
-          ),
+          gate.canEdit ? (
+            <RowActions
+              confirming={confirmDelete === m.id}
+              busy={remove.isPending}
+              editLabel={`Correct the reading of ${m.subject}`}
+              deleteLabel={`Delete the reading of ${m.subject}`}
+              keepLabel="Keep the reading"
+              onEdit={() => setEditing(m)}
+              onAskDelete={() => setConfirmDelete(m.id)}
+              onCancelDelete={() => setConfirmDelete(null)}
+              onDelete={() => remove.mutate({ id: m.id, headers: gate.headers }, { onSuccess: () => toast.success('Reading removed.'), onError: (e) => toast.error(e.message), onSettled: () => setConfirmDelete(null) })}
+            />
+          ) : null,
       },
     ],
     [gate, confirmDelete, remove],

@@ -1,9 +1,10 @@
 import { useMemo, useState, type FormEvent } from 'react';
 import { toast } from 'sonner';
-import { Pencil, Plus, Trash2, X } from 'lucide-react';
+import { Plus } from 'lucide-react';
 import { CONVERTER_ROLE, CONVERTER_TOPOLOGY, type ConverterDto, type ConverterRole, type ConverterTopology, type CreateConverterBody } from '@splitcase/contracts';
 import { Badge } from '@/components/badges';
 import { Button } from '@/components/button';
+import { RowActions } from '@/components/row-actions';
 import { DataTable, type Column } from '@/components/data-table';
 import { Field, Input, Select } from '@/components/field';
 import { Card } from '@/components/page';
@@ -100,25 +101,19 @@ export function ConvertersCard({ teardownId, converters, gate }: { teardownId: n
         align: 'right',
         className: 'whitespace-nowrap',
         cell: (c) =>
-          !gate.canEdit ? null : confirmDelete === c.id ? (
-            <span className="inline-flex items-center gap-1">
-              <Button size="sm" variant="danger" className="h-7" busy={remove.isPending} onClick={() => remove.mutate({ teardownId, id: c.id, headers: gate.headers }, { onSuccess: () => toast.success(`Removed ${c.label}.`), onError: (e) => toast.error(e.message), onSettled: () => setConfirmDelete(null) })}>
-                Delete
-              </Button>
-              <button type="button" className="rounded p-1 text-graphite-500 hover:bg-graphite-100" aria-label="Keep the converter" onClick={() => setConfirmDelete(null)}>
-                <X className="size-4" />
-              </button>
-            </span>
-          ) : (
-            <span className="inline-flex">
-              <button type="button" className="rounded p-1.5 text-graphite-500 hover:bg-graphite-100" aria-label={`Edit ${c.label}`} onClick={() => setEditing(c)}>
-                <Pencil className="size-3.5" />
-              </button>
-              <button type="button" className="rounded p-1.5 text-graphite-500 hover:bg-graphite-100" aria-label={`Delete ${c.label}`} onClick={() => setConfirmDelete(c.id)}>
-                <Trash2 className="size-3.5" />
-              </button>
-            </span>
-          ),
+          gate.canEdit ? (
+            <RowActions
+              confirming={confirmDelete === c.id}
+              busy={remove.isPending}
+              editLabel={`Edit ${c.label}`}
+              deleteLabel={`Delete ${c.label}`}
+              keepLabel="Keep the converter"
+              onEdit={() => setEditing(c)}
+              onAskDelete={() => setConfirmDelete(c.id)}
+              onCancelDelete={() => setConfirmDelete(null)}
+              onDelete={() => remove.mutate({ teardownId, id: c.id, headers: gate.headers }, { onSuccess: () => toast.success(`Removed ${c.label}.`), onError: (e) => toast.error(e.message), onSettled: () => setConfirmDelete(null) })}
+            />
+          ) : null,
       },
     ],
     [gate, confirmDelete, remove, teardownId],

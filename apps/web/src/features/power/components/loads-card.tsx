@@ -1,8 +1,9 @@
 import { useMemo, useState, type FormEvent } from 'react';
 import { toast } from 'sonner';
-import { Pencil, Plus, Trash2, X } from 'lucide-react';
+import { Plus } from 'lucide-react';
 import { CONNECTION, LOAD_KIND, SURFACE_MATERIAL, type Connection, type ConverterDto, type CreateLoadBody, type LoadDto, type LoadKind, type SurfaceMaterial } from '@splitcase/contracts';
 import { Button } from '@/components/button';
+import { RowActions } from '@/components/row-actions';
 import { DataTable, type Column } from '@/components/data-table';
 import { Field, Input, Select } from '@/components/field';
 import { Card } from '@/components/page';
@@ -113,25 +114,19 @@ export function LoadsCard({ teardownId, loads, converters, gate }: { teardownId:
         align: 'right',
         className: 'whitespace-nowrap',
         cell: (l) =>
-          !gate.canEdit ? null : confirmDelete === l.id ? (
-            <span className="inline-flex items-center gap-1">
-              <Button size="sm" variant="danger" className="h-7" busy={remove.isPending} onClick={() => remove.mutate({ teardownId, id: l.id, headers: gate.headers }, { onSuccess: () => toast.success(`Removed ${l.label}.`), onError: (e) => toast.error(e.message), onSettled: () => setConfirmDelete(null) })}>
-                Delete
-              </Button>
-              <button type="button" className="rounded p-1 text-graphite-500 hover:bg-graphite-100" aria-label="Keep the load" onClick={() => setConfirmDelete(null)}>
-                <X className="size-4" />
-              </button>
-            </span>
-          ) : (
-            <span className="inline-flex">
-              <button type="button" className="rounded p-1.5 text-graphite-500 hover:bg-graphite-100" aria-label={`Edit ${l.label}`} onClick={() => setEditing(l)}>
-                <Pencil className="size-3.5" />
-              </button>
-              <button type="button" className="rounded p-1.5 text-graphite-500 hover:bg-graphite-100" aria-label={`Delete ${l.label}`} onClick={() => setConfirmDelete(l.id)}>
-                <Trash2 className="size-3.5" />
-              </button>
-            </span>
-          ),
+          gate.canEdit ? (
+            <RowActions
+              confirming={confirmDelete === l.id}
+              busy={remove.isPending}
+              editLabel={`Edit ${l.label}`}
+              deleteLabel={`Delete ${l.label}`}
+              keepLabel="Keep the load"
+              onEdit={() => setEditing(l)}
+              onAskDelete={() => setConfirmDelete(l.id)}
+              onCancelDelete={() => setConfirmDelete(null)}
+              onDelete={() => remove.mutate({ teardownId, id: l.id, headers: gate.headers }, { onSuccess: () => toast.success(`Removed ${l.label}.`), onError: (e) => toast.error(e.message), onSettled: () => setConfirmDelete(null) })}
+            />
+          ) : null,
       },
     ],
     [gate, confirmDelete, remove, teardownId, converterName],
