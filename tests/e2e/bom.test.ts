@@ -84,7 +84,7 @@ describe('parts, measurements and the pack at the bench', () => {
     await reading.waitFor();
     await expect(reading.textContent()).resolves.toContain('3.02 Ω');
     // Ready for the next reading: the value is cleared and focused.
-    await expect(page.getByRole('textbox', { name: 'Value with unit' }).inputValue()).resolves.toBe('');
+    await expect.poll(() => page.getByRole('textbox', { name: 'Value with unit' }).inputValue()).toBe('');
 
     // A voltage typed for a current is refused, naming the field.
     await page.getByRole('combobox', { name: 'Quantity' }).first().selectOption('current');
