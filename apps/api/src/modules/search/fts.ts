@@ -18,13 +18,16 @@ export function ftsMatch(terms: string[]): string {
  * package, category; safety notes), tags. A hit in a title or a tag says more than one in running
  * text; the short codes of the detail column say less.
  */
-export const BM25 = 'bm25(search_fts, 3.0, 1.0, 0.75, 2.0)';
+export const BM25 = 'bm25(search_fts, 3.0, 1.0, 0.5, 2.0)';
 
 /**
  * The explorer is about findings: at equal text relevance a finding comes before a teardown
- * summary, a part and a comment. Multiplies the bm25 score (negative: lower is better).
+ * summary, a part and a comment. This also offsets bm25's length normalisation, which one table of
+ * mixed records skews: hundreds of parts with short notes make the average body short, so the long
+ * text of a finding would otherwise lose to a part whose category or marking carries the word.
+ * Multiplies the bm25 score (negative: lower is better).
  */
-export const TYPE_BOOST = { finding: 1.5, teardown: 1.2, part: 1.0, comment: 0.8 } as const;
+export const TYPE_BOOST = { finding: 2.0, teardown: 1.5, part: 1.0, comment: 0.8 } as const;
 
 /** Up to 24 tokens around the best hit, hits between the markers the web app renders as highlights. */
 export const SNIPPET = `snippet(search_fts, -1, '${SNIPPET_HIT_START}', '${SNIPPET_HIT_END}', '…', 24)`;
