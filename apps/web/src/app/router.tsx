@@ -42,6 +42,7 @@ export const router = createBrowserRouter([
           { path: '/devices/new', lazy: () => import('./routes/device-new') },
           { path: '/devices/:id', lazy: () => import('./routes/device') },
           { path: '/devices/:id/edit', lazy: () => import('./routes/device-edit') },
+          { path: '/findings', lazy: () => import('./routes/findings') },
           { path: '*', lazy: () => import('./routes/not-found') },
         ],
       },

@@ -31,4 +31,6 @@ export const paths = {
   /** A photo on the stage of the photos section, optionally with one pin selected. */
   teardownPhoto: (id: number, photoId: number, pinId?: number) => `/teardowns/${id}/photos?photo=${photoId}${pinId ? `&pin=${pinId}` : ''}`,
   rates: () => '/rates',
+  /** The findings explorer; `query` is a search as contracts' searchStateToQuery writes it. */
+  findings: (query?: string) => (query ? `/findings?${query}` : '/findings'),
 } as const;

@@ -13,7 +13,9 @@ export {
   type Figure,
   type Suggestion,
   type TeardownFiguresResult,
+  type LabelClaimCheck,
   FIGURE_DEFAULTS,
   HOT_SURFACE_CAUTION,
   teardownFigures,
+  labelClaimCheck,
 } from './teardown-figures';

@@ -2,6 +2,7 @@ import { describe, it, expect } from 'vitest';
 import { FORMULAS } from './formulas';
 import {
   HOT_SURFACE_CAUTION,
+  labelClaimCheck,
   teardownFigures,
   type Figure,
   type TeardownFigureInput,
@@ -500,5 +501,23 @@ describe('invalid records throw a RangeError naming the field', () => {
     expect(bad({ capacityWarnFraction: 1.5 })).toThrow(/Capacity warning fraction/);
     expect(bad({ contactSeconds: 0 })).toThrow(/Contact time/);
     expect(bad({ ambientC: Number.NaN })).toThrow(/Ambient temperature/);
+  });
+});
+
+describe('label claim against the pack mass, on its own', () => {
+  it('a 46 g Li-ion cell labelled 5.2 Ah at 3.7 V: 19.24 Wh, 418 Wh/kg, beyond 300 Wh/kg [C; CP]', () => {
+    const c = labelClaimCheck({ pack: { ...cell, packMassKg: 0.046 }, claims: { capacityAh: 5.2 } })!;
+    expect(c.basis).toBe('label');
+    expect(c.plausibility.claimedWh).toBeCloseTo(19.24, 9);
+    expect(c.plausibility.specificEnergyWhPerKg).toBeCloseTo(418.26, 2);
+    expect(c.plausibility.plausible).toBe(false);
+  });
+  it('a Wh claim is taken as it is; without a claim the cell rating is checked; without a mass there is nothing to check [C]', () => {
+    const wh = labelClaimCheck({ pack: { ...cell, packMassKg: 0.147 }, claims: { capacityWh: 37 } })!;
+    expect(wh.plausibility.specificEnergyWhPerKg).toBeCloseTo(251.7, 1);
+    expect(wh.plausibility.plausible).toBe(true);
+    expect(labelClaimCheck({ pack: { ...cell, packMassKg: 0.045 } })!.basis).toBe('cell-rating');
+    expect(labelClaimCheck({ pack: cell, claims: { capacityAh: 5 } })).toBeUndefined();
+    expect(labelClaimCheck({ claims: { capacityAh: 5 } })).toBeUndefined();
   });
 });

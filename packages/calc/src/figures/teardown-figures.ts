@@ -348,6 +348,28 @@ function unique(list: string[]): string[] {
   return [...new Set(list)];
 }
 
+function claimAgainstMass(pack: PackInfo, claims: NonNullable<TeardownFigureInput['claims']>): LabelClaimCheck | undefined {
+  if (pack.p.packMassKg === undefined) return undefined;
+  const onLabel = claims.capacityWh !== undefined || claims.capacityAh !== undefined;
+  const claimedWh = claims.capacityWh ?? (claims.capacityAh !== undefined ? claims.capacityAh * pack.volts : pack.energyWh);
+  return { basis: onLabel ? 'label' : 'cell-rating', plausibility: labelCapacityPlausibility({ claimedWh, cellMassKg: pack.p.packMassKg, chemistry: pack.p.chemistry }) };
+}
+
+/** A capacity claim checked against the pack mass: what was checked (the device label, or the cell rating without one) and the result. */
+export interface LabelClaimCheck {
+  basis: 'label' | 'cell-rating';
+  plausibility: ReturnType<typeof labelCapacityPlausibility>;
+}
+
+/**
+ * The check behind the capacity.implausible suggestion's mass reason, on its own: the label claim
+ * (Wh, or Ah × pack nominal voltage; the cell rating when the label is silent) against what the
+ * pack mass allows for its chemistry. Undefined without a pack or a pack mass.
+ */
+export function labelClaimCheck(input: Pick<TeardownFigureInput, 'pack' | 'claims'>): LabelClaimCheck | undefined {
+  return input.pack ? claimAgainstMass(readPack(input.pack), input.claims ?? {}) : undefined;
+}
+
 /** Derived figures and suggested findings of a teardown, computed from its stored records. */
 export function teardownFigures(input: TeardownFigureInput): TeardownFiguresResult {
   const figures: Figure[] = [];
@@ -412,12 +434,10 @@ export function teardownFigures(input: TeardownFigureInput): TeardownFiguresResu
   }
 
   // Mass plausibility of the label claim
-  let plausibility: ReturnType<typeof labelCapacityPlausibility> | undefined;
-  let claimBasis = '';
-  if (pack && pack.p.packMassKg !== undefined) {
-    const claimedWh = claims.capacityWh ?? (claims.capacityAh !== undefined ? claims.capacityAh * pack.volts : pack.energyWh);
-    claimBasis = claims.capacityWh !== undefined || claims.capacityAh !== undefined ? 'the device label' : 'the cell rating';
-    plausibility = labelCapacityPlausibility({ claimedWh, cellMassKg: pack.p.packMassKg, chemistry: pack.p.chemistry });
+  const claimCheck = pack ? claimAgainstMass(pack, claims) : undefined;
+  const plausibility = claimCheck?.plausibility;
+  const claimBasis = claimCheck?.basis === 'label' ? 'the device label' : 'the cell rating';
+  if (pack && plausibility && pack.p.packMassKg !== undefined) {
     const se = specificEnergyWhPerKg(pack.energyWh, pack.p.packMassKg);
     figures.push(
       figure(
