@@ -18,6 +18,7 @@ import { teardownRoutes } from './teardowns/routes';
 import { toolRoutes } from './tools/routes';
 import { userRoutes } from './users/routes';
 import { runRoutes } from './runs/routes';
+import { lineupRoutes } from './lineups/routes';
 
 export function allRoutes(deps: AppDeps, version: string): RouteDef[] {
   return [
@@ -38,5 +39,6 @@ export function allRoutes(deps: AppDeps, version: string): RouteDef[] {
     ...measurementRoutes,
     ...costRoutes,
     ...runRoutes(deps),
+    ...lineupRoutes,
   ];
 }
