@@ -96,6 +96,14 @@ describe('the demo lineups', () => {
     expect(c.rows.map((r) => r.deviceId).sort()).toEqual([dev.duo!.id, dev.pocketsun!.id].sort());
     expect(c.hiddenDevices).toBe(1);
 
+    // Heater power density applies where there are heaters, and to no device of the power banks' lineup.
+    expect(c.metrics.find((m) => m.key === 'heaterWPerCm2')!.applies).toBe(true);
+    const banks = all.lineups.find((l: LineupDto) => l.name === 'Power banks under 40 USD') as LineupDto;
+    const bankComparison = await comparison(as.lead!, banks.id);
+    expect(bankComparison.metrics.find((m) => m.key === 'heaterWPerCm2')!.applies).toBe(false);
+    expect(bankComparison.rows.every((r) => r.metrics.heaterWPerCm2 === null)).toBe(true);
+    expect(bankComparison.notes.some((n) => /Hot surface/.test(n))).toBe(false);
+
     const draft = all.lineups.find((l: LineupDto) => l.status === 'draft') as LineupDto;
     await as.viewer!.get(`/api/lineups/${draft.id}`).expect(404);
     await as.viewer!.get(`/api/lineups/${draft.id}/comparison`).expect(404);

@@ -112,6 +112,8 @@ export const updateLineupBody = z
   })
   .refine((b) => Object.entries(b).some(([k, v]) => k !== 'version' && v !== undefined), { message: 'Change at least one field' });
 export type UpdateLineupBody = z.infer<typeof updateLineupBody>;
+/** What a client sends to PATCH a lineup. */
+export type UpdateLineupInput = z.input<typeof updateLineupBody>;
 
 export const lineupListQuery = z.object({ status: lineupStatus.optional() });
 
@@ -164,6 +166,8 @@ export const METRIC_FORMAT = ['money', 'percent', 'quantity', 'count'] as const;
 export const comparisonMetricSchema = z.object({
   key: lineupMetricKey,
   label: z.string(),
+  /** A short label for narrow places (table headers, axis pickers). */
+  short: z.string(),
   /** Unit as shown (the lineup currency for money, '%' for fractions shown as percentages, 'Wh/USD'…). */
   unit: z.string(),
   better: z.enum(['high', 'low']),
@@ -172,6 +176,8 @@ export const comparisonMetricSchema = z.object({
   /** Formula and the label of its source (REFERENCES.md labels). */
   formula: z.string(),
   source: z.string(),
+  /** False when the metric applies to no device of the lineup (heater power density in a lineup without heaters). */
+  applies: z.boolean(),
 });
 export type ComparisonMetricDto = z.infer<typeof comparisonMetricSchema>;
 export const lineupMetricsResponse = z.object({ metrics: z.array(comparisonMetricSchema), defaults: z.record(z.string(), z.number()), weightMax: z.number() });

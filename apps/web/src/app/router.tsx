@@ -42,8 +42,21 @@ export const router = createBrowserRouter([
           { path: '/devices/new', lazy: () => import('./routes/device-new') },
           { path: '/devices/:id', lazy: () => import('./routes/device') },
           { path: '/devices/:id/edit', lazy: () => import('./routes/device-edit') },
+          { path: '/lineups', lazy: () => import('./routes/lineups') },
+          { path: '/lineups/new', lazy: () => import('./routes/lineup-new') },
+          { path: '/lineups/:id', lazy: () => import('./routes/lineup') },
+          { path: '/lineups/:id/edit', lazy: () => import('./routes/lineup-edit') },
           { path: '*', lazy: () => import('./routes/not-found') },
         ],
+      },
+      // Printable reports: signed in, without the rail (the page is the document).
+      {
+        element: (
+          <RequireAuth>
+            <Outlet />
+          </RequireAuth>
+        ),
+        children: [{ path: '/lineups/:id/print', lazy: () => import('./routes/lineup-print') }],
       },
     ],
   },

@@ -1,6 +1,6 @@
 import type { Role } from '@splitcase/contracts';
 import type { LucideIcon } from 'lucide-react';
-import { Activity, Boxes, Coins, House, ShieldCheck, Wrench } from 'lucide-react';
+import { Activity, Boxes, ChartScatter, Coins, House, ShieldCheck, Wrench } from 'lucide-react';
 import { paths } from './paths';
 
 export interface NavItem {
@@ -22,6 +22,7 @@ export const NAV: NavItem[] = [
   { label: 'Bench runs', to: paths.benchRuns(), icon: Activity, roles: ALL, prefix: '/bench/runs' },
   { label: 'Rates & cost model', to: paths.rates(), icon: Coins, roles: ['admin', 'sourcing'] },
   { label: 'Admin', to: paths.admin.users(), icon: ShieldCheck, roles: ['admin'], prefix: '/admin' },
+  { label: 'Lineups', to: paths.lineups(), icon: ChartScatter, roles: ALL, prefix: '/lineups' },
 ];
 
 export const navFor = (role: Role) => NAV.filter((n) => n.roles === 'all' || n.roles.includes(role));

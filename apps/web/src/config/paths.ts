@@ -31,4 +31,16 @@ export const paths = {
   /** A photo on the stage of the photos section, optionally with one pin selected. */
   teardownPhoto: (id: number, photoId: number, pinId?: number) => `/teardowns/${id}/photos?photo=${photoId}${pinId ? `&pin=${pinId}` : ''}`,
   rates: () => '/rates',
+  lineups: () => '/lineups',
+  newLineup: () => '/lineups/new',
+  lineup: (id: number) => `/lineups/${id}`,
+  editLineup: (id: number) => `/lineups/${id}/edit`,
+  /** The printable lineup report, with the chart's axes. */
+  lineupPrint: (id: number, axes?: { x?: string | null; y?: string | null }) => {
+    const q = new URLSearchParams();
+    if (axes?.x) q.set('x', axes.x);
+    if (axes?.y) q.set('y', axes.y);
+    const qs = q.toString();
+    return `/lineups/${id}/print${qs ? `?${qs}` : ''}`;
+  },
 } as const;

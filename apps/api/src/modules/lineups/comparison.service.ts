@@ -53,17 +53,35 @@ const money = (x: number, cur: string) => `${x.toFixed(2)} ${cur}`;
 
 const FINDING_KEYS: Record<Severity, MetricKey> = { critical: 'findingsCritical', major: 'findingsMajor', minor: 'findingsMinor', note: 'findingsNote' };
 
+const SHORT: Record<LineupMetricKey, string> = {
+  retailPrice: 'Price',
+  packWh: 'Pack energy',
+  capacityVsLabel: 'Capacity vs label',
+  runtimeH: 'Runtime',
+  whPerCurrency: 'Energy for money',
+  whPerKg: 'Specific energy',
+  heaterWPerCm2: 'Heater density',
+  shouldCost: 'Should-cost',
+  impliedMargin: 'Margin',
+  findingsCritical: 'Critical',
+  findingsMajor: 'Major',
+  findingsMinor: 'Minor',
+  findingsNote: 'Notes',
+};
+
 /** What each metric is, its formula and source, in the lineup's currency. */
 export function metricCatalogue(currency: string): ComparisonMetricDto[] {
   const entry = (key: LineupMetricKey, extra: { format: ComparisonMetricDto['format']; unit?: string; description: string; formula: string; source: string }): ComparisonMetricDto => ({
     key,
     label: METRICS[key].label,
+    short: SHORT[key],
     unit: extra.unit ?? METRICS[key].unit,
     better: METRICS[key].better,
     format: extra.format,
     description: extra.description,
     formula: extra.formula,
     source: extra.source,
+    applies: true,
   });
   const f = formulaOf;
   const cur = f('cost.currency');
@@ -139,6 +157,8 @@ interface DeviceRow {
   retail: ComparisonRowDto['retail'];
   notes: string[];
   noTeardown: boolean;
+  /** A heater (by category or by a heater load): the heater metric applies. */
+  heater: boolean;
 }
 
 const figureOf = (figures: Figure[], key: string) => figures.find((f) => f.key === key);
@@ -184,7 +204,7 @@ async function deviceRow(em: EntityManager, device: Device, teardown: Teardown |
     const why = viewer ? 'No published teardown of this device yet.' : 'No teardown of this device yet.';
     for (const key of LINEUP_METRIC_KEYS) if (key !== 'retailPrice' && key !== 'whPerCurrency') missing[key] = why;
     if (fig.retailPrice !== undefined) missing.whPerCurrency = why;
-    return { device, teardown, figures: fig, missing, sources, retail, notes, noTeardown };
+    return { device, teardown, figures: fig, missing, sources, retail, notes, noTeardown, heater: device.category === 'pocket-heater' };
   }
   const from = `teardown #${teardown.id} (${teardown.date})`;
 
@@ -298,7 +318,8 @@ async function deviceRow(em: EntityManager, device: Device, teardown: Teardown |
   const findings = await em.find(FindingSchema, { teardown: teardown.id }, { fields: ['id', 'severity'] as never });
   for (const f of findings) fig.findingsBySeverity[f.severity] += 1;
   for (const severity of SEVERITY.values) sources[FINDING_KEYS[severity]] = `Findings of ${from}`;
-  return { device, teardown, figures: fig, missing, sources, retail, notes, noTeardown };
+  const heater = device.category === 'pocket-heater' || (input?.loads.some((l) => l.kind === 'heater') ?? false);
+  return { device, teardown, figures: fig, missing, sources, retail, notes, noTeardown, heater };
 }
 
 /** Sources of the derived metrics, once both inputs are known. */
@@ -376,7 +397,7 @@ export async function lineupComparison(em: EntityManager, user: AuthUser, lineup
   const frontier = paretoFrontierXY(points, { xBetter: METRICS[x].better, yBetter: METRICS[y].better });
   const onFrontier = new Set(frontier);
 
-  const anyHeater = computed.some((c) => c.r.device.category === 'pocket-heater');
+  const anyHeater = rows.some((r) => r.heater);
   const notes = [ESTIMATES_NOTE, ...(anyHeater ? [HOT_SURFACE_CAUTION] : []), ...computed.flatMap((c) => c.r.notes)];
 
   return {
@@ -386,7 +407,7 @@ export async function lineupComparison(em: EntityManager, user: AuthUser, lineup
     rateDate: table?.date ?? null,
     weights: Object.fromEntries(LINEUP_METRIC_KEYS.map((k) => [k, opts.weights[k] ?? 0])),
     weightsFrom: opts.weightsFrom,
-    metrics: metricCatalogue(currency),
+    metrics: metricCatalogue(currency).map((m) => (m.key === 'heaterWPerCm2' ? { ...m, applies: rows.some((r) => r.heater) } : m)),
     rows: scored.map((s) => {
       const { r, metrics } = byId.get(s.id)!;
       const d = r.device;
