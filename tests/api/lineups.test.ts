@@ -385,6 +385,9 @@ describe('the comparison', () => {
     // better: (24.99 − 12) / (24.99 − 9.99) = 0.866 → 86.6, not half of it [C].
     expect(p.score).toBeCloseTo((100 * (24.99 - 12)) / (24.99 - 9.99), 6);
     expect(p.normalised).not.toHaveProperty('packWh');
+    // …and says how little it rests on: 1 of the 2 weighted metrics, half the weight.
+    expect(p.coverage).toEqual({ known: 1, weighted: 2, weightShare: 0.5 });
+    expect(rowOf(gaps, dev.duo!.id).coverage).toEqual({ known: 2, weighted: 2, weightShare: 1 });
 
     const b = rowOf(gaps, bare.id);
     expect(b.teardown?.id).toBe(td.id);

@@ -197,6 +197,8 @@ export const comparisonRowSchema = z.object({
   /** Weighted score 0..100 (null: none of the weighted metrics is known). */
   score: z.number().nullable(),
   rank: z.number().int(),
+  /** How much of the ranking the score rests on: weighted metrics known for this device, of those weighted, and their share of the total weight. */
+  coverage: z.object({ known: z.number().int(), weighted: z.number().int(), weightShare: z.number() }),
   /** Min-max normalised value 0..1 (1 = best in the lineup) of each weighted metric the row has. */
   normalised: z.record(z.string(), z.number()),
   /** Retail price as seen, before conversion. */

@@ -379,6 +379,12 @@ export async function lineupComparison(em: EntityManager, user: AuthUser, lineup
     opts.weights,
   );
   const byId = new Map(computed.map((c) => [String(c.r.device.id), c]));
+  const weighted = LINEUP_METRIC_KEYS.filter((k) => (opts.weights[k] ?? 0) > 0);
+  const totalWeight = weighted.reduce((s, k) => s + opts.weights[k]!, 0);
+  const coverage = (metrics: Record<MetricKey, number | null>) => {
+    const known = weighted.filter((k) => metrics[k] !== null);
+    return { known: known.length, weighted: weighted.length, weightShare: totalWeight > 0 ? known.reduce((s, k) => s + opts.weights[k]!, 0) / totalWeight : 0 };
+  };
 
   const x = opts.x ?? DEFAULT_AXES.x;
   const y = opts.y && opts.y !== x ? opts.y : x === DEFAULT_AXES.y ? DEFAULT_AXES.x : DEFAULT_AXES.y;
@@ -420,6 +426,7 @@ export async function lineupComparison(em: EntityManager, user: AuthUser, lineup
         sources: r.sources as Record<string, string>,
         score: s.score,
         rank: s.rank,
+        coverage: coverage(metrics),
         normalised: s.normalised as Record<string, number>,
         retail: r.retail,
         notes: r.notes,

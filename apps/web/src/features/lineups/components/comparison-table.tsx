@@ -4,7 +4,7 @@ import { DataTable, type Column } from '@/components/data-table';
 import { StatusBadge } from '@/components/status';
 import { paths } from '@/config/paths';
 import { formatDate } from '@/lib/format';
-import { metricText, scoreText, shortHeader } from './display';
+import { coverageText, metricText, scoreText, shortHeader } from './display';
 
 /** A missing value: "—" with the reason on hover (and for screen readers), never a zero. */
 export function Missing({ reason }: { reason: string }) {
@@ -76,7 +76,16 @@ export function ComparisonTable({ comparison }: { comparison: ComparisonDto }) {
       header: 'Score',
       align: 'right',
       value: (r) => r.score ?? undefined,
-      cell: (r) => (r.score === null ? <Missing reason="None of the weighted metrics is known for this device." /> : <span className="font-semibold text-copper-800">{scoreText(r.score)}</span>),
+      cell: (r) => {
+        if (r.score === null) return <Missing reason="None of the weighted metrics is known for this device." />;
+        const partial = coverageText(r.coverage);
+        return (
+          <span className="whitespace-nowrap font-semibold text-copper-800" title={partial ? `Scored ${partial}` : 'Scored on every weighted metric'}>
+            {scoreText(r.score)}
+            {partial && <span className="ml-0.5 text-amber-700">*</span>}
+          </span>
+        );
+      },
     },
     ...metricColumns,
   ];

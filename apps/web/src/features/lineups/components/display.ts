@@ -41,3 +41,9 @@ export const CHART_COLOURS =
 
 /** Currencies a rate table converts: its base and every listed rate. */
 export const rateCurrencies = (table: { base: string; rates: Record<string, number> } | null): string[] => (table ? [table.base, ...Object.keys(table.rates)] : []);
+
+/** "on 1 of 10 weighted metrics (8 % of the weight)" when a score rests on part of the weights; null when on all. */
+export function coverageText(c: { known: number; weighted: number; weightShare: number }): string | null {
+  if (c.known >= c.weighted) return null;
+  return `on ${c.known} of ${c.weighted} weighted metrics (${Math.round(c.weightShare * 100)} % of the weight)`;
+}

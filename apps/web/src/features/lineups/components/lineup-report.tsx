@@ -5,7 +5,7 @@ import { DEVICE_CATEGORY, ESTIMATES_NOTE, HOT_SURFACE_CAUTION, LINEUP_STATUS, LI
 import { Logo } from '@/components/logo';
 import { Spinner } from '@/components/page';
 import { formatDate, formatDateTime, formatMoney } from '@/lib/format';
-import { betterText, metricHeader, metricText, scoreText } from './display';
+import { betterText, coverageText, metricHeader, metricText, scoreText } from './display';
 import { ParetoTable } from './pareto-table';
 
 const ParetoChart = lazy(() => import('./pareto-chart'));
@@ -223,7 +223,10 @@ export function LineupReport({ lineup, comparison, printedBy }: { lineup: Lineup
               {rows.map((r) => (
                 <tr key={r.deviceId}>
                   <td className={`${td} num text-right font-semibold`}>{r.rank}</td>
-                  <td className={td}>{r.device.label}</td>
+                  <td className={td}>
+                    {r.device.label}
+                    {coverageText(r.coverage) && <span className="block text-[0.7rem] text-graphite-600">Scored {coverageText(r.coverage)}</span>}
+                  </td>
                   <td className={`${td} num text-right`}>{scoreText(r.score)}</td>
                 </tr>
               ))}

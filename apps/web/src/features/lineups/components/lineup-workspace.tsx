@@ -13,7 +13,7 @@ import { useComparison, type Axes } from '../api/comparison';
 import { usePreviewComparison } from '../api/preview-comparison';
 import { useUpdateLineup } from '../api/update-lineup';
 import { ComparisonTable } from './comparison-table';
-import { betterText, scoreText } from './display';
+import { betterText, coverageText, scoreText } from './display';
 import { ParetoTable } from './pareto-table';
 import { WeightSliders } from './weight-sliders';
 
@@ -30,6 +30,11 @@ function Ranking({ comparison }: { comparison: ComparisonDto }) {
           <span className="num text-right font-semibold text-graphite-500">{r.rank}</span>
           <span className="min-w-0">
             <span className="block truncate font-medium text-graphite-950">{r.device.label}</span>
+            {coverageText(r.coverage) && (
+              <span className="block text-xs text-amber-800" title="The other weighted metrics are missing for this device: its score rests on fewer figures than the others'.">
+                Scored {coverageText(r.coverage)}
+              </span>
+            )}
             <span className="mt-0.5 block h-1.5 rounded-full bg-graphite-100" aria-hidden>
               <span className="block h-1.5 rounded-full bg-copper-500" style={{ width: `${r.score ?? 0}%` }} />
             </span>
@@ -113,7 +118,10 @@ export function LineupWorkspace({ lineup, axes, onAxes }: { lineup: LineupDto; a
       >
         <div className="space-y-3 p-4">
           <ComparisonTable comparison={c} />
-          <p className="text-xs text-graphite-500">Hover a value to see where it comes from; a “—” is missing (hover it for why) and is left out of the ranking, never counted as zero.</p>
+          <p className="text-xs text-graphite-500">
+            Hover a value to see where it comes from; a “—” is missing (hover it for why) and is left out of the ranking, never counted as zero. A score marked * rests on only some of the weighted
+            metrics.
+          </p>
           {c.notes
             .filter((n) => n !== ESTIMATES_NOTE && n !== HOT_SURFACE_CAUTION)
             .map((n) => (
