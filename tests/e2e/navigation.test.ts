@@ -9,7 +9,7 @@ beforeAll(async () => {
 afterAll(() => browser?.close());
 
 /** What the left rail shows to each role (the server enforces the same rules). */
-const EVERYONE = ['Home', 'Devices', 'Findings', 'Bench tools', 'Bench runs'];
+const EVERYONE = ['Home', 'Devices', 'Findings', 'Lineups', 'Bench tools', 'Bench runs'];
 const EXPECTED: Record<string, { shows: string[]; hides: string[] }> = {
   admin: { shows: [...EVERYONE, 'Rates & cost model', 'Admin'], hides: [] },
   engineer: { shows: EVERYONE, hides: ['Rates & cost model', 'Admin'] },

@@ -20,3 +20,4 @@ export * from './findings';
 export * from './figures';
 export * from './cautions';
 export * from './search';
+export * from './lineups';

@@ -21,6 +21,8 @@ import { CostModelSchema } from './cost/cost-model.entity';
 import { PartPriceSchema } from './cost/part-price.entity';
 import { RateTableSchema } from './cost/rate-table.entity';
 import { BenchRunSchema } from './runs/bench-run.entity';
+import { LineupSchema } from './lineups/lineup.entity';
+import { LineupDeviceSchema } from './lineups/lineup-device.entity';
 
 export const entities = [
   UserSchema,
@@ -45,4 +47,6 @@ export const entities = [
   RateTableSchema,
   CostModelSchema,
   BenchRunSchema,
+  LineupSchema,
+  LineupDeviceSchema,
 ];

@@ -19,6 +19,7 @@ import { toolRoutes } from './tools/routes';
 import { userRoutes } from './users/routes';
 import { runRoutes } from './runs/routes';
 import { searchRoutes } from './search/routes';
+import { lineupRoutes } from './lineups/routes';
 
 export function allRoutes(deps: AppDeps, version: string): RouteDef[] {
   return [
@@ -40,5 +41,6 @@ export function allRoutes(deps: AppDeps, version: string): RouteDef[] {
     ...costRoutes,
     ...runRoutes(deps),
     ...searchRoutes,
+    ...lineupRoutes,
   ];
 }

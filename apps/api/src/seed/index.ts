@@ -9,6 +9,7 @@ import { seedPhotos } from './photos';
 import { seedCost } from './cost';
 import { seedRuns } from './runs';
 import { seedFindings } from './findings';
+import { seedLineups } from './lineups';
 
 /** Seed steps in order. Later features append their step here. */
 export const SEED_STEPS: SeedStep[] = [
@@ -19,6 +20,7 @@ export const SEED_STEPS: SeedStep[] = [
   { name: 'cost', run: seedCost },
   { name: 'runs', run: seedRuns },
   { name: 'findings', run: seedFindings },
+  { name: 'lineups', run: seedLineups },
 ];
 
 /** Seeds the invented demo workspace when the database has no users. Returns whether it seeded. */

@@ -43,8 +43,21 @@ export const router = createBrowserRouter([
           { path: '/devices/:id', lazy: () => import('./routes/device') },
           { path: '/devices/:id/edit', lazy: () => import('./routes/device-edit') },
           { path: '/findings', lazy: () => import('./routes/findings') },
+          { path: '/lineups', lazy: () => import('./routes/lineups') },
+          { path: '/lineups/new', lazy: () => import('./routes/lineup-new') },
+          { path: '/lineups/:id', lazy: () => import('./routes/lineup') },
+          { path: '/lineups/:id/edit', lazy: () => import('./routes/lineup-edit') },
           { path: '*', lazy: () => import('./routes/not-found') },
         ],
+      },
+      // Printable reports: signed in, without the rail (the page is the document).
+      {
+        element: (
+          <RequireAuth>
+            <Outlet />
+          </RequireAuth>
+        ),
+        children: [{ path: '/lineups/:id/print', lazy: () => import('./routes/lineup-print') }],
       },
     ],
   },

@@ -1,6 +1,6 @@
 import type { Role } from '@splitcase/contracts';
 import type { LucideIcon } from 'lucide-react';
-import { Activity, Boxes, Coins, House, ScanSearch, ShieldCheck, Wrench } from 'lucide-react';
+import { Activity, Boxes, ChartScatter, Coins, House, ScanSearch, ShieldCheck, Wrench } from 'lucide-react';
 import { paths } from './paths';
 
 export interface NavItem {
@@ -19,6 +19,7 @@ export const NAV: NavItem[] = [
   { label: 'Home', to: paths.home(), icon: House, roles: ALL },
   { label: 'Devices', to: paths.devices(), icon: Boxes, roles: ALL, prefix: '/devices' },
   { label: 'Findings', to: paths.findings(), icon: ScanSearch, roles: ALL, prefix: '/findings' },
+  { label: 'Lineups', to: paths.lineups(), icon: ChartScatter, roles: ALL, prefix: '/lineups' },
   { label: 'Bench tools', to: paths.tools(), icon: Wrench, roles: ALL, prefix: '/tools' },
   { label: 'Bench runs', to: paths.benchRuns(), icon: Activity, roles: ALL, prefix: '/bench/runs' },
   { label: 'Rates & cost model', to: paths.rates(), icon: Coins, roles: ['admin', 'sourcing'] },

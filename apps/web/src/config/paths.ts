@@ -33,4 +33,16 @@ export const paths = {
   rates: () => '/rates',
   /** The findings explorer; `query` is a search as contracts' searchStateToQuery writes it. */
   findings: (query?: string) => (query ? `/findings?${query}` : '/findings'),
+  lineups: () => '/lineups',
+  newLineup: () => '/lineups/new',
+  lineup: (id: number) => `/lineups/${id}`,
+  editLineup: (id: number) => `/lineups/${id}/edit`,
+  /** The printable lineup report, with the chart's axes. */
+  lineupPrint: (id: number, axes?: { x?: string | null; y?: string | null }) => {
+    const q = new URLSearchParams();
+    if (axes?.x) q.set('x', axes.x);
+    if (axes?.y) q.set('y', axes.y);
+    const qs = q.toString();
+    return `/lineups/${id}/print${qs ? `?${qs}` : ''}`;
+  },
 } as const;

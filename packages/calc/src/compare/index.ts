@@ -1,4 +1,4 @@
-// Lineup comparison: Pareto frontier, normalised device metrics and weighted scores.
+// Lineup comparison: Pareto frontier, normalised device metrics, weighted scores and the main load.
 export { paretoFrontier, paretoFrontierXY, type Better } from './pareto';
 export {
   comparisonMetrics,
@@ -11,3 +11,4 @@ export {
   type DeviceMetrics,
   type ScoredRow,
 } from './metrics';
+export { mainLoads, MAIN_LOAD_KIND, type MainLoadChoice } from './main-load';

@@ -1,0 +1,16 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '@/lib/api-client';
+import { lineupScope, lineupsKey } from './keys';
+
+export const deleteLineup = (id: number) => api.delete<void>(`/api/lineups/${id}`);
+
+export function useDeleteLineup() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: deleteLineup,
+    onSuccess: (_v, id) => {
+      qc.removeQueries({ queryKey: lineupScope(id) });
+      return qc.invalidateQueries({ queryKey: lineupsKey });
+    },
+  });
+}
