@@ -19,3 +19,4 @@ export * from './devices';
 export * from './findings';
 export * from './figures';
 export * from './cautions';
+export * from './home';

@@ -18,6 +18,7 @@ import { teardownRoutes } from './teardowns/routes';
 import { toolRoutes } from './tools/routes';
 import { userRoutes } from './users/routes';
 import { runRoutes } from './runs/routes';
+import { homeRoutes } from './home/routes';
 
 export function allRoutes(deps: AppDeps, version: string): RouteDef[] {
   return [
@@ -38,5 +39,6 @@ export function allRoutes(deps: AppDeps, version: string): RouteDef[] {
     ...measurementRoutes,
     ...costRoutes,
     ...runRoutes(deps),
+    ...homeRoutes,
   ];
 }
