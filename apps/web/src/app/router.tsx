@@ -22,6 +22,15 @@ export const router = createBrowserRouter([
       // Reachable signed in or out: the link in an e-mail decides.
       { path: '/accept-invitation', lazy: () => import('./routes/accept-invitation') },
       { path: '/reset-password', lazy: () => import('./routes/reset-password') },
+      // Printable pages: signed in, without the rails (a clean preview that prints as it shows).
+      {
+        element: (
+          <RequireAuth>
+            <Outlet />
+          </RequireAuth>
+        ),
+        children: [{ path: '/teardowns/:id/report', lazy: () => import('./routes/teardown-report') }],
+      },
       {
         element: (
           <RequireAuth>

@@ -31,4 +31,6 @@ export const paths = {
   /** A photo on the stage of the photos section, optionally with one pin selected. */
   teardownPhoto: (id: number, photoId: number, pinId?: number) => `/teardowns/${id}/photos?photo=${photoId}${pinId ? `&pin=${pinId}` : ''}`,
   rates: () => '/rates',
+  /** The printable lab report of a teardown (its own page, without the rails). */
+  teardownReport: (id: number) => `/teardowns/${id}/report`,
 } as const;
