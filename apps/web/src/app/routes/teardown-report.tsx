@@ -8,6 +8,7 @@ import { ArrowLeft, Printer } from 'lucide-react';
 import { TEARDOWN_STATUS, type TeardownDto } from '@splitcase/contracts';
 import { Button } from '@/components/button';
 import { ErrorPanel } from '@/components/error-boundary';
+import { ApiError } from '@/lib/api-client';
 import { Spinner } from '@/components/page';
 import { paths } from '@/config/paths';
 import { formatDate } from '@/lib/format';
@@ -71,9 +72,18 @@ export function Component() {
     };
   }, [t]);
 
-  if (!valid) return <Page><ErrorPanel error={new Error('This address does not name a teardown.')} /></Page>;
-  if (teardown.isPending) return <Page><Spinner label="Putting the report together…" /></Page>;
-  if (teardown.isError) return <Page><ErrorPanel error={teardown.error} onRetry={() => teardown.refetch()} /></Page>;
+  const home = (
+    <Link to={paths.home()} className="inline-flex items-center gap-1.5 text-sm font-medium text-graphite-700 hover:text-copper-700">
+      <ArrowLeft className="size-4" aria-hidden /> Back to home
+    </Link>
+  );
+  if (!valid) return <Page toolbar={home} notice={<ErrorPanel error={new Error('This address does not name a teardown.')} />} />;
+  if (teardown.isPending) return <Page toolbar={home} notice={<Spinner label="Putting the report together…" />} />;
+  if (teardown.isError) {
+    // A missing teardown (or one a viewer may not read) will not appear on a retry.
+    const retry = teardown.error instanceof ApiError && teardown.error.status < 500 ? undefined : () => teardown.refetch();
+    return <Page toolbar={home} notice={<ErrorPanel error={teardown.error} onRetry={retry} />} />;
+  }
 
   const queries = [photos, parts, cost, power, figures, runs, findings];
   const ready = queries.every((q) => !q.isPending);
@@ -86,13 +96,13 @@ export function Component() {
     {
       id: 'photos',
       title: 'Photos and callouts',
-      aside: photos.data ? `${photoList.length} photo${photoList.length === 1 ? '' : 's'}, ${photoList.reduce((n, p) => n + p.callouts.length, 0)} pins` : undefined,
+      aside: photoList.length ? `${photoList.length} photo${photoList.length === 1 ? '' : 's'}, ${photoList.reduce((n, p) => n + p.callouts.length, 0)} pins` : undefined,
       body: photos.isError ? <SectionError what="photos" error={photos.error} /> : <ReportPhotos photos={photoList} renderPinned={(photo) => <PinnedPhoto photo={photo} />} />,
     },
     {
       id: 'bom',
       title: 'Parts (BOM)',
-      aside: parts.data ? `${parts.data.length} lines, ${parts.data.reduce((n, p) => n + p.quantity, 0)} pieces` : undefined,
+      aside: parts.data?.length ? `${parts.data.length} line${parts.data.length === 1 ? '' : 's'}, ${parts.data.reduce((n, p) => n + p.quantity, 0)} pieces` : undefined,
       body: parts.isError ? (
         <SectionError what="parts" error={parts.error} />
       ) : (
@@ -107,7 +117,7 @@ export function Component() {
     {
       id: 'figures',
       title: 'Derived figures',
-      aside: 'formula, inputs and source of each',
+      aside: figures.data?.figures.length ? 'formula, inputs and source of each' : undefined,
       body: figures.isError ? <SectionError what="figures" error={figures.error} /> : figures.data ? <ReportFigures data={figures.data} /> : null,
     },
     {
@@ -118,7 +128,7 @@ export function Component() {
     {
       id: 'findings',
       title: 'Findings',
-      aside: findings.data ? `${findings.data.findings.length} recorded` : undefined,
+      aside: findings.data?.findings.length ? `${findings.data.findings.length} recorded` : undefined,
       body: findings.isError ? <SectionError what="findings" error={findings.error} /> : <ReportFindings findings={findings.data?.findings ?? []} photos={photoList} />,
     },
     { id: 'safety', title: 'Safety', body: <ReportSafety teardown={t!} hot={hot} /> },
@@ -162,13 +172,14 @@ export function Component() {
   );
 }
 
-/** The preview page: a toolbar (never printed) over the sheet. */
-function Page({ toolbar, children }: { toolbar?: ReactNode; children: ReactNode }) {
+/** The preview page: a toolbar (never printed) over the sheet, or over a notice while there is no sheet. */
+function Page({ toolbar, notice, children }: { toolbar: ReactNode; notice?: ReactNode; children?: ReactNode }) {
   return (
     <div className="min-h-screen bg-graphite-100 pb-10 print:min-h-0 print:bg-white print:pb-0">
       <div className="no-print sticky top-0 z-10 mb-6 border-b border-graphite-150 bg-white/95 backdrop-blur">
         <div className="mx-auto flex h-14 w-[210mm] max-w-full items-center justify-between gap-4 px-4">{toolbar}</div>
       </div>
+      {notice && <div className="mx-auto w-[210mm] max-w-full px-4">{notice}</div>}
       {children}
     </div>
   );

@@ -4,5 +4,6 @@ import { api } from '@/lib/api-client';
 
 export const homeKey = ['home'] as const;
 export const getHome = () => api.get<HomeResponse>('/api/home');
-export const homeQuery = () => queryOptions({ queryKey: homeKey, queryFn: getHome });
+// Always fresh when the page opens: it sums up changes made anywhere else a moment ago.
+export const homeQuery = () => queryOptions({ queryKey: homeKey, queryFn: getHome, staleTime: 0 });
 export const useHome = () => useQuery(homeQuery());

@@ -52,7 +52,9 @@ export function AdminMain({ data }: { data: AdminHome }) {
           <HomeTable label="Invitations not accepted yet" head={['E-mail', 'Role', 'Invited', 'Expires']}>
             {data.pendingInvitations.map((i) => (
               <tr key={i.id}>
-                <td className={`${cell} max-w-0 truncate font-medium text-graphite-900`}>{i.email}</td>
+                <td className={`${cell} w-full max-w-0 truncate font-medium text-graphite-900`} title={i.email}>
+                  {i.email}
+                </td>
                 <td className={cell}>
                   <Badge>{ROLE_LABELS[i.role]}</Badge>
                 </td>

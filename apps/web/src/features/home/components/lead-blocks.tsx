@@ -1,7 +1,7 @@
 import { Eye, TriangleAlert } from 'lucide-react';
 import type { LeadHome } from '@splitcase/contracts';
 import { paths } from '@/config/paths';
-import { formatDateTime } from '@/lib/format';
+import { formatDate, formatDateTime } from '@/lib/format';
 import { ActionLink, Block, EmptyLine, FindingLine, HomeTable, TeardownLink, ago, cell } from './home-parts';
 
 /** Lead: teardowns waiting for review, oldest first. */
@@ -11,7 +11,7 @@ export function LeadMain({ data }: { data: LeadHome }) {
       {data.waiting.length === 0 ? (
         <EmptyLine action={<ActionLink to={paths.devices()}>Open devices</ActionLink>}>No teardown is waiting for review. Submissions appear here, oldest first.</EmptyLine>
       ) : (
-        <HomeTable label="Waiting for your review" head={['Teardown', 'Submitted by', 'Waiting since', '']}>
+        <HomeTable label="Waiting for your review" head={['Teardown', 'Submitted by', 'Submitted', '']}>
           {data.waiting.map((t) => (
             <tr key={t.id} data-teardown={t.id}>
               <td className={cell}>
@@ -19,7 +19,7 @@ export function LeadMain({ data }: { data: LeadHome }) {
               </td>
               <td className={`${cell} whitespace-nowrap text-graphite-700`}>{t.submittedBy?.name ?? t.engineer.name}</td>
               <td className={`${cell} whitespace-nowrap text-graphite-600`} title={formatDateTime(t.submittedAt)}>
-                {ago(t.submittedAt)}
+                <span className="num text-graphite-800">{formatDate(t.submittedAt)}</span> · {ago(t.submittedAt)}
               </td>
               <td className={`${cell} text-right`}>
                 <ActionLink to={paths.teardown(t.id)}>Review</ActionLink>
