@@ -1,6 +1,6 @@
 // GET /api/home on the demo workspace: each role gets its own blocks, computed on the server.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { RATES_STALE_AFTER_DAYS, type HomeResponse } from '@splitcase/contracts';
+import { homeResponse, RATES_STALE_AFTER_DAYS, type HomeResponse } from '@splitcase/contracts';
 import { PartPriceSchema } from '../../apps/api/src/modules/cost/part-price.entity';
 import { FindingSchema } from '../../apps/api/src/modules/findings/finding.entity';
 import { PartSchema } from '../../apps/api/src/modules/parts/part.entity';
@@ -10,7 +10,8 @@ import { makeTestApp, type Agent, type TestApp } from '../support/test-app';
 let t: TestApp;
 const agents: Record<string, Agent> = {};
 const as = async (role: string) => (agents[role] ??= await t.as(role));
-const home = async (role: string) => (await (await as(role)).get('/api/home').expect(200)).body as HomeResponse;
+/** The caller's home, checked against the published response schema. */
+const home = async (role: string): Promise<HomeResponse> => homeResponse.parse((await (await as(role)).get('/api/home').expect(200)).body);
 const name = (x: { device: { maker: string; model: string } }) => `${x.device.maker} ${x.device.model}`;
 
 beforeAll(async () => {
