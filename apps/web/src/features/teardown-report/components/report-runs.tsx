@@ -1,3 +1,4 @@
+import { TriangleAlert } from 'lucide-react';
 import { RUN_KIND, SURFACE_MATERIAL, type RunDto } from '@splitcase/contracts';
 import { formatQuantity, sig } from '@/lib/format';
 import { NoneRecorded, ReportTable, duration } from './report-layout';
@@ -5,31 +6,33 @@ import { NoneRecorded, ReportTable, duration } from './report-layout';
 const celsius = (c: number | null | undefined) => (c === null || c === undefined ? '—' : `${sig(c)} °C`);
 const percent = (fraction: number) => `${sig(fraction * 100)} %`;
 
-/** The key numbers of a run's analysis, by kind, in one line each. */
-function keyResults(run: RunDto): string[] {
+/** The key numbers of a run's analysis, by kind, in one line each; `hot` marks a surface hot enough to burn. */
+function keyResults(run: RunDto): { text: string; hot?: boolean }[] {
   const a = run.analysis;
-  const out: string[] = [];
+  const out: { text: string; hot?: boolean }[] = [];
+  const push = (text: string, hot = false) => out.push({ text, hot });
   if (a.discharge) {
     const d = a.discharge;
-    out.push(`Mean ${formatQuantity(d.timeAverageVolts, 'V')}, ${formatQuantity(d.averageCurrentA, 'A')}, ${formatQuantity(d.averagePowerW, 'W')}; minimum ${formatQuantity(d.minVolts, 'V')}`);
-    if (d.cutoff) out.push(`Stopped at ${formatQuantity(d.cutoff.volts, 'V')} after ${duration(d.cutoff.t)} (${d.cutoff.reason.replace(/-/g, ' ')})`);
+    push(`Mean ${formatQuantity(d.timeAverageVolts, 'V')}, ${formatQuantity(d.averageCurrentA, 'A')}, ${formatQuantity(d.averagePowerW, 'W')}; minimum ${formatQuantity(d.minVolts, 'V')}`);
+    if (d.cutoff) push(`Stopped at ${formatQuantity(d.cutoff.volts, 'V')} after ${duration(d.cutoff.t)} (${d.cutoff.reason.replace(/-/g, ' ')})`);
   }
   if (a.charge) {
     const c = a.charge;
-    out.push(`Constant current ${formatQuantity(c.cc.currentA, 'A')}${c.cv ? `, then constant voltage ${formatQuantity(c.cv.volts, 'V')}` : ''}; charge time ${duration(c.chargeTimeS)}`);
-    out.push(c.terminated ? `Terminated at ${formatQuantity(c.terminationCurrentA, 'A')}` : 'Did not reach termination in the log');
+    push(`Constant current ${formatQuantity(c.cc.currentA, 'A')}${c.cv ? `, then constant voltage ${formatQuantity(c.cv.volts, 'V')}` : ''}; charge time ${duration(c.chargeTimeS)}`);
+    push(c.terminated ? `Terminated at ${formatQuantity(c.terminationCurrentA, 'A')}` : 'Did not reach termination in the log');
   }
   if (a.thermal) {
     const th = a.thermal;
-    out.push(`Peak ${celsius(th.maxC)} after ${duration(th.maxAtS)}${th.steadyState.reached ? `; steady ${celsius(th.steadyState.temperatureC)}` : '; no steady state in the log'}`);
+    push(`Peak ${celsius(th.maxC)} after ${duration(th.maxAtS)}${th.steadyState.reached ? `; steady ${celsius(th.steadyState.temperatureC)}` : '; no steady state in the log'}`);
     const b = th.burnThreshold;
-    out.push(
+    push(
       `${th.marginC < 0 ? `${sig(-th.marginC)} °C above` : `${sig(th.marginC)} °C below`} the ${celsius(b.temperatureC)} burn threshold for ${SURFACE_MATERIAL.labels[b.material].toLowerCase()} at ${b.contactSeconds} s contact (${b.source})`,
+      th.marginC < 0,
     );
   }
   if (a.powerBank) {
     const p = a.powerBank;
-    out.push(`${formatQuantity(p.ampHoursAt5V, 'Ah')} at 5 V; ${formatQuantity(p.cellEnergyWh, 'Wh')} in the cells (${p.cellEnergySource}); conversion ${percent(p.efficiency)}`);
+    push(`${formatQuantity(p.ampHoursAt5V, 'Ah')} at 5 V; ${formatQuantity(p.cellEnergyWh, 'Wh')} in the cells (${p.cellEnergySource}); conversion ${percent(p.efficiency)}`);
   }
   return out;
 }
@@ -60,8 +63,13 @@ export function ReportRuns({ runs }: { runs: RunDto[] }) {
           </td>
           <td className="text-2xs">
             {keyResults(r).map((line) => (
-              <span key={line} className="block">
-                {line}
+              <span key={line.text} className={`block ${line.hot ? 'font-medium text-brick-700' : ''}`}>
+                {line.hot && (
+                  <span className="mr-1 inline-flex items-center gap-0.5 uppercase">
+                    <TriangleAlert className="inline size-3" aria-hidden /> Hot:
+                  </span>
+                )}
+                {line.text}
               </span>
             ))}
           </td>
