@@ -21,3 +21,4 @@ export * from './figures';
 export * from './cautions';
 export * from './search';
 export * from './lineups';
+export * from './home';

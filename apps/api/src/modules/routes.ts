@@ -20,6 +20,7 @@ import { userRoutes } from './users/routes';
 import { runRoutes } from './runs/routes';
 import { searchRoutes } from './search/routes';
 import { lineupRoutes } from './lineups/routes';
+import { homeRoutes } from './home/routes';
 
 export function allRoutes(deps: AppDeps, version: string): RouteDef[] {
   return [
@@ -42,5 +43,6 @@ export function allRoutes(deps: AppDeps, version: string): RouteDef[] {
     ...runRoutes(deps),
     ...searchRoutes,
     ...lineupRoutes,
+    ...homeRoutes,
   ];
 }

@@ -22,6 +22,18 @@ export const router = createBrowserRouter([
       // Reachable signed in or out: the link in an e-mail decides.
       { path: '/accept-invitation', lazy: () => import('./routes/accept-invitation') },
       { path: '/reset-password', lazy: () => import('./routes/reset-password') },
+      // Printable pages: signed in, without the rails (a clean preview that prints as it shows).
+      {
+        element: (
+          <RequireAuth>
+            <Outlet />
+          </RequireAuth>
+        ),
+        children: [
+          { path: '/teardowns/:id/report', lazy: () => import('./routes/teardown-report') },
+          { path: '/lineups/:id/print', lazy: () => import('./routes/lineup-print') },
+        ],
+      },
       {
         element: (
           <RequireAuth>
@@ -49,15 +61,6 @@ export const router = createBrowserRouter([
           { path: '/lineups/:id/edit', lazy: () => import('./routes/lineup-edit') },
           { path: '*', lazy: () => import('./routes/not-found') },
         ],
-      },
-      // Printable reports: signed in, without the rail (the page is the document).
-      {
-        element: (
-          <RequireAuth>
-            <Outlet />
-          </RequireAuth>
-        ),
-        children: [{ path: '/lineups/:id/print', lazy: () => import('./routes/lineup-print') }],
       },
     ],
   },

@@ -45,4 +45,6 @@ export const paths = {
     const qs = q.toString();
     return `/lineups/${id}/print${qs ? `?${qs}` : ''}`;
   },
+  /** The printable lab report of a teardown (its own page, without the rails). */
+  teardownReport: (id: number) => `/teardowns/${id}/report`,
 } as const;

@@ -1,5 +1,6 @@
 import { Suspense } from 'react';
 import { Link, NavLink, useParams } from 'react-router';
+import { Printer } from 'lucide-react';
 import { DEVICE_CATEGORY } from '@splitcase/contracts';
 import { ErrorPanel, WidgetBoundary } from '@/components/error-boundary';
 import { Spinner } from '@/components/page';
@@ -50,7 +51,15 @@ export function Component() {
             </span>
           </div>
         </div>
-        <ReviewActions teardown={t} />
+        <div className="no-print flex flex-wrap items-center gap-2">
+          <Link
+            to={paths.teardownReport(t.id)}
+            className="inline-flex h-9 items-center gap-2 rounded-md bg-white px-3.5 text-sm font-medium text-graphite-900 ring-1 ring-inset ring-graphite-200 hover:bg-graphite-50 hover:ring-graphite-300"
+          >
+            <Printer className="size-4" aria-hidden /> Print report
+          </Link>
+          <ReviewActions teardown={t} />
+        </div>
       </header>
       <div className="grid gap-6 xl:grid-cols-[10rem_minmax(0,1fr)_20rem] lg:grid-cols-[10rem_minmax(0,1fr)]">
         <nav aria-label="Teardown sections" className="no-print">

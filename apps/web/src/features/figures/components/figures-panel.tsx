@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { Link } from 'react-router';
 import { toast } from 'sonner';
 import { Check, ChevronDown, ChevronRight, Gauge, RotateCcw, Sparkles, TriangleAlert, X } from 'lucide-react';
-import { FINDING_KIND, type FigureDto, type FigureInputDto, type SuggestionDto } from '@splitcase/contracts';
+import { FINDING_KIND, type FigureDto, type SuggestionDto } from '@splitcase/contracts';
 import { Badge } from '@/components/badges';
 import { Button } from '@/components/button';
 import { ErrorPanel } from '@/components/error-boundary';
@@ -10,51 +10,15 @@ import { Spinner } from '@/components/page';
 import { EstimatesNote, HotSurfaceNote } from '@/components/safety';
 import { SeverityBadge } from '@/components/status';
 import { paths } from '@/config/paths';
-import { formatQuantity, sig } from '@/lib/format';
+import { figureInputValue as inputValue, figureValue, groupFigures } from '@/lib/figure-values';
 import { mutationErrorMessage } from '@/lib/unpublish-confirm';
 import { useAcceptSuggestion } from '../api/accept-suggestion';
 import { useDismissSuggestion } from '../api/dismiss-suggestion';
 import { useFigures } from '../api/get-figures';
 import { useReopenSuggestion } from '../api/reopen-suggestion';
 
-/** Words for the class strings the server sends (air-transport classes). */
-const VALUE_WORDS: Record<string, string> = {
-  'up-to-100-wh': 'Up to 100 Wh',
-  '100-to-160-wh': 'Over 100 Wh, up to 160 Wh',
-  'over-160-wh': 'Over 160 Wh',
-};
-
 /** Units shown as figures of energy and power (cell teal, LOOK.md). */
 const ENERGY_UNITS = new Set(['W', 'Wh', 'Ah', 'h', 'Wh/kg', 'A', 'W/cm²']);
-
-export function figureValue(value: number | string, unit: string): string {
-  if (typeof value === 'string') return VALUE_WORDS[value] ?? value;
-  if (unit === '' && Number.isInteger(value)) return String(value);
-  return formatQuantity(value, unit);
-}
-
-function inputValue(i: FigureInputDto): string {
-  if (i.value === null) return '—';
-  if (typeof i.value === 'boolean') return i.value ? 'yes' : 'no';
-  if (typeof i.value === 'string') return VALUE_WORDS[i.value] ?? i.value;
-  if (i.unit) return formatQuantity(i.value, i.unit);
-  return Number.isInteger(i.value) ? String(i.value) : sig(i.value);
-}
-
-/** Figures grouped by what they describe (the key's first word). */
-const GROUPS: { title: string; match: RegExp }[] = [
-  { title: 'Battery', match: /^pack\./ },
-  { title: 'Loads', match: /^load\./ },
-  { title: 'Runtime and charging', match: /^(runtime|powerbank|charge|capacity)\./ },
-  { title: 'Heater and touch', match: /^heater\./ },
-  { title: 'Heater traces', match: /^trace\./ },
-];
-
-function groupFigures(figures: FigureDto[]): { title: string; figures: FigureDto[] }[] {
-  const out = GROUPS.map((g) => ({ title: g.title, figures: figures.filter((f) => g.match.test(f.key)) }));
-  const rest = figures.filter((f) => !GROUPS.some((g) => g.match.test(f.key)));
-  return [...out, { title: 'Other', figures: rest }].filter((g) => g.figures.length > 0);
-}
 
 function FigureRow({ f, showCaution }: { f: FigureDto; showCaution: boolean }) {
   const [open, setOpen] = useState(false);

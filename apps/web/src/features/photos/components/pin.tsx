@@ -1,9 +1,10 @@
 import type { CalloutDto, PhotoDto } from '@splitcase/contracts';
 
-type PinSize = 'stage' | 'thumb';
+type PinSize = 'stage' | 'report' | 'thumb';
 
 const SIZES: Record<PinSize, string> = {
   stage: 'size-7 text-[13px] ring-2',
+  report: 'size-5 text-[10px] ring-2',
   thumb: 'size-3.5 text-[8px] ring-1',
 };
 

@@ -1,0 +1,93 @@
+import { CHEMISTRY, CONNECTION, CONVERTER_ROLE, CONVERTER_TOPOLOGY, JOINING, LOAD_KIND, SURFACE_MATERIAL, type PowerSystemDto } from '@splitcase/contracts';
+import { formatPercent, formatStored } from '@/lib/format';
+import { Facts, NoneRecorded, ReportSubheading, ReportTable } from './report-layout';
+
+/** What the engineer typed ("2700 mAh") when there is one, else the stored SI value formatted. */
+const shown = (entered: Record<string, string>, key: string, value: number | null | undefined, unit: string) => entered[key] ?? formatStored(value, unit);
+
+/** The pack, the loads and the converters as recorded. */
+export function ReportPower({ power }: { power: PowerSystemDto }) {
+  const { pack, loads, converters } = power;
+  if (!pack && !loads.length && !converters.length) return <NoneRecorded>No power system recorded.</NoneRecorded>;
+  const converterName = new Map(converters.map((c) => [c.id, c.label || CONVERTER_TOPOLOGY.labels[c.topology]]));
+  return (
+    <div>
+      <ReportSubheading>Pack</ReportSubheading>
+      {pack ? (
+        <Facts
+          items={[
+            { label: 'Chemistry', value: CHEMISTRY.labels[pack.chemistry] },
+            { label: 'Cell format', value: pack.cellFormat ?? '—' },
+            { label: 'Configuration', value: <span className="num">{`${pack.series}S${pack.parallel}P (${pack.series * pack.parallel} cell${pack.series * pack.parallel === 1 ? '' : 's'})`}</span> },
+            { label: 'Protection', value: pack.protection ? 'Protection circuit present' : 'No protection circuit' },
+            { label: 'Cell nominal', value: <span className="num">{shown(pack.entered, 'nominalVolts', pack.nominalVolts, 'V')}</span> },
+            { label: 'Cell maximum', value: <span className="num">{shown(pack.entered, 'maxVolts', pack.maxVolts, 'V')}</span> },
+            { label: 'Cell rated', value: <span className="num">{shown(pack.entered, 'capacityAh', pack.capacityAh, 'Ah')}</span> },
+            { label: 'Cell measured', value: <span className="num">{shown(pack.entered, 'measuredCapacityAh', pack.measuredCapacityAh, 'Ah')}</span> },
+            { label: 'Pack mass', value: <span className="num">{shown(pack.entered, 'massKg', pack.massKg, 'kg')}</span> },
+            { label: 'Joining', value: pack.joining ? JOINING.labels[pack.joining] : '—' },
+          ]}
+        />
+      ) : (
+        <NoneRecorded>No pack recorded.</NoneRecorded>
+      )}
+
+      <ReportSubheading>Loads</ReportSubheading>
+      {loads.length ? (
+        <ReportTable label="Loads" keep head={['Load', 'Kind', 'Per element', 'Count', 'Duty', 'Supply', 'Fed from', 'Heated area']}>
+          {loads.map((l) => (
+            <tr key={l.id}>
+              <td className="text-graphite-950">{l.label}</td>
+              <td>{LOAD_KIND.labels[l.kind]}</td>
+              <td className="num">
+                {[
+                  l.resistanceOhms !== null ? shown(l.entered, 'resistanceOhms', l.resistanceOhms, 'Ω') : null,
+                  l.currentAmps !== null ? shown(l.entered, 'currentAmps', l.currentAmps, 'A') : null,
+                  l.powerWatts !== null ? shown(l.entered, 'powerWatts', l.powerWatts, 'W') : null,
+                ]
+                  .filter(Boolean)
+                  .join(', ') || '—'}
+              </td>
+              <td className="num whitespace-nowrap">
+                {l.count}
+                {l.count > 1 ? ` in ${CONNECTION.labels[l.connection].toLowerCase()}` : ''}
+              </td>
+              <td className="num">{l.entered.duty ?? formatPercent(l.duty, 0)}</td>
+              <td className="num">{l.supplyVolts !== null ? shown(l.entered, 'supplyVolts', l.supplyVolts, 'V') : 'from its source'}</td>
+              <td>{l.converterId ? (converterName.get(l.converterId) ?? 'a converter') : 'the pack'}</td>
+              <td className="num">
+                {l.heatedAreaM2 !== null ? shown(l.entered, 'heatedAreaM2', l.heatedAreaM2, 'm²') : '—'}
+                {l.surfaceMaterial ? `, ${SURFACE_MATERIAL.labels[l.surfaceMaterial].toLowerCase()}` : ''}
+              </td>
+            </tr>
+          ))}
+        </ReportTable>
+      ) : (
+        <NoneRecorded>No loads recorded.</NoneRecorded>
+      )}
+
+      <ReportSubheading>Converters</ReportSubheading>
+      {converters.length ? (
+        <ReportTable label="Converters" keep head={['Converter', 'Topology', 'Role', 'In → out', 'Rated current', 'Charge current', 'Efficiency']}>
+          {converters.map((c) => (
+            <tr key={c.id}>
+              <td className="text-graphite-950">{c.label || '—'}</td>
+              <td>{CONVERTER_TOPOLOGY.labels[c.topology]}</td>
+              <td>{CONVERTER_ROLE.labels[c.role]}</td>
+              <td className="num whitespace-nowrap">
+                {shown(c.entered, 'inputVolts', c.inputVolts, 'V')} → {shown(c.entered, 'outputVolts', c.outputVolts, 'V')}
+              </td>
+              <td className="num">{c.ratedCurrentAmps !== null ? shown(c.entered, 'ratedCurrentAmps', c.ratedCurrentAmps, 'A') : '—'}</td>
+              <td className="num">{c.chargeCurrentAmps !== null ? shown(c.entered, 'chargeCurrentAmps', c.chargeCurrentAmps, 'A') : '—'}</td>
+              <td className="num whitespace-nowrap">
+                {c.efficiency !== null ? (c.entered.efficiency ?? formatPercent(c.efficiency, 0)) : '—'} ({c.efficiencySource})
+              </td>
+            </tr>
+          ))}
+        </ReportTable>
+      ) : (
+        <NoneRecorded>No converters recorded.</NoneRecorded>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,40 @@
+// How a derived figure and its inputs read on screen and in print (the API computes them; this only
+// formats): SI prefixes through lib/format, words for the class strings the server sends.
+import type { FigureDto, FigureInputDto } from '@splitcase/contracts';
+import { formatQuantity, sig } from './format';
+
+/** Words for the class strings the server sends (air-transport classes). */
+export const FIGURE_VALUE_WORDS: Record<string, string> = {
+  'up-to-100-wh': 'Up to 100 Wh',
+  '100-to-160-wh': 'Over 100 Wh, up to 160 Wh',
+  'over-160-wh': 'Over 160 Wh',
+};
+
+export function figureValue(value: number | string, unit: string): string {
+  if (typeof value === 'string') return FIGURE_VALUE_WORDS[value] ?? value;
+  if (unit === '' && Number.isInteger(value)) return String(value);
+  return formatQuantity(value, unit);
+}
+
+export function figureInputValue(i: FigureInputDto): string {
+  if (i.value === null) return '—';
+  if (typeof i.value === 'boolean') return i.value ? 'yes' : 'no';
+  if (typeof i.value === 'string') return FIGURE_VALUE_WORDS[i.value] ?? i.value;
+  if (i.unit) return formatQuantity(i.value, i.unit);
+  return Number.isInteger(i.value) ? String(i.value) : sig(i.value);
+}
+
+/** Figures grouped by what they describe (the key's first word). */
+const GROUPS: { title: string; match: RegExp }[] = [
+  { title: 'Battery', match: /^pack\./ },
+  { title: 'Loads', match: /^load\./ },
+  { title: 'Runtime and charging', match: /^(runtime|powerbank|charge|capacity)\./ },
+  { title: 'Heater and touch', match: /^heater\./ },
+  { title: 'Heater traces', match: /^trace\./ },
+];
+
+export function groupFigures(figures: FigureDto[]): { title: string; figures: FigureDto[] }[] {
+  const out = GROUPS.map((g) => ({ title: g.title, figures: figures.filter((f) => g.match.test(f.key)) }));
+  const rest = figures.filter((f) => !GROUPS.some((g) => g.match.test(f.key)));
+  return [...out, { title: 'Other', figures: rest }].filter((g) => g.figures.length > 0);
+}
