@@ -470,6 +470,12 @@ describe('demo photos', () => {
       expect(pin.y).toBeLessThanOrEqual(1);
       expect(pin.label.length).toBeGreaterThan(0);
     }
+    // Pins that name a charger point at a charger part, never at the protection IC beside it.
+    const chargerPins = (await conn.execute(
+      "select c.label, pa.description from callouts c join photos p on p.id = c.photo_id join parts pa on pa.id = c.part_id where p.original_name like 'demo-%' and c.label like '%charger%'",
+    )) as { label: string; description: string }[];
+    expect(chargerPins.length).toBeGreaterThan(0);
+    for (const pin of chargerPins) expect(pin.description, pin.label).not.toMatch(/protection/i);
     // Stored through the upload path: random folder, the three files, no metadata.
     const demo = (await conn.execute("select id, storage_key from photos where original_name like 'demo-halvix-duo-%' order by id limit 1")) as { id: number; storage_key: string }[];
     expect(readdirSync(join(photoDir(t), demo[0]!.storage_key)).sort()).toEqual(['display.webp', 'original.jpg', 'thumb.webp']);

@@ -247,7 +247,7 @@ function boardScene(d: DemoDevice, p: Palette): Illustration {
     const px = bx + bw * 0.45;
     const py = by + 60;
     body += chip(px, py, 170, 120, m.power, bank ? 6 : 4, bank ? 'qfn' : 'sop') + silk(px, py - 18, 'U2', p) + inductor(px + 210, py + 4, 110, bank ? '1R0' : '4R7') + silk(px + 210, py - 10, 'L1', p);
-    pins.push({ ...rel(px + 164, py + 8), label: `${bank ? 'Charge and boost' : fan ? 'Linear charger' : 'Buck-boost charger / output'} IC, marked ${m.power[0]}`, match: { category: 'ic', pattern: /charg|boost|buck|power|pmic/i } });
+    pins.push({ ...rel(px + 164, py + 8), label: `${bank ? 'Charge and boost' : fan ? 'Linear charger' : 'Buck-boost charger / output'} IC, marked ${m.power[0]}`, match: { category: 'ic', pattern: /charger|boost|buck|pmic/i } });
     pins.push({ ...rel(px + 312, py + 12), label: `Power inductor ${bank ? '1R0' : '4R7'}`, match: { category: 'inductor' } });
     // MCU (heaters, fans) or fuel-gauge LEDs (banks).
     const mx = bx + 90;
