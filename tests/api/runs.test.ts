@@ -487,7 +487,11 @@ describe('series, reads and changes', () => {
     const em = t.orm.em.fork();
     const teardown = await em.findOneOrFail(TeardownSchema, { id: ids[DRAFT]! });
     const latest = (await (await t.as('engineer')).get(`/api/teardowns/${ids[DRAFT]}/runs`).expect(200)).body.runs.find((r: { kind: string }) => r.kind === 'discharge');
-    expect(await benchRunFigureInput(em, teardown)).toEqual({ measuredCapacityAh: latest.analysis.ampHours });
+    const fed = await benchRunFigureInput(em, teardown);
+    expect(fed.measuredCapacityAh).toBe(latest.analysis.ampHours);
+    const thermal = (await (await t.as('engineer')).get(`/api/teardowns/${ids[DRAFT]}/runs`).expect(200)).body.runs.find((r: { kind: string }) => r.kind === 'thermal');
+    // The touch margin uses the peak of the latest thermal run, when there is one.
+    expect(fed.measuredSurface).toEqual(thermal ? { temperatureC: thermal.analysis.thermal.maxC, basis: `peak of the thermal run "${thermal.label}"` } : undefined);
     const empty = await em.findOneOrFail(TeardownSchema, { id: ids['Breeze Neck 2']! });
     await em.getConnection().execute("delete from bench_runs where teardown_id = ? and kind = 'discharge'", [empty.id]);
     expect(await benchRunFigureInput(em, empty)).toEqual({});

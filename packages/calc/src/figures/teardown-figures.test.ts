@@ -344,17 +344,22 @@ describe('heater surface', () => {
     ...pocketHeater,
     loads: [{ ...heaterPair, duty: 0.5, heatedAreaM2: 0.01, surfaceMaterial: 'plastic' }],
   };
-  it('8.881667 W over 100 cm² is 0.0888 W/cm²; at D 0.5 the rise is 44.408 °C at h 10 [C]', () => {
+  // h = 10 W/m²K free convection [S: Çengel, 2–25 W/m²K] + radiation 4εσT³ at ε 0.9 and the ambient
+  // temperature (REFERENCES §7 [C]): at 25 °C (298.15 K) 4 × 0.9 × 5.670374e-8 × 298.15³ = 5.410267 W/m²K.
+  const hAt25 = 10 + 4 * 0.9 * 5.670374419e-8 * 298.15 ** 3;
+  it('8.881667 W over 100 cm² is 0.0888 W/cm²; at D 0.5 the rise is 4.440833 / (0.01 × 15.410267) = 28.8174 °C [C]', () => {
+    expect(hAt25).toBeCloseTo(15.410267, 6);
     const { figures } = teardownFigures(warm);
     expect(num(figures, 'heater.powerDensity')).toBeCloseTo(0.08881667, 8);
-    expect(num(figures, 'heater.surfaceRise')).toBeCloseTo(44.408333, 5);
-    expect(byKey(figures, 'heater.surfaceRise').assumptions.join(' ')).toMatch(/h = 10 W\/m²K assumed/);
-    expect(byKey(figures, 'heater.surfaceRise').assumptions.join(' ')).toMatch(/at full duty the rise would be 88.8 °C/);
+    expect(num(figures, 'heater.surfaceRise')).toBeCloseTo(4.4408333 / (0.01 * hAt25), 5);
+    expect(num(figures, 'heater.surfaceRise')).toBeCloseTo(28.817368, 5);
+    expect(byKey(figures, 'heater.surfaceRise').assumptions.join(' ')).toMatch(/h = 10 W\/m²K free convection .* \+ 5.41 W\/m²K radiation/);
+    expect(byKey(figures, 'heater.surfaceRise').assumptions.join(' ')).toMatch(/at full duty the rise would be 57.6 °C/);
   });
-  it('25 + 44.4 °C against 51 °C for 60 s: margin −18.408 °C, with the hot-surface caution [C; M: ISO 13732-1]', () => {
+  it('25 + 28.8 °C against 51 °C for 60 s: margin −2.817 °C, with the hot-surface caution [C; M: ISO 13732-1]', () => {
     const { figures, suggestions } = teardownFigures(warm);
     const m = byKey(figures, 'heater.touchMargin');
-    expect(m.value as number).toBeCloseTo(51 - 25 - 44.408333, 5);
+    expect(m.value as number).toBeCloseTo(51 - 25 - 28.817368, 5);
     expect(m.warnings).toContain(HOT_SURFACE_CAUTION);
     expect(m.warnings[0]).toMatch(/above the 51 °C burn threshold for 60 s contact with plastic/);
     expect(m.assumptions.join(' ')).toMatch(/Ambient 25 °C assumed/);
@@ -373,13 +378,27 @@ describe('heater surface', () => {
       contactSeconds: 5,
       ambientC: 20,
     });
-    // rise 0.888 / 0.2 = 4.4408 °C; metal under 10 s: 55 °C; margin 55 − 24.4408 = 30.559 °C
+    // h at 20 °C (293.15 K): 10 + 4 × 0.9 × 5.670374e-8 × 293.15³ = 15.142614 W/m²K [C];
+    // rise 0.8881667 / (0.02 × 15.142614) = 2.932673 °C; metal under 10 s: 55 °C; margin 55 − 22.932673 = 32.067327 °C
     const m = byKey(figures, 'heater.touchMargin');
-    expect(m.value as number).toBeCloseTo(30.559167, 5);
+    expect(m.value as number).toBeCloseTo(32.067327, 5);
     expect(m.warnings).toEqual([]);
     expect(m.assumptions.join(' ')).toMatch(/metal assumed/);
     expect(m.assumptions.join(' ')).not.toMatch(/Ambient 25/);
     expect(suggestions.map((s) => s.key)).toEqual(['thermal.no-sensor']);
+  });
+  it('a measured surface temperature replaces the estimate in the touch margin and the suggestion', () => {
+    const { figures, suggestions } = teardownFigures({ ...warm, measuredSurface: { temperatureC: 47.5, basis: 'thermal run "Surface at level 3"' } });
+    const m = byKey(figures, 'heater.touchMargin');
+    // 51 °C (60 s, plastic) − 47.5 °C measured = 3.5 °C [C; M: ISO 13732-1]
+    expect(m.value as number).toBeCloseTo(3.5, 12);
+    expect(m.inputs).toEqual(expect.arrayContaining([expect.objectContaining({ label: 'Measured surface temperature', value: 47.5 })]));
+    expect(m.warnings).toEqual([]);
+    expect(suggestions.map((x) => x.key)).toEqual(['thermal.no-sensor']);
+    const hot = teardownFigures({ ...warm, measuredSurface: { temperatureC: 55.4, basis: 'thermal run "Highest level"' } });
+    expect(byKey(hot.figures, 'heater.touchMargin').value as number).toBeCloseTo(-4.4, 12);
+    expect(hot.suggestions.find((x) => x.key === 'thermal.touch-margin')?.detail).toMatch(/measured 55.4 °C \(thermal run "Highest level"\)/);
+    expect(() => teardownFigures({ ...warm, measuredSurface: { temperatureC: Number.NaN, basis: 'x' } })).toThrow(RangeError);
   });
   it('two heaters: the summary is the one with the least margin, and each heater has its own figures', () => {
     const { figures } = teardownFigures({

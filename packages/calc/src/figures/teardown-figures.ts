@@ -24,7 +24,7 @@ import {
   powerDensityWPerCm2,
   type TraceLayer,
 } from '../traces/index';
-import { DEFAULT_CONVECTION_H, SURFACE_MATERIALS, burnThresholdDetail, surfaceTemperatureRiseC, type SurfaceMaterial } from '../thermal/index';
+import { DEFAULT_CONVECTION_H, SURFACE_MATERIALS, burnThresholdDetail, radiativeHeatTransferCoefficient, surfaceTemperatureRiseC, type SurfaceMaterial } from '../thermal/index';
 import { formulaOf, type FormulaKey } from './formulas';
 
 export type LoadKind = 'heater' | 'motor' | 'led' | 'usb-output' | 'other';
@@ -115,6 +115,11 @@ export interface TeardownFigureInput {
   contactSeconds?: number;
   /** Ambient temperature for the surface estimate; default 25 °C (IEC 62368-1 reference ambient). */
   ambientC?: number;
+  /**
+   * The hottest surface temperature measured at the bench (e.g. the steady state of a thermal run),
+   * with where it comes from. When given, the touch margin uses it instead of the estimate.
+   */
+  measuredSurface?: { temperatureC: number; basis: string };
 }
 
 /** A derived figure with how it was obtained. */
@@ -215,6 +220,9 @@ interface LoadInfo {
   avgPackWatts: number;
 }
 
+/** Emissivity for the radiation part of the surface estimate: painted, anodised or plastic surfaces [CP]. */
+const RADIATING_EMISSIVITY = 0.9;
+
 interface HeaterInfo {
   info: LoadInfo;
   area: number;
@@ -226,6 +234,8 @@ interface HeaterInfo {
   materialAssumed: boolean;
   threshold: ReturnType<typeof burnThresholdDetail>;
   margin: number;
+  /** Set when the surface temperature was measured rather than estimated. */
+  measuredBasis?: string;
 }
 
 function readPack(p: TeardownPack): PackInfo {
@@ -657,13 +667,16 @@ export function teardownFigures(input: TeardownFigureInput): TeardownFiguresResu
     );
   }
 
-  // Heaters
+  // Heaters. Heat leaves the heated area by free convection (h = 10 W/m²K [S: Çengel]) and by
+  // radiation, linearised at ambient: h_rad = 4εσT³ with ε = 0.9 (REFERENCES §7 [C]).
+  const hRadiation = radiativeHeatTransferCoefficient(RADIATING_EMISSIVITY, ambientC + 273.15);
+  const hTotal = DEFAULT_CONVECTION_H + hRadiation;
   const heaters: HeaterInfo[] = computed
     .filter((l) => l.load.kind === 'heater' && l.load.heatedAreaM2 !== undefined)
     .map((info) => {
       const area = info.load.heatedAreaM2 as number;
       const material = info.load.surfaceMaterial ?? FIGURE_DEFAULTS.surfaceMaterial;
-      const rise = surfaceTemperatureRiseC({ watts: info.avgWatts, areaM2: area });
+      const rise = surfaceTemperatureRiseC({ watts: info.avgWatts, areaM2: area, hWPerM2K: hTotal });
       const threshold = burnThresholdDetail({ material, contactSeconds });
       const surface = ambientC + rise;
       return {
@@ -671,7 +684,7 @@ export function teardownFigures(input: TeardownFigureInput): TeardownFiguresResu
         area,
         density: powerDensityWPerCm2(info.r.totalWatts, area),
         rise,
-        riseFull: surfaceTemperatureRiseC({ watts: info.r.totalWatts, areaM2: area }),
+        riseFull: surfaceTemperatureRiseC({ watts: info.r.totalWatts, areaM2: area, hWPerM2K: hTotal }),
         surface,
         material,
         materialAssumed: info.load.surfaceMaterial === undefined,
@@ -679,12 +692,20 @@ export function teardownFigures(input: TeardownFigureInput): TeardownFiguresResu
         margin: threshold.thresholdC - surface,
       };
     });
+  // A bench measurement beats the estimate: the hottest heater's margin uses it.
+  if (input.measuredSurface && heaters.length > 0) {
+    requireFinite(input.measuredSurface.temperatureC, 'Measured surface temperature (°C)');
+    const worst = heaters.reduce((a, b) => (b.margin < a.margin ? b : a));
+    worst.surface = input.measuredSurface.temperatureC;
+    worst.margin = worst.threshold.thresholdC - worst.surface;
+    worst.measuredBasis = input.measuredSurface.basis;
+  }
   const heaterFigures = (h: HeaterInfo, prefix: string, labelPrefix: string): Figure[] => {
     const { info } = h;
     const marginWarnings =
       h.margin < 0
         ? [
-            `Estimated surface ${fmt(h.surface, 1)} °C is above the ${h.threshold.thresholdC} °C burn threshold for ${fmt(contactSeconds, 0)} s contact with ${h.material}.`,
+            `${h.measuredBasis ? 'Measured' : 'Estimated'} surface ${fmt(h.surface, 1)} °C is above the ${h.threshold.thresholdC} °C burn threshold for ${fmt(contactSeconds, 0)} s contact with ${h.material}.`,
             HOT_SURFACE_CAUTION,
           ]
         : [];
@@ -710,10 +731,10 @@ export function teardownFigures(input: TeardownFigureInput): TeardownFiguresResu
           { label: `${info.load.label} average power`, value: info.avgWatts, unit: 'W' },
           { label: 'Duty', value: info.load.duty },
           { label: 'Heated area', value: h.area, unit: 'm²' },
-          { label: 'Heat-transfer coefficient', value: DEFAULT_CONVECTION_H, unit: 'W/m²K' },
+          { label: 'Heat-transfer coefficient (convection + radiation)', value: Number(hTotal.toFixed(2)), unit: 'W/m²K' },
         ],
         [
-          `Heat-transfer coefficient h = ${DEFAULT_CONVECTION_H} W/m²K assumed (free convection in air is 2–25 W/m²K [S]); a hand or pocket holds heat in and raises the temperature.`,
+          `h = ${DEFAULT_CONVECTION_H} W/m²K free convection (2–25 W/m²K in air [S]) + ${fmt(hRadiation, 2)} W/m²K radiation (4εσT³, ε ${RADIATING_EMISSIVITY} at ambient [C]); bare polished metal radiates far less, heat that spreads into a larger shell lowers the real temperature, and a hand or pocket holds heat in and raises it.`,
           `Steady state at the recorded duty; at full duty the rise would be ${fmt(h.riseFull, 1)} °C.`,
           'Estimate for engineering judgement, not a certification result.',
         ],
@@ -725,9 +746,17 @@ export function teardownFigures(input: TeardownFigureInput): TeardownFiguresResu
         '°C',
         'heater.touchMargin',
         [
-          { label: 'Ambient', value: ambientC, unit: '°C' },
-          { label: 'Surface rise', value: h.rise, unit: '°C' },
-          { label: 'Estimated surface temperature', value: h.surface, unit: '°C' },
+          ...(h.measuredBasis
+            ? [
+                { label: 'Measured surface temperature', value: h.surface, unit: '°C' },
+                { label: 'Measured in', value: h.measuredBasis },
+                { label: 'Estimated surface temperature (for comparison)', value: ambientC + h.rise, unit: '°C' },
+              ]
+            : [
+                { label: 'Ambient', value: ambientC, unit: '°C' },
+                { label: 'Surface rise', value: h.rise, unit: '°C' },
+                { label: 'Estimated surface temperature', value: h.surface, unit: '°C' },
+              ]),
           { label: 'Surface material', value: h.material },
           { label: 'Contact time', value: contactSeconds, unit: 's' },
           { label: 'Burn threshold', value: h.threshold.thresholdC, unit: '°C' },
@@ -866,7 +895,7 @@ export function teardownFigures(input: TeardownFigureInput): TeardownFiguresResu
         burning
           .map(
             (h) =>
-              `"${h.info.load.label}": estimated ${fmt(h.surface, 1)} °C against ${h.threshold.thresholdC} °C for ${fmt(contactSeconds, 0)} s contact with ${h.material} (margin ${fmt(h.margin, 1)} °C).`,
+              `"${h.info.load.label}": ${h.measuredBasis ? `measured ${fmt(h.surface, 1)} °C (${h.measuredBasis})` : `estimated ${fmt(h.surface, 1)} °C`} against ${h.threshold.thresholdC} °C for ${fmt(contactSeconds, 0)} s contact with ${h.material} (margin ${fmt(h.margin, 1)} °C).`,
           )
           .join(' ') +
         ' ' +
