@@ -51,3 +51,16 @@ export const Select = forwardRef<HTMLSelectElement, SelectHTMLAttributes<HTMLSel
 export const Textarea = forwardRef<HTMLTextAreaElement, TextareaHTMLAttributes<HTMLTextAreaElement>>(function Textarea({ className = '', ...rest }, ref) {
   return <textarea ref={ref} className={`${inputClass} py-2 ${className}`} {...rest} />;
 });
+
+/** The <option>s of one of the contracts' labelled value lists (domain.ts): value → label. */
+export function LabelledOptions<T extends string>({ list }: { list: { values: readonly T[]; labels: Record<T, string> } }) {
+  return (
+    <>
+      {list.values.map((v) => (
+        <option key={v} value={v}>
+          {list.labels[v]}
+        </option>
+      ))}
+    </>
+  );
+}

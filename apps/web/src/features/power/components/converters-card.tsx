@@ -6,7 +6,7 @@ import { Badge } from '@/components/badges';
 import { Button } from '@/components/button';
 import { RowActions } from '@/components/row-actions';
 import { DataTable, type Column } from '@/components/data-table';
-import { Field, Input, Select } from '@/components/field';
+import { Field, Input, Select, LabelledOptions } from '@/components/field';
 import { Card } from '@/components/page';
 import type { EditGate } from '@/components/published-edit';
 import { ApiError } from '@/lib/api-client';
@@ -183,22 +183,14 @@ function ConverterForm({ teardownId, converter, gate, onDone }: { teardownId: nu
         <Field label="Topology" error={errors.topology}>
           {(p) => (
             <Select {...p} value={draft.topology} onChange={(e) => setDraft({ ...draft, topology: e.target.value as ConverterTopology })} autoFocus>
-              {CONVERTER_TOPOLOGY.values.map((v) => (
-                <option key={v} value={v}>
-                  {CONVERTER_TOPOLOGY.labels[v]}
-                </option>
-              ))}
+              <LabelledOptions list={CONVERTER_TOPOLOGY} />
             </Select>
           )}
         </Field>
         <Field label="Role" error={errors.role}>
           {(p) => (
             <Select {...p} value={draft.role} onChange={(e) => setDraft({ ...draft, role: e.target.value as ConverterRole })}>
-              {CONVERTER_ROLE.values.map((v) => (
-                <option key={v} value={v}>
-                  {CONVERTER_ROLE.labels[v]}
-                </option>
-              ))}
+              <LabelledOptions list={CONVERTER_ROLE} />
             </Select>
           )}
         </Field>

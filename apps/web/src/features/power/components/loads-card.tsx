@@ -5,7 +5,7 @@ import { CONNECTION, LOAD_KIND, SURFACE_MATERIAL, type Connection, type Converte
 import { Button } from '@/components/button';
 import { RowActions } from '@/components/row-actions';
 import { DataTable, type Column } from '@/components/data-table';
-import { Field, Input, Select } from '@/components/field';
+import { Field, Input, Select, LabelledOptions } from '@/components/field';
 import { Card } from '@/components/page';
 import type { EditGate } from '@/components/published-edit';
 import { ApiError } from '@/lib/api-client';
@@ -198,11 +198,7 @@ function LoadForm({ teardownId, load, converters, gate, onDone }: { teardownId: 
         <Field label="Kind" error={errors.kind}>
           {(p) => (
             <Select {...p} value={draft.kind} onChange={(e) => setDraft({ ...draft, kind: e.target.value as LoadKind })} autoFocus>
-              {LOAD_KIND.values.map((v) => (
-                <option key={v} value={v}>
-                  {LOAD_KIND.labels[v]}
-                </option>
-              ))}
+              <LabelledOptions list={LOAD_KIND} />
             </Select>
           )}
         </Field>
@@ -226,11 +222,7 @@ function LoadForm({ teardownId, load, converters, gate, onDone }: { teardownId: 
         <Field label="Connection" error={errors.connection}>
           {(p) => (
             <Select {...p} value={draft.connection} onChange={(e) => setDraft({ ...draft, connection: e.target.value as Connection })}>
-              {CONNECTION.values.map((v) => (
-                <option key={v} value={v}>
-                  {CONNECTION.labels[v]}
-                </option>
-              ))}
+              <LabelledOptions list={CONNECTION} />
             </Select>
           )}
         </Field>
@@ -261,11 +253,7 @@ function LoadForm({ teardownId, load, converters, gate, onDone }: { teardownId: 
           {(p) => (
             <Select {...p} value={draft.surfaceMaterial} onChange={(e) => setDraft({ ...draft, surfaceMaterial: e.target.value as SurfaceMaterial | '' })}>
               <option value="">Not a touch surface</option>
-              {SURFACE_MATERIAL.values.map((v) => (
-                <option key={v} value={v}>
-                  {SURFACE_MATERIAL.labels[v]}
-                </option>
-              ))}
+              <LabelledOptions list={SURFACE_MATERIAL} />
             </Select>
           )}
         </Field>

@@ -3,7 +3,7 @@ import { toast } from 'sonner';
 import { Battery } from 'lucide-react';
 import { CHEMISTRY, JOINING, type Chemistry, type Joining, type PackDto } from '@splitcase/contracts';
 import { Button } from '@/components/button';
-import { Field, Input, Select } from '@/components/field';
+import { Field, Input, Select, LabelledOptions } from '@/components/field';
 import { Card } from '@/components/page';
 import type { EditGate } from '@/components/published-edit';
 import { ApiError } from '@/lib/api-client';
@@ -125,11 +125,7 @@ export function PackCard({ teardownId, pack, gate }: { teardownId: number; pack:
           <Field label="Chemistry" error={errors.chemistry}>
             {(p) => (
               <Select {...p} value={draft.chemistry} onChange={(e) => setDraft({ ...draft, chemistry: e.target.value as Chemistry })}>
-                {CHEMISTRY.values.map((v) => (
-                  <option key={v} value={v}>
-                    {CHEMISTRY.labels[v]}
-                  </option>
-                ))}
+                <LabelledOptions list={CHEMISTRY} />
               </Select>
             )}
           </Field>
@@ -140,11 +136,7 @@ export function PackCard({ teardownId, pack, gate }: { teardownId: number; pack:
             {(p) => (
               <Select {...p} value={draft.joining} onChange={(e) => setDraft({ ...draft, joining: e.target.value as Joining | '' })}>
                 <option value="">Not recorded</option>
-                {JOINING.values.map((v) => (
-                  <option key={v} value={v}>
-                    {JOINING.labels[v]}
-                  </option>
-                ))}
+                <LabelledOptions list={JOINING} />
               </Select>
             )}
           </Field>
