@@ -59,6 +59,8 @@ describe('bench runs', () => {
     await expect(chart.locator('.recharts-line-curve').count()).resolves.toBeGreaterThan(0);
     // Every chart has its data table: 721 samples, all plotted.
     await chart.getByText(/Data table: voltage, 721 plotted points/).click();
+    // The table renders once the details element reports it is open; wait for its last row.
+    await chart.getByRole('table').locator('tbody tr').nth(720).waitFor({ state: 'attached' });
     await expect(chart.getByRole('table').locator('tbody tr').count()).resolves.toBe(721);
     await page.context().close();
   });
