@@ -17,3 +17,10 @@ export const password = z
   .string()
   .min(10, 'At least 10 characters')
   .max(200, 'At most 200 characters');
+
+/** A PATCH body: any subset of the fields, but at least one of them (400 otherwise). */
+export const patchOf = <S extends z.ZodRawShape>(shape: S, message = 'Change at least one field') =>
+  z
+    .object(shape)
+    .partial()
+    .refine((b) => Object.values(b).some((v) => v !== undefined), { message });

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { text } from './common';
+import { text, patchOf } from './common';
 import { DEVICE_CATEGORY, TEARDOWN_STATUS } from './domain';
 import { clearableDay, clearableNumber, clearableText, quantityInput } from './inputs';
 import { currencyCode } from './settings';
@@ -49,7 +49,7 @@ export type CreateDeviceBody = z.infer<typeof createDeviceBody>;
 export type DeviceFormValues = z.input<typeof createDeviceBody>;
 
 /** PATCH /api/devices/:id: any subset of the fields. */
-export const updateDeviceBody = deviceFields.partial().refine((b) => Object.values(b).some((v) => v !== undefined), { message: 'Change at least one field' });
+export const updateDeviceBody = patchOf(deviceFields.shape);
 export type UpdateDeviceBody = z.infer<typeof updateDeviceBody>;
 
 export const deviceListQuery = z.object({

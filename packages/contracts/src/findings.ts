@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { text } from './common';
+import { text, patchOf } from './common';
 import { FINDING_KIND, PART_CATEGORY, SEVERITY } from './domain';
 
 /** A tag: lower-case words, digits and '-', e.g. "thermal", "cost-down", "usb-c". */
@@ -32,7 +32,7 @@ export const createFindingBody = findingFields.extend({ tags: tagList.default([]
 export type CreateFindingBody = z.infer<typeof createFindingBody>;
 export type FindingFormValues = z.input<typeof createFindingBody>;
 /** PATCH /api/teardowns/:id/findings/:findingId */
-export const updateFindingBody = findingFields.partial().refine((b) => Object.values(b).some((v) => v !== undefined), { message: 'Change at least one field' });
+export const updateFindingBody = patchOf(findingFields.shape);
 export type UpdateFindingBody = z.infer<typeof updateFindingBody>;
 
 export const findingParams = z.object({

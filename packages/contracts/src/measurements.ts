@@ -1,5 +1,6 @@
 // Raw readings at the bench: a quantity, the value typed with its unit, what was measured and how.
 import { z } from 'zod';
+import { patchOf } from './common';
 import { MEASURED_QUANTITY } from './domain';
 
 const text = (max: number) =>
@@ -27,10 +28,7 @@ const fields = {
 
 export const createMeasurementBody = z.object(fields);
 export type CreateMeasurementBody = z.input<typeof createMeasurementBody>;
-export const updateMeasurementBody = z
-  .object(fields)
-  .partial()
-  .refine((b) => Object.keys(b).length > 0, { message: 'Change at least one field' });
+export const updateMeasurementBody = patchOf(fields);
 export type UpdateMeasurementBody = z.input<typeof updateMeasurementBody>;
 
 export const measurementSchema = z.object({

@@ -1,5 +1,6 @@
 // Bill of materials: one line per part of a teardown, CSV import/export.
 import { z } from 'zod';
+import { patchOf } from './common';
 import { MOUNT_TYPE, PART_CATEGORY, type MountType, type PartCategory } from './domain';
 
 /** Categories put together by hand rather than placed on a board. */
@@ -43,10 +44,7 @@ const partFields = {
 export const createPartBody = z.object({ ...partFields, quantity: partFields.quantity.default(1), mount: partFields.mount.optional() });
 export type CreatePartBody = z.input<typeof createPartBody>;
 
-export const updatePartBody = z
-  .object(partFields)
-  .partial()
-  .refine((b) => Object.keys(b).length > 0, { message: 'Change at least one field' });
+export const updatePartBody = patchOf(partFields);
 export type UpdatePartBody = z.input<typeof updatePartBody>;
 
 export const reorderPartsBody = z.object({

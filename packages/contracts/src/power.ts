@@ -2,6 +2,7 @@
 // Numeric inputs take a number in SI or text with a unit ("2700 mAh", "3.65V", "3R0", "60 %"); the
 // server stores SI and keeps the typed text in `entered`, keyed by the field name.
 import { z } from 'zod';
+import { patchOf } from './common';
 import { CHEMISTRY, CONNECTION, CONVERTER_ROLE, CONVERTER_TOPOLOGY, JOINING, LOAD_KIND, SURFACE_MATERIAL } from './domain';
 
 /** A number (SI) or text with a unit. Blank or null clears an optional value. */
@@ -92,10 +93,7 @@ export const createConverterBody = z.object({
   efficiencySource: converterFields.efficiencySource.default('assumed'),
 });
 export type CreateConverterBody = z.input<typeof createConverterBody>;
-export const updateConverterBody = z
-  .object(converterFields)
-  .partial()
-  .refine((b) => Object.keys(b).length > 0, { message: 'Change at least one field' });
+export const updateConverterBody = patchOf(converterFields);
 export type UpdateConverterBody = z.input<typeof updateConverterBody>;
 
 export const converterSchema = z.object({
@@ -147,10 +145,7 @@ export const createLoadBody = z.object({
   duty: loadFields.duty.default(1),
 });
 export type CreateLoadBody = z.input<typeof createLoadBody>;
-export const updateLoadBody = z
-  .object(loadFields)
-  .partial()
-  .refine((b) => Object.keys(b).length > 0, { message: 'Change at least one field' });
+export const updateLoadBody = patchOf(loadFields);
 export type UpdateLoadBody = z.input<typeof updateLoadBody>;
 
 export const loadSchema = z.object({

@@ -64,3 +64,13 @@ export function LabelledOptions<T extends string>({ list }: { list: { values: re
     </>
   );
 }
+
+/** The message for a form as a whole (a server error that names no field on it). */
+export function FormError({ message, className = '' }: { message: string | null | undefined; className?: string }) {
+  if (!message) return null;
+  return (
+    <p role="alert" className={`rounded-md border border-brick-100 bg-brick-50 px-3 py-2 text-sm text-brick-800 ${className}`}>
+      {message}
+    </p>
+  );
+}

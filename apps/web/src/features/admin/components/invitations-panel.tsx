@@ -8,7 +8,7 @@ import { Badge } from '@/components/badges';
 import { Button } from '@/components/button';
 import { DataTable, type Column } from '@/components/data-table';
 import { ErrorPanel } from '@/components/error-boundary';
-import { Field, Input, Select } from '@/components/field';
+import { Field, Input, Select, FormError } from '@/components/field';
 import { Card, Spinner } from '@/components/page';
 import { applyServerErrors } from '@/lib/form-errors';
 import { formatDate } from '@/lib/format';
@@ -61,11 +61,7 @@ function InviteForm() {
           Send invitation
         </Button>
       </div>
-      {formError && (
-        <p role="alert" className="w-full text-sm text-brick-700">
-          {formError}
-        </p>
-      )}
+      <FormError message={formError} className="w-full" />
     </form>
   );
 }

@@ -4,14 +4,14 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useNavigate } from 'react-router';
 import { acceptInvitationBody, ROLE_DESCRIPTIONS, ROLE_LABELS, type AcceptInvitationBody } from '@splitcase/contracts';
 import { Button } from '@/components/button';
-import { Field, Input } from '@/components/field';
+import { Field, Input, FormError } from '@/components/field';
 import { Spinner } from '@/components/page';
 import { ErrorPanel } from '@/components/error-boundary';
 import { paths } from '@/config/paths';
 import { applyServerErrors } from '@/lib/form-errors';
 import { formatDate } from '@/lib/format';
 import { useAcceptInvitation, useInvitationPreview } from '../api/invitation';
-import { FormError } from './auth-layout';
+
 
 export function AcceptInvitationForm({ token }: { token: string }) {
   const preview = useInvitationPreview(token);

@@ -32,12 +32,3 @@ export function AuthLayout({ title, children, footer }: { title: string; childre
     </div>
   );
 }
-
-export function FormError({ message }: { message: string | null }) {
-  if (!message) return null;
-  return (
-    <p role="alert" className="rounded-md border border-brick-100 bg-brick-50 px-3 py-2 text-sm text-brick-800">
-      {message}
-    </p>
-  );
-}

@@ -4,11 +4,11 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { Link } from 'react-router';
 import { resetConfirmBody, resetRequestBody, type ResetConfirmBody, type ResetRequestBody } from '@splitcase/contracts';
 import { Button } from '@/components/button';
-import { Field, Input } from '@/components/field';
+import { Field, Input, FormError } from '@/components/field';
 import { paths } from '@/config/paths';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useConfirmReset, useRequestReset } from '../api/password-reset';
-import { FormError } from './auth-layout';
+
 
 export function RequestResetForm() {
   const request = useRequestReset();

@@ -4,11 +4,11 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { Link, useNavigate, useSearchParams } from 'react-router';
 import { loginBody, type LoginBody } from '@splitcase/contracts';
 import { Button } from '@/components/button';
-import { Field, Input } from '@/components/field';
+import { Field, Input, FormError } from '@/components/field';
 import { paths } from '@/config/paths';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useLogin } from '../api/login';
-import { FormError } from './auth-layout';
+
 
 /** Only same-site paths are followed after sign-in. */
 export function safeNext(next: string | null): string {

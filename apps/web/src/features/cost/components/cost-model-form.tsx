@@ -2,7 +2,7 @@ import { useState, type ReactNode } from 'react';
 import { Plus, Trash2 } from 'lucide-react';
 import { PART_CATEGORY, type CostModelBody, type CostModelDto, type PartCategory } from '@splitcase/contracts';
 import { Button } from '@/components/button';
-import { Field, Input } from '@/components/field';
+import { Field, Input, FormError } from '@/components/field';
 import { ApiError } from '@/lib/api-client';
 import { plain, toPercentText } from './display';
 
@@ -237,11 +237,7 @@ export function CostModelForm({
         {field('band.low', 'Low confidence', { unit: '± %' })}
       </Group>
 
-      {formError && (
-        <p role="alert" className="text-sm text-brick-700">
-          {formError}
-        </p>
-      )}
+      <FormError message={formError} />
       {!readOnly && (
         <div className="flex flex-wrap items-center gap-2">
           <Button type="submit" variant="primary" busy={busy}>

@@ -3,7 +3,7 @@ import { toast } from 'sonner';
 import { Plus, Trash2, X } from 'lucide-react';
 import { PRICE_CONFIDENCE, PRICE_SOURCE, type CostLine, type PriceConfidence, type PriceSource } from '@splitcase/contracts';
 import { Button } from '@/components/button';
-import { Field, Input, Select, inputClass } from '@/components/field';
+import { Field, Input, Select, inputClass, FormError } from '@/components/field';
 import { ApiError } from '@/lib/api-client';
 import { useDeletePrice } from '../api/delete-price';
 import { useSetPrice } from '../api/set-price';
@@ -195,11 +195,7 @@ export function PriceEditor({ teardownId, line, currencies, onClose }: { teardow
           </Button>
         </div>
       </div>
-      {formError && (
-        <p role="alert" className="mt-3 text-sm text-brick-700">
-          {formError}
-        </p>
-      )}
+      <FormError message={formError} />
       <div className="mt-4 flex flex-wrap items-center gap-2">
         <Button variant="primary" busy={save.isPending} onClick={submit}>
           Save price

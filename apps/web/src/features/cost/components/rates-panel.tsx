@@ -5,7 +5,7 @@ import { RATE_TABLE_KIND, type RateTableDto } from '@splitcase/contracts';
 import { Badge } from '@/components/badges';
 import { Button } from '@/components/button';
 import { ErrorPanel } from '@/components/error-boundary';
-import { Field, Input } from '@/components/field';
+import { Field, Input, FormError } from '@/components/field';
 import { Card, EmptyState, Spinner } from '@/components/page';
 import { ApiError } from '@/lib/api-client';
 import { formatDate, formatDateTime } from '@/lib/format';
@@ -161,11 +161,7 @@ function ManualRates({ current, onDone }: { current: RateTableDto | null; onDone
       <Button size="sm" variant="quiet" onClick={() => setRows((rs) => [...rs, { code: '', rate: '' }])}>
         <Plus className="size-4" aria-hidden /> Add a currency
       </Button>
-      {formError && (
-        <p role="alert" className="text-sm text-brick-700">
-          {formError}
-        </p>
-      )}
+      <FormError message={formError} />
       <div className="flex gap-2">
         <Button type="submit" variant="primary" busy={save.isPending}>
           Save as current rates

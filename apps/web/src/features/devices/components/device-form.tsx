@@ -3,7 +3,7 @@ import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { createDeviceBody, DEVICE_CATEGORY, DEVICE_CLAIM_FIELDS, type CreateDeviceBody, type DeviceClaimField, type DeviceDto, type DeviceFormValues } from '@splitcase/contracts';
 import { Button } from '@/components/button';
-import { Field, Input, Select, Textarea } from '@/components/field';
+import { Field, Input, Select, Textarea, FormError } from '@/components/field';
 import { Card } from '@/components/page';
 import { applyServerErrors } from '@/lib/form-errors';
 import { claimText } from './claims';
@@ -103,11 +103,7 @@ export function DeviceForm({ initial, submitLabel, onSubmit, onCancel }: { initi
           </Field>
         </div>
       </Card>
-      {formError && (
-        <p role="alert" className="text-sm text-brick-700">
-          {formError}
-        </p>
-      )}
+      <FormError message={formError} />
       <div className="flex gap-2">
         <Button type="submit" variant="primary" busy={formState.isSubmitting}>
           {submitLabel}

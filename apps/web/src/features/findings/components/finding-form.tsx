@@ -3,7 +3,7 @@ import { Controller, useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { createFindingBody, FINDING_KIND, PART_CATEGORY, SEVERITY, type CreateFindingBody, type FindingDto, type FindingFormValues, type LinkablePart, type LinkablePhoto } from '@splitcase/contracts';
 import { Button } from '@/components/button';
-import { Field, Select, Textarea } from '@/components/field';
+import { Field, Select, Textarea, FormError } from '@/components/field';
 import { SeverityBadge } from '@/components/status';
 import { TagInput } from '@/components/tag-input';
 import { applyServerErrors } from '@/lib/form-errors';
@@ -132,11 +132,7 @@ export function FindingForm({
           {errors.photoIds?.message && <p className="text-sm text-brick-700">{errors.photoIds.message}</p>}
         </div>
       </div>
-      {formError && (
-        <p role="alert" className="text-sm text-brick-700">
-          {formError}
-        </p>
-      )}
+      <FormError message={formError} />
       <div className="flex gap-2">
         <Button type="submit" variant="primary" busy={formState.isSubmitting}>
           {submitLabel}

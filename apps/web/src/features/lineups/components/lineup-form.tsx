@@ -1,7 +1,7 @@
 import { useState, type FormEvent } from 'react';
 import { createLineupBody, type CreateLineupBody, type DeviceDto, type LineupDto } from '@splitcase/contracts';
 import { Button } from '@/components/button';
-import { Field, Input, Select, Textarea } from '@/components/field';
+import { Field, Input, Select, Textarea, FormError } from '@/components/field';
 import { Card } from '@/components/page';
 import { ApiError } from '@/lib/api-client';
 import type { LineupMetrics } from '../api/metrics';
@@ -127,11 +127,7 @@ export function LineupForm({
           )}
         </div>
       </Card>
-      {formError && (
-        <p role="alert" className="text-sm text-brick-700">
-          {formError}
-        </p>
-      )}
+      <FormError message={formError} />
       <div className="flex gap-2">
         <Button type="submit" variant="primary" busy={busy}>
           {submitLabel}

@@ -5,7 +5,7 @@ import { CONNECTION, LOAD_KIND, SURFACE_MATERIAL, type Connection, type Converte
 import { Button } from '@/components/button';
 import { RowActions } from '@/components/row-actions';
 import { DataTable, type Column } from '@/components/data-table';
-import { Field, Input, Select, LabelledOptions } from '@/components/field';
+import { Field, Input, Select, LabelledOptions, FormError } from '@/components/field';
 import { Card } from '@/components/page';
 import type { EditGate } from '@/components/published-edit';
 import { ApiError } from '@/lib/api-client';
@@ -189,11 +189,7 @@ function LoadForm({ teardownId, load, converters, gate, onDone }: { teardownId: 
   return (
     <form onSubmit={submit} onKeyDown={(e) => e.key === 'Escape' && onDone()} noValidate className="space-y-4 rounded-md border border-graphite-150 bg-graphite-50/60 p-4" aria-label={load ? `Edit ${load.label}` : 'New load'}>
       <h3 className="text-sm font-semibold">{load ? `Edit ${load.label}` : 'New load'}</h3>
-      {formError && (
-        <p role="alert" className="rounded-md bg-brick-50 px-3 py-2 text-sm text-brick-800">
-          {formError}
-        </p>
-      )}
+      <FormError message={formError} />
       <div className="grid gap-4 sm:grid-cols-2 xl:grid-cols-3">
         <Field label="Kind" error={errors.kind}>
           {(p) => (

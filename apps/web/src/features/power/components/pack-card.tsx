@@ -3,7 +3,7 @@ import { toast } from 'sonner';
 import { Battery } from 'lucide-react';
 import { CHEMISTRY, JOINING, type Chemistry, type Joining, type PackDto } from '@splitcase/contracts';
 import { Button } from '@/components/button';
-import { Field, Input, Select, LabelledOptions } from '@/components/field';
+import { Field, Input, Select, LabelledOptions, FormError } from '@/components/field';
 import { Card } from '@/components/page';
 import type { EditGate } from '@/components/published-edit';
 import { ApiError } from '@/lib/api-client';
@@ -116,11 +116,7 @@ export function PackCard({ teardownId, pack, gate }: { teardownId: number; pack:
             <Battery className="size-4 text-graphite-400" aria-hidden /> Record the cells: chemistry, voltage and capacity per cell, and how many in series and parallel.
           </p>
         )}
-        {formError && (
-          <p role="alert" className="rounded-md bg-brick-50 px-3 py-2 text-sm text-brick-800">
-            {formError}
-          </p>
-        )}
+        <FormError message={formError} />
         <div className="grid gap-4 sm:grid-cols-2 xl:grid-cols-3">
           <Field label="Chemistry" error={errors.chemistry}>
             {(p) => (

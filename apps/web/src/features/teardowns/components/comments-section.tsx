@@ -5,7 +5,7 @@ import { CircleCheck, Eye, MessageSquare, Undo2 } from 'lucide-react';
 import { createCommentBody, type CommentDto, type CreateCommentBody, type TeardownDto } from '@splitcase/contracts';
 import { Button } from '@/components/button';
 import { ErrorPanel } from '@/components/error-boundary';
-import { Field, Textarea } from '@/components/field';
+import { Field, Textarea, FormError } from '@/components/field';
 import { Card, EmptyState, Spinner } from '@/components/page';
 import { applyServerErrors } from '@/lib/form-errors';
 import { formatDateTime } from '@/lib/format';
@@ -83,11 +83,7 @@ export function CommentsSection({ teardown }: { teardown: TeardownDto }) {
                 />
               )}
             </Field>
-            {formError && (
-              <p role="alert" className="text-sm text-brick-700">
-                {formError}
-              </p>
-            )}
+            <FormError message={formError} />
             <div className="flex items-center gap-3">
               <Button type="submit" variant="primary" busy={post.isPending}>
                 Post comment

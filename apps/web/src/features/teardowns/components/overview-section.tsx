@@ -14,7 +14,7 @@ import {
   type UpdateTeardownForm,
 } from '@splitcase/contracts';
 import { Button } from '@/components/button';
-import { Field, Input, Textarea } from '@/components/field';
+import { Field, Input, Textarea, FormError } from '@/components/field';
 import { Card, Spinner } from '@/components/page';
 import { LithiumCaution } from '@/components/safety';
 import { StatusBadge } from '@/components/status';
@@ -167,11 +167,7 @@ function RecordForm({ teardown }: { teardown: TeardownDto }) {
         <Field label={TEARDOWN_FIELD_LABELS.safetyNotes} error={formState.errors.safetyNotes?.message} hint="Cell state on arrival, how it was discharged, anything the next person must know.">
           {(p) => <Textarea {...p} rows={3} {...register('safetyNotes')} />}
         </Field>
-        {formError && (
-          <p role="alert" className="text-sm text-brick-700">
-            {formError}
-          </p>
-        )}
+        <FormError message={formError} />
         <div className="flex items-center gap-3">
           <Button type="submit" variant="primary" busy={update.isPending && !conflict} disabled={!formState.isDirty || Boolean(conflict)}>
             Save

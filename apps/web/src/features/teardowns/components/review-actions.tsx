@@ -6,7 +6,7 @@ import { CircleCheck, Send, Undo2 } from 'lucide-react';
 import { sendBackTeardownBody, type SendBackTeardownBody, type TeardownDto } from '@splitcase/contracts';
 import { Button } from '@/components/button';
 import { Dialog } from '@/components/dialog';
-import { Field, Textarea } from '@/components/field';
+import { Field, Textarea, FormError } from '@/components/field';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useApproveTeardown } from '../api/approve-teardown';
 import { useSendBackTeardown } from '../api/send-back-teardown';
@@ -115,11 +115,7 @@ function SendBackDialog({ teardown: t, onClose }: { teardown: TeardownDto; onClo
         <Field label="Comment" error={formState.errors.comment?.message}>
           {(p) => <Textarea {...p} rows={4} {...register('comment')} />}
         </Field>
-        {formError && (
-          <p role="alert" className="text-sm text-brick-700">
-            {formError}
-          </p>
-        )}
+        <FormError message={formError} />
       </form>
     </Dialog>
   );

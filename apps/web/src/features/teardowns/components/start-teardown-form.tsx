@@ -3,7 +3,7 @@ import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { createTeardownBody, type CreateTeardownBody, type CreateTeardownForm, type TeardownDto } from '@splitcase/contracts';
 import { Button } from '@/components/button';
-import { Field, Input, Textarea } from '@/components/field';
+import { Field, Input, Textarea, FormError } from '@/components/field';
 import { LithiumCaution } from '@/components/safety';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useCreateTeardown } from '../api/create-teardown';
@@ -40,11 +40,7 @@ export function StartTeardownForm({ deviceId, onStarted, onCancel }: { deviceId:
       <Field label="Safety notes" error={formState.errors.safetyNotes?.message} hint="e.g. cell voltage before opening, how it was discharged">
         {(p) => <Textarea {...p} rows={2} {...register('safetyNotes')} />}
       </Field>
-      {formError && (
-        <p role="alert" className="text-sm text-brick-700">
-          {formError}
-        </p>
-      )}
+      <FormError message={formError} />
       <div className="flex gap-2">
         <Button type="submit" variant="primary" busy={create.isPending}>
           Start the teardown
