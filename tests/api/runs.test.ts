@@ -4,7 +4,7 @@ import { join } from 'node:path';
 import { once } from 'node:events';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CONFIRM_UNPUBLISH_HEADER } from '@splitcase/contracts';
-import { benchRunFigureInput } from '../../apps/api/src/modules/runs/figures';
+import { benchRunFigureInputs } from '../../apps/api/src/modules/runs/figures';
 import { TeardownSchema } from '../../apps/api/src/modules/teardowns/teardown.entity';
 import { makeTestApp, type Agent, type TestApp } from '../support/test-app';
 
@@ -487,14 +487,18 @@ describe('series, reads and changes', () => {
     const em = t.orm.em.fork();
     const teardown = await em.findOneOrFail(TeardownSchema, { id: ids[DRAFT]! });
     const latest = (await (await t.as('engineer')).get(`/api/teardowns/${ids[DRAFT]}/runs`).expect(200)).body.runs.find((r: { kind: string }) => r.kind === 'discharge');
-    const fed = await benchRunFigureInput(em, teardown);
+    const fed = (await benchRunFigureInputs(em, [teardown])).get(teardown.id)!;
     expect(fed.measuredCapacityAh).toBe(latest.analysis.ampHours);
     const thermal = (await (await t.as('engineer')).get(`/api/teardowns/${ids[DRAFT]}/runs`).expect(200)).body.runs.find((r: { kind: string }) => r.kind === 'thermal');
     // The touch margin uses the peak of the latest thermal run, when there is one.
     expect(fed.measuredSurface).toEqual(thermal ? { temperatureC: thermal.analysis.thermal.maxC, basis: `peak of the thermal run "${thermal.label}"` } : undefined);
     const empty = await em.findOneOrFail(TeardownSchema, { id: ids['Breeze Neck 2']! });
     await em.getConnection().execute("delete from bench_runs where teardown_id = ? and kind = 'discharge'", [empty.id]);
-    expect(await benchRunFigureInput(em, empty)).toEqual({});
+    expect((await benchRunFigureInputs(em, [empty])).get(empty.id)).toEqual({});
+    // Many teardowns in one call: each gets its own latest runs.
+    const both = await benchRunFigureInputs(em, [teardown, empty]);
+    expect(both.get(teardown.id)).toEqual(fed);
+    expect(both.get(empty.id)).toEqual({});
   });
 
   it('compares with the label under the capacity warning setting, worked out at read time', async () => {

@@ -482,7 +482,7 @@ describe('figures of the demo heater', () => {
   it('come from the stored records: a sensor part removes the no-sensor suggestion; contributors add inputs', async () => {
     const td = await heaterTeardown();
     const eng = await as('engineer');
-    FIGURE_CONTRIBUTORS.push(async () => ({ measuredCapacityAh: 2.62 }));
+    FIGURE_CONTRIBUTORS.push(async (_em, teardowns) => new Map(teardowns.map((x) => [x.id, { measuredCapacityAh: 2.62 }])));
     try {
       const res = (await eng.get(`/api/teardowns/${td.id}/figures`).expect(200)).body;
       // [C] 2.62 Ah × 3.7 V ÷ 8.881667 W = 1.0915 h

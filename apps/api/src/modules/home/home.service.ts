@@ -28,9 +28,9 @@ import { CommentSchema, type Comment } from '../teardowns/comment.entity';
 import { DRAFT_READERS } from '../teardowns/access';
 import { TeardownSchema, type Teardown } from '../teardowns/teardown.entity';
 import { UserSchema } from '../users/user.entity';
+import { refId } from '../../db/batch';
 
 const DAY_MS = 86_400_000;
-const refId = (r: unknown): number => (typeof r === 'object' && r !== null ? (r as { id: number }).id : (r as number));
 
 export function toHomeTeardown(t: Teardown): HomeTeardown {
   return {

@@ -37,7 +37,7 @@ import { currentRateTable, hasRate } from '../cost/rates.service';
 import type { RateTable } from '../cost/rate-table.entity';
 import type { Device } from '../devices/device.entity';
 import { visibleTeardownsByDevice } from '../devices/device.service';
-import { figureInput } from '../figures/figures.service';
+import { figureInputs } from '../figures/figures.service';
 import { FindingSchema } from '../findings/finding.entity';
 import { BenchRunSchema } from '../runs/bench-run.entity';
 import { DRAFT_READERS } from '../teardowns/access';
@@ -168,7 +168,15 @@ const inputValue = (f: Figure | undefined, label: string) => {
 };
 
 /** Everything known about one device for the lineup, in the lineup currency. */
-async function deviceRow(em: EntityManager, device: Device, teardown: Teardown | null, currency: string, table: RateTable | null, viewer: boolean): Promise<DeviceRow> {
+async function deviceRow(
+  em: EntityManager,
+  device: Device,
+  teardown: Teardown | null,
+  stored: TeardownFigureInput | undefined,
+  currency: string,
+  table: RateTable | null,
+  viewer: boolean,
+): Promise<DeviceRow> {
   const missing: DeviceRow['missing'] = {};
   const sources: DeviceRow['sources'] = {};
   const notes: string[] = [];
@@ -212,7 +220,8 @@ async function deviceRow(em: EntityManager, device: Device, teardown: Teardown |
   let input: TeardownFigureInput | null = null;
   let figures: Figure[] = [];
   try {
-    input = await figureInput(em, teardown);
+    input = stored ?? null;
+    if (!input) throw new Error(`No figure input for teardown #${teardown.id}`);
     figures = teardownFigures(input).figures;
   } catch (err) {
     if (!(err instanceof RangeError)) throw err;
@@ -354,11 +363,14 @@ export async function lineupComparison(em: EntityManager, user: AuthUser, lineup
   );
   const viewer = !DRAFT_READERS.includes(user.role);
 
+  const latestOf = new Map(devices.map((d) => [d.id, teardowns.get(d.id)?.[0] ?? null]));
+  const latest = [...latestOf.values()].filter((t): t is Teardown => t !== null);
+  await em.populate(latest, ['device']);
+  const inputs = await figureInputs(em, latest);
   const rows: DeviceRow[] = [];
   for (const d of devices) {
-    const latest = teardowns.get(d.id)?.[0] ?? null;
-    if (latest) await em.populate(latest, ['device']);
-    rows.push(await deviceRow(em, d, latest, currency, table, viewer));
+    const t = latestOf.get(d.id) ?? null;
+    rows.push(await deviceRow(em, d, t, t ? inputs.get(t.id) : undefined, currency, table, viewer));
   }
 
   const computed = rows.map((r) => {

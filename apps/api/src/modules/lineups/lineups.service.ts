@@ -11,13 +11,13 @@ import { DRAFT_READERS, REVIEWERS } from '../teardowns/access';
 import { TeardownSchema } from '../teardowns/teardown.entity';
 import { LineupDeviceSchema } from './lineup-device.entity';
 import { LineupSchema, type Lineup } from './lineup.entity';
+import { refId } from '../../db/batch';
 
 /** Every role but viewer builds and edits lineups. */
 export const LINEUP_EDITORS: readonly Role[] = ['admin', 'engineer', 'sourcing', 'lead'];
 /** Leads and admins publish (and change a published lineup), as they approve teardowns. */
 export const LINEUP_PUBLISHERS: readonly Role[] = REVIEWERS;
 
-const refId = (r: unknown): number => (typeof r === 'object' && r !== null ? (r as { id: number }).id : (r as number));
 
 export function lineupPermissions(user: AuthUser, l: Pick<Lineup, 'status' | 'createdBy'>): LineupDto['permissions'] {
   const publisher = LINEUP_PUBLISHERS.includes(user.role);

@@ -8,11 +8,12 @@ import { isLithiumChemistry, labelClaimCheck, teardownFigures, type TeardownFigu
 import { ESTIMATES_NOTE, type Pattern, type PatternDevice, type PatternsResponse } from '@splitcase/contracts';
 import type { AuthUser } from '../../http/route';
 import { FindingSchema } from '../findings/finding.entity';
-import { figureInput } from '../figures/figures.service';
+import { figureInputs } from '../figures/figures.service';
 import { PackSchema, type Pack } from '../power/pack.entity';
 import { getSettings } from '../settings/settings.service';
 import { visibleTeardowns } from '../teardowns/access';
 import { TeardownSchema, type Teardown } from '../teardowns/teardown.entity';
+import { findInChunks, groupBy, refId } from '../../db/batch';
 
 /** What is known about one device for the patterns. */
 interface Judged {
@@ -39,7 +40,6 @@ interface PatternRule {
 
 const plural = (n: number, one: string, many: string) => (n === 1 ? one : many);
 const verb = (count: number, one: string, many: string) => (count === 1 ? one : many);
-const refId = (r: unknown): number => (typeof r === 'object' && r !== null ? (r as { id: number }).id : (r as number));
 const hasSuggestion = (j: Judged, key: string) => j.figures!.suggestions.some((s) => s.key === key);
 const hasLabel = (i: TeardownFigureInput) => i.claims?.capacityAh !== undefined || i.claims?.capacityWh !== undefined;
 
@@ -144,22 +144,26 @@ async function judgeDevices(em: EntityManager, user: AuthUser): Promise<Judged[]
     if (!latest.has(t.device.id)) latest.set(t.device.id, t);
   }
   if (!teardowns.length) return [];
-  const [packs, findings] = await Promise.all([
-    em.find(PackSchema, { teardown: { $in: [...latest.values()].map((t) => t.id) } }),
-    em.find(FindingSchema, { teardown: { $in: teardowns.map((t) => t.id) } }, { fields: ['kind', 'severity', 'teardown'] as never }),
+  const latestIds = [...latest.values()].map((t) => t.id);
+  const [packs, findings, inputs] = await Promise.all([
+    findInChunks(latestIds, (chunk) => em.find(PackSchema, { teardown: { $in: chunk } })),
+    findInChunks(
+      teardowns.map((t) => t.id),
+      (chunk) => em.find(FindingSchema, { teardown: { $in: chunk } }, { fields: ['kind', 'severity', 'teardown'] as never }),
+    ),
+    figureInputs(em, [...latest.values()]),
   ]);
   const packOf = new Map(packs.map((p) => [refId(p.teardown), p]));
-  const findingsOf = new Map<number, { kind: string; severity: string }[]>();
-  for (const f of findings) {
-    const deviceId = teardownDevice.get(refId(f.teardown))!;
-    findingsOf.set(deviceId, [...(findingsOf.get(deviceId) ?? []), { kind: f.kind, severity: f.severity }]);
-  }
+  const findingsOf = groupBy(
+    findings.map((f) => ({ deviceId: teardownDevice.get(refId(f.teardown))!, kind: f.kind, severity: f.severity })),
+    (f) => f.deviceId,
+  );
   const judged: Judged[] = [];
   for (const t of latest.values()) {
     let input: TeardownFigureInput | null = null;
     let figures: TeardownFiguresResult | null = null;
     try {
-      input = await figureInput(em, t);
+      input = inputs.get(t.id)!;
       figures = teardownFigures(input);
     } catch (err) {
       // Records the calculation refuses (the figures panel names the field): this device is not judged.
