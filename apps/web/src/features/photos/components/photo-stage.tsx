@@ -1,5 +1,6 @@
-import { useRef, useState, type KeyboardEvent, type MouseEvent, type PointerEvent } from 'react';
+import { useRef, type KeyboardEvent, type MouseEvent, type PointerEvent } from 'react';
 import type { CalloutDto, PhotoDto } from '@splitcase/contracts';
+import { useLiveState } from '@/lib/use-live-state';
 import { PinMark, at } from './pin';
 
 const clamp = (v: number) => Math.min(1, Math.max(0, v));
@@ -36,7 +37,8 @@ export function PhotoStage({
   onMove: (callout: CalloutDto, pos: { x: number; y: number }) => void;
 }) {
   const box = useRef<HTMLDivElement>(null);
-  const [drag, setDrag] = useState<Drag | null>(null);
+  // Live state: the handlers read the drag as it is now, not as of the last render.
+  const [drag, setDrag, currentDrag] = useLiveState<Drag | null>(null);
   const suppressClick = useRef(false);
   const aspect = photo.width / photo.height;
 
@@ -57,16 +59,18 @@ export function PhotoStage({
       setDrag({ id: c.id, x: c.x, y: c.y, startX: e.clientX, startY: e.clientY, moved: false });
     },
     onPointerMove: (e: PointerEvent<HTMLButtonElement>) => {
-      if (!drag || drag.id !== c.id) return;
-      const moved = drag.moved || Math.hypot(e.clientX - drag.startX, e.clientY - drag.startY) > 3;
-      setDrag({ ...drag, ...(moved ? relative(e.clientX, e.clientY) : {}), moved });
+      const d = currentDrag();
+      if (!d || d.id !== c.id) return;
+      const moved = d.moved || Math.hypot(e.clientX - d.startX, e.clientY - d.startY) > 3;
+      setDrag({ ...d, ...(moved ? relative(e.clientX, e.clientY) : {}), moved });
     },
     onPointerUp: (e: PointerEvent<HTMLButtonElement>) => {
-      if (!drag || drag.id !== c.id) return;
+      const d = currentDrag();
+      if (!d || d.id !== c.id) return;
       e.currentTarget.releasePointerCapture(e.pointerId);
-      if (drag.moved) {
+      if (d.moved) {
         suppressClick.current = true;
-        onMove(c, { x: drag.x, y: drag.y });
+        onMove(c, { x: d.x, y: d.y });
         onSelect(c.id);
       }
       setDrag(null);

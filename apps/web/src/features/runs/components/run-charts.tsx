@@ -12,6 +12,7 @@ import { ErrorPanel } from '@/components/error-boundary';
 import { Input } from '@/components/field';
 import { Spinner } from '@/components/page';
 import { sig } from '@/lib/format';
+import { useLiveState } from '@/lib/use-live-state';
 import { useRunSeries, type SeriesWindow } from '../api/run-series';
 import { formatClock, niceTimeTicks, timeAxisUnit } from './time-format';
 
@@ -209,7 +210,8 @@ function QuantityChart({
     }
     return niceTicks(lo, hi);
   }, [traces]);
-  const [drag, setDrag] = useState<{ from: number; to: number } | null>(null);
+  // Live state: the handlers read the selection as it is now, not as of the last render.
+  const [drag, setDrag, currentDrag] = useLiveState<{ from: number; to: number } | null>(null);
   const axis = timeAxisUnit(domain[1] - domain[0]);
   const labelOf = (state: { activeLabel?: string | number }) => (state.activeLabel === undefined ? null : Number(state.activeLabel));
   return (
@@ -230,10 +232,12 @@ function QuantityChart({
             }}
             onMouseMove={(s) => {
               const t = labelOf(s);
-              if (drag && t !== null) setDrag({ ...drag, to: t });
+              const d = currentDrag();
+              if (d && t !== null) setDrag({ ...d, to: t });
             }}
             onMouseUp={() => {
-              if (drag && Math.abs(drag.to - drag.from) > 0) onZoom({ from: Math.min(drag.from, drag.to), to: Math.max(drag.from, drag.to) });
+              const d = currentDrag();
+              if (d && Math.abs(d.to - d.from) > 0) onZoom({ from: Math.min(d.from, d.to), to: Math.max(d.from, d.to) });
               setDrag(null);
             }}
             onMouseLeave={() => setDrag(null)}
