@@ -355,6 +355,26 @@ describe('facets and filters', () => {
     expect(r.facets.type.comment).toBe(await count('select count(*) as n from comments'));
   });
 
+  it('browse mode reads the text of the rows it shows: every type gets the same title, creation time and order as a search finds them with', async () => {
+    // Browse mode reads only what the filters need for every row, then the text of the rows that
+    // pass; a search reads the text with the candidates. Both must describe a record the same way.
+    const key = (i: SearchItem) => `${i.type}:${i.id}`;
+    const found = new Map((await everything('lead', 'q=cell')).map((i) => [key(i), i]));
+    for (const type of ['finding', 'part', 'teardown', 'comment']) {
+      const browsed = await everything('lead', `type=${type}&sort=date&dir=desc`);
+      expect(browsed.length, type).toBe(await count(`select count(*) as n from ${type === 'teardown' ? 'teardowns' : `${type}s`}`));
+      const both = browsed.filter((i) => found.has(key(i)));
+      expect(both.length, `${type} found by "cell" too`).toBeGreaterThan(0);
+      for (const i of both) expect({ title: i.title, createdAt: i.createdAt }, key(i)).toEqual({ title: found.get(key(i))!.title, createdAt: found.get(key(i))!.createdAt });
+      // Newest teardown first; within a teardown, newest record first.
+      const order = browsed.map((i) => `${i.teardown.date}|${i.createdAt}`);
+      expect(order).toEqual([...order].sort().reverse());
+      expect(browsed.every((i) => i.title.length > 0 && i.snippet.length > 0)).toBe(true);
+    }
+    const comment = (await everything('lead', 'type=comment')).find((i) => i.title.startsWith('Comment by '));
+    expect(comment, 'a comment titled with its author').toBeDefined();
+  });
+
   it("a facet's counts leave out its own filter and apply the others (values of one facet add up, facets narrow)", async () => {
     const all = await search('lead', '');
     const safety = await search('lead', 'kind=safety');

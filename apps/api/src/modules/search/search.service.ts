@@ -3,8 +3,11 @@
 // paging.
 //
 // One SQL query reads the candidates: the rows that match the words (or every row, in browse
-// mode) of teardowns the caller may read, with the fields the facets need. Filters, facet counts,
-// sorting and paging run over those rows here; snippets are made by FTS5 for the rows shown only.
+// mode) of teardowns the caller may read, with only the fields the filters and facets need.
+// Filters and facet counts run over those rows here; a second query reads the text (title, lead,
+// creation time) of the rows that pass, by rowid, for sorting and the results; snippets are made
+// by FTS5 for the rows shown only. (Browse mode reads every row of the index for the facet
+// counts: reading their text too took most of its time.)
 import type { EntityManager } from '@mikro-orm/sqlite';
 import {
   SEARCH_SECTION,
@@ -35,9 +38,6 @@ interface CandidateRow {
   type: SearchType;
   record_id: number;
   teardown_id: number;
-  f_title: string;
-  f_body: string;
-  f_detail: string;
   rank: number;
   status: TeardownStatus;
   date: string;
@@ -49,6 +49,17 @@ interface CandidateRow {
   kind: FindingKind | null;
   severity: Severity | null;
   tags: string | null;
+}
+
+/** The text of a row that passed the filters. */
+interface DetailRow {
+  rowid: number;
+  type: SearchType;
+  date: string;
+  unit_label: string | null;
+  f_title: string;
+  f_body: string;
+  f_detail: string;
   designators: string | null;
   comment_kind: 'comment' | 'sent-back' | 'approved' | 'submitted' | null;
   author: string | null;
@@ -108,31 +119,29 @@ function parseTags(json: string | null): string[] {
   }
 }
 
-function toHit(r: CandidateRow): Hit {
+/** Title and lead of a row. */
+function describe(r: DetailRow): { title: string; lead: string } {
   const body = r.f_body ?? '';
-  let title: string;
-  let lead: string;
   switch (r.type) {
     case 'finding': {
-      title = firstSentence(body);
+      const title = firstSentence(body);
       const flat = body.replace(/\s+/g, ' ').trim();
       const rest = title.endsWith('…') ? `…${flat.slice(title.length - 1).trimStart()}` : flat.slice(title.length + 1).trim();
-      lead = clip(rest || flat, 220);
-      break;
+      return { title, lead: clip(rest || flat, 220) };
     }
     case 'part':
-      title = r.designators ? `${r.designators} · ${r.f_title}` : r.f_title;
-      lead = clip([body, r.f_detail].filter(Boolean).join(' · '), 220);
-      break;
+      return { title: r.designators ? `${r.designators} · ${r.f_title}` : r.f_title, lead: clip([body, r.f_detail].filter(Boolean).join(' · '), 220) };
     case 'teardown':
-      title = `Teardown of ${r.unit_label ? `${r.unit_label}, ` : ''}${r.date}`;
-      lead = clip(body || r.f_detail, 220);
-      break;
+      return { title: `Teardown of ${r.unit_label ? `${r.unit_label}, ` : ''}${r.date}`, lead: clip(body || r.f_detail, 220) };
     case 'comment':
-      title = `${COMMENT_TITLE[r.comment_kind ?? 'comment']} by ${r.author ?? 'a former user'}`;
-      lead = clip(body, 220);
-      break;
+      return { title: `${COMMENT_TITLE[r.comment_kind ?? 'comment']} by ${r.author ?? 'a former user'}`, lead: clip(body, 220) };
   }
+}
+
+/** A candidate before its text is read: title, lead and creation time are filled by `withText`. */
+type LightHit = Omit<Hit, 'title' | 'lead' | 'createdAt'>;
+
+function toLightHit(r: CandidateRow): LightHit {
   return {
     rowid: r.rowid,
     type: r.type,
@@ -140,8 +149,6 @@ function toHit(r: CandidateRow): Hit {
     teardownId: Number(r.teardown_id),
     deviceId: r.device_id,
     rank: Number(r.rank) * TYPE_BOOST[r.type],
-    title,
-    lead,
     status: r.status,
     date: r.date,
     month: r.date.slice(0, 7),
@@ -152,12 +159,51 @@ function toHit(r: CandidateRow): Hit {
     kind: r.kind,
     severity: r.severity,
     tags: r.type === 'finding' ? parseTags(r.tags) : [],
-    createdAt: new Date(typeof r.created_at === 'string' && !/^\d+$/.test(r.created_at) ? r.created_at : Number(r.created_at ?? 0)),
   };
 }
 
-/** The rows matching the words (all rows without words) of teardowns this user may read. */
-async function candidates(em: EntityManager, user: AuthUser, terms: string[]): Promise<Hit[]> {
+/** The text columns of a row (DetailRow) and the joins they need, besides teardowns t and findings f. */
+const TEXT_COLUMNS = `search_fts.title as f_title, substr(search_fts.body, 1, 600) as f_body, substr(search_fts.detail, 1, 300) as f_detail,
+            p.designators as designators, c.kind as comment_kind, u.name as author,
+            coalesce(f.created_at, p.created_at, c.created_at, t.created_at) as created_at`;
+const TEXT_JOINS = `left join parts p on search_fts.type = 'part' and p.id = search_fts.record_id
+       left join comments c on search_fts.type = 'comment' and c.id = search_fts.record_id
+       left join users u on u.id = c.author_id`;
+
+/**
+ * Makes candidates hits, in their order, with their text: taken from `known` when the candidate
+ * query read it, otherwise read here by rowid in chunks.
+ */
+async function withText(em: EntityManager, light: LightHit[], known: Map<number, DetailRow>): Promise<Hit[]> {
+  const text = new Map(known);
+  const missing = light.filter((h) => !text.has(h.rowid));
+  for (let i = 0; i < missing.length; i += 500) {
+    const chunk = missing.slice(i, i + 500);
+    const rows = (await em.getConnection().execute(
+      `select search_fts.rowid as rowid, search_fts.type as type, t.date as date, t.unit_label as unit_label, ${TEXT_COLUMNS}
+         from search_fts
+         join teardowns t on t.id = search_fts.teardown_id
+         left join findings f on search_fts.type = 'finding' and f.id = search_fts.record_id
+         ${TEXT_JOINS}
+        where search_fts.rowid in (${chunk.map(() => '?').join(', ')})`,
+      chunk.map((h) => h.rowid),
+    )) as DetailRow[];
+    for (const r of rows) text.set(Number(r.rowid), r);
+  }
+  return light.map((h) => {
+    const r = text.get(h.rowid)!;
+    const { title, lead } = describe(r);
+    const created = r.created_at;
+    return { ...h, title, lead, createdAt: new Date(typeof created === 'string' && !/^\d+$/.test(created) ? created : Number(created ?? 0)) };
+  });
+}
+
+/**
+ * The rows that match the words (all rows without words) of teardowns this user may read. With
+ * words the rows are few and their text comes along; without (browse mode: every row, for the facet
+ * counts) only what the filters and facets need, and `withText` reads the text of the rows that pass.
+ */
+async function candidates(em: EntityManager, user: AuthUser, terms: string[]): Promise<{ hits: LightHit[]; text: Map<number, DetailRow> }> {
   const where: string[] = [];
   const params: unknown[] = [];
   if (terms.length) {
@@ -167,30 +213,27 @@ async function candidates(em: EntityManager, user: AuthUser, terms: string[]): P
   if (!DRAFT_READERS.includes(user.role)) where.push(`t.status = 'published'`);
   const rows = (await em.getConnection().execute(
     `select search_fts.rowid as rowid, search_fts.type as type, search_fts.record_id as record_id, search_fts.teardown_id as teardown_id,
-            search_fts.title as f_title, substr(search_fts.body, 1, 600) as f_body, substr(search_fts.detail, 1, 300) as f_detail,
             ${terms.length ? BM25 : '0'} as rank,
             t.status as status, t.date as date, t.unit_label as unit_label,
             d.id as device_id, d.maker as maker, d.model as model, d.category as category,
-            f.kind as kind, f.severity as severity, f.tags as tags, p.designators as designators,
-            c.kind as comment_kind, u.name as author,
-            coalesce(f.created_at, p.created_at, c.created_at, t.created_at) as created_at
+            f.kind as kind, f.severity as severity, f.tags as tags${terms.length ? `, ${TEXT_COLUMNS}` : ''}
        from search_fts
        join teardowns t on t.id = search_fts.teardown_id
        join devices d on d.id = t.device_id
        left join findings f on search_fts.type = 'finding' and f.id = search_fts.record_id
-       left join parts p on search_fts.type = 'part' and p.id = search_fts.record_id
-       left join comments c on search_fts.type = 'comment' and c.id = search_fts.record_id
-       left join users u on u.id = c.author_id
+       ${terms.length ? TEXT_JOINS : ''}
       ${where.length ? `where ${where.join(' and ')}` : ''}`,
     params,
-  )) as CandidateRow[];
-  return rows.map(toHit);
+  )) as (CandidateRow & Partial<DetailRow>)[];
+  const text = new Map<number, DetailRow>();
+  if (terms.length) for (const r of rows) text.set(Number(r.rowid), r as DetailRow);
+  return { hits: rows.map(toLightHit), text };
 }
 
 type FilterKey = 'type' | 'kind' | 'severity' | 'category' | 'maker' | 'tag' | 'status' | 'device' | 'date';
 
 /** Each filter as a test on a hit; an empty filter passes everything. */
-function filtersOf(query: SearchQuery, types: SearchType[]): Record<FilterKey, (h: Hit) => boolean> {
+function filtersOf(query: SearchQuery, types: SearchType[]): Record<FilterKey, (h: LightHit) => boolean> {
   const has = <T>(list: T[], v: T | null) => list.length === 0 || (v !== null && list.includes(v));
   return {
     type: (h) => has(types, h.type),
@@ -208,7 +251,7 @@ function filtersOf(query: SearchQuery, types: SearchType[]): Record<FilterKey, (
 const FILTER_KEYS: FilterKey[] = ['type', 'kind', 'severity', 'category', 'maker', 'tag', 'status', 'device', 'date'];
 
 /** What each facet counts, and which filter it leaves out when counting. */
-const FACETS: { facet: keyof SearchFacets; skip: FilterKey; values: (h: Hit) => (string | null)[] }[] = [
+const FACETS: { facet: keyof SearchFacets; skip: FilterKey; values: (h: LightHit) => (string | null)[] }[] = [
   { facet: 'type', skip: 'type', values: (h) => [h.type] },
   { facet: 'kind', skip: 'kind', values: (h) => [h.kind] },
   { facet: 'severity', skip: 'severity', values: (h) => [h.severity] },
@@ -264,14 +307,25 @@ export async function searchHits(em: EntityManager, user: AuthUser, query: Searc
   const terms = searchTerms(query.q);
   // Browse mode (no words) lists findings unless the caller asks for other types.
   const types: SearchType[] = query.type.length ? [...new Set(query.type)] : terms.length ? [] : ['finding'];
-  const all = await candidates(em, user, terms);
+  const { hits: all, text } = await candidates(em, user, terms);
   const filters = filtersOf(query, types);
-  const passesExcept = (h: Hit, skip: FilterKey | null) => FILTER_KEYS.every((k) => k === skip || filters[k](h));
+  const active = FILTER_KEYS.map((k) => [k, filters[k]] as const);
 
+  // A facet counts the hits that pass every filter but its own: find each hit's failing filters once.
   const facets = Object.fromEntries(FACETS.map((f) => [f.facet, {} as Record<string, number>])) as SearchFacets;
+  const passing: LightHit[] = [];
   for (const h of all) {
+    let failed: FilterKey | null = null;
+    let failures = 0;
+    for (const [k, test] of active) {
+      if (test(h)) continue;
+      failed = k;
+      if (++failures > 1) break;
+    }
+    if (failures > 1) continue;
+    if (failures === 0) passing.push(h);
     for (const f of FACETS) {
-      if (!passesExcept(h, f.skip)) continue;
+      if (failures === 1 && f.skip !== failed) continue;
       for (const v of f.values(h)) if (v !== null) facets[f.facet][v] = (facets[f.facet][v] ?? 0) + 1;
     }
   }
@@ -291,7 +345,7 @@ export async function searchHits(em: EntityManager, user: AuthUser, query: Searc
   const effectiveSort: SearchSort = sort === 'relevance' && !terms.length ? 'date' : sort;
   const dir: SortDir = query.dir ?? SEARCH_SORT_DIR[sort];
   const hits = sortHits(
-    all.filter((h) => passesExcept(h, null)),
+    await withText(em, passing, text),
     effectiveSort,
     effectiveSort === sort ? dir : SEARCH_SORT_DIR[effectiveSort],
   );
