@@ -37,9 +37,10 @@ describe('parts, measurements and the pack at the bench', () => {
     const added = row(page, 'E2E chip resistor, pull-down');
     await added.waitFor();
     // 103 = 10 × 10³ Ω [S: REFERENCES.md §1, SMD resistor codes]
-    await expect(added.textContent()).resolves.toContain('10.0 kΩ');
-    await expect(page.getByLabel('New part: description').inputValue()).resolves.toBe('');
-    await expect(page.evaluate(() => document.activeElement?.getAttribute('aria-label'))).resolves.toBe('New part: designators');
+    await expect.poll(() => added.textContent(), { timeout: 10_000 }).toContain('10.0 kΩ');
+    // The line shows as soon as the list is updated; the entry row is cleared right after the save returns.
+    await expect.poll(() => page.getByLabel('New part: description').inputValue(), { timeout: 10_000 }).toBe('');
+    await expect.poll(() => page.evaluate(() => document.activeElement?.getAttribute('aria-label')), { timeout: 10_000 }).toBe('New part: designators');
   });
 
   it('edits a line in place: Enter saves, the decoded value follows the marking', async () => {
@@ -59,8 +60,8 @@ describe('parts, measurements and the pack at the bench', () => {
     await page.getByRole('button', { name: 'Preview' }).click();
     const problems = page.getByRole('list', { name: 'Problems in the file' });
     await problems.waitFor();
-    await expect(problems.textContent()).resolves.toMatch(/Row 3, Category: Unknown category "gizmo"/);
-    await expect(page.getByRole('button', { name: /^Import/ }).last().isDisabled()).resolves.toBe(true);
+    await expect.poll(() => problems.textContent(), { timeout: 10_000 }).toMatch(/Row 3, Category: Unknown category "gizmo"/);
+    await expect.poll(() => page.getByRole('button', { name: /^Import/ }).last().isDisabled(), { timeout: 10_000 }).toBe(true);
 
     await paste.fill('Designators;Category;Description;Marking;Qty\nJ9;connector;E2E header 2 pins;;1\nC99;capacitor;E2E bulk capacitor;226;2\n');
     await page.getByRole('button', { name: 'Preview' }).click();
@@ -70,7 +71,7 @@ describe('parts, measurements and the pack at the bench', () => {
     await page.getByRole('button', { name: 'Import 2 parts' }).waitFor({ state: 'detached' });
     await row(page, 'E2E bulk capacitor').waitFor();
     // 226 = 22 × 10⁶ pF = 22 µF [S: REFERENCES.md §1, capacitor 3-digit code]
-    await expect(row(page, 'E2E bulk capacitor').textContent()).resolves.toContain('22.0 µF');
+    await expect.poll(() => row(page, 'E2E bulk capacitor').textContent(), { timeout: 10_000 }).toContain('22.0 µF');
     await row(page, 'E2E header 2 pins').waitFor();
   });
 
@@ -82,7 +83,7 @@ describe('parts, measurements and the pack at the bench', () => {
     await page.getByRole('textbox', { name: 'Value with unit' }).press('Enter');
     const reading = row(page, 'E2E heater element, front');
     await reading.waitFor();
-    await expect(reading.textContent()).resolves.toContain('3.02 Ω');
+    await expect.poll(() => reading.textContent(), { timeout: 10_000 }).toContain('3.02 Ω');
     // Ready for the next reading: the value is cleared and focused.
     await expect.poll(() => page.getByRole('textbox', { name: 'Value with unit' }).inputValue()).toBe('');
 
@@ -90,7 +91,7 @@ describe('parts, measurements and the pack at the bench', () => {
     await page.getByRole('combobox', { name: 'Quantity' }).first().selectOption('current');
     await page.getByRole('textbox', { name: 'Value with unit' }).fill('3.7 V');
     await page.getByRole('textbox', { name: 'Value with unit' }).press('Enter');
-    await expect(page.getByRole('alert').filter({ hasText: 'Value' }).first().textContent()).resolves.toMatch(/current/);
+    await expect.poll(() => page.getByRole('alert').filter({ hasText: 'Value' }).first().textContent(), { timeout: 10_000 }).toMatch(/current/);
   });
 
   it('edits the pack with "2700 mAh": stored as 2.7 Ah, the typed text shown back', async () => {
@@ -101,7 +102,7 @@ describe('parts, measurements and the pack at the bench', () => {
     await page.getByRole('button', { name: 'Save pack' }).click();
     await page.getByText('Pack saved.').waitFor();
     await page.reload();
-    await expect(page.getByLabel('Rated capacity (per cell)').inputValue()).resolves.toBe('2700 mAh');
+    await expect.poll(() => page.getByLabel('Rated capacity (per cell)').inputValue(), { timeout: 10_000 }).toBe('2700 mAh');
     await page.getByText('= 2.70 Ah').waitFor();
     const pack = await (await page.request.get(`/api/teardowns/${teardownId}/pack`)).json();
     expect(pack.pack.capacityAh).toBeCloseTo(2.7, 12);

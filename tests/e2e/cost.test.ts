@@ -36,7 +36,7 @@ describe('the cost section of a demo teardown', () => {
       await page.getByText("No parts in this teardown's BOM yet.").waitFor();
       // The cost model and the rate date are there even without parts.
       await page.getByText('Cost model (workspace defaults)').waitFor();
-      await expect(page.getByTestId('rate-date').textContent()).resolves.toMatch(/Rates of \d{1,2} \w{3} \d{4}/);
+      await expect.poll(() => page.getByTestId('rate-date').textContent(), { timeout: 10_000 }).toMatch(/Rates of \d{1,2} \w{3} \d{4}/);
     } else {
       await page.getByRole('table', { name: 'Costed bill of materials' }).waitFor();
       await page.getByTestId('cost-landed').waitFor();

@@ -43,8 +43,8 @@ describe('findings explorer', () => {
     // now (the demo's own counts, 1 of 3, are checked by tests/api/explorer.test.ts on a fresh database).
     const api = (await (await page.request.get('/api/patterns')).json()).patterns as { key: string; count: number; of: number }[];
     const pattern = api.find((x) => x.key === 'heater.no-sensor')!;
-    await expect(heaters.textContent()).resolves.toMatch(new RegExp(`${pattern.count} of ${pattern.of} pocket heaters ha(s|ve) no temperature sensor`));
-    await expect(heaters.getByRole('link', { name: 'Halvix HandGlow Duo 10' }).count()).resolves.toBe(1);
+    await expect.poll(() => heaters.textContent(), { timeout: 10_000 }).toMatch(new RegExp(`${pattern.count} of ${pattern.of} pocket heaters ha(s|ve) no temperature sensor`));
+    await expect.poll(() => heaters.getByRole('link', { name: 'Halvix HandGlow Duo 10' }).count(), { timeout: 10_000 }).toBe(1);
   });
 
   it('searches "sensor" and narrows to pocket heaters; the address holds the query', async () => {
@@ -69,8 +69,8 @@ describe('findings explorer', () => {
   it('reloading the address reproduces the search: words, facet and results', async () => {
     await page.reload();
     await results(page).waitFor();
-    await expect(page.getByRole('searchbox', { name: /Search findings/ }).inputValue()).resolves.toBe('sensor');
-    await expect(facet(page, 'Device category').getByRole('checkbox', { name: /Pocket heater/ }).isChecked()).resolves.toBe(true);
+    await expect.poll(() => page.getByRole('searchbox', { name: /Search findings/ }).inputValue(), { timeout: 10_000 }).toBe('sensor');
+    await expect.poll(() => facet(page, 'Device category').getByRole('checkbox', { name: /Pocket heater/ }).isChecked(), { timeout: 10_000 }).toBe(true);
     await expect.poll(() => resultTitles(page), { timeout: 10_000 }).toEqual(titles);
     // The same address opened afresh in another tab gives the same results.
     const other = await page.context().newPage();
@@ -88,7 +88,7 @@ describe('findings explorer', () => {
     await page.goBack();
     await page.waitForURL((u) => u.pathname === '/findings' && u.searchParams.get('q') === 'sensor');
     await expect.poll(() => resultTitles(page), { timeout: 10_000 }).toEqual(titles);
-    await expect(page.getByRole('searchbox', { name: /Search findings/ }).inputValue()).resolves.toBe('sensor');
+    await expect.poll(() => page.getByRole('searchbox', { name: /Search findings/ }).inputValue(), { timeout: 10_000 }).toBe('sensor');
   });
 
   it('back and forward step through facet changes', async () => {

@@ -32,9 +32,9 @@ const blockIds = (page: Page) => page.locator('section[data-block]').evaluateAll
 describe('home for each role', () => {
   it('engineer: their drafts and teardowns in review, then what is new', async () => {
     const page = await openHome('engineer');
-    await expect(page.getByTestId('needs').textContent()).resolves.toMatch(/draft/);
-    await expect(block(page, 'drafts').textContent()).resolves.toContain('Pellam Works Stackcell 20 PD');
-    await expect(block(page, 'in-review').textContent()).resolves.toContain('Halvix HandGlow Pro 2');
+    await expect.poll(() => page.getByTestId('needs').textContent(), { timeout: 10_000 }).toMatch(/draft/);
+    await expect.poll(() => block(page, 'drafts').textContent(), { timeout: 10_000 }).toContain('Pellam Works Stackcell 20 PD');
+    await expect.poll(() => block(page, 'in-review').textContent(), { timeout: 10_000 }).toContain('Halvix HandGlow Pro 2');
     const ids = await blockIds(page);
     expect(ids).toEqual(expect.arrayContaining(['drafts', 'in-review', 'recent-teardowns', 'recent-findings']));
     expect(ids).not.toContain('reviews');
@@ -48,7 +48,7 @@ describe('home for each role', () => {
 
   it('lead: the teardowns waiting for review, oldest first, and the major and critical findings', async () => {
     const page = await openHome('lead');
-    await expect(page.getByTestId('needs').textContent()).resolves.toMatch(/waiting for your review/);
+    await expect.poll(() => page.getByTestId('needs').textContent(), { timeout: 10_000 }).toMatch(/waiting for your review/);
     const rows = await block(page, 'reviews').locator('tbody tr').allTextContents();
     const pro = rows.findIndex((r) => r.includes('Halvix HandGlow Pro 2'));
     const neck = rows.findIndex((r) => r.includes('Corvane Breeze Neck 2'));
@@ -66,9 +66,9 @@ describe('home for each role', () => {
     const ids = await blockIds(page);
     expect(ids).toEqual(expect.arrayContaining(['unpriced', 'rates', 'recent-teardowns']));
     const rates = await (await page.request.get('/api/rates')).json();
-    await expect(page.getByTestId('rates-age').textContent()).resolves.toMatch(/days? old|today/);
+    await expect.poll(() => page.getByTestId('rates-age').textContent(), { timeout: 10_000 }).toMatch(/days? old|today/);
     const d = new Date(`${rates.current.date}T12:00:00Z`).toLocaleDateString('en-GB', { year: 'numeric', month: 'short', day: 'numeric' });
-    await expect(page.getByTestId('rates-age').textContent()).resolves.toContain(d);
+    await expect.poll(() => page.getByTestId('rates-age').textContent(), { timeout: 10_000 }).toContain(d);
     await page.context().close();
   });
 
@@ -76,7 +76,7 @@ describe('home for each role', () => {
     const page = await openHome('admin');
     const ids = await blockIds(page);
     expect(ids).toEqual(expect.arrayContaining(['team', 'invitations', 'outbox']));
-    await expect(page.locator('[data-role-count="engineer"]').textContent()).resolves.toMatch(/^\d+$/);
+    await expect.poll(() => page.locator('[data-role-count="engineer"]').textContent(), { timeout: 10_000 }).toMatch(/^\d+$/);
     expect(Number(await page.locator('[data-role-count="admin"]').textContent())).toBeGreaterThanOrEqual(1);
     await page.context().close();
   });
@@ -85,7 +85,7 @@ describe('home for each role', () => {
     const page = await openHome('viewer');
     const ids = await blockIds(page);
     expect(ids.sort()).toEqual(['recent-findings', 'recent-teardowns']);
-    await expect(page.getByTestId('needs').textContent()).resolves.toMatch(/Nothing needs you/);
+    await expect.poll(() => page.getByTestId('needs').textContent(), { timeout: 10_000 }).toMatch(/Nothing needs you/);
     const published = await block(page, 'recent-teardowns').locator('tbody tr').allTextContents();
     expect(published.some((r) => r.includes('Halvix HandGlow Duo 10'))).toBe(true);
     expect(published.some((r) => r.includes('HandGlow Pro 2'))).toBe(false);
@@ -105,12 +105,12 @@ describe('printable teardown report', () => {
 
     // No navigation rails: the report is its own page.
     await expect(page.getByRole('navigation', { name: 'Main' }).count()).resolves.toBe(0);
-    await expect(page.getByRole('heading', { level: 1 }).textContent()).resolves.toBe('Halvix HandGlow Pro 2');
+    await expect.poll(() => page.getByRole('heading', { level: 1 }).textContent(), { timeout: 10_000 }).toBe('Halvix HandGlow Pro 2');
 
     // Photos with their pins, each pin centred on its recorded spot.
     const photos = (await (await page.request.get(`/api/teardowns/${id}/photos`)).json()).photos as PhotoDto[];
     const stages = page.getByTestId('pinned-photo');
-    await expect(stages.count()).resolves.toBe(photos.length);
+    await expect.poll(() => stages.count(), { timeout: 10_000 }).toBe(photos.length);
     for (const [i, photo] of photos.entries()) {
       const box = (await stages.nth(i).boundingBox())!;
       for (const c of photo.callouts) {
@@ -118,34 +118,34 @@ describe('printable teardown report', () => {
         expect(Math.abs(pin.x + pin.width / 2 - (box.x + c.x * box.width)), `photo ${i + 1} pin ${c.number} x`).toBeLessThan(1.5);
         expect(Math.abs(pin.y + pin.height / 2 - (box.y + c.y * box.height)), `photo ${i + 1} pin ${c.number} y`).toBeLessThan(1.5);
       }
-      await expect(page.locator(`figure[data-photo="${photo.id}"] [data-key-pin]`).count()).resolves.toBe(photo.callouts.length);
+      await expect.poll(() => page.locator(`figure[data-photo="${photo.id}"] [data-key-pin]`).count(), { timeout: 10_000 }).toBe(photo.callouts.length);
     }
 
     // The BOM with every part, and prices at the default volume.
     const parts = (await (await page.request.get(`/api/teardowns/${id}/parts`)).json()).parts as unknown[];
     const bom = page.getByRole('table', { name: 'Parts' });
-    await expect(bom.locator('tbody tr[data-part]').count()).resolves.toBe(parts.length);
-    await expect(bom.locator('thead').textContent()).resolves.toMatch(/Unit price, [A-Z]{3}/);
-    await expect(page.getByTestId('bom-total').textContent()).resolves.toMatch(/Parts at [\d,]+ units/);
+    await expect.poll(() => bom.locator('tbody tr[data-part]').count(), { timeout: 10_000 }).toBe(parts.length);
+    await expect.poll(() => bom.locator('thead').textContent(), { timeout: 10_000 }).toMatch(/Unit price, [A-Z]{3}/);
+    await expect.poll(() => page.getByTestId('bom-total').textContent(), { timeout: 10_000 }).toMatch(/Parts at [\d,]+ units/);
 
     // Figures with their formula and source.
     const figures = (await (await page.request.get(`/api/teardowns/${id}/figures`)).json()).figures as { key: string; source: string }[];
     expect(figures.length).toBeGreaterThan(0);
     for (const f of figures.slice(0, 5)) {
-      await expect(page.locator(`tr[data-figure="${f.key}"] [data-testid="figure-source"]`).textContent()).resolves.toBe(f.source);
+      await expect.poll(() => page.locator(`tr[data-figure="${f.key}"] [data-testid="figure-source"]`).textContent(), { timeout: 10_000 }).toBe(f.source);
     }
 
     // Findings grouped by severity, then the cautions and the estimates note.
     await expect(page.locator('[data-section="findings"] [data-severity]').count()).resolves.toBeGreaterThan(0);
     const safety = page.locator('[data-section="safety"]');
-    await expect(safety.getByText('Lithium cell: before you open the case').count()).resolves.toBe(1);
-    await expect(safety.getByText(/Engineering estimates, not certification results/).count()).resolves.toBe(1);
+    await expect.poll(() => safety.getByText('Lithium cell: before you open the case').count(), { timeout: 10_000 }).toBe(1);
+    await expect.poll(() => safety.getByText(/Engineering estimates, not certification results/).count(), { timeout: 10_000 }).toBe(1);
 
     // In print the toolbar goes.
     await page.emulateMedia({ media: 'print' });
     await expect(page.getByRole('button', { name: 'Print / Save as PDF' }).isVisible()).resolves.toBe(false);
     await page.emulateMedia({ media: 'screen' });
-    await expect(page.getByRole('button', { name: 'Print / Save as PDF' }).isEnabled()).resolves.toBe(true);
+    await expect.poll(() => page.getByRole('button', { name: 'Print / Save as PDF' }).isEnabled(), { timeout: 10_000 }).toBe(true);
 
     // As a PDF: several A4 pages.
     const pdf = await page.pdf({ format: 'A4', printBackground: true, preferCSSPageSize: true });
@@ -162,7 +162,7 @@ describe('printable teardown report', () => {
     const page = await signedInPage(browser, 'viewer');
     await page.goto(`/teardowns/${draft}/report`);
     await page.getByRole('alert').waitFor();
-    await expect(page.getByRole('alert').textContent()).resolves.toMatch(/not found/i);
+    await expect.poll(() => page.getByRole('alert').textContent(), { timeout: 10_000 }).toMatch(/not found/i);
     await expect(page.getByTestId('report').count()).resolves.toBe(0);
     await page.context().close();
   });

@@ -28,7 +28,7 @@ describe('lineups', () => {
       await search.fill(q!);
       await page.getByRole('checkbox', { name: name!, exact: true }).check();
     }
-    await expect(page.getByRole('list', { name: 'Devices in the lineup' }).getByRole('listitem').count()).resolves.toBe(3);
+    await expect.poll(() => page.getByRole('list', { name: 'Devices in the lineup' }).getByRole('listitem').count(), { timeout: 10_000 }).toBe(3);
 
     // Only pack energy weighs at first: every other slider to off (Home), pack energy to 1.
     const sliders = page.getByRole('list', { name: 'Metric weights' }).getByRole('slider');
@@ -73,7 +73,7 @@ describe('lineups', () => {
     const report = page.getByTestId('lineup-report');
     await report.waitFor();
     await report.getByRole('heading', { name: 'Bench check: banks and a heater' }).waitFor();
-    await expect(page.getByTestId('report-rate-date').textContent()).resolves.toMatch(/\d{1,2} \w{3} \d{4} · base EUR/);
+    await expect.poll(() => page.getByTestId('report-rate-date').textContent(), { timeout: 10_000 }).toMatch(/\d{1,2} \w{3} \d{4} · base EUR/);
     await report.getByRole('table', { name: 'Normalised comparison, report' }).waitFor();
     await report.getByTestId('pareto-chart').locator('svg').first().waitFor();
     await report.getByRole('heading', { name: /Sources of each metric/ }).waitFor();

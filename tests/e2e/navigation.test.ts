@@ -26,7 +26,7 @@ describe('sign-in and navigation per role', () => {
       await rail.getByRole('link', { name: 'Home', exact: true }).waitFor();
       for (const label of nav.shows) await expect(rail.getByRole('link', { name: label, exact: true }).count()).resolves.toBe(1);
       for (const label of nav.hides) await expect(rail.getByRole('link', { name: label, exact: true }).count()).resolves.toBe(0);
-      await expect(page.getByTestId('current-user').textContent()).resolves.toBeTruthy();
+      await expect.poll(() => page.getByTestId('current-user').textContent(), { timeout: 10_000 }).toBeTruthy();
       await page.context().close();
     });
   }
@@ -39,14 +39,14 @@ describe('sign-in and navigation per role', () => {
     await page.getByLabel('E-mail').fill('admin@splitcase.test');
     await page.getByLabel('Password').fill('wrong-password-here');
     await page.getByRole('button', { name: 'Sign in' }).click();
-    await expect(page.getByRole('alert').first().textContent()).resolves.toMatch(/wrong/i);
+    await expect.poll(() => page.getByRole('alert').first().textContent(), { timeout: 10_000 }).toMatch(/wrong/i);
     await context.close();
   });
 
   it('a viewer who opens an admin URL sees a refusal, not the page', async () => {
     const page = await signedInPage(browser, 'viewer');
     await page.goto('/admin/users');
-    await expect(page.getByRole('alert').first().textContent()).resolves.toMatch(/role does not give access/);
+    await expect.poll(() => page.getByRole('alert').first().textContent(), { timeout: 10_000 }).toMatch(/role does not give access/);
     await page.context().close();
   });
 });

@@ -59,14 +59,14 @@ describe('photos and callouts in the browser', () => {
     const rows = page.getByTestId('upload-row');
     await expect.poll(() => rows.count()).toBe(3);
     await page.getByText('notes.txt').waitFor();
-    await expect(rows.filter({ hasText: 'notes.txt' }).textContent()).resolves.toMatch(/Not sent: Not a JPEG, PNG, WEBP image/);
+    await expect.poll(() => rows.filter({ hasText: 'notes.txt' }).textContent(), { timeout: 10_000 }).toMatch(/Not sent: Not a JPEG, PNG, WEBP image/);
     for (const name of ['e2e-board-top.jpg', 'e2e-board-bottom.jpg']) {
       const row = rows.filter({ hasText: name });
       await row.getByText('Stored').waitFor({ timeout: 60_000 });
-      await expect(row.getByTestId('upload-percent').textContent()).resolves.toBe('100 %');
-      await expect(row.getByRole('progressbar').getAttribute('aria-valuenow')).resolves.toBe('100');
+      await expect.poll(() => row.getByTestId('upload-percent').textContent(), { timeout: 10_000 }).toBe('100 %');
+      await expect.poll(() => row.getByRole('progressbar').getAttribute('aria-valuenow'), { timeout: 10_000 }).toBe('100');
     }
-    await expect(page.getByTestId('upload-overall').textContent()).resolves.toBe('100 %');
+    await expect.poll(() => page.getByTestId('upload-overall').textContent(), { timeout: 10_000 }).toBe('100 %');
 
     // Both are in the gallery; open the first one on the stage.
     const list = (await (await page.request.get(`/api/teardowns/${teardownId}/photos`)).json()).photos as PhotoDto[];

@@ -46,13 +46,13 @@ describe('bench runs', () => {
     // The new run is selected: its delivered capacity and the voltage chart.
     const capacity = page.locator('dt', { hasText: 'Delivered capacity' }).locator('xpath=following-sibling::dd[1]');
     await capacity.waitFor({ timeout: 30_000 });
-    await expect(page.getByRole('heading', { name: /Bench check at 1.5 A/ }).count()).resolves.toBe(1);
+    await expect.poll(() => page.getByRole('heading', { name: /Bench check at 1.5 A/ }).count(), { timeout: 10_000 }).toBe(1);
     // (1.50 Ah once the shared formatter keeps trailing zeros, as its own test asks.)
-    await expect(capacity.textContent()).resolves.toMatch(/^1\.50? Ah$/);
+    await expect.poll(() => capacity.textContent(), { timeout: 10_000 }).toMatch(/^1\.50? Ah$/);
     const energy = page.locator('dt', { hasText: 'Delivered energy' }).locator('xpath=following-sibling::dd[1]');
-    await expect(energy.textContent()).resolves.toBe('5.55 Wh');
+    await expect.poll(() => energy.textContent(), { timeout: 10_000 }).toBe('5.55 Wh');
     // Against the 20 Ah on the label: 7.5 %, below the 90 % warning threshold.
-    await expect(page.getByRole('region', { name: 'Comparison with the label' }).textContent()).resolves.toMatch(/7\.50? %\s*of the label/);
+    await expect.poll(() => page.getByRole('region', { name: 'Comparison with the label' }).textContent(), { timeout: 10_000 }).toMatch(/7\.50? %\s*of the label/);
 
     const chart = page.getByRole('figure', { name: 'Voltage against time' });
     await chart.locator('.recharts-line-curve').first().waitFor();
@@ -61,7 +61,7 @@ describe('bench runs', () => {
     await chart.getByText(/Data table: voltage, 721 plotted points/).click();
     // The table renders once the details element reports it is open; wait for its last row.
     await chart.getByRole('table').locator('tbody tr').nth(720).waitFor({ state: 'attached' });
-    await expect(chart.getByRole('table').locator('tbody tr').count()).resolves.toBe(721);
+    await expect.poll(() => chart.getByRole('table').locator('tbody tr').count(), { timeout: 10_000 }).toBe(721);
     await page.context().close();
   });
 
@@ -76,8 +76,8 @@ describe('bench runs', () => {
     await page.getByRole('button', { name: 'Upload and analyse' }).click();
     const alert = page.getByRole('alert').filter({ hasText: 'refused at row 4' });
     await alert.waitFor();
-    await expect(alert.textContent()).resolves.toMatch(/column “elapsed_s”.*Nothing was stored/);
-    await expect(page.getByLabel('Time', { exact: true }).inputValue()).resolves.toBe('elapsed_s');
+    await expect.poll(() => alert.textContent(), { timeout: 10_000 }).toMatch(/column “elapsed_s”.*Nothing was stored/);
+    await expect.poll(() => page.getByLabel('Time', { exact: true }).inputValue(), { timeout: 10_000 }).toBe('elapsed_s');
     await page.context().close();
   });
 });

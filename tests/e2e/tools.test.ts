@@ -22,7 +22,7 @@ describe('bench tools', () => {
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Bench tools' }).click();
     await page.waitForURL(/\/tools$/);
     await page.getByRole('heading', { name: 'Bench tools' }).waitFor();
-    await expect(page.getByRole('tab', { name: 'Marking decoder' }).getAttribute('aria-selected')).resolves.toBe('true');
+    await expect.poll(() => page.getByRole('tab', { name: 'Marking decoder' }).getAttribute('aria-selected'), { timeout: 10_000 }).toBe('true');
   });
 
   it('decodes "4R7" as 4.70 Ω on a resistor [S], with formula and source', async () => {
@@ -32,10 +32,10 @@ describe('bench tools', () => {
     await expect.poll(() => value.count()).toBe(1);
     await expect.poll(() => value.textContent()).toBe('4.70 Ω');
     const reading = page.getByRole('article', { name: 'Resistor reading' });
-    await expect(reading.textContent()).resolves.toMatch(/"R" stands for the decimal point/);
+    await expect.poll(() => reading.textContent(), { timeout: 10_000 }).toMatch(/"R" stands for the decimal point/);
     await reading.getByText('How was this computed').click();
-    await expect(reading.getByTestId('formula').textContent()).resolves.toMatch(/R, K or M is the decimal point/);
-    await expect(reading.getByTestId('source').textContent()).resolves.toMatch(/IEC 60062/);
+    await expect.poll(() => reading.getByTestId('formula').textContent(), { timeout: 10_000 }).toMatch(/R, K or M is the decimal point/);
+    await expect.poll(() => reading.getByTestId('source').textContent(), { timeout: 10_000 }).toMatch(/IEC 60062/);
   });
 
   it('reads yellow-violet-red-gold as 4.70 kΩ ±5 % [C]', async () => {
@@ -43,7 +43,7 @@ describe('bench tools', () => {
     const colours = ['Yellow', 'Violet', 'Red', 'Gold'];
     for (const [i, c] of colours.entries()) await page.getByLabel(new RegExp(`^Band ${i + 1} `)).selectOption({ label: c });
     await expect.poll(() => text('marking-value')).toBe('4.70 kΩ');
-    await expect(page.getByRole('article', { name: 'Resistor reading' }).textContent()).resolves.toMatch(/±5 %/);
+    await expect.poll(() => page.getByRole('article', { name: 'Resistor reading' }).textContent(), { timeout: 10_000 }).toMatch(/±5 %/);
   });
 
   it('computes a 3.00 Ω heater trace at 3.65 V from typed units: 4.44 W [C], with the hot-surface caution', async () => {
@@ -62,16 +62,16 @@ describe('bench tools', () => {
     await expect.poll(() => text('parsed-length')).toMatch(/read as 1\.55 m/);
     const resistance = page.locator('[data-figure="resistance"]');
     await resistance.getByText('How was this computed').click();
-    await expect(resistance.getByTestId('formula').textContent()).resolves.toBe('R = ρ·L / (w·t) · [1 + α·(T − 20 °C)]');
-    await expect(resistance.getByTestId('source').textContent()).resolves.toMatch(/IEC 60028/);
-    await expect(page.locator('[data-figure="powerDensity"]').getByRole('note', { name: 'Hot surfaces' }).count()).resolves.toBe(1);
+    await expect.poll(() => resistance.getByTestId('formula').textContent(), { timeout: 10_000 }).toBe('R = ρ·L / (w·t) · [1 + α·(T − 20 °C)]');
+    await expect.poll(() => resistance.getByTestId('source').textContent(), { timeout: 10_000 }).toMatch(/IEC 60028/);
+    await expect.poll(() => page.locator('[data-figure="powerDensity"]').getByRole('note', { name: 'Hot surfaces' }).count(), { timeout: 10_000 }).toBe(1);
   });
 
   it('names a wrong field and keeps the last results', async () => {
     await page.getByLabel('Copper thickness').fill('1 lb');
     await expect.poll(() => page.getByText(/copper weight such as "1 oz"/).count()).toBe(1);
     await expect.poll(() => page.getByText('These results are for the last inputs that could be computed.').count()).toBe(1);
-    await expect(text('value-power')).resolves.toBe('4.44 W');
+    await expect.poll(() => text('value-power'), { timeout: 10_000 }).toBe('4.44 W');
     await page.getByLabel('Copper thickness').fill('1 oz');
     await expect.poll(() => text('parsed-thickness')).toMatch(/read as 35\.0 µm/);
   });
@@ -84,18 +84,18 @@ describe('bench tools', () => {
     await expect.poll(() => text('value-runtime')).toBe('1.11 h');
     await expect.poll(() => text('value-packEnergy')).toBe('9.99 Wh');
     await expect.poll(() => text('parsed-cellCapacity')).toMatch(/read as 2\.70 Ah/);
-    await expect(page.getByRole('note', { name: 'Lithium cells' }).count()).resolves.toBe(1);
+    await expect.poll(() => page.getByRole('note', { name: 'Lithium cells' }).count(), { timeout: 10_000 }).toBe(1);
     const runtime = page.locator('[data-figure="runtime"]');
     await runtime.getByText('How was this computed').click();
-    await expect(runtime.getByTestId('formula').textContent()).resolves.toMatch(/t = E · η · u \/ P/);
-    await expect(runtime.getByTestId('source').textContent()).resolves.toMatch(/\[C\]/);
+    await expect.poll(() => runtime.getByTestId('formula').textContent(), { timeout: 10_000 }).toMatch(/t = E · η · u \/ P/);
+    await expect.poll(() => runtime.getByTestId('source').textContent(), { timeout: 10_000 }).toMatch(/\[C\]/);
   });
 
   it('is in the rail of every role, viewers included', async () => {
     const viewer = await signedInPage(browser, 'viewer');
     const rail = viewer.getByRole('navigation', { name: 'Main' });
     await rail.getByRole('link', { name: 'Home', exact: true }).waitFor();
-    await expect(rail.getByRole('link', { name: 'Bench tools' }).count()).resolves.toBe(1);
+    await expect.poll(() => rail.getByRole('link', { name: 'Bench tools' }).count(), { timeout: 10_000 }).toBe(1);
     await viewer.context().close();
   });
 });

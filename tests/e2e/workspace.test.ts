@@ -58,7 +58,7 @@ describe('teardown workspace', () => {
     await page.getByLabel('Capacity on the label').fill('4000 bananas');
     await page.getByRole('button', { name: 'Add device' }).click();
     // The server names the field; the form shows it there.
-    await expect(page.getByText(/Enter a capacity such as "2700 mAh"/).textContent()).resolves.toContain('bananas');
+    await expect.poll(() => page.getByText(/Enter a capacity such as "2700 mAh"/).textContent(), { timeout: 10_000 }).toContain('bananas');
     await page.getByLabel('Capacity on the label').fill('4000 mAh');
     await page.getByRole('button', { name: 'Add device' }).click();
     await page.getByRole('heading', { name: 'Testwright Pocketwarm E2E' }).waitFor();
@@ -66,7 +66,7 @@ describe('teardown workspace', () => {
 
     await page.getByRole('button', { name: 'Start a teardown' }).click();
     const dialog = page.getByRole('dialog');
-    await expect(dialog.getByRole('note', { name: /Lithium cell/ }).textContent()).resolves.toMatch(/Discharge the cell first/);
+    await expect.poll(() => dialog.getByRole('note', { name: /Lithium cell/ }).textContent(), { timeout: 10_000 }).toMatch(/Discharge the cell first/);
     await dialog.getByLabel('Unit').fill('Unit E');
     await dialog.getByRole('button', { name: 'Start the teardown' }).click();
     await page.waitForURL(/\/teardowns\/\d+$/);
@@ -77,7 +77,7 @@ describe('teardown workspace', () => {
     // No records yet: the panel says how figures appear.
     const panel = page.locator('aside[aria-label="Figures"]');
     await panel.getByText(/No figures yet/).waitFor();
-    await expect(panel.getByText(/not certification results/).count()).resolves.toBe(1);
+    await expect.poll(() => panel.getByText(/not certification results/).count(), { timeout: 10_000 }).toBe(1);
 
     await page.getByLabel('Summary').fill('Single-cell pocket heater, two flexible heaters in parallel, no sensor found yet.');
     await page.getByRole('button', { name: 'Save', exact: true }).click();
@@ -103,9 +103,9 @@ describe('teardown workspace', () => {
     for (const name of ['e2e-case-open.jpg', 'e2e-heater-flex.jpg']) {
       const row = uploads.filter({ hasText: name });
       await row.getByText('Stored').waitFor({ timeout: 60_000 });
-      await expect(row.getByRole('progressbar').getAttribute('aria-valuenow')).resolves.toBe('100');
+      await expect.poll(() => row.getByRole('progressbar').getAttribute('aria-valuenow'), { timeout: 10_000 }).toBe('100');
     }
-    await expect(page.getByTestId('upload-overall').textContent()).resolves.toBe('100 %');
+    await expect.poll(() => page.getByTestId('upload-overall').textContent(), { timeout: 10_000 }).toBe('100 %');
 
     // A numbered pin on the heater photo, linked to the heater part.
     const photos = (await (await page.request.get(`/api/teardowns/${teardownId}/photos`)).json()).photos as { id: number; name: string }[];
@@ -154,11 +154,11 @@ describe('teardown workspace', () => {
     // The figures panel followed every record.
     // [REFERENCES §3; C] 2 × 3.0 Ω in parallel at 3.65 V: 8.881667 W, 2.433333 A; [C] 3.7 V × 2.7 Ah = 9.99 Wh
     await expect.poll(() => figure(page, 'Total load power').textContent(), { timeout: 15_000 }).toBe('8.88 W');
-    await expect(figure(page, 'Current from the pack').textContent()).resolves.toBe('2.43 A');
-    await expect(figure(page, 'Pack energy').textContent()).resolves.toBe('9.99 Wh');
-    await expect(figure(page, 'Air-transport class').textContent()).resolves.toBe('Up to 100 Wh');
+    await expect.poll(() => figure(page, 'Current from the pack').textContent(), { timeout: 10_000 }).toBe('2.43 A');
+    await expect.poll(() => figure(page, 'Pack energy').textContent(), { timeout: 10_000 }).toBe('9.99 Wh');
+    await expect.poll(() => figure(page, 'Air-transport class').textContent(), { timeout: 10_000 }).toBe('Up to 100 Wh');
     await page.getByRole('button', { name: /^Pack energy/ }).click();
-    await expect(panel.getByText('Formula').first().isVisible()).resolves.toBe(true);
+    await expect.poll(() => panel.getByText('Formula').first().isVisible(), { timeout: 10_000 }).toBe(true);
 
     const suggestion = panel.locator('[data-suggestion="thermal.no-sensor"]');
     await suggestion.getByText('Heater without temperature sensing').waitFor();
@@ -167,8 +167,8 @@ describe('teardown workspace', () => {
     await page.getByRole('navigation', { name: 'Teardown sections' }).getByRole('link', { name: 'Findings' }).click();
     const finding = page.locator('[data-finding-id]').filter({ hasText: 'From a suggestion' });
     await finding.waitFor();
-    await expect(finding.count()).resolves.toBe(1);
-    await expect(finding.textContent()).resolves.toMatch(/no part is recorded as a sensor/);
+    await expect.poll(() => finding.count(), { timeout: 10_000 }).toBe(1);
+    await expect.poll(() => finding.textContent(), { timeout: 10_000 }).toMatch(/no part is recorded as a sensor/);
 
     await page.getByRole('button', { name: 'Submit for review' }).click();
     await page.getByRole('dialog').getByRole('button', { name: 'Submit', exact: true }).click();
@@ -196,7 +196,7 @@ describe('teardown workspace', () => {
     await page.locator('header').getByText('Published').waitFor();
     await page.getByText('Single-cell pocket heater, two flexible heaters in parallel, no sensor found yet.').waitFor();
     await expect(page.getByRole('button', { name: 'Save', exact: true }).count()).resolves.toBe(0);
-    await expect(figure(page, 'Pack energy').textContent()).resolves.toBe('9.99 Wh');
+    await expect.poll(() => figure(page, 'Pack energy').textContent(), { timeout: 10_000 }).toBe('9.99 Wh');
     await page.locator('[data-suggestion="thermal.no-sensor"]').getByText('Accepted', { exact: true }).waitFor();
     await expect(page.locator('[data-suggestion="thermal.no-sensor"]').getByRole('button', { name: 'Accept' }).count()).resolves.toBe(0);
     await page.context().close();
