@@ -1,5 +1,6 @@
 import { Pencil, Trash2, X } from 'lucide-react';
 import { Button } from './button';
+import type { Column } from './data-table';
 
 /**
  * Edit and delete buttons for a table row, with a second click to confirm the delete.
@@ -48,4 +49,43 @@ export function RowActions({
       </button>
     </span>
   );
+}
+
+/**
+ * The last column of an editable table: RowActions per row for editors, nothing for readers.
+ * `confirming` is the id of the row whose delete waits for its second click.
+ */
+export function rowActionsColumn<T extends { id: number }>(o: {
+  canEdit: boolean;
+  confirming: number | null;
+  setConfirming: (id: number | null) => void;
+  busy: boolean;
+  editLabel: (row: T) => string;
+  deleteLabel: (row: T) => string;
+  keepLabel: string;
+  onEdit: (row: T) => void;
+  onDelete: (row: T) => void;
+}): Column<T> {
+  return {
+    id: 'actions',
+    header: '',
+    value: () => '',
+    sortable: false,
+    align: 'right',
+    className: 'whitespace-nowrap',
+    cell: (row) =>
+      o.canEdit ? (
+        <RowActions
+          confirming={o.confirming === row.id}
+          busy={o.busy}
+          editLabel={o.editLabel(row)}
+          deleteLabel={o.deleteLabel(row)}
+          keepLabel={o.keepLabel}
+          onEdit={() => o.onEdit(row)}
+          onAskDelete={() => o.setConfirming(row.id)}
+          onCancelDelete={() => o.setConfirming(null)}
+          onDelete={() => o.onDelete(row)}
+        />
+      ) : null,
+  };
 }

@@ -3,7 +3,7 @@ import { toast } from 'sonner';
 import { Download } from 'lucide-react';
 import { MEASURED_QUANTITY, SI_UNIT, type MeasuredQuantity, type MeasurementDto, type TeardownDto } from '@splitcase/contracts';
 import { Button } from '@/components/button';
-import { RowActions } from '@/components/row-actions';
+import { rowActionsColumn } from '@/components/row-actions';
 import { DataTable, type Column } from '@/components/data-table';
 import { ErrorPanel } from '@/components/error-boundary';
 import { inputClass } from '@/components/field';
@@ -99,28 +99,17 @@ export function MeasurementsSection({ teardown }: { teardown: TeardownDto }) {
       { id: 'instrument', header: 'Instrument', value: (m) => m.instrument, filter: 'text', className: 'min-w-40 text-graphite-600', cell: (m) => <Clamp text={m.instrument} /> },
       { id: 'uncertainty', header: 'Uncertainty', value: (m) => m.uncertainty, className: 'whitespace-nowrap text-graphite-600' },
       { id: 'by', header: 'By', value: (m) => m.takenBy?.name, filter: 'select', className: 'whitespace-nowrap text-graphite-600' },
-      {
-        id: 'actions',
-        header: '',
-        value: () => '',
-        sortable: false,
-        align: 'right',
-        className: 'whitespace-nowrap',
-        cell: (m) =>
-          gate.canEdit ? (
-            <RowActions
-              confirming={confirmDelete === m.id}
-              busy={remove.isPending}
-              editLabel={`Correct the reading of ${m.subject}`}
-              deleteLabel={`Delete the reading of ${m.subject}`}
-              keepLabel="Keep the reading"
-              onEdit={() => setEditing(m)}
-              onAskDelete={() => setConfirmDelete(m.id)}
-              onCancelDelete={() => setConfirmDelete(null)}
-              onDelete={() => remove.mutate({ id: m.id, headers: gate.headers }, { onSuccess: () => toast.success('Reading removed.'), onError: (e) => toast.error(e.message), onSettled: () => setConfirmDelete(null) })}
-            />
-          ) : null,
-      },
+      rowActionsColumn<MeasurementDto>({
+        canEdit: gate.canEdit,
+        confirming: confirmDelete,
+        setConfirming: setConfirmDelete,
+        busy: remove.isPending,
+        editLabel: (m) => `Correct the reading of ${m.subject}`,
+        deleteLabel: (m) => `Delete the reading of ${m.subject}`,
+        keepLabel: 'Keep the reading',
+        onEdit: setEditing,
+        onDelete: (m) => remove.mutate({ id: m.id, headers: gate.headers }, { onSuccess: () => toast.success('Reading removed.'), onError: (e) => toast.error(e.message), onSettled: () => setConfirmDelete(null) }),
+      }),
     ],
     [gate, confirmDelete, remove],
   );

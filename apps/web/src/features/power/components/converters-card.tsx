@@ -4,7 +4,7 @@ import { Plus } from 'lucide-react';
 import { CONVERTER_ROLE, CONVERTER_TOPOLOGY, type ConverterDto, type ConverterRole, type ConverterTopology, type CreateConverterBody } from '@splitcase/contracts';
 import { Badge } from '@/components/badges';
 import { Button } from '@/components/button';
-import { RowActions } from '@/components/row-actions';
+import { rowActionsColumn } from '@/components/row-actions';
 import { DataTable, type Column } from '@/components/data-table';
 import { Field, Input, Select, LabelledOptions, FormError } from '@/components/field';
 import { Card } from '@/components/page';
@@ -93,28 +93,17 @@ export function ConvertersCard({ teardownId, converters, gate }: { teardownId: n
             </span>
           ),
       },
-      {
-        id: 'actions',
-        header: '',
-        value: () => '',
-        sortable: false,
-        align: 'right',
-        className: 'whitespace-nowrap',
-        cell: (c) =>
-          gate.canEdit ? (
-            <RowActions
-              confirming={confirmDelete === c.id}
-              busy={remove.isPending}
-              editLabel={`Edit ${c.label}`}
-              deleteLabel={`Delete ${c.label}`}
-              keepLabel="Keep the converter"
-              onEdit={() => setEditing(c)}
-              onAskDelete={() => setConfirmDelete(c.id)}
-              onCancelDelete={() => setConfirmDelete(null)}
-              onDelete={() => remove.mutate({ teardownId, id: c.id, headers: gate.headers }, { onSuccess: () => toast.success(`Removed ${c.label}.`), onError: (e) => toast.error(e.message), onSettled: () => setConfirmDelete(null) })}
-            />
-          ) : null,
-      },
+      rowActionsColumn<ConverterDto>({
+        canEdit: gate.canEdit,
+        confirming: confirmDelete,
+        setConfirming: setConfirmDelete,
+        busy: remove.isPending,
+        editLabel: (c) => `Edit ${c.label}`,
+        deleteLabel: (c) => `Delete ${c.label}`,
+        keepLabel: 'Keep the converter',
+        onEdit: setEditing,
+        onDelete: (c) => remove.mutate({ teardownId, id: c.id, headers: gate.headers }, { onSuccess: () => toast.success(`Removed ${c.label}.`), onError: (e) => toast.error(e.message), onSettled: () => setConfirmDelete(null) }),
+      }),
     ],
     [gate, confirmDelete, remove, teardownId],
   );

@@ -3,7 +3,7 @@ import { toast } from 'sonner';
 import { Plus } from 'lucide-react';
 import { CONNECTION, LOAD_KIND, SURFACE_MATERIAL, type Connection, type ConverterDto, type CreateLoadBody, type LoadDto, type LoadKind, type SurfaceMaterial } from '@splitcase/contracts';
 import { Button } from '@/components/button';
-import { RowActions } from '@/components/row-actions';
+import { rowActionsColumn } from '@/components/row-actions';
 import { DataTable, type Column } from '@/components/data-table';
 import { Field, Input, Select, LabelledOptions, FormError } from '@/components/field';
 import { Card } from '@/components/page';
@@ -106,28 +106,17 @@ export function LoadsCard({ teardownId, loads, converters, gate }: { teardownId:
             </span>
           ),
       },
-      {
-        id: 'actions',
-        header: '',
-        value: () => '',
-        sortable: false,
-        align: 'right',
-        className: 'whitespace-nowrap',
-        cell: (l) =>
-          gate.canEdit ? (
-            <RowActions
-              confirming={confirmDelete === l.id}
-              busy={remove.isPending}
-              editLabel={`Edit ${l.label}`}
-              deleteLabel={`Delete ${l.label}`}
-              keepLabel="Keep the load"
-              onEdit={() => setEditing(l)}
-              onAskDelete={() => setConfirmDelete(l.id)}
-              onCancelDelete={() => setConfirmDelete(null)}
-              onDelete={() => remove.mutate({ teardownId, id: l.id, headers: gate.headers }, { onSuccess: () => toast.success(`Removed ${l.label}.`), onError: (e) => toast.error(e.message), onSettled: () => setConfirmDelete(null) })}
-            />
-          ) : null,
-      },
+      rowActionsColumn<LoadDto>({
+        canEdit: gate.canEdit,
+        confirming: confirmDelete,
+        setConfirming: setConfirmDelete,
+        busy: remove.isPending,
+        editLabel: (l) => `Edit ${l.label}`,
+        deleteLabel: (l) => `Delete ${l.label}`,
+        keepLabel: 'Keep the load',
+        onEdit: setEditing,
+        onDelete: (l) => remove.mutate({ teardownId, id: l.id, headers: gate.headers }, { onSuccess: () => toast.success(`Removed ${l.label}.`), onError: (e) => toast.error(e.message), onSettled: () => setConfirmDelete(null) }),
+      }),
     ],
     [gate, confirmDelete, remove, teardownId, converterName],
   );
