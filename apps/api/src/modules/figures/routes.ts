@@ -1,12 +1,27 @@
 import { findingResponse, figuresResponse, idParam, suggestionParams, suggestionResponse } from '@splitcase/contracts';
 import { AppError, notFound } from '../../http/errors';
-import { route, type RouteDef } from '../../http/route';
+import { route, type RouteContext, type RouteDef } from '../../http/route';
 import { recordAudit } from '../audit/audit.service';
 import { createFinding, FINDING_POPULATE, toFindingDto } from '../findings/finding.service';
 import { UserSchema } from '../users/user.entity';
 import { CONTENT_EDITORS, editableTeardown, readableTeardown } from '../teardowns/access';
 import { SuggestionDecisionSchema } from '../teardowns/suggestion-decision.entity';
 import { teardownFiguresFor } from './figures.service';
+
+/**
+ * The suggestion of the route's teardown (editable) and key, with its decision, when it is not
+ * accepted: dismissing and reopening act on open and dismissed suggestions only.
+ */
+async function notAcceptedSuggestion(ctx: RouteContext<unknown, unknown, { id: number; key: string }>) {
+  const t = await editableTeardown(ctx, ctx.params.id);
+  const figures = await teardownFiguresFor(ctx.em, t);
+  const s = figures.suggestions.find((x) => x.key === ctx.params.key);
+  if (!s) throw notFound(`The suggestion "${ctx.params.key}" (the records of this teardown do not raise it)`);
+  if (s.status === 'accepted') {
+    throw new AppError('conflict', `This suggestion was accepted as finding #${s.findingId}; delete that finding to reopen it.`, undefined, { findingId: s.findingId });
+  }
+  return { t, s };
+}
 
 export const figureRoutes: RouteDef[] = [
   route(
@@ -80,14 +95,8 @@ export const figureRoutes: RouteDef[] = [
       response: suggestionResponse,
     },
     async (ctx) => {
-      const { em, user, params } = ctx;
-      const t = await editableTeardown(ctx, params.id);
-      const figures = await teardownFiguresFor(em, t);
-      const s = figures.suggestions.find((x) => x.key === params.key);
-      if (!s) throw notFound(`The suggestion "${params.key}" (the records of this teardown do not raise it)`);
-      if (s.status === 'accepted') {
-        throw new AppError('conflict', `This suggestion was accepted as finding #${s.findingId}; delete that finding to reopen it.`, undefined, { findingId: s.findingId });
-      }
+      const { em, user } = ctx;
+      const { t, s } = await notAcceptedSuggestion(ctx);
       if (s.status === 'open') {
         em.create(SuggestionDecisionSchema, { teardown: t, key: s.key, status: 'dismissed', decidedBy: em.getReference(UserSchema, user.id) } as never);
         recordAudit(em, user, {
@@ -113,14 +122,8 @@ export const figureRoutes: RouteDef[] = [
       response: suggestionResponse,
     },
     async (ctx) => {
-      const { em, user, params } = ctx;
-      const t = await editableTeardown(ctx, params.id);
-      const figures = await teardownFiguresFor(em, t);
-      const s = figures.suggestions.find((x) => x.key === params.key);
-      if (!s) throw notFound(`The suggestion "${params.key}" (the records of this teardown do not raise it)`);
-      if (s.status === 'accepted') {
-        throw new AppError('conflict', `This suggestion was accepted as finding #${s.findingId}; delete that finding to reopen it.`, undefined, { findingId: s.findingId });
-      }
+      const { em, user } = ctx;
+      const { t, s } = await notAcceptedSuggestion(ctx);
       if (s.status === 'dismissed') {
         await em.transactional(async (tx) => {
           await tx.nativeDelete(SuggestionDecisionSchema, { teardown: t.id, key: s.key });
