@@ -28,9 +28,7 @@ export function Field({
       </label>
       {children({ id: fieldId, 'aria-invalid': Boolean(error), 'aria-describedby': describedBy })}
       {error ? (
-        <p id={`${fieldId}-error`} className="text-sm text-brick-700" role="alert">
-          {error}
-        </p>
+        <InlineError id={`${fieldId}-error`} message={error} />
       ) : hint ? (
         <p id={`${fieldId}-hint`} className="text-xs text-graphite-500">
           {hint}
@@ -70,6 +68,16 @@ export function FormError({ message, className = '' }: { message: string | null 
   if (!message) return null;
   return (
     <p role="alert" className={`rounded-md border border-brick-100 bg-brick-50 px-3 py-2 text-sm text-brick-800 ${className}`}>
+      {message}
+    </p>
+  );
+}
+
+/** A short error under a control or a group of controls (a field's own error, a choice left out). */
+export function InlineError({ message, id }: { message: string | null | undefined | false; id?: string }) {
+  if (!message) return null;
+  return (
+    <p id={id} className="text-sm text-brick-700" role="alert">
       {message}
     </p>
   );

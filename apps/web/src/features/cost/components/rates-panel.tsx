@@ -5,7 +5,7 @@ import { RATE_TABLE_KIND, type RateTableDto } from '@splitcase/contracts';
 import { Badge } from '@/components/badges';
 import { Button } from '@/components/button';
 import { ErrorPanel } from '@/components/error-boundary';
-import { Field, Input, FormError } from '@/components/field';
+import { Field, Input, FormError, InlineError } from '@/components/field';
 import { Card, EmptyState, Spinner } from '@/components/page';
 import { ApiError } from '@/lib/api-client';
 import { formatDate, formatDateTime } from '@/lib/format';
@@ -66,11 +66,7 @@ function ImportRates() {
           }}
         />
       </label>
-      {error && (
-        <p role="alert" className="text-sm text-brick-700">
-          {error}
-        </p>
-      )}
+      <InlineError message={error} />
       {warnings.map((w) => (
         <p key={w} className="text-sm text-amber-800">
           {w}

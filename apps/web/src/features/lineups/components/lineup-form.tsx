@@ -1,7 +1,7 @@
 import { useState, type FormEvent } from 'react';
 import { createLineupBody, type CreateLineupBody, type DeviceDto, type LineupDto } from '@splitcase/contracts';
 import { Button } from '@/components/button';
-import { Field, Input, Select, Textarea, FormError } from '@/components/field';
+import { Field, Input, Select, Textarea, FormError, InlineError } from '@/components/field';
 import { Card } from '@/components/page';
 import { ApiError } from '@/lib/api-client';
 import type { LineupMetrics } from '../api/metrics';
@@ -120,11 +120,7 @@ export function LineupForm({
             ranking change before saving.
           </p>
           <WeightSliders metrics={metrics.metrics} weights={weights} max={metrics.weightMax} onChange={(k, v) => setWeights((w) => ({ ...w, [k]: v }))} errors={weightErrors} columns={2} />
-          {errors.weights && (
-            <p className="text-sm text-brick-700" role="alert">
-              {errors.weights}
-            </p>
-          )}
+          <InlineError message={errors.weights} />
         </div>
       </Card>
       <FormError message={formError} />

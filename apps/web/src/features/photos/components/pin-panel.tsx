@@ -2,7 +2,7 @@ import { useState, type FormEvent } from 'react';
 import { Link2, Trash2 } from 'lucide-react';
 import type { CalloutDto, CalloutTargets } from '@splitcase/contracts';
 import { Button } from '@/components/button';
-import { Field, Input, Select } from '@/components/field';
+import { Field, Input, Select, InlineError } from '@/components/field';
 import { ApiError } from '@/lib/api-client';
 import { PinMark } from './pin';
 
@@ -72,11 +72,7 @@ function PinForm({
           </Select>
         )}
       </Field>
-      {other && (
-        <p className="text-sm text-brick-700" role="alert">
-          {other}
-        </p>
-      )}
+      <InlineError message={other} />
       <div className="flex flex-wrap items-center gap-2">
         <Button type="submit" variant="primary" size="sm" busy={busy}>
           {submitLabel}

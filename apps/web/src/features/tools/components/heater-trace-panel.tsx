@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { TRACE_LAYERS, TRACE_LAYER_LABELS, type HeaterTraceToolBody } from '@splitcase/contracts';
 import { Button } from '@/components/button';
 import { Caution } from '@/components/caution';
+import { InlineError } from '@/components/field';
 import { useDebouncedValue } from '@/lib/use-debounced-value';
 import { useHeaterTrace } from '../api/heater-trace';
 import { FigureCard } from './figure-card';
@@ -82,11 +83,7 @@ export function HeaterTracePanel() {
               <QuantityField key={f.name} {...f} value={fields[f.name]} onChange={set(f.name)} error={state.fieldErrors[f.name]} parsed={state.parsed[f.name]} />
             ))}
           </div>
-          {state.fieldErrors.layer && (
-            <p className="text-sm text-brick-700" role="alert">
-              {state.fieldErrors.layer}
-            </p>
-          )}
+          <InlineError message={state.fieldErrors.layer} />
         </>
       }
     >

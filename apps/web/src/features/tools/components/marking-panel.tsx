@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { Check } from 'lucide-react';
 import { BAND_COLOURS, MARKING_KIND_LABELS, MARKING_KINDS, type MarkingKindInput, type MarkingReadingDto, type MarkingToolBody } from '@splitcase/contracts';
 import { Button } from '@/components/button';
-import { Field, Select } from '@/components/field';
+import { Field, Select, InlineError } from '@/components/field';
 import { Badge } from '@/components/badges';
 import { formatQuantity } from '@/lib/format';
 import { useDebouncedValue } from '@/lib/use-debounced-value';
@@ -217,11 +217,7 @@ export function MarkingPanel() {
                 ))}
               </div>
               <p className="text-xs text-graphite-500">Read from the end away from the tolerance band (often gold or silver, set apart).</p>
-              {bandError && (
-                <p className="text-sm text-brick-700" role="alert">
-                  {bandError}
-                </p>
-              )}
+              <InlineError message={bandError} />
             </>
           )}
         </>

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { CHEMISTRY, type Chemistry, type RuntimeToolBody } from '@splitcase/contracts';
 import { Button } from '@/components/button';
 import { Caution } from '@/components/caution';
-import { Field, Select } from '@/components/field';
+import { Field, Select, InlineError } from '@/components/field';
 import { useDebouncedValue } from '@/lib/use-debounced-value';
 import { useRuntime } from '../api/runtime';
 import { FigureCard } from './figure-card';
@@ -150,11 +150,7 @@ export function RuntimePanel() {
             {field('usableFraction')}
             {field('cellMass')}
           </div>
-          {state.fieldErrors.chemistry && (
-            <p className="text-sm text-brick-700" role="alert">
-              {state.fieldErrors.chemistry}
-            </p>
-          )}
+          <InlineError message={state.fieldErrors.chemistry} />
         </>
       }
     >
