@@ -10,11 +10,11 @@ import { Field, Input, Select, LabelledOptions, FormError } from '@/components/f
 import { Card } from '@/components/page';
 import type { EditGate } from '@/components/published-edit';
 import { ApiError } from '@/lib/api-client';
-import { formatStored, sameQuantityText } from '@/lib/format';
+import { formatStored } from '@/lib/format';
 import { useCreateConverter } from '../api/create-converter';
 import { useDeleteConverter } from '../api/delete-converter';
 import { useUpdateConverter } from '../api/update-converter';
-import { QuantityField, typedOr } from './quantity-field';
+import { QuantityField, TypedQuantity, typedOr } from './quantity-field';
 
 const QUANTITIES = [
   { key: 'inputVolts', label: 'Input voltage', unit: 'V', placeholder: '5 V' },
@@ -44,15 +44,7 @@ const draftOf = (c: ConverterDto | null): Draft => ({
 const shown = (c: ConverterDto, key: QKey, unit: string) => {
   const v = c[key];
   if (v === null) return <span className="text-graphite-300">—</span>;
-  const si = key === 'efficiency' ? `${Math.round(v * 1000) / 10} %` : formatStored(v, unit);
-  const typed = c.entered[key];
-  return typed && !sameQuantityText(typed, si) ? (
-    <span>
-      {typed} <span className="text-graphite-400">· {si}</span>
-    </span>
-  ) : (
-    si
-  );
+  return <TypedQuantity typed={c.entered[key]} si={key === 'efficiency' ? `${Math.round(v * 1000) / 10} %` : formatStored(v, unit)} />;
 };
 
 /** DC-DC stages with their efficiency, measured or assumed (the figures assume 0.90 when none is given). */

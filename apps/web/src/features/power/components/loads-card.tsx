@@ -9,11 +9,11 @@ import { Field, Input, Select, LabelledOptions, FormError } from '@/components/f
 import { Card } from '@/components/page';
 import type { EditGate } from '@/components/published-edit';
 import { ApiError } from '@/lib/api-client';
-import { formatStored, sameQuantityText } from '@/lib/format';
+import { formatStored } from '@/lib/format';
 import { useCreateLoad } from '../api/create-load';
 import { useDeleteLoad } from '../api/delete-load';
 import { useUpdateLoad } from '../api/update-load';
-import { QuantityField, typedOr } from './quantity-field';
+import { QuantityField, TypedQuantity, typedOr } from './quantity-field';
 
 const QUANTITIES = [
   { key: 'resistanceOhms', label: 'Resistance (per element)', unit: 'Ω', placeholder: '3R0 or 3.0 Ω' },
@@ -47,15 +47,7 @@ const draftOf = (l: LoadDto | null): Draft => ({
 const shown = (l: LoadDto, key: QKey, unit: string) => {
   const v = l[key];
   if (v === null) return null;
-  const typed = l.entered[key];
-  const si = key === 'duty' ? `${Math.round(v * 1000) / 10} %` : formatStored(v, unit);
-  return typed && !sameQuantityText(typed, si) ? (
-    <span>
-      {typed} <span className="text-graphite-400">· {si}</span>
-    </span>
-  ) : (
-    <span>{si}</span>
-  );
+  return <TypedQuantity typed={l.entered[key]} si={key === 'duty' ? `${Math.round(v * 1000) / 10} %` : formatStored(v, unit)} />;
 };
 
 /** Loads: heater elements, motors, LEDs, USB outputs, each per element with count and connection. */

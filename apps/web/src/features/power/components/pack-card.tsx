@@ -1,4 +1,4 @@
-import { useState, type FormEvent } from 'react';
+import { useState, type FormEvent, type ReactNode } from 'react';
 import { toast } from 'sonner';
 import { Battery } from 'lucide-react';
 import { CHEMISTRY, JOINING, type Chemistry, type Joining, type PackDto } from '@splitcase/contracts';
@@ -7,10 +7,10 @@ import { Field, Input, Select, LabelledOptions, FormError } from '@/components/f
 import { Card } from '@/components/page';
 import type { EditGate } from '@/components/published-edit';
 import { ApiError } from '@/lib/api-client';
-import { formatStored, sameQuantityText } from '@/lib/format';
+import { formatStored } from '@/lib/format';
 import { useDeletePack } from '../api/delete-pack';
 import { useSavePack } from '../api/save-pack';
-import { QuantityField, typedOr } from './quantity-field';
+import { QuantityField, TypedQuantity, typedOr } from './quantity-field';
 
 const QUANTITIES = [
   { key: 'nominalVolts', label: 'Nominal voltage (per cell)', unit: 'V', placeholder: '3.7 V', pick: (p: PackDto) => p.nominalVolts },
@@ -166,17 +166,14 @@ export function PackCard({ teardownId, pack, gate }: { teardownId: number; pack:
 }
 
 function PackSummary({ pack }: { pack: PackDto }) {
-  const rows: [string, string][] = [
+  const rows: [string, ReactNode][] = [
     ['Chemistry', CHEMISTRY.labels[pack.chemistry]],
     ['Cell format', pack.cellFormat ?? '—'],
     ['Arrangement', `${pack.series}S${pack.parallel}P (${pack.series * pack.parallel} cell${pack.series * pack.parallel === 1 ? '' : 's'})`],
-    ...QUANTITIES.filter((f) => f.key !== 'series' && f.key !== 'parallel').map((f): [string, string] => {
-      const v = f.pick(pack);
-      const typed = pack.entered[f.key];
-      const si = formatStored(v, f.unit);
-      const same = typed !== undefined && sameQuantityText(typed, si);
-      return [f.label, typed && !same ? `${typed} (${si})` : si];
-    }),
+    ...QUANTITIES.filter((f) => f.key !== 'series' && f.key !== 'parallel').map((f): [string, ReactNode] => [
+      f.label,
+      <TypedQuantity key={f.key} typed={pack.entered[f.key]} si={formatStored(f.pick(pack), f.unit)} />,
+    ]),
     ['Protection circuit', pack.protection ? 'Present' : 'None found'],
     ['Joining', pack.joining ? JOINING.labels[pack.joining] : '—'],
   ];

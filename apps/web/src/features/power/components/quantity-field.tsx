@@ -1,13 +1,19 @@
 import { Field, Input } from '@/components/field';
-import { formatStored } from '@/lib/format';
+import { formatStored, sameQuantityText } from '@/lib/format';
 
 /** The text to show in a field: what the user typed last time, or the stored SI number. */
 export const typedOr = (entered: Record<string, string> | undefined, key: string, value: number | null | undefined) =>
   entered?.[key] ?? (value === null || value === undefined ? '' : String(value));
 
-/** Typed text with the stored value beside it in SI, e.g. "2700 mAh" → "2.70 Ah". */
-export function shownQuantity(entered: Record<string, string>, key: string, value: number | null, unit: string): { typed: string | null; si: string } {
-  return { typed: entered[key] ?? null, si: formatStored(value, unit) };
+/** What the engineer typed, with the stored value in SI beside it when the two read differently ("2700 mAh · 2.70 Ah"). */
+export function TypedQuantity({ typed, si }: { typed: string | undefined; si: string }) {
+  return typed && !sameQuantityText(typed, si) ? (
+    <span>
+      {typed} <span className="text-graphite-400">· {si}</span>
+    </span>
+  ) : (
+    <span>{si}</span>
+  );
 }
 
 /** A number field that takes units ("2700 mAh", "3.65V", "3R0"); shows the saved SI value beside it. */
