@@ -172,7 +172,8 @@ async function deviceRow(
   em: EntityManager,
   device: Device,
   teardown: Teardown | null,
-  stored: TeardownFigureInput | undefined,
+  /** The figures service's input for the teardown (read for the whole lineup at once). */
+  teardownInput: TeardownFigureInput | null,
   currency: string,
   table: RateTable | null,
   viewer: boolean,
@@ -217,12 +218,10 @@ async function deviceRow(
   const from = `teardown #${teardown.id} (${teardown.date})`;
 
   // Figures of the teardown (pack, loads, heaters, label capacity), through the figures service's input and calc.
-  let input: TeardownFigureInput | null = null;
+  const input = teardownInput;
   let figures: Figure[] = [];
   try {
-    input = stored ?? null;
-    if (!input) throw new Error(`No figure input for teardown #${teardown.id}`);
-    figures = teardownFigures(input).figures;
+    if (input) figures = teardownFigures(input).figures;
   } catch (err) {
     if (!(err instanceof RangeError)) throw err;
     notes.push(`The figures of ${from} cannot be worked out: ${err.message}`);
@@ -370,7 +369,7 @@ export async function lineupComparison(em: EntityManager, user: AuthUser, lineup
   const rows: DeviceRow[] = [];
   for (const d of devices) {
     const t = latestOf.get(d.id) ?? null;
-    rows.push(await deviceRow(em, d, t, t ? inputs.get(t.id) : undefined, currency, table, viewer));
+    rows.push(await deviceRow(em, d, t, t ? (inputs.get(t.id) ?? null) : null, currency, table, viewer));
   }
 
   const computed = rows.map((r) => {

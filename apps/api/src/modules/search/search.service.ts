@@ -171,11 +171,10 @@ const TEXT_JOINS = `left join parts p on search_fts.type = 'part' and p.id = sea
        left join users u on u.id = c.author_id`;
 
 /**
- * Makes candidates hits, in their order, with their text: taken from `known` when the candidate
- * query read it, otherwise read here by rowid in chunks.
+ * Makes candidates hits, in their order, with their text: taken from `text` when the candidate
+ * query read it, otherwise read here by rowid in chunks (and added to `text`).
  */
-async function withText(em: EntityManager, light: LightHit[], known: Map<number, DetailRow>): Promise<Hit[]> {
-  const text = new Map(known);
+async function withText(em: EntityManager, light: LightHit[], text: Map<number, DetailRow>): Promise<Hit[]> {
   const missing = light.filter((h) => !text.has(h.rowid));
   for (let i = 0; i < missing.length; i += 500) {
     const chunk = missing.slice(i, i + 500);
