@@ -29,7 +29,13 @@ export interface Column<T> {
   /** Classes for the body cells of this column. */
   className?: string;
   sortable?: boolean;
+  /** Keep the column in view at the right edge when the table scrolls sideways (row actions). */
+  pinRight?: boolean;
 }
+
+/** Classes of a cell of a column pinned to the right edge, on the background of its row. */
+const pinned = (col: { pinRight?: boolean }, background: string) =>
+  col.pinRight ? `sticky right-0 ${background} shadow-[-6px_0_6px_-6px_rgb(0_0_0/0.18)]` : '';
 
 const features = tableFeatures({
   columnFilteringFeature,
@@ -120,7 +126,7 @@ export function DataTable<T extends RowData>({
                     key={header.id}
                     scope="col"
                     aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : 'none'}
-                    className={`h-8 whitespace-nowrap border-b border-graphite-150 ${dense ? 'px-1.5' : 'px-3'} text-xs font-semibold uppercase tracking-wide text-graphite-600 ${col.align === 'right' ? 'text-right' : 'text-left'}`}
+                    className={`h-8 whitespace-nowrap border-b border-graphite-150 ${dense ? 'px-1.5' : 'px-3'} text-xs font-semibold uppercase tracking-wide text-graphite-600 ${col.align === 'right' ? 'text-right' : 'text-left'} ${pinned(col, 'bg-graphite-50')}`}
                   >
                     {header.column.getCanSort() ? (
                       <button
@@ -145,7 +151,7 @@ export function DataTable<T extends RowData>({
                 const col = byId.get(column.id)!;
                 const value = (column.getFilterValue() as string | undefined) ?? '';
                 return (
-                  <th key={column.id} className="border-b border-graphite-150 px-2 py-1 font-normal">
+                  <th key={column.id} className={`border-b border-graphite-150 px-2 py-1 font-normal ${pinned(col, 'bg-graphite-50')}`}>
                     {col.filter === 'text' && (
                       <input
                         aria-label={`Filter ${col.header}`}
@@ -191,7 +197,7 @@ export function DataTable<T extends RowData>({
                   {row.getAllCells().map((cell) => {
                     const col = byId.get(cell.column.id)!;
                     return (
-                      <td key={cell.id} className={`${dense ? 'px-1.5 py-0.5' : 'px-3 py-1'} align-middle ${col.align === 'right' ? 'num text-right' : ''} ${col.className ?? ''}`}>
+                      <td key={cell.id} className={`${dense ? 'px-1.5 py-0.5' : 'px-3 py-1'} align-middle ${col.align === 'right' ? 'num text-right' : ''} ${col.className ?? ''} ${pinned(col, 'bg-white')}`}>
                         {col.cell ? col.cell(row.original) : (col.value(row.original) ?? <span className="text-graphite-400">—</span>)}
                       </td>
                     );

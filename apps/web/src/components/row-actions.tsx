@@ -73,6 +73,7 @@ export function rowActionsColumn<T extends { id: number }>(o: {
     sortable: false,
     align: 'right',
     className: 'whitespace-nowrap',
+    pinRight: o.canEdit,
     cell: (row) =>
       o.canEdit ? (
         <RowActions
