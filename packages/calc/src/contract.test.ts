@@ -92,7 +92,8 @@ describe('issue 3 contract', () => {
     expectTypeOf(calc.decodeColorBands).toExtend<(colors: string[]) => { ohms: number; tolerancePercent?: number }>();
     expectTypeOf(calc.decodeColorBands).parameters.toEqualTypeOf<[colors: string[]]>();
     expectTypeOf(calc.nearestPreferredValue).toEqualTypeOf<(value: number, series: 'E6' | 'E12' | 'E24' | 'E48' | 'E96' | 'E192') => number>();
-    expectTypeOf(calc.burnThresholdC).toEqualTypeOf<(p: { material: 'metal' | 'glass' | 'plastic'; contactSeconds: number }) => number>();
+    // burnThresholdC also takes coated metal and wood (issue 10); it accepts every contract call.
+    expectTypeOf(calc.burnThresholdC).toExtend<(p: { material: 'metal' | 'glass' | 'plastic'; contactSeconds: number }) => number>();
     expectTypeOf(calc.surfaceTemperatureRiseC).toEqualTypeOf<(p: { watts: number; areaM2: number; hWPerM2K?: number }) => number>();
     // integrateRun also reports the time-weighted mean voltage.
     expectTypeOf(calc.integrateRun).toExtend<

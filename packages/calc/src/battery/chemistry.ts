@@ -92,14 +92,19 @@ export function chargeVoltage(chemistry: CellChemistry): number {
 }
 
 /** Highest believable specific energy of a commercial cell by chemistry (Wh/kg), with its source. */
-export const SPECIFIC_ENERGY_LIMITS: Record<CellChemistry, { limitWhPerKg: number; source: string }> = {
-  'li-ion': { limitWhPerKg: 300, source: '[CP] flag any commercial Li-ion cell claiming more than about 300 Wh/kg (cells are 100–265 Wh/kg [S])' },
-  'li-po': { limitWhPerKg: 300, source: '[CP] same limit as li-ion: flag more than about 300 Wh/kg' },
-  lifepo4: { limitWhPerKg: 200, source: '[M] commercial LFP cells reach about 90–200 Wh/kg; flag more than 200 Wh/kg' },
-  lto: { limitWhPerKg: 110, source: '[S: encyclopedic data] LTO is 30–110 Wh/kg; flag more than 110 Wh/kg' },
-  nimh: { limitWhPerKg: 120, source: '[M] NiMH is about 60–120 Wh/kg; flag more than 120 Wh/kg' },
-  alkaline: { limitWhPerKg: 190, source: '[M] alkaline primary cells are about 85–190 Wh/kg; flag more than 190 Wh/kg' },
-  other: { limitWhPerKg: 300, source: '[CP] unknown chemistry: the Li-ion limit of about 300 Wh/kg is used as an upper bound' },
+/**
+ * Specific energy a pack of the chemistry can believably have: above `limitWhPerKg` a claim is flagged;
+ * below `floorWhPerKg` (half the lowest commercial cell figure [CP]: a pack with its wiring and
+ * protection stays above it) the pack mass is likely mistyped or includes the enclosure.
+ */
+export const SPECIFIC_ENERGY_LIMITS: Record<CellChemistry, { limitWhPerKg: number; floorWhPerKg: number; source: string }> = {
+  'li-ion': { limitWhPerKg: 300, floorWhPerKg: 50, source: '[CP] flag any commercial Li-ion cell claiming more than about 300 Wh/kg (cells are 100–265 Wh/kg [S])' },
+  'li-po': { limitWhPerKg: 300, floorWhPerKg: 50, source: '[CP] same limit as li-ion: flag more than about 300 Wh/kg' },
+  lifepo4: { limitWhPerKg: 200, floorWhPerKg: 45, source: '[M] commercial LFP cells reach about 90–200 Wh/kg; flag more than 200 Wh/kg' },
+  lto: { limitWhPerKg: 110, floorWhPerKg: 15, source: '[S: encyclopedic data] LTO is 30–110 Wh/kg; flag more than 110 Wh/kg' },
+  nimh: { limitWhPerKg: 120, floorWhPerKg: 30, source: '[M] NiMH is about 60–120 Wh/kg; flag more than 120 Wh/kg' },
+  alkaline: { limitWhPerKg: 190, floorWhPerKg: 40, source: '[M] alkaline primary cells are about 85–190 Wh/kg; flag more than 190 Wh/kg' },
+  other: { limitWhPerKg: 300, floorWhPerKg: 15, source: '[CP] unknown chemistry: the Li-ion limit of about 300 Wh/kg is used as an upper bound' },
 };
 
 export interface PlausibilityResult {

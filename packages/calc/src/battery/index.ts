@@ -1,6 +1,7 @@
 export {
   type AirTransportClass,
   AIR_TRANSPORT_CLASS_TEXT,
+  AIR_TRANSPORT_CLASS_TEXT_INSTALLED,
   packEnergyWh,
   runtimeHours,
   cRate,
@@ -20,3 +21,13 @@ export {
   labelCapacityPlausibility,
 } from './chemistry';
 export { type ChargeTimeEstimate, chargeTimeEstimate, chargeTimeHours } from './charge-time';
+export {
+  type ShippingArrangement,
+  type LithiumIonShipping,
+  SHIPPING_ARRANGEMENTS,
+  SECTION_II_CELL_WH,
+  SECTION_II_BATTERY_WH,
+  lithiumIonShipping,
+} from './shipping';
+export { LI_ION_SELF_DISCHARGE_PER_MONTH, HOURS_PER_MONTH, standbyMonths } from './standby';
+export { packResistanceOhms, loadedTerminalVolts, resistiveLoadOnSource } from './loaded';

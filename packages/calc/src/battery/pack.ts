@@ -44,6 +44,13 @@ export const AIR_TRANSPORT_CLASS_TEXT: Record<AirTransportClass, string> = {
   'over-160-wh': 'Over 160 Wh: forbidden in passenger baggage; ships as dangerous goods (UN 38.3 test summary required).',
 };
 
+/** The same classes for a battery installed in equipment (a heater, a light) carried by a passenger [S: IATA DGR]. */
+export const AIR_TRANSPORT_CLASS_TEXT_INSTALLED: Record<AirTransportClass, string> = {
+  'up-to-100-wh': 'Not exceeding 100 Wh: equipment with the battery installed is allowed in carry-on and checked baggage, switched off and protected against switching on.',
+  '100-to-160-wh': 'Over 100 Wh, not exceeding 160 Wh, installed in equipment: airline approval needed before travel.',
+  'over-160-wh': 'Over 160 Wh: forbidden in passenger baggage, installed or not; ships as dangerous goods (UN 38.3 test summary required).',
+};
+
 /** Specific energy = Wh ÷ kg (Wh/kg). */
 export function specificEnergyWhPerKg(wattHours: number, massKg: number): number {
   requireNonNegative(wattHours, 'Energy (Wh)');

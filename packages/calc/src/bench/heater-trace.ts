@@ -4,7 +4,9 @@
  * density over the heated area and a steady surface-rise estimate, each with formula and source.
  */
 import { burnThresholdDetail } from '../thermal/touch';
-import { DEFAULT_CONVECTION_H, surfaceTemperatureRiseC } from '../thermal/convection';
+import { DEFAULT_CONVECTION_H } from '../thermal/convection';
+import { emissivityOf, steadySurfaceRiseC } from '../thermal/surface';
+import type { SurfaceMaterial } from '../thermal/touch';
 import { requireFinite, requirePositive } from '../shared/validate';
 import { plain, withPrefix } from '../shared/text';
 import { COPPER_ALPHA_20, COPPER_RESISTIVITY_IACS, COPPER_RESISTIVITY_PURE, METRES_PER_MIL, copperTraceResistance } from '../traces/copper';
@@ -31,6 +33,8 @@ export interface HeaterTraceInput {
   layer: TraceLayer;
   /** Heated area for power density and the surface estimate (m²). */
   areaM2?: number | undefined;
+  /** Surface of the pad, for its emissivity and burn thresholds; default plastic (a polyimide or PET film). */
+  surfaceMaterial?: SurfaceMaterial | undefined;
 }
 
 export interface HeaterTraceReport {
@@ -222,17 +226,20 @@ export function heaterTraceReport(p: HeaterTraceInput): HeaterTraceReport {
         warnings: areaWarnings,
       }),
     );
-    // Both faces of a bare heater pad shed heat (REFERENCES §7 takes both faces of a slab).
-    const rise = surfaceTemperatureRiseC({ watts, areaM2: 2 * areaM2 });
+    // Both faces of a bare heater pad shed heat (REFERENCES §7 takes both faces of a slab), by the
+    // same convection + exact radiation model as the teardown figures (thermal/surface.ts).
+    const material = p.surfaceMaterial ?? 'plastic';
+    const emissivity = emissivityOf(material);
+    const rise = steadySurfaceRiseC({ watts, areaM2: 2 * areaM2, ambientC: BENCH_AMBIENT_C, emissivity: emissivity.value });
     const surfaceC = BENCH_AMBIENT_C + rise;
     const touchWarnings: string[] = [];
     // The most severe contact time whose ISO 13732-1 threshold the estimate exceeds.
     for (const seconds of [60, 600, 8 * 3600]) {
-      const t = burnThresholdDetail({ material: 'plastic', contactSeconds: seconds });
+      const t = burnThresholdDetail({ material, contactSeconds: seconds });
       if (surfaceC > t.thresholdC) {
         const duration = seconds === 60 ? '1 min' : seconds === 600 ? '10 min' : '8 h or more';
         touchWarnings.push(
-          `An estimated surface of about ${plain(surfaceC, 3)} °C is above the ${t.thresholdC} °C burn threshold for ${duration} of contact (${t.source}). Keep skin contact short or add a layer between heater and skin.`,
+          `An estimated surface of about ${plain(surfaceC, 3)} °C is above the ${t.thresholdC} °C burn threshold for ${duration} of contact with ${material} (${t.source}). Keep skin contact short or add a layer between heater and skin.`,
         );
         break;
       }
@@ -243,14 +250,15 @@ export function heaterTraceReport(p: HeaterTraceInput): HeaterTraceReport {
         label: 'Steady surface rise, bare in still air (estimate)',
         value: rise,
         unit: '°C',
-        formulaKey: 'thermal.surfaceRise',
+        formulaKey: 'heater.surfaceRise',
         inputs: [
           ...areaInputs,
           { label: 'Surface shedding heat (both faces)', value: 2 * areaM2, unit: 'm²' },
-          { label: 'Heat-transfer coefficient h', value: DEFAULT_CONVECTION_H, unit: 'W/m²K' },
+          { label: 'Convection coefficient h', value: DEFAULT_CONVECTION_H, unit: 'W/m²K' },
+          { label: `Emissivity (${material})`, value: emissivity.value },
         ],
         assumptions: [
-          `Heat leaves both faces of the heated area (2 × A) by free convection at h = ${DEFAULT_CONVECTION_H} W/m²K (2–25 W/m²K in air [S: Çengel]). Radiation, about 5.5 W/m²K more [C], is left out, so the estimate errs hot.`,
+          `Heat leaves both faces of the heated area (2 × A) by free convection at h = ${DEFAULT_CONVECTION_H} W/m²K (2–25 W/m²K in air [S: Çengel]) and by radiation, εσ(T_s⁴ − T_a⁴) exact in T⁴ with ε ${emissivity.value} (${emissivity.source}).`,
           `Surface temperature ≈ ${BENCH_AMBIENT_C} °C ambient + rise = ${plain(surfaceC, 3)} °C; a hand or pocket insulates, so a covered heater runs hotter.`,
         ],
         warnings: touchWarnings,

@@ -12,3 +12,4 @@ export {
   type ScoredRow,
 } from './metrics';
 export { mainLoads, MAIN_LOAD_KIND, type MainLoadChoice } from './main-load';
+export { type ModeRule, type ModeCandidate, type ModeChoice, MODE_RULES, chooseMode } from './mode-choice';

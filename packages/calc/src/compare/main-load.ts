@@ -2,7 +2,7 @@
  * The load a device is bought for, so that a lineup compares runtimes like for like: the heater
  * of a pocket heater, the USB output of a power bank, the LED of a headlamp, the motor of a fan.
  */
-import type { LoadKind } from '../figures/teardown-figures';
+import type { LoadKind } from '../figures/types';
 import { requireFinite } from '../shared/validate';
 
 /** Device category → the kind of load that defines it [CP]. Categories not listed fall back to the largest load. */

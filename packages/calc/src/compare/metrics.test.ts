@@ -88,12 +88,14 @@ describe('weightedScores', () => {
     //   B = (1·0 + 2·1 + 1·0) / 4 = 0.50 → 50
     //   C = (1·0.5 + 1·1) / 2 = 0.75 → 75 (packWh left out, weights renormalised)
     const r = weightedScores(rows, { retailPrice: 1, packWh: 2, findingsCritical: 1 });
+    // C lacks packWh, so it ranks after the complete rows whatever its score (issue 10 §2.9; it ranked first before).
     expect(r.map((x) => [x.id, x.score, x.rank])).toEqual([
-      ['C', 75, 1],
-      ['A', 50, 2], // tie with B broken by id
-      ['B', 50, 3],
+      ['A', 50, 1], // tie with B broken by id
+      ['B', 50, 2],
+      ['C', 75, 3],
     ]);
-    expect(r[0]!.normalised).toEqual({ retailPrice: 0.5, findingsCritical: 1 });
+    expect(r[2]!.normalised).toEqual({ retailPrice: 0.5, findingsCritical: 1 });
+    expect(r[2]).toMatchObject({ complete: false, missing: ['packWh'] });
   });
 
   it('gives 1 to every row when a metric is equal across the lineup', () => {
@@ -150,5 +152,22 @@ describe('weightedScores', () => {
     expect(() => weightedScores([rows[0]!, rows[0]!], { packWh: 1 })).toThrow(/rows\[1\]\.id "A" appears more than once/);
     expect(() => weightedScores([{ id: 'x', metrics: null as never }], { packWh: 1 })).toThrow(/rows\[0\]\.metrics must be an object/);
     expect(() => weightedScores([{ id: 'x', metrics: { packWh: Infinity } }], { packWh: 1 })).toThrow(/rows\[0\]\.metrics\.packWh/);
+  });
+});
+
+describe('a missing metric is never rewarded (issue 10 §2.9)', () => {
+  it('a row without one of the weighted metrics ranks after every row that has them all, and says which it lacks [C]', () => {
+    // A has only Wh/kg (the best); B has both. Renormalised over what it has, A would score 100 and rank first.
+    const r = weightedScores(
+      [
+        { id: 'A', metrics: { whPerKg: 250, shouldCost: null } },
+        { id: 'B', metrics: { whPerKg: 150, shouldCost: 5 } },
+        { id: 'C', metrics: { whPerKg: 200, shouldCost: 6 } },
+      ],
+      { whPerKg: 1, shouldCost: 1 },
+    );
+    expect(r.map((x) => x.id)).toEqual(['B', 'C', 'A']);
+    expect(r.find((x) => x.id === 'A')).toMatchObject({ complete: false, missing: ['shouldCost'], rank: 3 });
+    expect(r.find((x) => x.id === 'C')).toMatchObject({ complete: true, missing: [] });
   });
 });

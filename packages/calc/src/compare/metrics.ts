@@ -118,13 +118,19 @@ export interface ScoredRow {
   rank: number;
   /** Normalised value 0..1 (1 = best in the lineup) of each weighted metric the row has. */
   normalised: Partial<Record<MetricKey, number>>;
+  /** The row has every weighted metric; incomplete rows rank after the complete ones. */
+  complete: boolean;
+  /** Weighted metrics the row lacks. */
+  missing: MetricKey[];
 }
 
 /**
  * Scores 0..100: each weighted metric is min-max normalised across the rows
  * that have it (1 = best, respecting METRICS[key].better; 1 for all when the
  * values are equal); a row's score is the weighted mean over the metrics it
- * has, the weights renormalised over those. Sorted by score, ties by id.
+ * has, the weights renormalised over those. Rows with every weighted metric
+ * rank first (by score, ties by id); rows missing one rank after them, so a
+ * missing metric is never rewarded (issue 10 §2.9).
  */
 export function weightedScores(
   rows: { id: string; metrics: Partial<Record<string, number | null>> }[],
@@ -170,11 +176,15 @@ export function weightedScores(
 
   const scored = rows.map((row) => {
     const normalised: Partial<Record<MetricKey, number>> = {};
+    const missing: MetricKey[] = [];
     let sum = 0;
     let weightSum = 0;
     for (const [key, w] of used) {
       const v = row.metrics[key];
-      if (!present(v)) continue;
+      if (!present(v)) {
+        missing.push(key);
+        continue;
+      }
       const { min, max } = ranges.get(key)!;
       const n = max === min ? 1 : METRICS[key].better === 'high' ? (v - min) / (max - min) : (max - v) / (max - min);
       normalised[key] = n;
@@ -183,9 +193,10 @@ export function weightedScores(
     }
     // Clamped: rounding can push a perfect row a hair past 100.
     const score = weightSum > 0 ? Math.min(100, Math.max(0, (100 * sum) / weightSum)) : null;
-    return { id: row.id, score, normalised };
+    return { id: row.id, score, normalised, complete: missing.length === 0, missing };
   });
   scored.sort((a, b) => {
+    if (a.complete !== b.complete) return a.complete ? -1 : 1;
     if (a.score === null || b.score === null) {
       if (a.score !== b.score) return a.score === null ? 1 : -1;
     } else if (a.score !== b.score) {

@@ -9,3 +9,4 @@ export {
   rmsVoltage,
 } from './ohms-law';
 export { type LoadElementsInput, type LoadPowerResult, loadPower } from './load-power';
+export { resistanceAtTemperature } from './temperature';

@@ -27,6 +27,21 @@ const CATALOGUE = {
     source: "Ohm's law; converter power balance [C]",
   },
   'load.averagePower': { formula: 'P_avg = Σ D · P_load', source: 'Ideal PWM [C]' },
+  'load.dischargePower': { formula: 'P_avg = mean(V²) / R_eq over the run', source: '[C] a fixed resistance on a falling voltage' },
+  'mode.power': { formula: 'P = Σ D_k · P_k over the loads active in the mode', source: 'Ideal PWM [C]' },
+  'mode.packPower': { formula: 'P_pack = Σ D_k · P_k / η_k + I_q · V_pack', source: 'Power balance through the converters [C]' },
+  'mode.current': { formula: 'I = Σ D_k · I_pack,k + I_q', source: "Ohm's law; converter power balance [C]" },
+  'mode.standby': { formula: 'months = C / (s · C + I_q · 730 h)', source: '[C]; Li-ion self-discharge 2–3 %/month [CP]' },
+  'pack.terminalVolts': { formula: 'U = U_oc − I · R_pack, R_pack = R_cell · S / P', source: '[M: IEC 61960-3] DC internal resistance; [C]' },
+  'pack.cellHeat': { formula: 'P = mean(i²) · R_pack', source: "Joule's law [C]" },
+  'pack.loadedPower': { formula: 'I = U_oc / (R_load + R_pack), P = Σ D_k · U² / R_k', source: "Ohm's law with a source resistance [C]" },
+  'pack.shipping': {
+    formula: 'UN 3480 (alone, PI 965) or UN 3481 (packed with PI 966, contained in PI 967); Section II when cells ≤ 20 Wh and battery ≤ 100 Wh',
+    source: '[S: IATA DGR, Section II of PI 965–970; M for edition detail]',
+  },
+  'charge.cRate': { formula: 'n = I_charge / C_rated', source: '[S] C-rate definition' },
+  'charge.inputCurrent': { formula: 'I_in = V_pack · I_charge / (η · V_bus)', source: '[C]; port limits [S: USB 2.0 §7.2.1, BC 1.2, USB Type-C]' },
+  'claim.outputWatts': { formula: 'P_computed / P_claimed · 100 %', source: '[C]' },
   // battery
   'pack.energy': { formula: 'E = V_nom · Ah · S · P', source: "[S: cell makers' application guides] Wh = V_nom · Ah" },
   'pack.transportClass': {
@@ -47,12 +62,16 @@ const CATALOGUE = {
     source: 'Rough CC-CV model [CP]; termination C/10–C/30 [S, cell-specific]',
   },
   'battery.plausibility': { formula: 'E_claimed / m ≤ e_max(chemistry)', source: '[CP] flag Li-ion cells claiming more than about 300 Wh/kg' },
-  'capacity.measuredVsLabel': { formula: 'Q_measured / Q_label · 100 %', source: '[M: IEC 61960-3] delivered capacity must reach the rated value' },
+  'capacity.measuredVsLabel': {
+    formula: 'E_measured / E_label · 100 %, E_label = Wh on the label or Ah_label · V_cell',
+    source: '[M: IEC 61960-3] delivered capacity must reach the rated value; labels quote mAh at the cell voltage [CP]',
+  },
   // converters
   'converter.buckDuty': { formula: 'D = V_out / (V_in · η)', source: '[S: Erickson & Maksimović, Fundamentals of Power Electronics]' },
   'converter.boostDuty': { formula: 'D = 1 − V_in · η / V_out', source: "[S] ideal; [M: semiconductor makers' application notes] with losses" },
   'converter.loss': { formula: 'P_loss = P_out · (1/η − 1)', source: 'Power balance [C]' },
   'powerbank.outputAh': { formula: 'Ah_out = V_cell · Ah_rated · η / V_out', source: '[CP] power-bank rating practice' },
+  'powerbank.deliveredVsLabel': { formula: 'E_delivered / E_label · 100 %', source: '[CP] η typically 0.80–0.90 at 5 V' },
   // traces
   'trace.resistance': { formula: 'R = ρ·L / (w·t) · [1 + α·(T − 20 °C)]', source: '[S: IEC 60028] IACS ρ = 1.7241e-8 Ω·m, α = 0.00393 /K' },
   'trace.rating': { formula: 'I = k · ΔT^0.44 · (w·t)^0.725, k = 0.048 external / 0.024 internal, mil²', source: '[S: IPC-2221 curve fit]' },
@@ -60,10 +79,22 @@ const CATALOGUE = {
   'heater.powerDensity': { formula: 'p = P / A', source: '[C]' },
   'trace.sheetResistance': { formula: 'R_□ = ρ / t', source: '[S: IEC 60028] IACS ρ = 1.7241e-8 Ω·m; [C]' },
   // thermal
-  'heater.surfaceRise': { formula: 'ΔT = D · P / (h · A)', source: 'Newton cooling, steady state [C]; h 2–25 W/m²K free convection [S: Çengel]' },
+  'heater.surfaceRise': {
+    formula: 'D · P = h · A · ΔT + ε · σ · A · ((T_a + ΔT)⁴ − T_a⁴), solved for ΔT',
+    source: 'Newton cooling and exact radiative exchange, steady state [C]; h 2–25 W/m²K free convection [S: Çengel]; ε [S: handbook tables, Incropera Table A.11]',
+  },
+  'heater.surfaceTemperature': {
+    formula: 'T_s = T_a + ΔT, D · P = h · A · ΔT + ε · σ · A · (T_s⁴ − T_a⁴)',
+    source: 'Newton cooling and exact radiative exchange, steady state [C]; h 2–25 W/m²K [S: Çengel]; ε [S: handbook tables]',
+  },
+  'heater.surfaceMeasured': { formula: 'T_s measured at the bench (thermal run peak or a reading)', source: 'Measured at the bench (the peak of a thermal run or a reading) [CP: a measurement beats an estimate]' },
+  'heater.powerHot': { formula: 'P = V² / R(T), R(T) = R₂₀ · (1 + α · (T − 20 °C)), T from the surface estimate', source: '[S: CRC] α copper 0.00393 /K; [C]' },
+  'heater.timeConstant': { formula: 'τ = m · c / (h_eff · A)', source: '[S: Incropera ch. 5] lumped capacitance, Bi < 0.1; c [S: handbook tables]' },
+  'heater.timeToThreshold': { formula: 't = −τ · ln(1 − (T_burn − T_a) / ΔT_ss)', source: '[S: Incropera ch. 5] first-order response; [C]' },
+  'heater.dutyForTarget': { formula: 'D = [h · A · ΔT + ε · σ · A · (T_t⁴ − T_a⁴)] / P_full', source: 'Steady-state energy balance [C]' },
   'heater.touchMargin': {
     formula: 'margin = T_burn(material, contact time) − (T_ambient + ΔT)',
-    source: '[M: ISO 13732-1] 1 min 51 °C, 10 min 48 °C, 8 h 43 °C; [S: ECMA-287] shorter contact',
+    source: '[M: ISO 13732-1] 1 min: metal 51, ceramics/glass 56, plastics and wood 60 °C; 10 min 48 °C, 8 h 43 °C; [S: ECMA-287] shorter contact',
   },
   'thermal.burnThreshold': {
     formula: 'T_burn(material, next longer listed contact time)',

@@ -1,5 +1,7 @@
 /** A figure with what the UI needs to show how it was obtained. */
 export interface FigureInput {
+  /** Stable name of the input within its figure (teardown figures always set it). */
+  key?: string;
   label: string;
   value: number | string | boolean | null;
   unit?: string;

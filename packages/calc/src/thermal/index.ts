@@ -2,6 +2,7 @@ export {
   type SurfaceMaterial,
   type BurnThresholdRow,
   SURFACE_MATERIALS,
+  isMetalSurface,
   BURN_THRESHOLDS,
   burnThresholdDetail,
   burnThresholdC,
@@ -14,3 +15,15 @@ export {
   radiativeHeatTransferCoefficient,
   dutyForTargetTemperatureRise,
 } from './convection';
+export {
+  type MaterialConstant,
+  type SurfaceLoss,
+  SURFACE_EMISSIVITY,
+  SPECIFIC_HEAT,
+  emissivityOf,
+  surfaceHeatLossWatts,
+  steadySurfaceRiseC,
+  effectiveHeatTransferCoefficient,
+  thermalTimeConstantSeconds,
+  timeToRiseSeconds,
+} from './surface';
