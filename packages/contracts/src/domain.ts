@@ -106,11 +106,22 @@ export const CONVERTER_ROLE = labelled(['charge', 'output', 'load'] as const, {
 });
 export type ConverterRole = (typeof CONVERTER_ROLE.values)[number];
 
-export const SURFACE_MATERIAL = labelled(['metal', 'glass', 'plastic'] as const, { metal: 'Metal', glass: 'Glass', plastic: 'Plastic' });
+/** The surface a hand touches: bare metal radiates little (ε about 0.1), coated metal and the rest about 0.85–0.9. */
+export const SURFACE_MATERIAL = labelled(['metal', 'metal-coated', 'glass', 'plastic', 'wood'] as const, {
+  metal: 'Metal, bare',
+  'metal-coated': 'Metal, painted or anodised',
+  glass: 'Glass or ceramic',
+  plastic: 'Plastic',
+  wood: 'Wood',
+});
 export type SurfaceMaterial = (typeof SURFACE_MATERIAL.values)[number];
 
+/** What a resistive element is made of, for its resistance when hot. */
+export const ELEMENT_MATERIAL = labelled(['copper', 'other'] as const, { copper: 'Copper trace or foil', other: 'Other / not known' });
+export type ElementMaterial = (typeof ELEMENT_MATERIAL.values)[number];
+
 export const MEASURED_QUANTITY = labelled(
-  ['voltage', 'current', 'resistance', 'capacitance', 'inductance', 'power', 'energy', 'capacity', 'temperature', 'mass', 'length', 'time', 'frequency', 'other'] as const,
+  ['voltage', 'current', 'resistance', 'capacitance', 'inductance', 'power', 'energy', 'capacity', 'temperature', 'surface-temperature', 'mass', 'length', 'time', 'frequency', 'other'] as const,
   {
     voltage: 'Voltage',
     current: 'Current',
@@ -121,6 +132,7 @@ export const MEASURED_QUANTITY = labelled(
     energy: 'Energy',
     capacity: 'Charge capacity',
     temperature: 'Temperature',
+    'surface-temperature': 'Surface temperature (where a hand touches)',
     mass: 'Mass',
     length: 'Length',
     time: 'Time',
@@ -141,6 +153,7 @@ export const SI_UNIT: Record<MeasuredQuantity, string> = {
   energy: 'Wh',
   capacity: 'Ah',
   temperature: '°C',
+  'surface-temperature': '°C',
   mass: 'kg',
   length: 'm',
   time: 's',

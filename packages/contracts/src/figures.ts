@@ -2,6 +2,8 @@ import { z } from 'zod';
 import { FINDING_KIND, SEVERITY } from './domain';
 
 export const figureInputSchema = z.object({
+  /** Stable name of the input within its figure: read inputs by key, never by label. */
+  key: z.string(),
   label: z.string(),
   value: z.union([z.number(), z.string(), z.boolean(), z.null()]),
   unit: z.string().optional(),
@@ -21,6 +23,10 @@ export const figureSchema = z.object({
   warnings: z.array(z.string()),
   /** A safety caution to show beside this figure (e.g. hot surface next to touch-temperature figures). */
   caution: z.string().nullable(),
+  /** The operating mode a per-mode figure describes (keys `mode.*`); null for whole-device figures. */
+  modeId: z.number().int().nullable(),
+  /** Outside what the physics or the chemistry allows: shown flagged, never as good. */
+  implausible: z.boolean(),
 });
 export type FigureDto = z.infer<typeof figureSchema>;
 
@@ -43,6 +49,8 @@ export type SuggestionDto = z.infer<typeof suggestionSchema>;
 
 export const figuresResponse = z.object({
   figures: z.array(figureSchema),
+  /** The recorded modes, in order, for the per-mode figures; empty: all loads at once. */
+  modes: z.array(z.object({ id: z.number().int(), name: z.string(), note: z.string().nullable() })),
   suggestions: z.array(suggestionSchema),
   /** "Engineering estimates, not certification results" — shown with the figures. */
   note: z.string(),

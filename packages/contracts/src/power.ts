@@ -3,7 +3,7 @@
 // server stores SI and keeps the typed text in `entered`, keyed by the field name.
 import { z } from 'zod';
 import { patchOf } from './common';
-import { CHEMISTRY, CONNECTION, CONVERTER_ROLE, CONVERTER_TOPOLOGY, JOINING, LOAD_KIND, SURFACE_MATERIAL } from './domain';
+import { CHEMISTRY, CONNECTION, CONVERTER_ROLE, CONVERTER_TOPOLOGY, ELEMENT_MATERIAL, JOINING, LOAD_KIND, SURFACE_MATERIAL } from './domain';
 
 /** A number (SI) or text with a unit. Blank or null clears an optional value. */
 /** A number in SI or a value with its unit ("2700 mAh"), parsed by the server. */
@@ -44,6 +44,16 @@ export const packBody = z.object({
   massKg: optional,
   protection: z.boolean({ error: 'Yes or no' }).default(false),
   joining: choice(JOINING.values).nullable().optional(),
+  /** DC internal resistance of one cell ("50 mΩ"). */
+  internalResistanceOhms: optional,
+  /**
+   * Or two readings of the DC method (IEC 61960-3): the cell voltage at a low and at a high current;
+   * the server works out (U₁ − U₂) / (I₂ − I₁). Given, it replaces internalResistanceOhms.
+   */
+  internalResistanceReadings: z
+    .object({ lowAmps: required, lowVolts: required, highAmps: required, highVolts: required })
+    .nullable()
+    .optional(),
 });
 export type PackBody = z.input<typeof packBody>;
 
@@ -61,6 +71,10 @@ export const packSchema = z.object({
   massKg: z.number().nullable(),
   protection: z.boolean(),
   joining: choice(JOINING.values).nullable(),
+  /** DC internal resistance of one cell (Ω). */
+  internalResistanceOhms: z.number().nullable(),
+  /** The two readings it was worked out from, when it was (SI). */
+  internalResistanceReadings: z.object({ lowAmps: z.number(), lowVolts: z.number(), highAmps: z.number(), highVolts: z.number() }).nullable(),
   /** What the user typed, by field ("capacityAh": "2700 mAh"). */
   entered: z.record(z.string(), z.string()),
   /** A lithium chemistry: the section shows the lithium cautions. */
@@ -137,6 +151,10 @@ const loadFields = {
   /** Area that sheds the heat. */
   heatedAreaM2: optional,
   surfaceMaterial: choice(SURFACE_MATERIAL.values).nullable().optional(),
+  /** Copper elements get their resistance at operating temperature. */
+  elementMaterial: choice(ELEMENT_MATERIAL.values).nullable().optional(),
+  /** Mass that heats with the element (pad, plate, shell), for the thermal time constant. */
+  heatedMassKg: optional,
 };
 export const createLoadBody = z.object({
   ...loadFields,
@@ -163,6 +181,8 @@ export const loadSchema = z.object({
   converterId: z.number().int().nullable(),
   heatedAreaM2: z.number().nullable(),
   surfaceMaterial: choice(SURFACE_MATERIAL.values).nullable(),
+  elementMaterial: choice(ELEMENT_MATERIAL.values).nullable(),
+  heatedMassKg: z.number().nullable(),
   entered: z.record(z.string(), z.string()),
   createdAt: z.string(),
 });
@@ -170,7 +190,55 @@ export type LoadDto = z.infer<typeof loadSchema>;
 export const loadResponse = z.object({ load: loadSchema });
 export const loadsResponse = z.object({ loads: z.array(loadSchema) });
 
-export const powerSystemResponse = z.object({ pack: packSchema.nullable(), loads: z.array(loadSchema), converters: z.array(converterSchema) });
+// ---- operating modes ----
+
+const modeFields = {
+  name: z.string({ error: 'Required' }).trim().min(1, 'Give the mode a name').max(80, 'At most 80 characters'),
+  note: label(300),
+  /** The loads active in the mode, each at its PWM duty in it (0..1 or "60 %"). */
+  loads: z
+    .array(
+      z.object({
+        loadId: z.number({ error: 'Choose a load of this teardown' }).int().positive('Choose a load of this teardown'),
+        duty: powerQuantity.default(1),
+      }),
+      { error: 'A list of loads' },
+    )
+    .max(50, 'At most 50 loads'),
+  /** Current the electronics draw in the mode besides the loads ("20 µA"): standby is a mode with no loads and this. */
+  quiescentAmps: optional,
+};
+export const createModeBody = z.object({ ...modeFields, loads: modeFields.loads.default([]) });
+export type CreateModeBody = z.input<typeof createModeBody>;
+export const updateModeBody = patchOf(modeFields);
+export type UpdateModeBody = z.input<typeof updateModeBody>;
+
+export const modeSchema = z.object({
+  id: z.number().int(),
+  teardownId: z.number().int(),
+  name: z.string(),
+  note: z.string().nullable(),
+  position: z.number().int(),
+  loads: z.array(z.object({ loadId: z.number().int(), duty: z.number() })),
+  quiescentAmps: z.number().nullable(),
+  entered: z.record(z.string(), z.string()),
+  createdAt: z.string(),
+});
+export type ModeDto = z.infer<typeof modeSchema>;
+export const modeResponse = z.object({ mode: modeSchema });
+export const modesResponse = z.object({ modes: z.array(modeSchema) });
+
+export const dutyForTargetQuery = z.object({
+  /** Target surface temperature ("45 °C" or 45). */
+  target: z.string().trim().min(1, 'Required').max(40, 'At most 40 characters').default('45 °C'),
+});
+
+export const powerSystemResponse = z.object({
+  pack: packSchema.nullable(),
+  loads: z.array(loadSchema),
+  converters: z.array(converterSchema),
+  modes: z.array(modeSchema),
+});
 export type PowerSystemDto = z.infer<typeof powerSystemResponse>;
 
 export const childIdParams = z.object({

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { DEVICE_CATEGORY } from './domain';
 
 export const currencyCode = z
   .string()
@@ -14,6 +15,15 @@ export const workspaceSettingsSchema = z.object({
   capacityWarnFraction: z.number().min(0.5, 'At least 0.5').max(1, 'At most 1').default(0.9),
   /** Contact time assumed for touch-temperature figures when a teardown does not set its own (s). */
   defaultContactSeconds: z.number().int().min(1, 'At least 1 s').max(28800, 'At most 8 h').default(60),
+  /**
+   * Contact time by device category, before the default above: what is held or worn for long is judged
+   * at 10 min or 8 h, not 1 min (REFERENCES §6 [CP]). A teardown can set its own.
+   */
+  contactSecondsByCategory: z
+    .partialRecord(DEVICE_CATEGORY.schema, z.number().int().min(1, 'At least 1 s').max(28800, 'At most 8 h'))
+    .default({ 'pocket-heater': 600, headlamp: 600, toothbrush: 600 }),
+  /** Share of the rated energy usable to cut-off, for runtimes when no discharge run measured it (0.5..1). */
+  usableFraction: z.number().min(0.5, 'At least 0.5').max(1, 'At most 1').default(0.9),
 });
 export type WorkspaceSettings = z.infer<typeof workspaceSettingsSchema>;
 export const settingsResponse = z.object({ settings: workspaceSettingsSchema });

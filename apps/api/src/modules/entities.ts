@@ -12,6 +12,8 @@ import { PhotoSchema } from './photos/photo.entity';
 import { ConverterSchema } from './power/converter.entity';
 import { LoadSchema } from './power/load.entity';
 import { PackSchema } from './power/pack.entity';
+import { OperatingModeSchema } from './power/mode.entity';
+import { ModeLoadSchema } from './power/mode-load.entity';
 import { SettingSchema } from './settings/setting.entity';
 import { CommentSchema } from './teardowns/comment.entity';
 import { SuggestionDecisionSchema } from './teardowns/suggestion-decision.entity';
@@ -38,6 +40,8 @@ export const entities = [
   PackSchema,
   ConverterSchema,
   LoadSchema,
+  OperatingModeSchema,
+  ModeLoadSchema,
   MeasurementSchema,
   PhotoSchema,
   CalloutSchema,

@@ -1,5 +1,5 @@
 import { defineEntity, p, type InferEntity } from '@mikro-orm/core';
-import { CONNECTION, LOAD_KIND, SURFACE_MATERIAL } from '@splitcase/contracts';
+import { CONNECTION, ELEMENT_MATERIAL, LOAD_KIND, SURFACE_MATERIAL } from '@splitcase/contracts';
 import { TeardownSchema } from '../teardowns/teardown.entity';
 import { ConverterSchema } from './converter.entity';
 
@@ -22,6 +22,8 @@ export const LoadSchema = defineEntity({
     converter: () => p.manyToOne(ConverterSchema).nullable().deleteRule('set null'),
     heatedAreaM2: p.double().nullable(),
     surfaceMaterial: p.enum([...SURFACE_MATERIAL.values]).nullable(),
+    elementMaterial: p.enum([...ELEMENT_MATERIAL.values]).nullable(),
+    heatedMassKg: p.double().nullable(),
     entered: p.json<Record<string, string>>().nullable(),
     createdAt: p.datetime().onCreate(() => new Date()),
   },

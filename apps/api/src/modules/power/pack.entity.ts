@@ -20,6 +20,10 @@ export const PackSchema = defineEntity({
     packMassKg: p.double().nullable(),
     protection: p.boolean().default(false),
     joining: p.enum([...JOINING.values]).nullable(),
+    /** DC internal resistance of one cell (Ω). */
+    internalOhms: p.double().nullable(),
+    /** The two DC-method readings it was worked out from (SI), when it was. */
+    internalReadings: p.json<{ lowAmps: number; lowVolts: number; highAmps: number; highVolts: number }>().nullable(),
     entered: p.json<Record<string, string>>().nullable(),
     updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
   },
