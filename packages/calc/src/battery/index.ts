@@ -20,3 +20,12 @@ export {
   labelCapacityPlausibility,
 } from './chemistry';
 export { type ChargeTimeEstimate, chargeTimeEstimate, chargeTimeHours } from './charge-time';
+export {
+  type LabelCapacity,
+  type LabelEnergyBasis,
+  type MeasuredEnergyBasis,
+  LABEL_WARN_FRACTION,
+  labelEnergyWh,
+  measuredVersusLabelEnergy,
+} from './label';
+export { type DcResistanceReadings, internalResistanceDc } from './internal-resistance';
