@@ -14,6 +14,8 @@ export const workspaceSettingsSchema = z.object({
   capacityWarnFraction: z.number().min(0.5, 'At least 0.5').max(1, 'At most 1').default(0.9),
   /** Contact time assumed for touch-temperature figures when a teardown does not set its own (s). */
   defaultContactSeconds: z.number().int().min(1, 'At least 1 s').max(28800, 'At most 8 h').default(60),
+  /** A discharge ends at its cut-off voltage only once the voltage stays at or below it this long (s); shorter sags at a load step are ignored. */
+  cutoffDebounceSeconds: z.number({ error: 'A number of seconds' }).min(0, 'At least 0 s').max(600, 'At most 600 s').default(5),
 });
 export type WorkspaceSettings = z.infer<typeof workspaceSettingsSchema>;
 export const settingsResponse = z.object({ settings: workspaceSettingsSchema });
