@@ -120,6 +120,12 @@ export interface TeardownFigureInput {
    * with where it comes from. When given, the touch margin uses it instead of the estimate.
    */
   measuredSurface?: { temperatureC: number; basis: string };
+  /** The latest discharge bench run: delivered charge and energy at the pack terminals, mean V² of the log. */
+  measuredDischarge?: { ampHours: number; wattHours?: number; meanSquareVolts?: number; durationSeconds?: number; basis: string };
+  /** Cell internal resistance (DC method), with where it comes from. */
+  cellInternalResistance?: { ohms: number; basis: string };
+  /** The latest power-bank bench run: conversion efficiency and the energy delivered at the output. */
+  powerBankRun?: { efficiency: number; deliveredWh: number; outputVolts?: number; basis: string };
 }
 
 /** A derived figure with how it was obtained. */
