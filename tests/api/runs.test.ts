@@ -158,22 +158,25 @@ describe('upload and analysis of each run kind', () => {
     expect(run.analysis.wattHours).toBeCloseTo(3.7, 3);
   });
 
-  it('charge: finds a known CC→CV transition at 3000 s within one sample, and the termination at tx + τ·ln 20 [C]', async () => {
+  it('charge: finds a known CC→CV transition at 3000 s within one sample; without a pack record, the termination at 5 % of the CC current, tx + τ·ln 20 [C]', async () => {
     // CC 1.5 A while V climbs 3.6 → 4.2 V over 3000 s; then 4.2 V with I = 1.5·e^(−(t − 3000)/900).
-    // Termination at 5 % of 1.5 A = 0.075 A: t = 3000 + 900·ln 20 = 5696.2 s.
+    // No rated capacity to take 0.05 C of: termination at 5 % of 1.5 A = 0.075 A, t = 3000 + 900·ln 20 = 5696.2 s.
     const lines = ['t,v,i'];
     for (let s = 0; s <= 7000; s += 10) {
       const cc = s < 3000;
       lines.push(`${s},${(cc ? 3.6 + 0.6 * (s / 3000) ** 1.5 : 4.2).toFixed(5)},${(cc ? 1.5 : 1.5 * Math.exp(-(s - 3000) / 900)).toFixed(6)}`);
     }
     const a = await t.as('engineer');
+    const noPack = await benchUnit(a, 'Charge without a pack record', {});
     const mapping = { kind: 'charge', time: { column: 't', unit: 's' }, voltage: { column: 'v', unit: 'V' }, current: { column: 'i', unit: 'A' } };
-    const { run } = (await upload(a, ids[DRAFT]!, lines.join('\n'), mapping).expect(201)).body;
+    const { run } = (await upload(a, noPack, lines.join('\n'), mapping).expect(201)).body;
     const c = run.analysis.charge;
     expect(Math.abs(c.transitionS - 3000)).toBeLessThanOrEqual(10);
     expect(c.cc.currentA).toBeCloseTo(1.5, 9);
     expect(c.terminated).toBe(true);
     expect(c.terminationCurrentA).toBeCloseTo(0.075, 9);
+    expect(c.termination).toMatchObject({ basis: 'cc-current', ratedAh: null });
+    expect(c.termination.description).toMatch(/no pack record/);
     expect(Math.abs(c.chargeTimeS - (3000 + 900 * Math.log(20)))).toBeLessThanOrEqual(10);
     expect(c.cv.volts).toBeCloseTo(4.2, 6);
     // Charge taken in ≈ 1.5 A × 3000 s + 1.5 A × 900 s × (1 − 1/20) = 5782.5 A·s = 1.606 Ah [C]
@@ -489,11 +492,18 @@ describe('series, reads and changes', () => {
     const latest = (await (await t.as('engineer')).get(`/api/teardowns/${ids[DRAFT]}/runs`).expect(200)).body.runs.find((r: { kind: string }) => r.kind === 'discharge');
     const fed = (await benchRunFigureInputs(em, [teardown])).get(teardown.id)!;
     expect(fed.measuredCapacityAh).toBe(latest.analysis.ampHours);
+    expect(fed.measuredDischarge).toEqual({
+      ampHours: latest.analysis.ampHours,
+      wattHours: latest.analysis.wattHours,
+      meanSquareVolts: latest.analysis.discharge.meanSquareVolts,
+      durationSeconds: latest.analysis.durationS,
+      basis: `discharge run "${latest.label}"`,
+    });
     const thermal = (await (await t.as('engineer')).get(`/api/teardowns/${ids[DRAFT]}/runs`).expect(200)).body.runs.find((r: { kind: string }) => r.kind === 'thermal');
     // The touch margin uses the peak of the latest thermal run, when there is one.
     expect(fed.measuredSurface).toEqual(thermal ? { temperatureC: thermal.analysis.thermal.maxC, basis: `peak of the thermal run "${thermal.label}"` } : undefined);
     const empty = await em.findOneOrFail(TeardownSchema, { id: ids['Breeze Neck 2']! });
-    await em.getConnection().execute("delete from bench_runs where teardown_id = ? and kind = 'discharge'", [empty.id]);
+    await em.getConnection().execute("delete from bench_runs where teardown_id = ? and kind in ('discharge', 'power-bank')", [empty.id]);
     expect((await benchRunFigureInputs(em, [empty])).get(empty.id)).toEqual({});
     // Many teardowns in one call: each gets its own latest runs.
     const both = await benchRunFigureInputs(em, [teardown, empty]);
@@ -618,5 +628,170 @@ describe('the upload limit', () => {
     } finally {
       await small.close();
     }
+  });
+});
+
+/** A new device of an invented maker with a draft teardown and, when given, a pack record. */
+async function benchUnit(a: Agent, name: string, device: Record<string, unknown>, pack?: Record<string, unknown>): Promise<number> {
+  const d = (await a.post('/api/devices', { maker: 'Testbench Works', model: name, category: 'power-bank', ...device }).expect(201)).body.device;
+  const td = (await a.post('/api/teardowns', { deviceId: d.id }).expect(201)).body.teardown;
+  if (pack) await a.put(`/api/teardowns/${td.id}/pack`, { chemistry: 'li-ion', nominalVolts: '3.7 V', ...pack }).expect(200);
+  return td.id as number;
+}
+
+describe('series packs against the label, the debounced cut-off and the termination current', () => {
+  it('compares a 2S pack labelled 10 000 mAh in Wh at the cell voltage: 4.9 Ah measured is about 97 %, not 49 % (REFERENCES §5: rated mAh is quoted at cell voltage) [CP; C]', async () => {
+    const a = await t.as('engineer');
+    const id = await benchUnit(a, '2S label check', { claimCapacityAh: '10000 mAh' }, { capacityAh: '5000 mAh', series: 2, parallel: 1 });
+    // 0.98 A for 5 h = 4.9 Ah at the pack terminals, the voltage falling linearly 8.2 → 6.4 V (mean 7.3 V):
+    // 4.9 Ah × 7.3 V = 35.77 Wh. The label: 10 Ah × 3.7 V (cell nominal) = 37 Wh. 35.77 / 37 = 96.676 % [C].
+    const lines = ['elapsed_s,volts,amps'];
+    for (let k = 0; k <= 18000; k += 10) lines.push(`${k},${(8.2 - (1.8 * k) / 18000).toFixed(6)},0.980`);
+    const { run } = (await upload(a, id, lines.join('\n'), dischargeMapping()).expect(201)).body;
+    expect(run.analysis.ampHours).toBeCloseTo(4.9, 9);
+    expect(run.analysis.wattHours).toBeCloseTo(35.77, 9);
+    expect(run.comparison.label).toMatchObject({
+      claimedAh: 10,
+      claimedWh: expect.closeTo(37, 9),
+      measuredWh: expect.closeTo(35.77, 9),
+      percent: expect.closeTo(96.676, 3),
+      labelBasis: 'label-ah-at-cell-volts',
+      measuredBasis: 'measured-wh',
+      warning: false,
+    });
+    expect(run.comparison.label.basis).toMatch(/10 Ah × 3\.7 V/);
+    expect(run.comparison.label.basis).toMatch(/cell/);
+  });
+
+  it('ignores a 2 s sag below the cut-off at a load step and runs on for 20 min more; a setting of 1 s or a run option of 0 s ends there [CP: a debounced end-of-discharge voltage; C]', async () => {
+    const a = await t.as('engineer');
+    const id = await benchUnit(a, 'Debounce check', {});
+    // 1 Hz for 4800 s at 1 A; V = 3.6 − 0.2·t/4800 − 0.05 Ω·(I − 1 A). A step to 3 A at t = 3600 and 3601 s
+    // pulls 3.45 V down to 3.35 V, under the 3.4 V cut-off for 2 s (back above at 3602 s); the cell
+    // reaches 3.4 V at 1 A only at t = 4800 s, 20 min later.
+    const lines = ['elapsed_s,volts,amps'];
+    for (let k = 0; k <= 4800; k++) {
+      const amps = k === 3600 || k === 3601 ? 3 : 1;
+      lines.push(`${k},${(3.6 - (0.2 * k) / 4800 - 0.05 * (amps - 1)).toFixed(6)},${amps.toFixed(3)}`);
+    }
+    const log = lines.join('\n');
+    const { run } = (await upload(a, id, log, dischargeMapping(), { options: { cutoffVolts: 3.4 } }).expect(201)).body;
+    const d = run.analysis.discharge;
+    expect(d.cutoff).toMatchObject({ reason: 'cutoff-voltage', t: 4800 });
+    expect(d.cutoffDebounce).toEqual({ seconds: 5, source: 'workspace' });
+    expect(d.ignoredDips).toEqual({ count: 1, firstAtS: 3600, longestS: 2 });
+    // (4800 A·s + the step's extra 1 + 2 + 1 A·s) / 3600 = 1.334444 Ah [C]
+    expect(run.analysis.ampHours).toBeCloseTo(4804 / 3600, 9);
+    expect(run.analysis.notes.join(' ')).toMatch(/5 s/);
+
+    // Without the debounce (a run option of 0 s) the sag ends the run, as before: 3600 A·s + 1 A·s.
+    const strict = (await upload(a, id, log, dischargeMapping(), { options: { cutoffVolts: 3.4, cutoffDebounceSeconds: 0 } }).expect(201)).body.run;
+    expect(strict.analysis.discharge.cutoff).toMatchObject({ t: 3600 });
+    expect(strict.analysis.discharge.cutoffDebounce).toEqual({ seconds: 0, source: 'run' });
+    expect(strict.analysis.ampHours).toBeCloseTo(3601 / 3600, 9);
+
+    // The workspace setting: 1 s makes the 2 s sag count.
+    const admin = await t.as('admin');
+    expect((await admin.get('/api/settings').expect(200)).body.settings.cutoffDebounceSeconds).toBe(5);
+    await admin.patch('/api/settings', { cutoffDebounceSeconds: -1 }).expect(400);
+    await admin.patch('/api/settings', { cutoffDebounceSeconds: 1 }).expect(200);
+    try {
+      const short = (await upload(a, id, log, dischargeMapping(), { options: { cutoffVolts: 3.4 } }).expect(201)).body.run;
+      expect(short.analysis.discharge.cutoff).toMatchObject({ t: 3600 });
+      expect(short.analysis.discharge.cutoffDebounce).toEqual({ seconds: 1, source: 'workspace' });
+    } finally {
+      await admin.patch('/api/settings', { cutoffDebounceSeconds: 5 }).expect(200);
+    }
+    const bad = await upload(a, id, log, dischargeMapping(), { options: { cutoffVolts: 3.4, cutoffDebounceSeconds: -2 } }).expect(400);
+    expect(bad.body.error.fields).toHaveProperty('options.cutoffDebounceSeconds');
+  });
+
+  it('terminates a charge at 0.05 C of the rated capacity: 0.150 A for a 3.0 Ah cell, not 5 % of the 1.5 A CC current (REFERENCES §4) [S; C]', async () => {
+    const a = await t.as('engineer');
+    const id = await benchUnit(a, 'Termination check', {}, { capacityAh: '3.0 Ah', series: 1, parallel: 1 });
+    // CC 1.5 A while V climbs 3.6 → 4.2 V over 3000 s; then 4.2 V with I = 1.5·e^(−(t − 3000)/900).
+    // 0.150 A is reached at t = 3000 + 900·ln 10 = 5072.3 s (5 % of the CC current, 0.075 A, only at 5696.2 s) [C].
+    const lines = ['t,v,i'];
+    for (let s = 0; s <= 7000; s += 10) {
+      const cc = s < 3000;
+      lines.push(`${s},${(cc ? 3.6 + 0.6 * (s / 3000) ** 1.5 : 4.2).toFixed(5)},${(cc ? 1.5 : 1.5 * Math.exp(-(s - 3000) / 900)).toFixed(6)}`);
+    }
+    const mapping = { kind: 'charge', time: { column: 't', unit: 's' }, voltage: { column: 'v', unit: 'V' }, current: { column: 'i', unit: 'A' } };
+    const { run } = (await upload(a, id, lines.join('\n'), mapping).expect(201)).body;
+    const c = run.analysis.charge;
+    expect(c.terminationFraction).toBe(0.05);
+    expect(c.terminationCurrentA).toBeCloseTo(0.15, 9);
+    expect(c.termination).toMatchObject({ basis: 'rated-capacity', ratedAh: 3 });
+    expect(Math.abs(c.chargeTimeS - (3000 + 900 * Math.log(10)))).toBeLessThanOrEqual(10);
+    expect(run.analysis.notes.join(' ')).toMatch(/0\.05 C of the rated 3 Ah/);
+    // A run option of 0.1 C: 0.300 A, reached at 3000 + 900·ln 5 = 4448.5 s [C].
+    const tenth = (await upload(a, id, lines.join('\n'), mapping, { options: { terminationFraction: 0.1 } }).expect(201)).body.run;
+    expect(tenth.analysis.charge.terminationCurrentA).toBeCloseTo(0.3, 9);
+    expect(Math.abs(tenth.analysis.charge.chargeTimeS - (3000 + 900 * Math.log(5)))).toBeLessThanOrEqual(10);
+  });
+});
+
+describe('cell internal resistance from a current pulse, and what the bench runs give the figures', () => {
+  it('finds the step 0.6 A / 3.912 V → 3.0 A / 3.792 V in a discharge log: 50.0 mΩ (REFERENCES §12, DC method) [M: IEC 61960-3; C]', async () => {
+    const a = await t.as('engineer');
+    const id = await benchUnit(a, 'Pulse check', { claimCapacityAh: '3000 mAh' }, { capacityAh: '3.0 Ah', series: 1, parallel: 1 });
+    // 1 Hz for 1200 s at 0.6 A (0.2 C of 3.0 Ah), one sample at 3.0 A (1.0 C) at t = 601 s; U = 3.942 V − I × 0.05 Ω.
+    const lines = ['elapsed_s,volts,amps'];
+    for (let k = 0; k <= 1200; k++) {
+      const amps = k === 601 ? 3 : 0.6;
+      lines.push(`${k},${(3.942 - 0.05 * amps).toFixed(4)},${amps.toFixed(3)}`);
+    }
+    const { run } = (await upload(a, id, lines.join('\n'), dischargeMapping(), { label: 'Pulse at half charge' }).expect(201)).body;
+    const r = run.analysis.discharge.internalResistance;
+    expect(r.ohms).toBeCloseTo(0.05, 9);
+    expect(r).toMatchObject({ lowAmps: 0.6, lowVolts: 3.912, highAmps: 3, highVolts: 3.792, atSeconds: 601, readAtSeconds: 601 });
+    expect(run.analysis.notes.join(' ')).toMatch(/50 mΩ at the pack terminals/);
+    // Ah = (1200 × 0.6 + 2 × 1.2) / 3600 = 0.200667 Ah; Wh = (1200 × 2.3472 + 2 × 4.5144) / 3600 = 0.784908 Wh;
+    // mean V² = (1200 × 3.912² − (3.912² − 3.792²)) / 1200 = 15.302974 V² [C].
+    expect(run.analysis.ampHours).toBeCloseTo(722.4 / 3600, 9);
+    expect(run.analysis.wattHours).toBeCloseTo(2825.6688 / 3600, 9);
+    expect(run.analysis.discharge.meanSquareVolts).toBeCloseTo(15.3029736, 6);
+
+    // The figures get the discharge, the resistance per cell and (once there is one) the power-bank run.
+    const em = t.orm.em.fork();
+    const teardown = await em.findOneOrFail(TeardownSchema, { id });
+    let fed = (await benchRunFigureInputs(em, [teardown])).get(id)!;
+    expect(fed.measuredDischarge).toMatchObject({ ampHours: expect.closeTo(722.4 / 3600, 9), durationSeconds: 1200, basis: 'discharge run "Pulse at half charge"' });
+    expect(fed.cellInternalResistance).toEqual({ ohms: expect.closeTo(0.05, 9), basis: expect.stringMatching(/50 mΩ at the pack terminals .*0\.6 A → 3 A in the discharge run "Pulse at half charge" \(one cell/) });
+    expect(fed.powerBankRun).toBeUndefined();
+
+    // A later discharge without a pulse: the resistance still comes from the run that had one.
+    await upload(a, id, constantDischarge(), dischargeMapping(), { label: 'Plain discharge' }).expect(201);
+    // A power-bank run: 5.0 V × 2.0 A for 11 322 s = 31.45 Wh out of 37 Wh of cells → η 0.85 (REFERENCES §5) [CP; C].
+    const bank = ['t,v,i'];
+    for (let s = 0; s <= 11322; s += 6) bank.push(`${s},5.000,2.000`);
+    const bankMapping = { kind: 'power-bank', time: { column: 't', unit: 's' }, voltage: { column: 'v', unit: 'V' }, current: { column: 'i', unit: 'A' } };
+    await upload(a, id, bank.join('\n'), bankMapping, { label: 'USB output', options: { cellEnergyWh: 37 } }).expect(201);
+    // Two cells in series: the pack-terminal 50 mΩ is 25 mΩ a cell.
+    await a.put(`/api/teardowns/${id}/pack`, { chemistry: 'li-ion', nominalVolts: '3.7 V', capacityAh: '3.0 Ah', series: 2, parallel: 1 }).expect(200);
+    fed = (await benchRunFigureInputs(em, [teardown])).get(id)!;
+    expect(fed.measuredDischarge).toMatchObject({ ampHours: expect.closeTo(1, 9), wattHours: expect.closeTo(3.7, 9), basis: 'discharge run "Plain discharge"' });
+    expect(fed.cellInternalResistance!.ohms).toBeCloseTo(0.025, 9);
+    expect(fed.cellInternalResistance!.basis).toMatch(/× 1 in parallel ÷ 2 in series for one cell/);
+    expect(fed.powerBankRun).toEqual({
+      efficiency: expect.closeTo(0.85, 9),
+      deliveredWh: expect.closeTo(31.45, 9),
+      outputVolts: expect.closeTo(5, 9),
+      basis: expect.stringMatching(/^power-bank run "USB output" \(cell energy from the value given with the run: 37 Wh\)$/),
+    });
+    // Still a fixed number of queries with other teardowns in the same call: each keeps its own.
+    const other = await em.findOneOrFail(TeardownSchema, { id: ids[DRAFT]! });
+    const both = await benchRunFigureInputs(em, [teardown, other]);
+    expect(both.get(id)).toEqual(fed);
+    expect(both.get(other.id)!.cellInternalResistance).toBeUndefined();
+  });
+
+  it('puts a pulse in a demo discharge run', async () => {
+    const a = await t.as('engineer');
+    const runs = (await a.get('/api/runs?kind=discharge').expect(200)).body.runs as { label: string; analysis: { discharge: { internalResistance: { ohms: number } | null } } }[];
+    const pulsed = runs.filter((r) => r.analysis.discharge.internalResistance && /demo/.test(r.label));
+    expect(pulsed.length).toBeGreaterThan(0);
+    // The demo model's cells have 60 mΩ; in parallel the pack terminals read 60 mΩ ÷ the count (plus noise).
+    for (const r of pulsed) expect(r.analysis.discharge.internalResistance!.ohms).toBeGreaterThan(0.015);
   });
 });

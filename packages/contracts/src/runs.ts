@@ -103,8 +103,10 @@ export const runOptionsSchema = z.object({
   cutoffVolts: z.number().positive('Must be above 0 V').max(100, 'At most 100 V').nullable().optional(),
   /** Charge: charge (CV) voltage (V); estimated from the log when absent. */
   cvVolts: z.number().positive('Must be above 0 V').max(100, 'At most 100 V').nullable().optional(),
-  /** Charge: termination current as a fraction of the CC current; default 0.05. */
-  terminationFraction: z.number().gt(0, 'Must be above 0').max(0.5, 'At most 0.5').nullable().optional(),
+  /** Discharge: how long the voltage must stay at or below the cut-off to end the run (s); default the workspace setting. */
+  cutoffDebounceSeconds: z.number().min(0, 'At least 0 s').max(600, 'At most 600 s').nullable().optional(),
+  /** Charge: termination current in C, a fraction of the pack's rated capacity (of the CC current without a pack record); default 0.05 C. */
+  terminationFraction: z.number().gt(0, 'Must be above 0 C').max(0.5, 'At most 0.5 C').nullable().optional(),
   /** Thermal: the surface material touched. */
   material: SURFACE_MATERIAL.schema.nullable().optional(),
   /** Thermal: contact time for the burn threshold (s); default the teardown's, else the workspace's. */
@@ -145,6 +147,27 @@ export const runAnalysisSchema = z.object({
       averagePowerW: z.number(),
       /** Time up to which the totals run, s. */
       analysedToS: z.number(),
+      /** How long the voltage had to stay at or below the cut-off, and whether the run or the workspace set it. Absent on runs analysed before it existed. */
+      cutoffDebounce: z.object({ seconds: z.number(), source: z.enum(['run', 'workspace']) }).optional(),
+      /** Sags below the cut-off shorter than the debounce, which did not end the run. */
+      ignoredDips: z.object({ count: z.number().int(), firstAtS: z.number(), longestS: z.number() }).nullable().optional(),
+      /** ∫V² dt / duration over the analysed part, V²: a fixed resistance R takes mean(V²)/R on average. */
+      meanSquareVolts: z.number().optional(),
+      /** DC internal resistance from the first current pulse of the log (at the pack terminals): R = (U₁ − U₂) / (I₂ − I₁). */
+      internalResistance: z
+        .object({
+          ohms: z.number(),
+          lowAmps: z.number(),
+          lowVolts: z.number(),
+          highAmps: z.number(),
+          highVolts: z.number(),
+          /** First sample at the high current, s. */
+          atSeconds: z.number(),
+          /** Sample U₂ is read at, s. */
+          readAtSeconds: z.number(),
+        })
+        .nullable()
+        .optional(),
     })
     .optional(),
   charge: z
@@ -153,7 +176,12 @@ export const runAnalysisSchema = z.object({
       cv: z.object({ startS: z.number(), endS: z.number(), volts: z.number() }).nullable(),
       transitionS: z.number().nullable(),
       terminationCurrentA: z.number(),
+      /** Termination in C of the rated capacity (or, without one, the fraction of the CC current). */
       terminationFraction: z.number(),
+      /** What the fraction multiplied, in words and numbers. Absent on runs analysed before it existed. */
+      termination: z
+        .object({ basis: z.enum(['rated-capacity', 'cc-current']), ratedAh: z.number().nullable(), description: z.string() })
+        .optional(),
       terminated: z.boolean(),
       chargeTimeS: z.number(),
       plateauVolts: z.number(),
@@ -196,9 +224,26 @@ export type RunAnalysis = z.infer<typeof runAnalysisSchema>;
 /** Measured against what the label (and the cell ratings) claim; computed at read time with the current settings. */
 export const runComparisonSchema = z.object({
   warnBelowPercent: z.number(),
-  label: z.object({ claimedAh: z.number(), measuredAh: z.number(), percent: z.number(), warning: z.boolean() }).nullable(),
+  /**
+   * Measured against the label in Wh: the label's Wh, else its Ah × the cell nominal voltage (labels
+   * quote mAh at the cell voltage whatever the series count); the measured Wh at the pack terminals.
+   */
+  label: z
+    .object({
+      claimedAh: z.number().nullable(),
+      measuredAh: z.number(),
+      claimedWh: z.number(),
+      measuredWh: z.number(),
+      labelBasis: z.enum(['label-wh', 'label-ah-at-cell-volts']),
+      measuredBasis: z.enum(['measured-wh', 'measured-ah-at-pack-volts']),
+      /** The comparison's basis in words. */
+      basis: z.string(),
+      percent: z.number(),
+      warning: z.boolean(),
+    })
+    .nullable(),
   rated: z.object({ ratedAh: z.number(), measuredAh: z.number(), percent: z.number(), warning: z.boolean(), basis: z.string() }).nullable(),
-  labelEnergy: z.object({ claimedWh: z.number(), measuredWh: z.number(), percent: z.number(), warning: z.boolean() }).nullable(),
+  labelEnergy: z.object({ claimedWh: z.number(), measuredWh: z.number(), percent: z.number(), warning: z.boolean(), basis: z.string() }).nullable(),
 });
 export type RunComparison = z.infer<typeof runComparisonSchema>;
 

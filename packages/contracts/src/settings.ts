@@ -24,6 +24,8 @@ export const workspaceSettingsSchema = z.object({
     .default({ 'pocket-heater': 600, headlamp: 600, toothbrush: 600 }),
   /** Share of the rated energy usable to cut-off, for runtimes when no discharge run measured it (0.5..1). */
   usableFraction: z.number().min(0.5, 'At least 0.5').max(1, 'At most 1').default(0.9),
+  /** A discharge ends at its cut-off voltage only once the voltage stays at or below it this long (s); shorter sags at a load step are ignored. */
+  cutoffDebounceSeconds: z.number({ error: 'A number of seconds' }).min(0, 'At least 0 s').max(600, 'At most 600 s').default(5),
 });
 export type WorkspaceSettings = z.infer<typeof workspaceSettingsSchema>;
 export const settingsResponse = z.object({ settings: workspaceSettingsSchema });

@@ -97,10 +97,19 @@ const seedOf = (key: string, salt: number) => {
   return h;
 };
 
+/**
+ * Devices whose demo discharge includes a DC-resistance pulse (REFERENCES §12: 0.2 It, then 1.0 It
+ * for 1 s), at this share of the run; the logger records every 0.5 s around it.
+ */
+const RESISTANCE_PULSE: Record<string, number> = { 'halvix-duo': 0.5, 'pellam-10': 0.4 };
+
 function dischargeLog(d: DemoDevice): { log: DemoLog; options: RunOptions; label: string } {
   const c = d.design.cells;
   const ratedAh = c.ratedAh * c.parallel;
   const currentA = 0.2 * ratedAh; // 0.2 C, the rated-capacity discharge of IEC 61960-3 [M]
+  const share = RESISTANCE_PULSE[d.key];
+  // The run lasts about measured Ah ÷ current hours; the pulse starts on a whole 20 s sample.
+  const pulseAtS = share === undefined ? undefined : Math.round((share * ((c.measuredAh * c.parallel) / currentA) * 3600) / 20) * 20;
   const { series } = simulateDischarge({
     capacityAh: c.measuredAh * c.parallel,
     currentA,
@@ -108,11 +117,12 @@ function dischargeLog(d: DemoDevice): { log: DemoLog; options: RunOptions; label
     cutoffVolts: 3.0,
     stepS: 20,
     noise: { seed: seedOf(d.key, 1), voltsSd: 0.002, ampsSd: currentA * 0.002 },
+    ...(pulseAtS === undefined ? {} : { pulse: { atS: pulseAtS, currentA: ratedAh, durationS: 1 } }),
   });
   return {
     log: electricalLog(d.key, 'discharge', DISCHARGE_LAYOUT[d.key] ?? 'csv-s', series),
     options: { cutoffVolts: 3.0 },
-    label: `Discharge at 0.2 C (${currentA.toFixed(2)} A) to 3.0 V — ${DEMO}`,
+    label: `Discharge at 0.2 C (${currentA.toFixed(2)} A) to 3.0 V${pulseAtS === undefined ? '' : ', with a 1 C pulse for 1 s'} — ${DEMO}`,
   };
 }
 
@@ -125,8 +135,9 @@ function chargeLog(d: DemoDevice): { log: DemoLog; options: RunOptions; label: s
     capacityAh: c.measuredAh * c.parallel,
     ccCurrentA: charger.chargeA,
     cvVolts: 4.2,
-    // The charger stops a little under C/10 so the logged (noisy) current crosses the 0.1 termination.
-    terminationA: 0.095 * charger.chargeA,
+    // The charger stops a little under C/20 of the rated capacity so the logged (noisy) current
+    // crosses the analysis' default termination of 0.05 C.
+    terminationA: 0.045 * c.ratedAh * c.parallel,
     internalResistanceOhm: 0.08 / c.parallel,
     stepS: 15,
     initialSoc: 0.02,
@@ -134,7 +145,7 @@ function chargeLog(d: DemoDevice): { log: DemoLog; options: RunOptions; label: s
   });
   return {
     log: electricalLog(d.key, 'charge', layout, series),
-    options: { cvVolts: 4.2, terminationFraction: 0.1 },
+    options: { cvVolts: 4.2 },
     label: `CC-CV charge at ${charger.chargeA} A from empty — ${DEMO}`,
   };
 }

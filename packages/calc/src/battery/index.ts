@@ -31,3 +31,12 @@ export {
 } from './shipping';
 export { LI_ION_SELF_DISCHARGE_PER_MONTH, HOURS_PER_MONTH, standbyMonths } from './standby';
 export { packResistanceOhms, loadedTerminalVolts, resistiveLoadOnSource } from './loaded';
+export {
+  type LabelCapacity,
+  type LabelEnergyBasis,
+  type MeasuredEnergyBasis,
+  LABEL_WARN_FRACTION,
+  labelEnergyWh,
+  measuredVersusLabelEnergy,
+} from './label';
+export { type DcResistanceReadings, internalResistanceDc } from './internal-resistance';

@@ -1,22 +1,27 @@
 // Measured capacity against the label, compared in Wh: labels quote mAh at the cell's nominal
 // voltage whatever the series count (REFERENCES §5 [CP]), so the label's Ah is turned into Wh at
 // the cell voltage and the measured charge at the pack voltage.
+import { labelEnergyWh } from '../battery/index';
 import { figure, inp, num } from './build';
 import type { FigureContext } from './context';
 
-/** The label's energy and how it was read; the cell rating when the label is silent. */
+/** The label's energy and how it was read (battery/label.ts); the cell rating when the label is silent. */
 export function labelEnergy(ctx: FigureContext): { wh: number; basis: string; fromLabel: boolean } | undefined {
   const { claims, pack } = ctx;
-  if (claims.capacityWh !== undefined) return { wh: claims.capacityWh, basis: 'energy claimed on the device label', fromLabel: true };
-  if (claims.capacityAh !== undefined && pack) {
+  if (claims.capacityWh !== undefined && !pack) return { wh: claims.capacityWh, basis: 'energy claimed on the device label', fromLabel: true };
+  if (!pack) return undefined;
+  const onLabel = labelEnergyWh(claims, pack.p.cellNominalVolts);
+  if (onLabel) {
     return {
-      wh: claims.capacityAh * pack.p.cellNominalVolts,
-      basis: `capacity claimed on the device label × the cell nominal voltage ${num(pack.p.cellNominalVolts)} V (labels quote mAh at the cell voltage)`,
+      wh: onLabel.wh,
+      basis:
+        onLabel.basis === 'label-wh'
+          ? 'energy claimed on the device label'
+          : `capacity claimed on the device label × the cell nominal voltage ${num(pack.p.cellNominalVolts)} V (labels quote mAh at the cell voltage)`,
       fromLabel: true,
     };
   }
-  if (pack) return { wh: pack.energyWh, basis: 'rated energy of the cells', fromLabel: false };
-  return undefined;
+  return { wh: pack.energyWh, basis: 'rated energy of the cells', fromLabel: false };
 }
 
 export interface CapacityOutcome {

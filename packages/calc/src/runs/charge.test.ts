@@ -107,6 +107,30 @@ describe('analyseCharge', () => {
     }
   });
 
+  it('terminates at 0.05 C of the rated capacity: 0.150 A for a 3.0 Ah cell, not 5 % of the CC current (REFERENCES §4) [S; C]', () => {
+    // CC 1.5 A, then I = 1.5·e^(−(t − 3000)/900): 0.150 A at 3000 + 900·ln 10 = 5072.3 s, where 5 % of
+    // the CC current (0.075 A) would be reached only at 3000 + 900·ln 20 = 5696.2 s [C].
+    const s = ccCv(3000, 900);
+    const r = analyseCharge(s, { cvVolts: 4.2, ratedCapacityAh: 3 });
+    expect(r.terminationCurrentA).toBeCloseTo(0.15, 12);
+    expect(r.terminationBasis).toBe('rated-capacity');
+    expect(r.terminated).toBe(true);
+    expect(Math.abs(r.chargeTimeS - (3000 + 900 * Math.log(10)))).toBeLessThanOrEqual(s.stepS);
+    // C/10 of 3.0 Ah = 0.300 A (REFERENCES §4) [S].
+    expect(analyseCharge(s, { cvVolts: 4.2, ratedCapacityAh: 3, terminationFraction: 0.1 }).terminationCurrentA).toBeCloseTo(0.3, 12);
+    // Without a rating, the fraction is of the CC current, as before.
+    const cc = analyseCharge(s, { cvVolts: 4.2 });
+    expect(cc.terminationBasis).toBe('cc-current');
+    expect(cc.terminationCurrentA).toBeCloseTo(0.075, 12);
+    expect(Math.abs(cc.chargeTimeS - (3000 + 900 * Math.log(20)))).toBeLessThanOrEqual(s.stepS);
+  });
+
+  it('refuses a termination current at or above the constant current, and a bad rating', () => {
+    // 0.05 C of 40 Ah is 2 A, above the 1.5 A the charger gives.
+    expect(() => analyseCharge(ccCv(3000, 900), { cvVolts: 4.2, ratedCapacityAh: 40 })).toThrow(/terminationFraction: 0\.05 C of the rated 40 Ah is 2 A, not below the constant current of 1\.5 A/);
+    expect(() => analyseCharge(ccCv(3000, 900), { ratedCapacityAh: 0 })).toThrow(/ratedCapacityAh must be greater than zero/);
+  });
+
   it('reports no CV phase when the voltage never reaches the plateau, and an unterminated charge', () => {
     const s = { t: [0, 60, 120, 180], v: [3.7, 3.8, 3.9, 4.0], i: [1, 1, 1, 1] };
     const r = analyseCharge(s, { cvVolts: 4.2 });

@@ -11,8 +11,14 @@ import { at, checkSeries, optionalFinite, type Column, type RunSeries } from './
 export interface ChargeRunOptions {
   /** Charge (CV) voltage, V. Default: estimated from the plateau at the top of the log. */
   cvVolts?: number | undefined;
-  /** Charge ends when the current falls to this fraction of the CC current; default 0.05 [S: common termination 0.05 C; cell-specific]. */
+  /**
+   * Termination current in C: the charge ends when the current falls to terminationFraction ×
+   * ratedCapacityAh (A); default 0.05 C [S: CC-CV taper ends at about C/10–C/30, 0.05 C common;
+   * cell-specific]. Without a rated capacity it is taken of the CC current instead.
+   */
   terminationFraction?: number | undefined;
+  /** Rated capacity of the pack being charged (cells in parallel × cell rating), Ah: the base of the termination current. */
+  ratedCapacityAh?: number | undefined;
   /** How close to the CV voltage counts as on the plateau, V; default 0.01 V [CP]. */
   voltageToleranceV?: number | undefined;
   /** Smallest current fall, as a fraction of the CC current, that counts as the taper starting; default 0.005 [CP]. */
@@ -25,6 +31,8 @@ export interface ChargeRunAnalysis {
   /** First sample of the CV phase: on the plateau with the current starting to fall; null when there is no CV phase. */
   transitionIndex: number | null;
   terminationCurrentA: number;
+  /** What the termination fraction was taken of: the rated capacity (in C), or the CC current when no rating was given. */
+  terminationBasis: TerminationBasis;
   /** True when the current reached the termination current within the log. */
   terminated: boolean;
   chargeTimeS: number;
@@ -34,6 +42,9 @@ export interface ChargeRunAnalysis {
   plateauVolts: number;
   endIndex: number;
 }
+
+/** What a termination fraction multiplies. */
+export type TerminationBasis = 'rated-capacity' | 'cc-current';
 
 export const DEFAULT_TERMINATION_FRACTION = 0.05;
 export const DEFAULT_CV_TOLERANCE_V = 0.01;
@@ -60,7 +71,8 @@ function segment(column: Column, from: number, to: number): Float64Array {
  * first sample at the CV plateau (within voltageToleranceV) from which the
  * current falls below the CC level (by more than the noise) and stays there;
  * the charge ends at the first later sample at or below the termination
- * current (terminationFraction × CC current), else at the end of the log.
+ * current (terminationFraction × the rated capacity, in C; × the CC current
+ * when no rating is given), else at the end of the log.
  */
 export function analyseCharge(series: RunSeries, opts: ChargeRunOptions = {}): ChargeRunAnalysis {
   const n = checkSeries(series, ['v', 'i'], 'a charge analysis');
@@ -73,6 +85,8 @@ export function analyseCharge(series: RunSeries, opts: ChargeRunOptions = {}): C
     optionalFinite(opts.terminationFraction, 'terminationFraction') ?? DEFAULT_TERMINATION_FRACTION,
     'terminationFraction',
   );
+  const ratedAh = optionalFinite(opts.ratedCapacityAh, 'ratedCapacityAh');
+  if (ratedAh !== undefined) requirePositive(ratedAh, 'ratedCapacityAh');
   const tolV = requirePositive(optionalFinite(opts.voltageToleranceV, 'voltageToleranceV') ?? DEFAULT_CV_TOLERANCE_V, 'voltageToleranceV');
   const tolI = requireFraction(
     optionalFinite(opts.currentToleranceFraction, 'currentToleranceFraction') ?? DEFAULT_CURRENT_TOLERANCE_FRACTION,
@@ -129,7 +143,14 @@ export function analyseCharge(series: RunSeries, opts: ChargeRunOptions = {}): C
     if (runStart !== -1) transitionIndex = Math.max(onPlateau, runStart - 1);
   }
 
-  const terminationCurrentA = terminationFraction * ccCurrent;
+  const terminationBasis: TerminationBasis = ratedAh !== undefined ? 'rated-capacity' : 'cc-current';
+  // I = n × C_rated (REFERENCES §4): 0.05 C of 3.0 Ah is 0.150 A.
+  const terminationCurrentA = terminationFraction * (ratedAh ?? ccCurrent);
+  if (terminationBasis === 'rated-capacity' && !(terminationCurrentA < ccCurrent)) {
+    throw new RangeError(
+      `terminationFraction: ${terminationFraction} C of the rated ${ratedAh} Ah is ${Number(terminationCurrentA.toPrecision(3))} A, not below the constant current of ${Number(ccCurrent.toPrecision(3))} A; lower the termination or check the rated capacity.`,
+    );
+  }
   const searchFrom = transitionIndex ?? 0;
   let endIndex = n - 1;
   let terminated = false;
@@ -154,6 +175,7 @@ export function analyseCharge(series: RunSeries, opts: ChargeRunOptions = {}): C
     cv,
     transitionIndex,
     terminationCurrentA,
+    terminationBasis,
     terminated,
     chargeTimeS: at(t, endIndex) - t0,
     ampHours: totals.ampHours as number,

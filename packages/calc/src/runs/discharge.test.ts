@@ -42,6 +42,75 @@ describe('detectCutoff', () => {
   });
 });
 
+/**
+ * A 1 Hz log at 1 A whose voltage falls 3.6 → 3.4 V over 4800 s, with a load step to 3 A at
+ * t = 3600 and 3601 s that pulls it 0.1 V lower (R = 0.05 Ω): under a 3.4 V cut-off for 2 s, back
+ * above at 3602 s; the cell itself reaches 3.4 V only at 4800 s, 20 min later [C].
+ */
+function sagAtLoadStep(opts: { stepAmps?: number; stopAt?: number } = {}) {
+  const t: number[] = [];
+  const v: number[] = [];
+  const i: number[] = [];
+  for (let k = 0; k <= 4800; k++) {
+    const amps = k === opts.stopAt ? 0 : k === 3600 || k === 3601 ? (opts.stepAmps ?? 3) : 1;
+    t.push(k);
+    i.push(amps);
+    v.push(3.6 - (0.2 * k) / 4800 - 0.05 * (amps - 1));
+  }
+  return { t, v, i };
+}
+
+describe('detectCutoff with a debounce', () => {
+  it('ignores a 2 s sag below the cut-off at a load step, by default (5 s) [CP: a debounced end-of-discharge voltage; C]', () => {
+    const s = sagAtLoadStep();
+    // The run ends where the cell reaches 3.4 V at 1 A, 20 min after the sag, not at the sag.
+    expect(detectCutoff(s, { cutoffVolts: 3.4 })).toEqual({ index: 4800, t: 4800, volts: expect.closeTo(3.4, 12), reason: 'cutoff-voltage' });
+    const r = analyseDischarge(s, { cutoffVolts: 3.4 });
+    expect(r.cutoffDebounceSeconds).toBe(5);
+    expect(r.ignoredDips).toEqual({ count: 1, firstAtS: 3600, longestS: 2 });
+    // (4800 A·s + the step's extra 1 + 2 + 1 A·s) / 3600 [C]
+    expect(r.ampHours).toBeCloseTo(4804 / 3600, 12);
+  });
+
+  it('ends the run at the sag when it lasts the debounce, or with a debounce of 0 s [C]', () => {
+    const s = sagAtLoadStep();
+    expect(detectCutoff(s, { cutoffVolts: 3.4, cutoffDebounceSeconds: 2 })).toMatchObject({ index: 3600, reason: 'cutoff-voltage' });
+    expect(detectCutoff(s, { cutoffVolts: 3.4, cutoffDebounceSeconds: 0 })).toMatchObject({ index: 3600 });
+    expect(detectCutoff(s, { cutoffVolts: 3.4, cutoffDebounceSeconds: 2.5 })).toMatchObject({ index: 4800 });
+    const r = analyseDischarge(s, { cutoffVolts: 3.4, cutoffDebounceSeconds: 0 });
+    expect(r.ignoredDips).toBeNull();
+    expect(r.ampHours).toBeCloseTo(3601 / 3600, 12);
+  });
+
+  it('ends the run at a short dip when the load stops during it or the log ends in it', () => {
+    // The load cuts out at 3602 s, as an electronic load does at its own cut-off: the sag was the end.
+    expect(detectCutoff(sagAtLoadStep({ stopAt: 3602 }), { cutoffVolts: 3.4 })).toMatchObject({ index: 3600, reason: 'cutoff-voltage' });
+    // A log that stops 1 s into a dip ends there.
+    const short = { t: [0, 1, 2, 3], v: [3.6, 3.5, 3.5, 3.3], i: [1, 1, 1, 1] };
+    expect(detectCutoff(short, { cutoffVolts: 3.4 })).toMatchObject({ index: 3, reason: 'cutoff-voltage' });
+    // A dip that recovers and never comes back: the cut-off is not reached, and the dip is reported.
+    const recovered = { t: [0, 1, 2, 3, 4], v: [3.6, 3.3, 3.5, 3.5, 3.5], i: [1, 3, 1, 1, 1] };
+    expect(detectCutoff(recovered, { cutoffVolts: 3.4 })).toBeNull();
+    expect(analyseDischarge(recovered, { cutoffVolts: 3.4 }).ignoredDips).toEqual({ count: 1, firstAtS: 1, longestS: 1 });
+  });
+
+  it('counts every dip shorter than the debounce, keeping the first and the longest [C]', () => {
+    const s = { t: [0, 1, 2, 3, 4, 5, 6, 7, 8], v: [3.6, 3.3, 3.5, 3.3, 3.3, 3.3, 3.5, 3.5, 3.5], i: [1, 3, 1, 3, 3, 3, 1, 1, 1] };
+    const r = analyseDischarge(s, { cutoffVolts: 3.4 });
+    expect(r.cutoff).toBeNull();
+    expect(r.ignoredDips).toEqual({ count: 2, firstAtS: 1, longestS: 3 });
+  });
+
+  it('cannot resolve a sag shorter than the logging interval: one low sample in a 20 s log ends the run [C]', () => {
+    const s = { t: [0, 20, 40, 60], v: [3.6, 3.3, 3.5, 3.5], i: [1, 3, 1, 1] };
+    expect(detectCutoff(s, { cutoffVolts: 3.4 })).toMatchObject({ index: 1, t: 20 });
+  });
+
+  it('rejects a negative debounce', () => {
+    expect(() => detectCutoff(exampleA, { cutoffVolts: 3.75, cutoffDebounceSeconds: -1 })).toThrow(/cutoffDebounceSeconds must not be negative/);
+  });
+});
+
 describe('analyseDischarge', () => {
   it('integrates to the cut-off only [C]', () => {
     const r = analyseDischarge(exampleA, { cutoffVolts: 3.75 });
@@ -68,6 +137,24 @@ describe('analyseDischarge', () => {
     expect(r.timeAverageVolts).toBeCloseTo(3.8, 9);
     expect(r.minVolts).toBe(3.5);
     expect(r.endVolts).toBe(3.5);
+    // mean(V²) by trapezoids: V² = 16.81, 15.21, 14.44, 13.69, 12.25; (16.01 + 14.825 + 14.065 + 12.97) / 4
+    // = 14.4675 V², not (mean V)² = 3.8² = 14.44 V² (REFERENCES §12) [C].
+    expect(r.meanSquareVolts).toBeCloseTo(14.4675, 12);
+    // Into a 3.0 Ω element: mean(V²)/R = 4.8225 W on average, where (mean V)²/R would say 4.8133 W [C].
+    expect(r.meanSquareVolts / 3).toBeCloseTo(4.8225, 12);
+    expect(r.internalResistance).toBeNull();
+  });
+
+  it('reports the DC resistance of a current pulse in the log: 0.6 A at 3.912 V → 3.0 A at 3.792 V = 50.0 mΩ (REFERENCES §12) [M: IEC 61960-3; C]', () => {
+    // 10 s at 0.6 A, 1 s at 3.0 A, back to 0.6 A; U = 3.942 V − I × 0.05 Ω.
+    const t = Array.from({ length: 21 }, (_, k) => k);
+    const i = t.map((s) => (s === 10 ? 3.0 : 0.6));
+    const v = i.map((a) => 3.942 - 0.05 * a);
+    const r = analyseDischarge({ t, v, i });
+    expect(r.internalResistance).toMatchObject({ lowAmps: 0.6, highAmps: 3.0, atSeconds: 10, readAtSeconds: 10 });
+    expect(r.internalResistance!.ohms).toBeCloseTo(0.05, 12);
+    expect(r.internalResistance!.lowVolts).toBeCloseTo(3.912, 12);
+    expect(r.internalResistance!.highVolts).toBeCloseTo(3.792, 12);
   });
 
   it('recovers the energy of the model cell: C × mean OCV = 3 Ah × 3.7725 V = 11.3175 Wh at R = 0 [C]', () => {

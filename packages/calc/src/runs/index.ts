@@ -6,6 +6,8 @@ export {
   analyseDischarge,
   analysePowerBank,
   capacityVersusLabel,
+  DEFAULT_CUTOFF_DEBOUNCE_S,
+  type IgnoredDips,
   type CutoffRunOptions,
   type CutoffPoint,
   type CutoffReason,
@@ -13,8 +15,17 @@ export {
   type PowerBankRunAnalysis,
 } from './discharge';
 export {
+  detectCurrentPulse,
+  DEFAULT_PULSE_STEP_RATIO,
+  DEFAULT_PULSE_READ_AFTER_S,
+  DEFAULT_PULSE_LEVEL_TOLERANCE,
+  type CurrentPulse,
+  type PulseOptions,
+} from './pulse';
+export {
   analyseCharge,
   DEFAULT_TERMINATION_FRACTION,
+  type TerminationBasis,
   type ChargeRunOptions,
   type ChargeRunAnalysis,
 } from './charge';
@@ -36,6 +47,7 @@ export {
   type SimulationNoise,
   type SimulatedSeries,
   type DischargeSimulation,
+  type DischargePulse,
   type ChargeSimulation,
   type HeaterSimulation,
 } from './models';

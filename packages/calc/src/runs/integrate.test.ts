@@ -113,8 +113,12 @@ describe('integrateSeries', () => {
       expect(r.ampHours).toBeCloseTo(1.25, 9);
       expect(r.wattHours).toBeCloseTo(4.763333, 6);
       expect(r.averageVolts).toBeCloseTo(3.810667, 6);
+      // ∫V² dt / duration by trapezoids: (16.01 + 14.825 + 14.065 + 12.97) × 600 / 2400 = 14.4675 V² [C]
+      expect(r.meanSquareVolts).toBeCloseTo(14.4675, 12);
       expect(r.samples).toBe(5);
     }
+    // Without a voltage column there is no mean V².
+    expect(integrateSeries({ t: exampleA.t, i: exampleA.i }).meanSquareVolts).toBeNull();
   });
 
   it('uses v·i when both are present and ignores a p column then [C]', () => {

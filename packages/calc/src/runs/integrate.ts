@@ -9,7 +9,9 @@
  * test and the value REFERENCES §8 gives (3.810667 V for Example A); it equals
  * the time-weighted mean when the current is constant. timeAverageVolts is
  * ∫V dt / duration (3.800000 V for Example A). With no charge moved (Ah = 0)
- * averageVolts falls back to the time-weighted mean.
+ * averageVolts falls back to the time-weighted mean. meanSquareVolts is ∫V² dt /
+ * duration by the same trapezoids: the average power into a fixed resistance is
+ * mean(V²)/R, not (mean V)²/R (REFERENCES §12) [C].
  */
 import { requireFinite } from '../shared/validate';
 import { at, checkSeriesShape, columnLabel, notFinite, notIncreasing, type RunSeries } from './series';
@@ -34,6 +36,8 @@ export interface SeriesTotals {
   averageVolts: number | null;
   /** Time-weighted mean voltage ∫V dt / duration, V; null without a v column. */
   timeAverageVolts: number | null;
+  /** Time-weighted mean of V², ∫V² dt / duration by the same trapezoids, V²; null without a v column. */
+  meanSquareVolts: number | null;
   samples: number;
 }
 
@@ -129,6 +133,7 @@ export function integrateRange(series: RunSeries, from: number, to: number): Ser
   let charge = 0; // A·s × 2
   let energy = 0; // W·s × 2
   let voltTime = 0; // V·s × 2
+  let voltSquaredTime = 0; // V²·s × 2
   for (let k = from + 1; k <= to; k++) {
     read(k);
     if (!(tk > tPrev)) notIncreasing(k, tPrev, tk);
@@ -136,6 +141,7 @@ export function integrateRange(series: RunSeries, from: number, to: number): Ser
     charge += (iPrev + ik) * dt;
     energy += (pPrev + pk) * dt;
     voltTime += (vPrev + vk) * dt;
+    voltSquaredTime += (vPrev * vPrev + vk * vk) * dt;
     tPrev = tk;
     vPrev = vk;
     iPrev = ik;
@@ -145,6 +151,7 @@ export function integrateRange(series: RunSeries, from: number, to: number): Ser
   const ampHours = hasCurrent ? charge / 7200 : null;
   const wattHours = hasPower ? energy / 7200 : null;
   const timeAverageVolts = v && durationS > 0 ? voltTime / 2 / durationS : null;
+  const meanSquareVolts = v && durationS > 0 ? voltSquaredTime / 2 / durationS : null;
   const averageVolts = ampHours !== null && wattHours !== null && ampHours !== 0 ? wattHours / ampHours : timeAverageVolts;
-  return { ampHours, wattHours, durationS, averageVolts, timeAverageVolts, samples: to - from + 1 };
+  return { ampHours, wattHours, durationS, averageVolts, timeAverageVolts, meanSquareVolts, samples: to - from + 1 };
 }

@@ -105,6 +105,47 @@ describe('simulateDischarge', () => {
     expect(series.t.length).toBe(1);
   });
 
+  it('steps to the pulse current for its duration, logged every 0.5 s from 10 s before to 10 s after [C]', () => {
+    const plain = simulateDischarge({ capacityAh: 2.7, currentA: 0.54, internalResistanceOhm: 0.06, cutoffVolts: 3.0, stepS: 20 });
+    const { series, endReason } = simulateDischarge({
+      capacityAh: 2.7,
+      currentA: 0.54,
+      internalResistanceOhm: 0.06,
+      cutoffVolts: 3.0,
+      stepS: 20,
+      pulse: { atS: 9000, currentA: 2.7, durationS: 1 },
+    });
+    expect(endReason).toBe('cutoff');
+    const at = (s: number) => series.t.indexOf(s);
+    // 8980 s and 8990 s are on the 20 s grid and in the window; the window runs 8990 → 9011 s in 0.5 s steps.
+    expect(series.t.slice(at(8980), at(8980) + 4)).toEqual([8980, 8990, 8990.5, 8991]);
+    expect(series.t.slice(at(9010.5), at(9010.5) + 3)).toEqual([9010.5, 9011, 9020]);
+    expect(series.i[at(8999.5)]).toBe(0.54);
+    expect(series.i[at(9000)]).toBe(2.7);
+    expect(series.i[at(9000.5)]).toBe(2.7);
+    expect(series.i[at(9001)]).toBe(0.54);
+    // U = OCV − I·R: the step from 0.54 A to 2.7 A drops the voltage by 2.16 A × 0.06 Ω = 0.1296 V, less the
+    // OCV fall over 0.5 s (under 0.1 mV) [C].
+    expect(series.v[at(8999.5)]! - series.v[at(9000)]!).toBeCloseTo(0.1296, 4);
+    // The extra 2.16 A for 1 s takes 0.6 mAh, so the run ends at most a sample earlier than without the pulse.
+    expect(Math.abs(series.t.at(-1)! - plain.series.t.at(-1)!)).toBeLessThanOrEqual(20);
+    // Outside the window the samples are those of the run without the pulse.
+    expect(series.t.slice(0, 100)).toEqual(plain.series.t.slice(0, 100));
+  });
+
+  it('names a wrong pulse', () => {
+    const base = { capacityAh: 1, internalResistanceOhm: 0.05, cutoffVolts: 3, stepS: 10, currentA: 0.2 };
+    expect(() => simulateDischarge({ ...base, pulse: { atS: -1, currentA: 1, durationS: 1 } })).toThrow(/pulse\.atS/);
+    expect(() => simulateDischarge({ ...base, pulse: { atS: 60, currentA: 0, durationS: 1 } })).toThrow(/pulse\.currentA/);
+    expect(() => simulateDischarge({ ...base, pulse: { atS: 60, currentA: 1, durationS: 0 } })).toThrow(/pulse\.durationS/);
+    expect(() => simulateDischarge({ ...base, pulse: { atS: 60, currentA: 1, durationS: 1, stepS: 20 } })).toThrow(/pulse\.stepS \(20 s\) must not be longer/);
+    expect(() => simulateDischarge({ ...base, pulse: { atS: 60, currentA: 1, durationS: 1, leadS: -1 } })).toThrow(/pulse\.leadS/);
+    // A pulse from the first sample: the window starts at 0 s.
+    const { series } = simulateDischarge({ ...base, pulse: { atS: 0, currentA: 1, durationS: 1 } });
+    expect(series.t.slice(0, 3)).toEqual([0, 0.5, 1]);
+    expect(series.i.slice(0, 3)).toEqual([1, 1, 0.2]);
+  });
+
   it('names the wrong input', () => {
     const base = { capacityAh: 1, internalResistanceOhm: 0.05, cutoffVolts: 3, stepS: 10 };
     expect(() => simulateDischarge(base)).toThrow(/exactly one of currentA or powerW/);

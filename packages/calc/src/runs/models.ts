@@ -95,6 +95,24 @@ export interface DischargeSimulation {
   /** Starting state of charge, 0..1; default 1. */
   initialSoc?: number;
   noise?: SimulationNoise;
+  /** A current pulse for the DC resistance method, logged at a finer step around it. */
+  pulse?: DischargePulse;
+}
+
+/**
+ * A step to a higher current during a discharge, as the DC internal-resistance method does it
+ * (REFERENCES §12: 0.2 It, then 1.0 It for 1 s). Samples from leadS before the pulse to leadS after
+ * it are logged every stepS instead of the run's step.
+ */
+export interface DischargePulse {
+  /** Start of the pulse, s. */
+  atS: number;
+  currentA: number;
+  durationS: number;
+  /** Logging step around the pulse, s; default 0.5 s. */
+  stepS?: number;
+  /** Finely logged time either side of the pulse, s; default 10 s. */
+  leadS?: number;
 }
 
 function stepCount(durationGuessS: number, stepS: number): void {
@@ -106,7 +124,8 @@ function stepCount(durationGuessS: number, stepS: number): void {
 /**
  * Constant-current or constant-power discharge of the model cell through its
  * internal resistance (V = OCV(soc) − I·R), sampled every stepS until the
- * terminal voltage reaches cutoffVolts or the cell is empty.
+ * terminal voltage reaches cutoffVolts or the cell is empty. An optional
+ * pulse steps the current up for a while (a sag during it does not end the run).
  */
 export function simulateDischarge(s: DischargeSimulation): { series: SimulatedSeries; endReason: 'cutoff' | 'empty' } {
   const capacityAh = requirePositive(s.capacityAh, 'capacityAh');
@@ -124,12 +143,39 @@ export function simulateDischarge(s: DischargeSimulation): { series: SimulatedSe
   const minCurrent = currentA ?? (powerW as number) / OCV_FULL_V;
   stepCount((soc * capacityAh * 3600) / minCurrent, stepS);
 
+  const pulse = checkPulse(s.pulse, stepS);
   const noise = noiseSource(s.noise);
   const series: SimulatedSeries = { t: [], v: [], i: [], p: [] };
-  for (let k = 0; ; k++) {
+  // Sample times: k·stepS, with the pulse window [from, to] logged every pulse.stepS (m counts its samples, −1 outside).
+  let k = 0;
+  let m = pulse !== null && pulse.from <= 0 ? 0 : -1;
+  let tS = 0;
+  const nextTime = (): number => {
+    if (pulse && m >= 0) {
+      const inWindow = pulse.from + (m + 1) * pulse.stepS;
+      if (inWindow <= pulse.to + 1e-9) {
+        m++;
+        return inWindow;
+      }
+      // Leaving the window: back to the run's own grid.
+      m = -1;
+      while (k * stepS <= tS + 1e-9) k++;
+      return k * stepS;
+    }
+    k++;
+    if (pulse && tS < pulse.from - 1e-9 && k * stepS >= pulse.from - 1e-9) {
+      m = 0;
+      return pulse.from;
+    }
+    return k * stepS;
+  };
+  for (;;) {
+    const inPulse = pulse !== null && tS >= pulse.atS && tS < pulse.atS + pulse.durationS;
     const ocv = lithiumIonOcv(clampSoc(soc));
     let current: number;
-    if (currentA !== undefined) {
+    if (inPulse) {
+      current = pulse.currentA;
+    } else if (currentA !== undefined) {
       current = currentA;
     } else {
       const P = powerW as number;
@@ -144,14 +190,28 @@ export function simulateDischarge(s: DischargeSimulation): { series: SimulatedSe
     const volts = ocv - current * r;
     const iLogged = current + noise.amps();
     const vLogged = volts + noise.volts();
-    series.t.push(k * stepS);
+    series.t.push(tS);
     series.v.push(vLogged);
     series.i.push(iLogged);
     series.p.push(vLogged * iLogged);
-    if (volts <= cutoff) return { series, endReason: 'cutoff' };
+    if (volts <= cutoff && !inPulse) return { series, endReason: 'cutoff' };
     if (soc <= 0) return { series, endReason: 'empty' };
-    soc -= (current * stepS) / 3600 / capacityAh;
+    const next = nextTime();
+    soc -= (current * (pulse ? next - tS : stepS)) / 3600 / capacityAh;
+    tS = next;
   }
+}
+
+function checkPulse(p: DischargePulse | undefined, runStepS: number): (Required<DischargePulse> & { from: number; to: number }) | null {
+  if (p === undefined) return null;
+  const atS = requireNonNegative(p.atS, 'pulse.atS');
+  const currentA = requirePositive(p.currentA, 'pulse.currentA');
+  const durationS = requirePositive(p.durationS, 'pulse.durationS');
+  const stepS = requirePositive(optionalFinite(p.stepS, 'pulse.stepS') ?? 0.5, 'pulse.stepS');
+  const leadS = requireNonNegative(optionalFinite(p.leadS, 'pulse.leadS') ?? 10, 'pulse.leadS');
+  if (stepS > runStepS) throw new RangeError(`pulse.stepS (${stepS} s) must not be longer than the run's stepS (${runStepS} s).`);
+  const from = Math.max(0, atS - leadS);
+  return { atS, currentA, durationS, stepS, leadS, from, to: atS + durationS + leadS };
 }
 
 export interface ChargeSimulation {

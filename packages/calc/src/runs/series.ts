@@ -20,6 +20,9 @@ export interface RunSeries {
 /** Names of the value columns a series may carry. */
 export type ValueColumn = 'v' | 'i' | 'p' | 'temp';
 
+/** Share of the peak current (or power) at or below which the load counts as off. */
+export const LOAD_OFF_FRACTION = 0.02;
+
 export const VALUE_COLUMNS: readonly ValueColumn[] = ['v', 'i', 'p', 'temp'];
 
 const COLUMN_WORDS: Record<ValueColumn | 't', string> = {

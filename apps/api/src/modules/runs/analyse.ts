@@ -10,6 +10,8 @@ import {
   DEFAULT_TERMINATION_FRACTION,
   FIGURE_DEFAULTS,
   integrateSeries,
+  labelEnergyWh,
+  measuredVersusLabelEnergy,
   packEnergyWh,
   timeToTemperature,
   type SurfaceMaterial,
@@ -29,6 +31,8 @@ export interface AnalysisContext {
   /** Contact time of the teardown, else the workspace default (s). */
   teardownContactSeconds: number | null;
   defaultContactSeconds: number;
+  /** Workspace setting: how long a discharge must stay at or below its cut-off to end (s). */
+  cutoffDebounceSeconds: number;
 }
 
 /** Nominal voltage assumed for a label that gives only Ah (Li-ion, REFERENCES §4) [S]. */
@@ -42,6 +46,21 @@ const hms = (s: number) => {
   const m = Math.round((s - h * 3600) / 60);
   return h > 0 ? `${h} h ${m} min` : `${m} min`;
 };
+
+/** The label's claims as calc takes them (absent rather than null). */
+const labelOf = (ctx: AnalysisContext) => ({ capacityAh: ctx.device.claimCapacityAh ?? undefined, capacityWh: ctx.device.claimCapacityWh ?? undefined });
+
+/** The cell nominal voltage a label in mAh is quoted at: the pack record's cell, else 3.7 V assumed; in words too. */
+function labelCellVolts(ctx: AnalysisContext): { volts: number; words: string } {
+  if (ctx.pack) return { volts: ctx.pack.cellNominalVolts, words: `${fmt(ctx.pack.cellNominalVolts)} V cell nominal (pack record)` };
+  return { volts: ASSUMED_LABEL_VOLTS, words: `${ASSUMED_LABEL_VOLTS} V cell nominal (assumed: no pack record)` };
+}
+
+/** The label energy in words: its Wh, or its Ah × the cell voltage. */
+function labelWords(basis: 'label-wh' | 'label-ah-at-cell-volts', wh: number, ctx: AnalysisContext): string {
+  if (basis === 'label-wh') return `the ${fmt(wh)} Wh on the label`;
+  return `the label's ${fmt(ctx.device.claimCapacityAh!)} Ah × ${labelCellVolts(ctx).words} = ${fmt(wh)} Wh (labels quote mAh at the cell voltage, whatever the cells in series)`;
+}
 
 function optionError(field: string, message: string): AppError {
   return new AppError('unprocessable', message, { [`options.${field}`]: message });
@@ -62,11 +81,9 @@ export function cellEnergy(options: RunOptions, ctx: AnalysisContext): { wh: num
     const wh = packEnergyWh({ cellNominalVolts, cellCapacityAh: cellRatedAh, series, parallel });
     return { wh, source: `pack record: ${series}S${parallel}P of ${fmt(cellNominalVolts)} V × ${fmt(cellRatedAh)} Ah cells = ${fmt(wh)} Wh` };
   }
-  if (ctx.device.claimCapacityWh) return { wh: ctx.device.claimCapacityWh, source: `label energy: ${fmt(ctx.device.claimCapacityWh)} Wh` };
-  if (ctx.device.claimCapacityAh) {
-    const wh = ctx.device.claimCapacityAh * ASSUMED_LABEL_VOLTS;
-    return { wh, source: `label capacity ${fmt(ctx.device.claimCapacityAh)} Ah × ${ASSUMED_LABEL_VOLTS} V (nominal voltage assumed) = ${fmt(wh)} Wh` };
-  }
+  const label = labelEnergyWh(labelOf(ctx), ASSUMED_LABEL_VOLTS);
+  if (label?.basis === 'label-wh') return { wh: label.wh, source: `label energy: ${fmt(label.wh)} Wh` };
+  if (label) return { wh: label.wh, source: `label capacity ${fmt(ctx.device.claimCapacityAh!)} Ah × ${ASSUMED_LABEL_VOLTS} V (nominal voltage assumed) = ${fmt(label.wh)} Wh` };
   throw optionError('cellEnergyWh', 'Give the energy of the cells (Wh): the teardown has no pack record and the label states no capacity.');
 }
 
@@ -79,14 +96,36 @@ export function analyseRun(kind: RunKind, series: StoredSeries, options: RunOpti
 
   if (kind === 'discharge') {
     const cutoffVolts = options.cutoffVolts ?? undefined;
-    const r = analyseDischarge(series, { cutoffVolts });
+    const debounce =
+      options.cutoffDebounceSeconds !== undefined && options.cutoffDebounceSeconds !== null
+        ? { seconds: options.cutoffDebounceSeconds, source: 'run' as const }
+        : { seconds: ctx.cutoffDebounceSeconds, source: 'workspace' as const };
+    const debounceWords = `${fmt(debounce.seconds)} s (${debounce.source === 'run' ? 'set for this run' : 'workspace setting'})`;
+    const r = analyseDischarge(series, { cutoffVolts, cutoffDebounceSeconds: debounce.seconds });
     if (cutoffVolts === undefined) notes.push('No cut-off voltage given: the totals run until the load stops (or to the end of the log).');
-    else if (r.cutoff) notes.push(`Totals up to the first sample at or below the ${fmt(cutoffVolts)} V cut-off, after ${hms(r.cutoff.t)}.`);
-    else {
-      notes.push(`The log never reaches the ${fmt(cutoffVolts)} V cut-off: the totals cover the whole log.`);
-      warnings.push(`The voltage never fell to the ${fmt(cutoffVolts)} V cut-off (lowest ${fmt(r.minVolts)} V): the cell may not be fully discharged, so the capacity is a lower bound.`);
+    else if (r.cutoff) {
+      notes.push(
+        debounce.seconds > 0
+          ? `Totals up to the first sample at or below the ${fmt(cutoffVolts)} V cut-off that stayed there for ${debounceWords} (or until the load stopped or the log ended), after ${hms(r.cutoff.t)}.`
+          : `Totals up to the first sample at or below the ${fmt(cutoffVolts)} V cut-off, after ${hms(r.cutoff.t)} (no debounce: ${debounceWords}).`,
+      );
+    } else {
+      notes.push(`The log never stays at the ${fmt(cutoffVolts)} V cut-off for ${debounceWords}: the totals cover the whole log.`);
+      warnings.push(`The voltage never fell to the ${fmt(cutoffVolts)} V cut-off for good (lowest ${fmt(r.minVolts)} V): the cell may not be fully discharged, so the capacity is a lower bound.`);
+    }
+    if (r.ignoredDips) {
+      const d = r.ignoredDips;
+      notes.push(
+        `${d.count === 1 ? 'One sag' : `${d.count} sags`} below the cut-off shorter than ${fmt(debounce.seconds)} s ${d.count === 1 ? 'was' : 'were'} ignored (the first after ${hms(d.firstAtS)}, the longest ${fmt(d.longestS)} s), as at a load step.`,
+      );
     }
     if (!series.i) notes.push('Current worked out as power ÷ voltage per sample.');
+    const pulse = r.internalResistance;
+    if (pulse) {
+      notes.push(
+        `DC resistance from the current step after ${hms(pulse.atSeconds)}: ${fmt(pulse.lowAmps)} A at ${fmt(pulse.lowVolts, 4)} V just before it, ${fmt(pulse.highAmps)} A at ${fmt(pulse.highVolts, 4)} V ${fmt(pulse.readAtSeconds - (series.t[pulse.lowIndex] as number))} s after the last low-current sample: (U₁ − U₂) / (I₂ − I₁) = ${fmt(pulse.ohms * 1000)} mΩ at the pack terminals (wiring and protection included).`,
+      );
+    }
     return {
       ...base,
       ampHours: r.ampHours,
@@ -102,15 +141,28 @@ export function analyseRun(kind: RunKind, series: StoredSeries, options: RunOpti
         averageCurrentA: r.averageCurrentA,
         averagePowerW: r.averagePowerW,
         analysedToS: series.t[r.endIndex] as number,
+        cutoffDebounce: debounce,
+        ignoredDips: r.ignoredDips,
+        meanSquareVolts: r.meanSquareVolts,
+        internalResistance: pulse
+          ? { ohms: pulse.ohms, lowAmps: pulse.lowAmps, lowVolts: pulse.lowVolts, highAmps: pulse.highAmps, highVolts: pulse.highVolts, atSeconds: pulse.atSeconds, readAtSeconds: pulse.readAtSeconds }
+          : null,
       },
     };
   }
 
   if (kind === 'charge') {
     const terminationFraction = options.terminationFraction ?? DEFAULT_TERMINATION_FRACTION;
-    const r = analyseCharge(series, { cvVolts: options.cvVolts ?? undefined, terminationFraction });
+    const ratedAh = ctx.pack ? ctx.pack.cellRatedAh * ctx.pack.parallel : undefined;
+    const r = analyseCharge(series, { cvVolts: options.cvVolts ?? undefined, terminationFraction, ratedCapacityAh: ratedAh });
     if (options.cvVolts === undefined || options.cvVolts === null) notes.push(`Charge voltage estimated from the top of the log: ${fmt(r.plateauVolts, 4)} V.`);
-    notes.push(`Termination at ${fmt(terminationFraction * 100)} % of the constant current (${fmt(r.terminationCurrentA)} A).`);
+    const ratedWords =
+      ctx.pack && ctx.pack.parallel > 1 ? `${ctx.pack.parallel} cells of ${fmt(ctx.pack.cellRatedAh)} Ah in parallel, pack record` : 'pack record';
+    const description =
+      r.terminationBasis === 'rated-capacity'
+        ? `${fmt(terminationFraction)} C of the rated ${fmt(ratedAh!)} Ah (${ratedWords}) = ${fmt(r.terminationCurrentA)} A`
+        : `${fmt(terminationFraction * 100)} % of the ${fmt(r.cc.currentA)} A constant current = ${fmt(r.terminationCurrentA)} A (no pack record gives a rated capacity)`;
+    notes.push(`Termination at ${description}.`);
     if (!r.terminated) warnings.push('The current never fell to the termination current: the log may stop before the charge ended.');
     if (r.transitionIndex === null) warnings.push('No constant-voltage phase found: the voltage never held at the plateau while the current fell.');
     return {
@@ -126,6 +178,7 @@ export function analyseRun(kind: RunKind, series: StoredSeries, options: RunOpti
         transitionS: r.transitionIndex === null ? null : (series.t[r.transitionIndex] as number),
         terminationCurrentA: r.terminationCurrentA,
         terminationFraction,
+        termination: { basis: r.terminationBasis, ratedAh: ratedAh ?? null, description },
         terminated: r.terminated,
         chargeTimeS: r.chargeTimeS,
         plateauVolts: r.plateauVolts,
@@ -207,28 +260,58 @@ export function analyseRun(kind: RunKind, series: StoredSeries, options: RunOpti
   };
 }
 
-/** Measured against the label (and the rated cells), with the workspace's warning threshold. */
+/** Measured against the label (in Wh) and the rated cells (in Ah), with the workspace's warning threshold. */
 export function compareRun(kind: RunKind, analysis: RunAnalysis, ctx: AnalysisContext, warnFraction: number): RunComparison {
   const out: RunComparison = { warnBelowPercent: warnFraction * 100, label: null, rated: null, labelEnergy: null };
+  const cell = labelCellVolts(ctx);
   if (kind === 'discharge' && analysis.ampHours !== null) {
     const measuredAh = analysis.ampHours;
-    if (ctx.device.claimCapacityAh) {
-      const c = capacityVersusLabel(measuredAh, ctx.device.claimCapacityAh, warnFraction);
-      out.label = { claimedAh: ctx.device.claimCapacityAh, measuredAh, percent: c.percent, warning: c.warning };
+    const packVolts = ctx.pack ? ctx.pack.cellNominalVolts * ctx.pack.series : ASSUMED_LABEL_VOLTS;
+    const c = measuredVersusLabelEnergy({
+      measuredWh: analysis.wattHours ?? undefined,
+      measuredAh,
+      packNominalVolts: packVolts,
+      cellNominalVolts: cell.volts,
+      label: labelOf(ctx),
+      warnFraction,
+    });
+    if (c) {
+      const measured =
+        c.measuredBasis === 'measured-wh'
+          ? `${fmt(c.measuredWh)} Wh delivered at the pack terminals (∫V·I dt)`
+          : `${fmt(measuredAh)} Ah delivered × ${fmt(packVolts)} V pack nominal = ${fmt(c.measuredWh)} Wh`;
+      out.label = {
+        claimedAh: ctx.device.claimCapacityAh,
+        measuredAh,
+        claimedWh: c.labelWh,
+        measuredWh: c.measuredWh,
+        labelBasis: c.labelBasis,
+        measuredBasis: c.measuredBasis,
+        basis: `${measured} against ${labelWords(c.labelBasis, c.labelWh, ctx)}.`,
+        percent: c.ratio * 100,
+        warning: c.warning,
+      };
     }
     if (ctx.pack) {
+      // Cells in series add voltage, not charge: the pack delivers the Ah of one string.
       const ratedAh = ctx.pack.cellRatedAh * ctx.pack.parallel;
-      const c = capacityVersusLabel(measuredAh, ratedAh, warnFraction);
+      const r = capacityVersusLabel(measuredAh, ratedAh, warnFraction);
       const basis =
         ctx.pack.parallel > 1 ? `${ctx.pack.parallel} cells of ${fmt(ctx.pack.cellRatedAh)} Ah in parallel (pack record)` : `cell rated ${fmt(ctx.pack.cellRatedAh)} Ah (pack record)`;
-      out.rated = { ratedAh, measuredAh, percent: c.percent, warning: c.warning, basis };
+      out.rated = { ratedAh, measuredAh, percent: r.percent, warning: r.warning, basis };
     }
   }
   if (kind === 'power-bank' && analysis.wattHours !== null) {
-    const claimedWh = ctx.device.claimCapacityWh ?? (ctx.device.claimCapacityAh ? ctx.device.claimCapacityAh * ASSUMED_LABEL_VOLTS : null);
-    if (claimedWh) {
-      const percent = (analysis.wattHours / claimedWh) * 100;
-      out.labelEnergy = { claimedWh, measuredWh: analysis.wattHours, percent, warning: percent < POWER_BANK_MIN_OUTPUT_SHARE * 100 };
+    const label = labelEnergyWh(labelOf(ctx), cell.volts);
+    if (label) {
+      const percent = (analysis.wattHours / label.wh) * 100;
+      out.labelEnergy = {
+        claimedWh: label.wh,
+        measuredWh: analysis.wattHours,
+        percent,
+        warning: percent < POWER_BANK_MIN_OUTPUT_SHARE * 100,
+        basis: `${fmt(analysis.wattHours)} Wh at the output${analysis.averageVolts !== null ? ` (${fmt(analysis.averageVolts)} V average)` : ''} against ${labelWords(label.basis, label.wh, ctx)}.`,
+      };
     }
   }
   return out;

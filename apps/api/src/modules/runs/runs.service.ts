@@ -40,6 +40,7 @@ export async function analysisContext(em: EntityManager, teardown: Teardown): Pr
     measuredCells: discharge && typeof dischargeWh === 'number' ? { wattHours: dischargeWh, label: discharge.label } : null,
     teardownContactSeconds: teardown.contactSeconds ?? null,
     defaultContactSeconds: settings.defaultContactSeconds,
+    cutoffDebounceSeconds: settings.cutoffDebounceSeconds,
   };
 }
 
