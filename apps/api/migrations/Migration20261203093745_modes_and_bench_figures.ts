@@ -22,6 +22,8 @@ export class Migration20261203093745_modes_and_bench_figures extends Migration {
     this.addSql(`create index \`mode_loads_load_id_index\` on \`mode_loads\` (\`load_id\`);`);
     this.addSql(`create unique index \`mode_loads_mode_id_load_id_unique\` on \`mode_loads\` (\`mode_id\`, \`load_id\`);`);
 
+    this.addSql(`alter table \`lineups\` add column \`mode_choice\` json null;`);
+
     this.addSql(`alter table \`packs\` add column \`internal_ohms\` double null;`);
     this.addSql(`alter table \`packs\` add column \`internal_readings\` json null;`);
 

@@ -88,6 +88,25 @@ const deviceIds = z
     });
   });
 
+/** Which operating mode of each device the lineup compares (its runtime comes from that mode). */
+export const LINEUP_MODE_RULE = {
+  values: ['highest', 'lowest', 'power-bank', 'named'] as const,
+  labels: {
+    highest: 'Most power at the main load (e.g. highest heat)',
+    lowest: 'Least power at the main load, still on',
+    'power-bank': 'Power-bank output',
+    named: 'A mode by name',
+  },
+} as const;
+export const lineupModeChoice = z
+  .object({
+    rule: z.enum(LINEUP_MODE_RULE.values, { error: `Choose one of: ${LINEUP_MODE_RULE.values.join(', ')}` }),
+    name: z.string().trim().max(80, 'At most 80 characters').optional(),
+  })
+  .refine((m) => m.rule !== 'named' || (m.name ?? '') !== '', { path: ['name'], message: 'Give the mode name to compare' });
+export type LineupModeChoice = z.infer<typeof lineupModeChoice>;
+export const DEFAULT_LINEUP_MODE: LineupModeChoice = { rule: 'highest' };
+
 /** POST /api/lineups. Currency defaults to the workspace reporting currency, weights to DEFAULT_LINEUP_WEIGHTS. */
 export const createLineupBody = z.object({
   name: text(160),
@@ -95,6 +114,7 @@ export const createLineupBody = z.object({
   deviceIds,
   currency: currencyCode.optional(),
   weights: lineupWeights.optional(),
+  mode: lineupModeChoice.optional(),
 });
 export type CreateLineupBody = z.infer<typeof createLineupBody>;
 
@@ -106,6 +126,7 @@ export const updateLineupBody = z
     deviceIds: deviceIds.optional(),
     currency: currencyCode.optional(),
     weights: lineupWeights.optional(),
+    mode: lineupModeChoice.optional(),
     status: lineupStatus.optional(),
     /** The version the edit started from: a stale one gets 409 stale_version. */
     version: z.number({ error: 'Send the version you edited' }).int().positive().optional(),
@@ -125,7 +146,7 @@ export type ComparisonQuery = z.infer<typeof comparisonQuery>;
 
 /** POST /api/lineups/:id/comparison: the ranking with these weights, without saving them. */
 export const comparisonPreviewBody = z
-  .object({ weights: lineupWeights, x: lineupMetricKey.optional(), y: lineupMetricKey.optional() })
+  .object({ weights: lineupWeights, mode: lineupModeChoice.optional(), x: lineupMetricKey.optional(), y: lineupMetricKey.optional() })
   .refine((q) => !q.x || !q.y || q.x !== q.y, { path: ['y'], message: 'Pick two different metrics for the axes' });
 export type ComparisonPreviewBody = z.infer<typeof comparisonPreviewBody>;
 
@@ -144,6 +165,7 @@ export const lineupSchema = z.object({
   description: z.string().nullable(),
   currency: z.string(),
   weights: z.record(z.string(), z.number()),
+  mode: lineupModeChoice,
   status: lineupStatus,
   devices: z.array(lineupDeviceSchema),
   /** Devices of the lineup the caller cannot see (a viewer: devices without a published teardown). */
@@ -203,6 +225,12 @@ export const comparisonRowSchema = z.object({
   normalised: z.record(z.string(), z.number()),
   /** Retail price as seen, before conversion. */
   retail: z.object({ amount: z.number(), currency: z.string(), seenOn: z.string().nullable(), rate: z.number().nullable() }).nullable(),
+  /** The operating mode the row's runtime comes from; null when the teardown records no modes (main load at its own duty). */
+  mode: z.object({ id: z.number().int(), name: z.string(), reason: z.string() }).nullable(),
+  /** False when the row lacks a weighted metric: it ranks after the rows that have them all. */
+  complete: z.boolean(),
+  /** Weighted metrics the row lacks. */
+  incompleteMetrics: z.array(lineupMetricKey),
   notes: z.array(z.string()),
 });
 export type ComparisonRowDto = z.infer<typeof comparisonRowSchema>;
@@ -227,6 +255,8 @@ export const comparisonResponse = z.object({
   weights: z.record(z.string(), z.number()),
   /** 'saved': the lineup's weights; 'preview': the weights sent, not saved. */
   weightsFrom: z.enum(['saved', 'preview']),
+  /** The operating mode compared for every device. */
+  mode: lineupModeChoice,
   metrics: z.array(comparisonMetricSchema),
   rows: z.array(comparisonRowSchema),
   pareto: paretoSchema,

@@ -24,7 +24,7 @@ export type QuantityKind =
 
 /** Stored unit per kind: SI, except Wh and Ah (the trade's units for energy and charge) and °C (contracts' SI_UNIT). */
 export const STORED_UNIT: Record<QuantityKind, string> = {
-  ...(({ other: _other, ...measured }) => measured)(SI_UNIT),
+  ...(({ other: _other, 'surface-temperature': _surface, ...measured }) => measured)(SI_UNIT),
   area: 'm²',
   fraction: '',
   count: '',

@@ -12,6 +12,7 @@ import { measurementRoutes } from './measurements/routes';
 import { partRoutes } from './parts/routes';
 import { photoRoutes } from './photos/routes';
 import { powerRoutes } from './power/routes';
+import { modeRoutes } from './power/modes.routes';
 import { settingsRoutes } from './settings/routes';
 import { systemRoutes } from './system/routes';
 import { teardownRoutes } from './teardowns/routes';
@@ -38,6 +39,7 @@ export function allRoutes(deps: AppDeps, version: string): RouteDef[] {
     ...toolRoutes,
     ...partRoutes,
     ...powerRoutes,
+    ...modeRoutes,
     ...measurementRoutes,
     ...costRoutes,
     ...runRoutes(deps),

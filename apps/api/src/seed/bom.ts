@@ -6,12 +6,13 @@ import { MeasurementSchema } from '../modules/measurements/measurement.entity';
 import { PartSchema, type Part } from '../modules/parts/part.entity';
 import { applyPartValues, defaultMount } from '../modules/parts/service';
 import { ConverterSchema, type Converter } from '../modules/power/converter.entity';
-import { LoadSchema } from '../modules/power/load.entity';
+import { LoadSchema, type Load } from '../modules/power/load.entity';
 import { PackSchema } from '../modules/power/pack.entity';
 import { TeardownSchema } from '../modules/teardowns/teardown.entity';
 import { UserSchema } from '../modules/users/user.entity';
 import { parseQuantity, type QuantityKind } from '../lib/units';
 import type { SeedContext } from './context';
+import { seedModes } from './modes';
 import { DEMO_DEVICES, teardownRef, type DemoDevice } from './scenario';
 
 interface Line {
@@ -250,6 +251,7 @@ async function seedTeardownBom(ctx: SeedContext, d: DemoDevice, teardownId: numb
     made.push({ spec: c, entity });
   }
 
+  const createdLoads: Load[] = [];
   for (const l of loads) {
     const via = l.via ? made.find((m) => m.spec.role !== 'charge' && (m.spec.topology === l.via || m.spec.topology === 'buck-boost')) : undefined;
     const supplyVolts = via ? via.spec.vout : SUPPLY_VOLTS[d.key] ?? cells.nominalV;
@@ -258,7 +260,7 @@ async function seedTeardownBom(ctx: SeedContext, d: DemoDevice, teardownId: numb
     if (l.amps) entered.currentAmps = l.amps < 1 ? `${Math.round(l.amps * 1000)} mA` : `${l.amps} A`;
     if (l.duty < 1) entered.duty = pct(l.duty);
     if (l.areaCm2) entered.heatedAreaM2 = `${l.areaCm2} cm²`;
-    em.create(LoadSchema, {
+    const load = em.create(LoadSchema, {
       teardown,
       kind: l.kind,
       label: l.label,
@@ -271,10 +273,14 @@ async function seedTeardownBom(ctx: SeedContext, d: DemoDevice, teardownId: numb
       duty: l.duty,
       converter: via?.entity ?? null,
       heatedAreaM2: l.areaCm2 ? l.areaCm2 * 1e-4 : null,
-      surfaceMaterial: l.kind === 'heater' ? 'metal' : null,
-      entered,
-    } as never);
+      surfaceMaterial: l.kind === 'heater' ? 'metal-coated' : null,
+      elementMaterial: l.kind === 'heater' ? (/flexible pcb/i.test(l.label) ? 'copper' : 'other') : null,
+      heatedMassKg: l.heatedMassG ? l.heatedMassG / 1000 : null,
+      entered: { ...entered, ...(l.heatedMassG ? { heatedMassKg: `${l.heatedMassG} g` } : {}) },
+    } as never) as Load;
+    createdLoads.push(load);
   }
+  seedModes(em, d.key, teardown, createdLoads);
 
   const takenBy = await em.findOneOrFail(UserSchema, { id: teardown.engineer.id });
   demoReadings(d).forEach((r, i) => {

@@ -16,7 +16,7 @@ export interface DemoDevice {
   /** The design as found at the bench, in words: what the parts, power and runs steps model. */
   design: {
     cells: { chemistry: Chemistry; format: string; nominalV: number; maxV: number; ratedAh: number; measuredAh: number; series: number; parallel: number; massKg: number; protection: boolean; joining: 'welded-tab' | 'soldered' | 'holder' | 'connector' };
-    loads: { kind: 'heater' | 'motor' | 'led' | 'usb-output'; label: string; ohms?: number; amps?: number; watts?: number; count: number; connection: 'series' | 'parallel'; duty: number; areaCm2?: number; via?: 'boost' | 'buck' }[];
+    loads: { kind: 'heater' | 'motor' | 'led' | 'usb-output'; label: string; ohms?: number; amps?: number; watts?: number; count: number; connection: 'series' | 'parallel'; duty: number; areaCm2?: number; heatedMassG?: number; via?: 'boost' | 'buck' }[];
     converters: { topology: 'buck' | 'boost' | 'buck-boost'; role: 'charge' | 'output' | 'load'; vin: number; vout: number; efficiency: number; source: 'measured' | 'assumed'; chargeA?: number }[];
     hasTemperatureSensor: boolean;
     notes: string;
@@ -34,7 +34,7 @@ export const DEMO_DEVICES: DemoDevice[] = [
     claims: { capacityAh: 5.2, outputText: 'USB-A 5 V 1 A', outputWatts: 5, runtimeH: 6, powerW: 9 },
     design: {
       cells: { chemistry: 'li-ion', format: '18650', nominalV: 3.7, maxV: 4.2, ratedAh: 2.7, measuredAh: 2.62, series: 1, parallel: 1, massKg: 0.046, protection: false, joining: 'welded-tab' },
-      loads: [{ kind: 'heater', label: 'Flexible PCB heater elements (front and back)', ohms: 3.0, count: 2, connection: 'parallel', duty: 1, areaCm2: 2 * 6 * 4.5 }, { kind: 'usb-output', label: 'USB-A power-bank output', amps: 1, count: 1, connection: 'parallel', duty: 1, via: 'boost' }],
+      loads: [{ kind: 'heater', label: 'Flexible PCB heater elements (front and back)', ohms: 3.0, count: 2, connection: 'parallel', duty: 1, areaCm2: 2 * 6 * 4.5, heatedMassG: 30 }, { kind: 'usb-output', label: 'USB-A power-bank output', amps: 1, count: 1, connection: 'parallel', duty: 1, via: 'boost' }],
       converters: [
         { topology: 'buck-boost', role: 'charge', vin: 5, vout: 4.2, efficiency: 0.9, source: 'assumed', chargeA: 1 },
         { topology: 'buck-boost', role: 'output', vin: 3.7, vout: 5, efficiency: 0.88, source: 'measured' },
@@ -61,7 +61,7 @@ export const DEMO_DEVICES: DemoDevice[] = [
     claims: { capacityAh: 2.0, runtimeH: 4, powerW: 4 },
     design: {
       cells: { chemistry: 'li-po', format: 'pouch 503450', nominalV: 3.7, maxV: 4.2, ratedAh: 2.0, measuredAh: 1.93, series: 1, parallel: 1, massKg: 0.036, protection: true, joining: 'soldered' },
-      loads: [{ kind: 'heater', label: 'Resistive film heater', ohms: 4.0, count: 1, connection: 'series', duty: 0.7, areaCm2: 30 }],
+      loads: [{ kind: 'heater', label: 'Resistive film heater', ohms: 4.0, count: 1, connection: 'series', duty: 0.7, areaCm2: 30, heatedMassG: 25 }],
       converters: [{ topology: 'buck', role: 'charge', vin: 5, vout: 4.2, efficiency: 0.85, source: 'assumed', chargeA: 0.5 }],
       hasTemperatureSensor: true,
       notes: 'One pouch cell with a protection board, a linear-ish buck charger, one film heater under PWM with an NTC thermistor taped to the aluminium plate for closed-loop control.',
@@ -84,7 +84,7 @@ export const DEMO_DEVICES: DemoDevice[] = [
     claims: { capacityAh: 6.0, outputText: 'USB-C 5 V 2 A', outputWatts: 10, runtimeH: 8, powerW: 10 },
     design: {
       cells: { chemistry: 'li-ion', format: '18650', nominalV: 3.6, maxV: 4.2, ratedAh: 3.0, measuredAh: 2.91, series: 1, parallel: 2, massKg: 0.094, protection: true, joining: 'welded-tab' },
-      loads: [{ kind: 'heater', label: 'Flexible PCB heater elements', ohms: 2.7, count: 2, connection: 'parallel', duty: 0.8, areaCm2: 2 * 7 * 5 }],
+      loads: [{ kind: 'heater', label: 'Flexible PCB heater elements', ohms: 2.7, count: 2, connection: 'parallel', duty: 0.8, areaCm2: 2 * 7 * 5, heatedMassG: 40 }],
       converters: [
         { topology: 'buck-boost', role: 'charge', vin: 5, vout: 4.2, efficiency: 0.91, source: 'measured', chargeA: 2 },
         { topology: 'buck-boost', role: 'output', vin: 3.6, vout: 5, efficiency: 0.9, source: 'assumed' },

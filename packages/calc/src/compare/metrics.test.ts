@@ -9,8 +9,8 @@ describe('comparisonMetrics', () => {
     const m = comparisonMetrics({
       retailPrice: 25,
       packWh: 20,
-      measuredAh: 4.6,
-      claimedAh: 5,
+      measuredWh: 4.6,
+      labelWh: 5,
       runtimeH: 2.1,
       packMassKg: 0.096,
       heaterWatts: 9,
@@ -38,7 +38,7 @@ describe('comparisonMetrics', () => {
   });
 
   it('gives null, never 0, for metrics whose inputs are missing', () => {
-    const m = comparisonMetrics({ packWh: 10, measuredAh: 2, heaterWatts: 4, findingsBySeverity: none });
+    const m = comparisonMetrics({ packWh: 10, measuredWh: 2, heaterWatts: 4, findingsBySeverity: none });
     expect(m.retailPrice).toBeNull();
     expect(m.whPerCurrency).toBeNull();
     expect(m.whPerKg).toBeNull();

@@ -48,8 +48,9 @@ export interface DeviceFigures {
   /** Retail price in the reporting currency. */
   retailPrice?: number | null;
   packWh?: number | null;
-  measuredAh?: number | null;
-  claimedAh?: number | null;
+  /** Energy measured in the latest discharge run and the label energy (Wh), compared in Wh (labels quote mAh at the cell voltage). */
+  measuredWh?: number | null;
+  labelWh?: number | null;
   runtimeH?: number | null;
   packMassKg?: number | null;
   heaterWatts?: number | null;
@@ -67,7 +68,7 @@ const present = (x: number | null | undefined): x is number => x !== undefined &
 /**
  * Normalised metrics of one device: Wh per currency unit = packWh / retailPrice,
  * Wh/kg = packWh / packMassKg, W/cm² = heaterWatts / (heatedAreaM2 × 10⁴),
- * capacity vs label = measuredAh / claimedAh (a fraction), finding counts by severity.
+ * capacity vs label = measuredWh / labelWh (a fraction, in Wh), finding counts by severity.
  */
 export function comparisonMetrics(device: DeviceFigures): DeviceMetrics {
   if (device === null || typeof device !== 'object') throw new RangeError('device must be an object of figures.');
@@ -77,8 +78,8 @@ export function comparisonMetrics(device: DeviceFigures): DeviceMetrics {
   };
   const retailPrice = opt('retailPrice', requirePositive);
   const packWh = opt('packWh', requireNonNegative);
-  const measuredAh = opt('measuredAh', requireNonNegative);
-  const claimedAh = opt('claimedAh', requirePositive);
+  const measuredWh = opt('measuredWh', requireNonNegative);
+  const labelWh = opt('labelWh', requirePositive);
   const runtimeH = opt('runtimeH', requireNonNegative);
   const packMassKg = opt('packMassKg', requirePositive);
   const heaterWatts = opt('heaterWatts', requireNonNegative);
@@ -96,7 +97,7 @@ export function comparisonMetrics(device: DeviceFigures): DeviceMetrics {
   return {
     retailPrice,
     packWh,
-    capacityVsLabel: measuredAh !== null && claimedAh !== null ? measuredAh / claimedAh : null,
+    capacityVsLabel: measuredWh !== null && labelWh !== null ? measuredWh / labelWh : null,
     runtimeH,
     whPerCurrency: packWh !== null && retailPrice !== null ? packWh / retailPrice : null,
     whPerKg: packWh !== null && packMassKg !== null ? packWh / packMassKg : null,

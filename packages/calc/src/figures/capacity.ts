@@ -53,6 +53,8 @@ export function capacityFigures(ctx: FigureContext): CapacityOutcome {
         ...(measured.ah !== undefined ? [inp('measuredAh', 'Measured capacity', measured.ah, 'Ah')] : []),
         inp('labelWh', 'Label energy', label.wh, 'Wh'),
         ...(ctx.claims.capacityAh !== undefined ? [inp('labelAh', 'Label capacity', ctx.claims.capacityAh, 'Ah')] : []),
+        inp('labelBasis', 'Label read as', label.basis),
+        inp('measuredBasis', 'Measured as', measured.basis),
       ],
       assumptions: [`Label: ${label.basis}.`, `Measured: ${measured.basis}, at the pack terminals.`, 'Compared in Wh, so a series pack labelled in mAh is read right.'],
       warnings:

@@ -169,7 +169,7 @@ function modeFigures(ctx: FigureContext, m: ModeResult): Figure[] {
         value: m.runtimeH,
         unit: 'h',
         family: 'runtime.hours',
-        inputs: [inp('usableWh', 'Usable energy', energy.wh, 'Wh'), inp('packWatts', 'Power from the pack', m.packWatts, 'W')],
+        inputs: [inp('usableWh', 'Usable energy', energy.wh, 'Wh'), inp('usableBasis', 'Usable energy from', energy.basis), inp('packWatts', 'Power from the pack', m.packWatts, 'W')],
         assumptions: [`Usable energy: ${energy.basis}.`, ...effNotes],
         modeId,
       }),
@@ -346,6 +346,7 @@ function allAtOnceFigures(ctx: FigureContext, loads: LoadSet): ModesOutcome {
         family: 'runtime.hours',
         inputs: [
           inp('usableWh', 'Usable energy', energy.wh, 'Wh'),
+          inp('usableBasis', 'Usable energy from', energy.basis),
           inp('packWatts', 'Average power drawn from the pack', result.packWatts, 'W'),
           ...(claims.runtimeH !== undefined ? [inp('claimedH', 'Claimed runtime', claims.runtimeH, 'h')] : []),
         ],

@@ -1,6 +1,7 @@
 import type { EntityManager } from '@mikro-orm/sqlite';
 import type { TeardownFigureInput } from '@splitcase/calc';
 import type { Teardown } from '../teardowns/teardown.entity';
+import { readingFigureInputs } from '../measurements/figures';
 import { benchRunFigureInputs } from '../runs/figures';
 
 /**
@@ -15,4 +16,5 @@ export type FigureInputContributor = (em: EntityManager, teardowns: Teardown[]) 
  */
 export const FIGURE_CONTRIBUTORS: FigureInputContributor[] = [
   benchRunFigureInputs,
+  readingFigureInputs,
 ];

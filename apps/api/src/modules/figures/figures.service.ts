@@ -2,12 +2,13 @@
 // part categories, device claims, settings), merge every contributor's additions, compute through
 // packages/calc, and mark each suggestion with what the engineer decided.
 import type { EntityManager } from '@mikro-orm/sqlite';
-import { teardownFigures, type TeardownFigureInput, type TeardownFiguresResult } from '@splitcase/calc';
-import { ESTIMATES_NOTE, HOT_SURFACE_CAUTION, type FiguresResponse, type SuggestionDto } from '@splitcase/contracts';
+import { teardownFigures, type Figure, type TeardownFigureInput, type TeardownFiguresResult } from '@splitcase/calc';
+import { DEVICE_CATEGORY, ESTIMATES_NOTE, HOT_SURFACE_CAUTION, type FigureDto, type FiguresResponse, type SuggestionDto, type WorkspaceSettings } from '@splitcase/contracts';
 import { PartSchema } from '../parts/part.entity';
 import { ConverterSchema } from '../power/converter.entity';
 import { LoadSchema } from '../power/load.entity';
 import { PackSchema } from '../power/pack.entity';
+import { modesOf } from '../power/service';
 import { getSettings } from '../settings/settings.service';
 import { SuggestionDecisionSchema } from '../teardowns/suggestion-decision.entity';
 import type { Teardown } from '../teardowns/teardown.entity';
@@ -30,13 +31,15 @@ export async function figureInput(em: EntityManager, t: Teardown): Promise<Teard
  */
 export async function figureInputs(em: EntityManager, teardowns: Teardown[]): Promise<Map<number, TeardownFigureInput>> {
   const ids = teardowns.map((t) => t.id);
-  const [packs, loads, converters, parts, settings] = await Promise.all([
+  const [packs, loads, converters, parts, settings, modes] = await Promise.all([
     findInChunks(ids, (chunk) => em.find(PackSchema, { teardown: { $in: chunk } })),
     findInChunks(ids, (chunk) => em.find(LoadSchema, { teardown: { $in: chunk } }, { orderBy: { id: 'asc' } })),
     findInChunks(ids, (chunk) => em.find(ConverterSchema, { teardown: { $in: chunk } }, { orderBy: { id: 'asc' } })),
     findInChunks(ids, (chunk) => em.find(PartSchema, { teardown: { $in: chunk } }, { fields: ['id', 'category', 'teardown'] as never })),
     getSettings(em),
+    modesOf(em, ids),
   ]);
+  const modesOfTeardown = groupBy(modes, (m) => refId(m.mode.teardown));
   const packOf = new Map(packs.map((p) => [refId(p.teardown), p]));
   const loadsOf = groupBy(loads, (l) => refId(l.teardown));
   const convertersOf = groupBy(converters, (c) => refId(c.teardown));
@@ -80,6 +83,15 @@ export async function figureInputs(em: EntityManager, teardowns: Teardown[]): Pr
         converterId: l.converter ? String(refId(l.converter)) : undefined,
         heatedAreaM2: optN(l.heatedAreaM2),
         surfaceMaterial: opt(l.surfaceMaterial),
+        elementMaterial: opt(l.elementMaterial),
+        heatedMassKg: optN(l.heatedMassKg),
+      })),
+      modes: (modesOfTeardown.get(t.id) ?? []).map(({ mode, loads: links }) => ({
+        id: String(mode.id),
+        name: mode.name,
+        note: opt(mode.note),
+        loads: links.map((l) => ({ loadId: String(refId(l.load)), duty: n(l.duty) })),
+        quiescentAmps: optN(mode.quiescentAmps),
       })),
       converters: (convertersOf.get(t.id) ?? []).map((c) => ({
         id: String(c.id),
@@ -94,22 +106,72 @@ export async function figureInputs(em: EntityManager, teardowns: Teardown[]): Pr
       partCategories: (partsOf.get(t.id) ?? []).map((p) => p.category),
       claims,
       capacityWarnFraction: settings.capacityWarnFraction,
-      contactSeconds: t.contactSeconds ?? settings.defaultContactSeconds,
+      ...contactTime(t, settings),
+      usableFraction: settings.usableFraction,
+      deviceCategory: d.category,
+      ...(pack?.internalOhms != null
+        ? {
+            cellInternalResistance: {
+              ohms: n(pack.internalOhms),
+              basis: pack.internalReadings ? 'two DC-method readings on the pack record' : 'the pack record',
+            },
+          }
+        : {}),
     };
-    // Other modules (bench runs, traces…) add what they know, in registration order.
+    // Other modules (bench runs, readings…) add what they know, in registration order; a value the
+    // engineer recorded on the pack (internal resistance) is not replaced by one a run worked out.
     let input = base;
-    for (const c of contributions) input = { ...input, ...c.get(t.id) };
+    for (const c of contributions) {
+      const add = { ...c.get(t.id) };
+      if (base.cellInternalResistance) delete add.cellInternalResistance;
+      // Two measured surface temperatures (a thermal run and a reading): the hotter one counts.
+      if (add.measuredSurface && input.measuredSurface && input.measuredSurface.temperatureC >= add.measuredSurface.temperatureC) delete add.measuredSurface;
+      input = { ...input, ...add };
+    }
     out.set(t.id, input);
   }
   return out;
 }
 
+/**
+ * The contact time a touch margin is judged at, and why: the teardown's own, else the workspace default
+ * for the device category (what is held or worn for long is judged at 10 min or 8 h), else the default.
+ */
+export function contactTime(t: Teardown, settings: WorkspaceSettings): { contactSeconds: number; contactBasis: string } {
+  if (t.contactSeconds != null) return { contactSeconds: t.contactSeconds, contactBasis: 'set on this teardown' };
+  const category = t.device.category;
+  const byCategory = settings.contactSecondsByCategory[category];
+  if (byCategory !== undefined) {
+    return { contactSeconds: byCategory, contactBasis: `workspace default for ${DEVICE_CATEGORY.labels[category].toLowerCase()}s, held or worn for long` };
+  }
+  return { contactSeconds: settings.defaultContactSeconds, contactBasis: 'workspace default' };
+}
+
 /** Figures whose reader may be about to touch something hot get the hot-surface caution beside them. */
-const HOT = /(^|\.)(touchMargin|surfaceRise)$/;
+const HOT = /(^|\.)(touchMargin|surfaceRise|surfaceTemperature|timeToThreshold)$/;
+
+/** A calc figure as the API returns it (calc's mode ids are the record ids as text). */
+export function toFigureDto(f: Figure): FigureDto {
+  return {
+    key: f.key,
+    label: f.label,
+    value: f.value,
+    unit: f.unit,
+    formula: f.formula,
+    source: f.source,
+    inputs: f.inputs.map((i) => ({ key: i.key, label: i.label, value: i.value, ...(i.unit !== undefined ? { unit: i.unit } : {}) })),
+    assumptions: f.assumptions,
+    warnings: f.warnings,
+    caution: HOT.test(f.key) ? HOT_SURFACE_CAUTION : null,
+    modeId: f.modeId === undefined ? null : Number(f.modeId),
+    implausible: f.implausible === true,
+  };
+}
 
 /** The figures and suggestions of a teardown (device loaded), with the decisions taken on the suggestions. */
 export async function teardownFiguresFor(em: EntityManager, t: Teardown): Promise<FiguresResponse & { raw: TeardownFiguresResult }> {
-  const raw = teardownFigures(await figureInput(em, t));
+  const input = await figureInput(em, t);
+  const raw = teardownFigures(input);
   const decisions = await em.find(SuggestionDecisionSchema, { teardown: t.id }, { populate: ['decidedBy'] });
   const byKey = new Map(decisions.map((d) => [d.key, d]));
   const suggestions: SuggestionDto[] = raw.suggestions.map((s) => {
@@ -128,18 +190,8 @@ export async function teardownFiguresFor(em: EntityManager, t: Teardown): Promis
   });
   return {
     raw,
-    figures: raw.figures.map((f) => ({
-      key: f.key,
-      label: f.label,
-      value: f.value,
-      unit: f.unit,
-      formula: f.formula,
-      source: f.source,
-      inputs: f.inputs,
-      assumptions: f.assumptions,
-      warnings: f.warnings,
-      caution: HOT.test(f.key) ? HOT_SURFACE_CAUTION : null,
-    })),
+    figures: raw.figures.map(toFigureDto),
+    modes: (input.modes ?? []).map((m) => ({ id: Number(m.id), name: m.name, note: m.note ?? null })),
     suggestions,
     note: ESTIMATES_NOTE,
   };

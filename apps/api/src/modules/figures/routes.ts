@@ -36,8 +36,8 @@ export const figureRoutes: RouteDef[] = [
     },
     async ({ em, user, params }) => {
       const t = await readableTeardown(em, user, params.id);
-      const { figures, suggestions, note } = await teardownFiguresFor(em, t);
-      return { figures, suggestions, note };
+      const { figures, modes, suggestions, note } = await teardownFiguresFor(em, t);
+      return { figures, modes, suggestions, note };
     },
   ),
   route(

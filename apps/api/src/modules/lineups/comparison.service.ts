@@ -4,6 +4,7 @@
 // lets packages/calc do the rest: comparisonMetrics, weightedScores and paretoFrontierXY.
 import type { EntityManager } from '@mikro-orm/sqlite';
 import {
+  chooseMode,
   comparisonMetrics,
   convertCurrency,
   crossRate,
@@ -27,9 +28,14 @@ import {
   type ComparisonDto,
   type ComparisonMetricDto,
   type ComparisonRowDto,
+  LINEUP_MODE_RULE,
   type LineupMetricKey,
+  type LineupModeChoice,
   type Severity,
 } from '@splitcase/contracts';
+
+/** The mode rule in words, for a missing runtime ("the power-bank output"). */
+const modeRuleWords = (m: LineupModeChoice) => (m.rule === 'named' ? `called "${m.name}"` : `"${LINEUP_MODE_RULE.labels[m.rule]}"`);
 import { AppError } from '../../http/errors';
 import type { AuthUser } from '../../http/route';
 import { teardownCost } from '../cost/cost.service';
@@ -39,7 +45,6 @@ import type { Device } from '../devices/device.entity';
 import { visibleTeardownsByDevice } from '../devices/device.service';
 import { figureInputs } from '../figures/figures.service';
 import { FindingSchema } from '../findings/finding.entity';
-import { BenchRunSchema } from '../runs/bench-run.entity';
 import { DRAFT_READERS } from '../teardowns/access';
 import type { Teardown } from '../teardowns/teardown.entity';
 import { lineupDevices, visibleDeviceIds } from './lineups.service';
@@ -112,7 +117,7 @@ export function metricCatalogue(currency: string): ComparisonMetricDto[] {
     entry('runtimeH', {
       format: 'quantity',
       description:
-        "Runtime at the device's main load (the heater of a pocket heater, the USB output of a power bank, the LED of a headlamp, the motor of a fan) at the recorded duty; from the bench-run capacity when there is one.",
+        "Runtime in the operating mode the lineup compares (by default the one with the most power at the device's main load: the heater of a pocket heater, the USB output of a power bank, the LED of a headlamp, the motor of a fan); without recorded modes, the main load alone at its recorded duty. On usable energy: the discharge run's Wh when there is one.",
       ...f('runtime.hours'),
     }),
     entry('whPerCurrency', {
@@ -159,12 +164,20 @@ interface DeviceRow {
   noTeardown: boolean;
   /** A heater (by category or by a heater load): the heater metric applies. */
   heater: boolean;
+  /** The mode the runtime comes from (null: no modes recorded). */
+  mode: ComparisonRowDto['mode'];
 }
 
-const figureOf = (figures: Figure[], key: string) => figures.find((f) => f.key === key);
-const inputValue = (f: Figure | undefined, label: string) => {
-  const v = f?.inputs.find((i) => i.label === label)?.value;
+const figureOf = (figures: Figure[], key: string, modeId?: string) => figures.find((f) => f.key === key && f.modeId === modeId);
+/** An input of a figure by its key (never by its label). */
+const inputOf = (f: Figure | undefined, key: string) => f?.inputs.find((i) => i.key === key)?.value;
+const numberInput = (f: Figure | undefined, key: string) => {
+  const v = inputOf(f, key);
   return typeof v === 'number' ? v : undefined;
+};
+const textInput = (f: Figure | undefined, key: string) => {
+  const v = inputOf(f, key);
+  return typeof v === 'string' ? v : undefined;
 };
 
 /** Everything known about one device for the lineup, in the lineup currency. */
@@ -177,7 +190,9 @@ async function deviceRow(
   currency: string,
   table: RateTable | null,
   viewer: boolean,
+  modeChoice: LineupModeChoice,
 ): Promise<DeviceRow> {
+  let mode: DeviceRow['mode'] = null;
   const missing: DeviceRow['missing'] = {};
   const sources: DeviceRow['sources'] = {};
   const notes: string[] = [];
@@ -213,7 +228,7 @@ async function deviceRow(
     const why = viewer ? 'No published teardown of this device yet.' : 'No teardown of this device yet.';
     for (const key of LINEUP_METRIC_KEYS) if (key !== 'retailPrice' && key !== 'whPerCurrency') missing[key] = why;
     if (fig.retailPrice !== undefined) missing.whPerCurrency = why;
-    return { device, teardown, figures: fig, missing, sources, retail, notes, noTeardown, heater: device.category === 'pocket-heater' };
+    return { device, teardown, figures: fig, missing, sources, retail, notes, noTeardown, heater: device.category === 'pocket-heater', mode: null };
   }
   const from = `teardown #${teardown.id} (${teardown.date})`;
 
@@ -243,8 +258,9 @@ async function deviceRow(
       missing.whPerKg = missing.packWh;
     }
 
-    // Runtime at the main load only: the same figures, with the other loads left out.
-    const choice = mainLoads(
+    // Runtime in the lineup's chosen mode when the teardown records modes; else at the main load
+    // only, at its own duty (the same figures, with the other loads left out).
+    const main = mainLoads(
       device.category,
       input.loads.map((l) => {
         const w = figureOf(figures, `load.${l.id}.power`)?.value;
@@ -252,23 +268,46 @@ async function deviceRow(
       }),
     );
     if (!input.pack) missing.runtimeH = 'No cells recorded in the power system of the teardown.';
-    else if (choice.ids.length === 0) missing.runtimeH = input.loads.length ? 'No load with a resistance, current or power recorded.' : 'No load recorded in the power system.';
+    else if (input.modes && input.modes.length > 0) {
+      const fullWatts = (loadId: string) => {
+        const w = figureOf(figures, `load.${loadId}.power`)?.value;
+        return typeof w === 'number' ? w : 0;
+      };
+      const kindOf = new Map(input.loads.map((l) => [l.id, l.kind]));
+      const chosen = chooseMode(
+        input.modes.map((m) => ({
+          id: m.id,
+          name: m.name,
+          mainLoadWatts: m.loads.filter((l) => main.ids.includes(l.loadId)).reduce((sum, l) => sum + l.duty * fullWatts(l.loadId), 0),
+          usbOutput: m.loads.some((l) => l.duty > 0 && kindOf.get(l.loadId) === 'usb-output'),
+        })),
+        modeChoice,
+      );
+      if (!chosen) missing.runtimeH = `No recorded mode fits ${modeRuleWords(modeChoice)}.`;
+      else {
+        mode = { id: Number(chosen.id), name: chosen.name, reason: chosen.reason };
+        const runtime = figureOf(figures, 'mode.runtime.hours', chosen.id);
+        if (runtime && typeof runtime.value === 'number') {
+          fig.runtimeH = runtime.value;
+          const watts = numberInput(runtime, 'packWatts');
+          sources.runtimeH = `Mode "${chosen.name}" (${chosen.reason})${watts !== undefined ? `, ${n4(watts)} W from the pack` : ''}; usable energy: ${textInput(runtime, 'usableBasis') ?? 'rated'}; ${from}`;
+        } else missing.runtimeH = `Mode "${chosen.name}" draws no power from the pack.`;
+      }
+    } else if (main.ids.length === 0) missing.runtimeH = input.loads.length ? 'No load with a resistance, current or power recorded.' : 'No load recorded in the power system.';
     else {
-      const main = input.loads.filter((l) => choice.ids.includes(l.id));
-      const runtime = figureOf(teardownFigures({ ...input, loads: main }).figures, 'runtime.hours');
+      const mainLoadsOnly = input.loads.filter((l) => main.ids.includes(l.id));
+      const runtime = figureOf(teardownFigures({ ...input, loads: mainLoadsOnly }).figures, 'runtime.hours');
       if (runtime && typeof runtime.value === 'number') {
         fig.runtimeH = runtime.value;
-        const watts = inputValue(runtime, 'Average power drawn from the pack');
-        const basis = runtime.assumptions[0]?.replace(/; usable fraction 1\.$/, '').replace(/^Energy from the /, '') ?? '';
-        sources.runtimeH = `${main.map((l) => `${l.label} at duty ${n4(l.duty * 100)} %`).join(' + ')}${watts !== undefined ? `, ${n4(watts)} W from the pack` : ''}; energy from the ${basis}; ${from}`;
+        const watts = numberInput(runtime, 'packWatts');
+        sources.runtimeH = `${mainLoadsOnly.map((l) => `${l.label} at duty ${n4(l.duty * 100)} %`).join(' + ')}${watts !== undefined ? `, ${n4(watts)} W from the pack` : ''} (no modes recorded); usable energy: ${textInput(runtime, 'usableBasis') ?? 'rated'}; ${from}`;
       } else missing.runtimeH = 'The main load draws no power at its recorded duty.';
     }
 
     if (device.category === 'pocket-heater' || input.loads.some((l) => l.kind === 'heater')) {
       const density = figureOf(figures, 'heater.powerDensity');
-      const first = density?.inputs[0]?.value;
-      const watts = typeof first === 'number' ? first : undefined;
-      const area = inputValue(density, 'Heated area');
+      const watts = numberInput(density, 'heaterWatts');
+      const area = numberInput(density, 'heatedAreaM2');
       if (density && watts !== undefined && area !== undefined) {
         fig.heaterWatts = watts;
         fig.heatedAreaM2 = area;
@@ -276,20 +315,18 @@ async function deviceRow(
       } else missing.heaterWPerCm2 = 'No heater with a heated area and a power recorded.';
     } else missing.heaterWPerCm2 = 'Not a heater: the metric applies to heater loads only.';
 
-    // Measured capacity: the latest discharge bench run against the label (as in the figures panel).
-    const run = await em.findOne(BenchRunSchema, { teardown: teardown.id, kind: 'discharge' }, { orderBy: { createdAt: 'desc', id: 'desc' } });
-    const measured = run?.analysis.ampHours;
-    if (!run) missing.capacityVsLabel = 'No discharge bench run on the teardown.';
-    else if (typeof measured !== 'number' || !Number.isFinite(measured)) missing.capacityVsLabel = `The discharge run "${run.label}" has no delivered capacity (no current column).`;
+    // Measured capacity: the latest discharge bench run against the label, in Wh (as in the figures panel).
+    const run = input.measuredDischarge;
+    if (!run && input.measuredCapacityAh === undefined) missing.capacityVsLabel = 'No discharge bench run with a delivered capacity on the teardown.';
     else {
       const cap = figureOf(figures, 'capacity.measuredVsLabel');
-      const label = inputValue(cap, 'Label capacity');
-      if (label === undefined || !(label > 0)) missing.capacityVsLabel = 'No label capacity on the device and no cells recorded to compare with.';
+      const measuredWh = numberInput(cap, 'measuredWh');
+      const labelWh = numberInput(cap, 'labelWh');
+      if (measuredWh === undefined || labelWh === undefined || !(labelWh > 0)) missing.capacityVsLabel = 'No label capacity on the device and no cells recorded to compare with.';
       else {
-        fig.measuredAh = measured;
-        fig.claimedAh = label;
-        const basis = cap?.assumptions[0]?.replace(/^Label from the /, '').replace(/\.$/, '') ?? 'label';
-        sources.capacityVsLabel = `${n4(measured)} Ah delivered in bench run #${run.id} "${run.label}" ÷ ${n4(label)} Ah (${basis}), ${from}`;
+        fig.measuredWh = measuredWh;
+        fig.labelWh = labelWh;
+        sources.capacityVsLabel = `${n4(measuredWh)} Wh (${textInput(cap, 'measuredBasis') ?? 'measured'}) ÷ ${n4(labelWh)} Wh (${textInput(cap, 'labelBasis') ?? 'label'}), ${from}`;
       }
     }
   }
@@ -327,7 +364,7 @@ async function deviceRow(
   for (const f of findings) fig.findingsBySeverity[f.severity] += 1;
   for (const severity of SEVERITY.values) sources[FINDING_KEYS[severity]] = `Findings of ${from}`;
   const heater = device.category === 'pocket-heater' || (input?.loads.some((l) => l.kind === 'heater') ?? false);
-  return { device, teardown, figures: fig, missing, sources, retail, notes, noTeardown, heater };
+  return { device, teardown, figures: fig, missing, sources, retail, notes, noTeardown, heater, mode };
 }
 
 /** Sources of the derived metrics, once both inputs are known. */
@@ -340,6 +377,7 @@ function derivedSources(r: DeviceRow, metrics: Record<MetricKey, number | null>,
 export interface ComparisonOptions {
   weights: Record<string, number>;
   weightsFrom: 'saved' | 'preview';
+  mode: LineupModeChoice;
   x?: LineupMetricKey | undefined;
   y?: LineupMetricKey | undefined;
 }
@@ -369,7 +407,7 @@ export async function lineupComparison(em: EntityManager, user: AuthUser, lineup
   const rows: DeviceRow[] = [];
   for (const d of devices) {
     const t = latestOf.get(d.id) ?? null;
-    rows.push(await deviceRow(em, d, t, t ? (inputs.get(t.id) ?? null) : null, currency, table, viewer));
+    rows.push(await deviceRow(em, d, t, t ? (inputs.get(t.id) ?? null) : null, currency, table, viewer, opts.mode));
   }
 
   const computed = rows.map((r) => {
@@ -424,6 +462,7 @@ export async function lineupComparison(em: EntityManager, user: AuthUser, lineup
     rateDate: table?.date ?? null,
     weights: Object.fromEntries(LINEUP_METRIC_KEYS.map((k) => [k, opts.weights[k] ?? 0])),
     weightsFrom: opts.weightsFrom,
+    mode: opts.mode,
     metrics: metricCatalogue(currency).map((m) => (m.key === 'heaterWPerCm2' ? { ...m, applies: rows.some((r) => r.heater) } : m)),
     rows: scored.map((s) => {
       const { r, metrics } = byId.get(s.id)!;
@@ -440,6 +479,9 @@ export async function lineupComparison(em: EntityManager, user: AuthUser, lineup
         coverage: coverage(metrics),
         normalised: s.normalised as Record<string, number>,
         retail: r.retail,
+        mode: r.mode,
+        complete: s.complete,
+        incompleteMetrics: s.missing as LineupMetricKey[],
         notes: r.notes,
       };
     }),

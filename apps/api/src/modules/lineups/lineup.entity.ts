@@ -18,6 +18,8 @@ export const LineupSchema = defineEntity({
     currency: p.string().length(3),
     /** Metric key → weight 0..10 (every metric key present). */
     weights: p.json<Record<string, number>>(),
+    /** Which operating mode of each device is compared ({ rule, name? }); null: the most power at the main load. */
+    modeChoice: p.json<{ rule: 'highest' | 'lowest' | 'power-bank' | 'named'; name?: string }>().nullable(),
     status: p.enum([...LINEUP_STATUS.values]).default('draft'),
     createdBy: () => p.manyToOne(UserSchema).nullable().deleteRule('set null'),
     createdAt: p.datetime().onCreate(() => new Date()),

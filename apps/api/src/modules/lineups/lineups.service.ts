@@ -1,7 +1,7 @@
 // Lineups: who may read and change them, loading with the devices, validation that needs the
 // database (device ids, the currency's rate), and the DTO.
 import type { EntityManager } from '@mikro-orm/sqlite';
-import { LINEUP_METRIC_KEYS, type LineupDto, type Role } from '@splitcase/contracts';
+import { DEFAULT_LINEUP_MODE, LINEUP_METRIC_KEYS, type LineupDto, type Role } from '@splitcase/contracts';
 import { notFound, validationError } from '../../http/errors';
 import type { AuthUser } from '../../http/route';
 import { currentRateTable, hasRate } from '../cost/rates.service';
@@ -76,6 +76,7 @@ export async function toLineupDtos(em: EntityManager, user: AuthUser, lineups: L
       description: l.description ?? null,
       currency: l.currency,
       weights: fullWeights(l.weights),
+      mode: l.modeChoice ?? DEFAULT_LINEUP_MODE,
       status: l.status,
       devices: shown.map((d) => ({ id: d.id, maker: d.maker, model: d.model, category: d.category, position: all.indexOf(d) + 1 })),
       hiddenDevices: all.length - shown.length,

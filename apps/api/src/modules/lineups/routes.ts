@@ -3,6 +3,7 @@ import {
   comparisonQuery,
   comparisonResponse,
   createLineupBody,
+  DEFAULT_LINEUP_MODE,
   DEFAULT_LINEUP_WEIGHTS,
   idParam,
   LINEUP_STATUS,
@@ -39,7 +40,7 @@ const TAG = 'Lineups';
 
 async function snapshot(em: Parameters<typeof lineupDevices>[0], l: Lineup) {
   const devices = (await lineupDevices(em, [l.id])).get(l.id) ?? [];
-  return { name: l.name, description: l.description ?? null, currency: l.currency, weights: fullWeights(l.weights), status: l.status, deviceIds: devices.map((d) => d.id) };
+  return { name: l.name, description: l.description ?? null, currency: l.currency, weights: fullWeights(l.weights), mode: l.modeChoice ?? DEFAULT_LINEUP_MODE, status: l.status, deviceIds: devices.map((d) => d.id) };
 }
 
 export const lineupRoutes: RouteDef[] = [
@@ -99,6 +100,7 @@ export const lineupRoutes: RouteDef[] = [
           description: body.description ?? null,
           currency,
           weights: fullWeights(body.weights ?? DEFAULT_LINEUP_WEIGHTS),
+          modeChoice: body.mode ?? null,
           status: 'draft',
           createdBy: tx.getReference(UserSchema, user.id),
         } as never);
@@ -148,7 +150,7 @@ export const lineupRoutes: RouteDef[] = [
       if (body.status !== undefined && body.status !== lineup.status && !perms.publish) {
         throw forbidden('Only a lead or an admin publishes a lineup or takes it back to draft.');
       }
-      const content = body.name !== undefined || body.description !== undefined || body.deviceIds !== undefined || body.currency !== undefined || body.weights !== undefined;
+      const content = body.name !== undefined || body.description !== undefined || body.deviceIds !== undefined || body.currency !== undefined || body.weights !== undefined || body.mode !== undefined;
       if (content && !perms.edit) throw forbidden('This lineup is published: a lead or an admin changes it.');
       const devices = body.deviceIds ? await devicesByIds(em, body.deviceIds) : null;
       if (body.currency !== undefined && body.currency !== lineup.currency) await checkLineupCurrency(em, body.currency);
@@ -160,6 +162,7 @@ export const lineupRoutes: RouteDef[] = [
         if (body.description !== undefined) l.description = body.description;
         if (body.currency !== undefined) l.currency = body.currency;
         if (body.weights !== undefined) l.weights = fullWeights(body.weights);
+        if (body.mode !== undefined) l.modeChoice = body.mode;
         if (body.status !== undefined && body.status !== l.status) {
           l.status = body.status;
           l.publishedAt = body.status === 'published' ? new Date() : null;
@@ -168,7 +171,7 @@ export const lineupRoutes: RouteDef[] = [
         if (devices) await setLineupDevices(tx, l, devices);
         // Every change bumps the version, a change of devices too.
         l.updatedAt = new Date();
-        const after = { ...before, ...(devices ? { deviceIds: devices.map((d) => d.id) } : {}), name: l.name, description: l.description ?? null, currency: l.currency, weights: fullWeights(l.weights), status: l.status };
+        const after = { ...before, ...(devices ? { deviceIds: devices.map((d) => d.id) } : {}), name: l.name, description: l.description ?? null, currency: l.currency, weights: fullWeights(l.weights), mode: l.modeChoice ?? DEFAULT_LINEUP_MODE, status: l.status };
         const changes = diffChanges(before, after);
         if (Object.keys(changes).length) {
           const published = changes.status ? (l.status === 'published' ? 'published' : 'back to draft') : null;
@@ -231,7 +234,7 @@ export const lineupRoutes: RouteDef[] = [
     },
     async ({ em, user, params, query }) => {
       const lineup = await readableLineup(em, user, params.id);
-      return lineupComparison(em, user, lineup, { weights: fullWeights(lineup.weights), weightsFrom: 'saved', x: query.x, y: query.y });
+      return lineupComparison(em, user, lineup, { weights: fullWeights(lineup.weights), weightsFrom: 'saved', mode: lineup.modeChoice ?? DEFAULT_LINEUP_MODE, x: query.x, y: query.y });
     },
   ),
   route(
@@ -247,7 +250,7 @@ export const lineupRoutes: RouteDef[] = [
     },
     async ({ em, user, params, body }) => {
       const lineup = await readableLineup(em, user, params.id);
-      return lineupComparison(em, user, lineup, { weights: fullWeights(body.weights), weightsFrom: 'preview', x: body.x, y: body.y });
+      return lineupComparison(em, user, lineup, { weights: fullWeights(body.weights), weightsFrom: 'preview', mode: body.mode ?? lineup.modeChoice ?? DEFAULT_LINEUP_MODE, x: body.x, y: body.y });
     },
   ),
 ];

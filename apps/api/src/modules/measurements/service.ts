@@ -33,7 +33,8 @@ export function readMeasuredValue(quantity: MeasuredQuantity, value: string | nu
     return { value: Number(m[1]!.replace(',', '.')), unit: m[2]!.trim(), entered };
   }
   try {
-    const q = parseQuantity(value, quantity);
+    // A surface temperature is a temperature reading of the surface a hand touches.
+    const q = parseQuantity(value, quantity === 'surface-temperature' ? 'temperature' : quantity);
     return { value: q.value, unit: SI_UNIT[quantity], entered };
   } catch (err) {
     if (err instanceof QuantityError) throw validationError({ value: `${err.message} — the quantity is ${MEASURED_QUANTITY.labels[quantity].toLowerCase()}` });

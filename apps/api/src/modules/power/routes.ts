@@ -17,6 +17,7 @@ import {
   updateLoadBody,
 } from '@splitcase/contracts';
 import { z } from 'zod';
+import { internalResistanceDc } from '@splitcase/calc';
 import { notFound, validationError } from '../../http/errors';
 import { route, type RouteContext, type RouteDef } from '../../http/route';
 import { diffChanges, recordAudit } from '../audit/audit.service';
@@ -29,6 +30,7 @@ import { PackSchema, type Pack } from './pack.entity';
 import { mergeEntered, readQuantities, type Raw } from './quantities';
 import {
   CONVERTER_RULES,
+  INTERNAL_RESISTANCE_READING_RULES,
   LOAD_RULES,
   PACK_RULES,
   defaultConverterLabel,
@@ -49,16 +51,42 @@ type Ctx = RouteContext<unknown, unknown, unknown>;
 // ---- pack ----
 
 const packSnapshot = (p: Pack) => toPackDto(p) as unknown as Record<string, unknown>;
-const PACK_AUDIT_KEYS = ['chemistry', 'cellFormat', 'nominalVolts', 'maxVolts', 'capacityAh', 'measuredCapacityAh', 'series', 'parallel', 'massKg', 'protection', 'joining'];
+const PACK_AUDIT_KEYS = ['chemistry', 'cellFormat', 'nominalVolts', 'maxVolts', 'capacityAh', 'measuredCapacityAh', 'series', 'parallel', 'massKg', 'protection', 'joining', 'internalResistanceOhms'];
+
+/** Two DC-method readings → the cell's internal resistance through calc; errors name the reading. */
+function readInternalResistance(raw: z.output<typeof packBody>['internalResistanceReadings']) {
+  if (!raw) return null;
+  const read = readQuantities(raw, INTERNAL_RESISTANCE_READING_RULES);
+  const r = read.values as Record<keyof typeof INTERNAL_RESISTANCE_READING_RULES, number>;
+  const field = (k: string) => `internalResistanceReadings.${k}`;
+  if (!(r.highAmps > r.lowAmps)) throw validationError({ [field('highAmps')]: 'The high current must be above the low current' });
+  if (!(r.lowVolts > r.highVolts)) throw validationError({ [field('highVolts')]: 'The voltage at the high current must be below the voltage at the low current' });
+  const readings = { lowAmps: r.lowAmps, lowVolts: r.lowVolts, highAmps: r.highAmps, highVolts: r.highVolts };
+  return { ohms: internalResistanceDc(readings), readings };
+}
 
 async function putPack(ctx: Ctx & { body: z.output<typeof packBody>; params: { id: number } }) {
   const { body } = ctx;
   return changeTeardownContent(ctx, ctx.params.id, async (tx, t) => {
     const read = readQuantities(
-      { nominalVolts: body.nominalVolts, maxVolts: body.maxVolts ?? null, capacityAh: body.capacityAh, measuredCapacityAh: body.measuredCapacityAh ?? null, series: body.series, parallel: body.parallel, massKg: body.massKg ?? null },
+      {
+        nominalVolts: body.nominalVolts,
+        maxVolts: body.maxVolts ?? null,
+        capacityAh: body.capacityAh,
+        measuredCapacityAh: body.measuredCapacityAh ?? null,
+        series: body.series,
+        parallel: body.parallel,
+        massKg: body.massKg ?? null,
+        internalResistanceOhms: body.internalResistanceOhms ?? null,
+      },
       PACK_RULES,
     );
     const v = read.values;
+    const ir = readInternalResistance(body.internalResistanceReadings);
+    if (ir) {
+      v.internalResistanceOhms = ir.ohms;
+      delete read.entered.internalResistanceOhms;
+    }
     if (v.maxVolts != null && v.nominalVolts != null && v.maxVolts < v.nominalVolts) throw validationError({ maxVolts: 'The charge voltage is below the nominal voltage' });
     if (v.measuredCapacityAh != null && v.capacityAh != null && v.measuredCapacityAh > v.capacityAh * 1.5) {
       throw validationError({ measuredCapacityAh: 'More than 1.5 × the rated capacity: check the unit (mAh or Ah)' });
@@ -79,6 +107,8 @@ async function putPack(ctx: Ctx & { body: z.output<typeof packBody>; params: { i
       packMassKg: v.massKg ?? null,
       protection: body.protection,
       joining: body.joining ?? null,
+      internalOhms: v.internalResistanceOhms ?? null,
+      internalReadings: ir?.readings ?? null,
       entered: Object.keys(read.entered).length ? read.entered : null,
     });
     await tx.flush();
@@ -121,6 +151,7 @@ function applyLoadValues(load: Load, read: ReturnType<typeof readQuantities<keyo
     count: 'count',
     duty: 'duty',
     heatedAreaM2: 'heatedAreaM2',
+    heatedMassKg: 'heatedMassKg',
   };
   for (const key of read.present) {
     const value = v[key];
@@ -138,7 +169,7 @@ function checkLoad(load: Load) {
 }
 
 const loadSnapshot = (l: Load) => toLoadDto(l) as unknown as Record<string, unknown>;
-const LOAD_AUDIT_KEYS = ['kind', 'label', 'resistanceOhms', 'currentAmps', 'powerWatts', 'supplyVolts', 'count', 'connection', 'duty', 'converterId', 'heatedAreaM2', 'surfaceMaterial'];
+const LOAD_AUDIT_KEYS = ['kind', 'label', 'resistanceOhms', 'currentAmps', 'powerWatts', 'supplyVolts', 'count', 'connection', 'duty', 'converterId', 'heatedAreaM2', 'surfaceMaterial', 'elementMaterial', 'heatedMassKg'];
 
 // ---- converters ----
 
@@ -253,6 +284,7 @@ export const powerRoutes: RouteDef[] = [
           connection: body.connection,
           converter: converter ?? null,
           surfaceMaterial: body.surfaceMaterial ?? null,
+          elementMaterial: body.elementMaterial ?? null,
           count: 1,
           duty: 1,
         } as never) as Load;
@@ -284,6 +316,7 @@ export const powerRoutes: RouteDef[] = [
         if (body.connection) load.connection = body.connection;
         if (converter !== undefined) load.converter = converter;
         if (body.surfaceMaterial !== undefined) load.surfaceMaterial = body.surfaceMaterial ?? null;
+        if (body.elementMaterial !== undefined) load.elementMaterial = body.elementMaterial ?? null;
         applyLoadValues(load, read);
         checkLoad(load);
         const changes = diffChanges(before, loadSnapshot(load), LOAD_AUDIT_KEYS);
