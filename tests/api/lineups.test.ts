@@ -44,12 +44,13 @@ async function comparison(a: Agent, id: number, q = ''): Promise<ComparisonDto> 
   return res.body as ComparisonDto;
 }
 /** Capacity delivered in the latest discharge run of a teardown, read from the runs API. */
-async function dischargeAh(a: Agent, teardownId: number): Promise<{ runId: number; ah: number }> {
+async function dischargeAh(a: Agent, teardownId: number): Promise<{ runId: number; ah: number; wh: number }> {
   const res = await a.get(`/api/teardowns/${teardownId}/runs`).expect(200);
-  const runs = (res.body.runs as { id: number; kind: string; createdAt: string; analysis: { ampHours: number | null } }[]).filter((r) => r.kind === 'discharge');
+  const runs = (res.body.runs as { id: number; kind: string; createdAt: string; analysis: { ampHours: number | null; wattHours: number | null } }[]).filter((r) => r.kind === 'discharge');
   runs.sort((x, y) => y.createdAt.localeCompare(x.createdAt) || y.id - x.id);
   expect(runs[0]?.analysis.ampHours, 'a demo discharge run').toBeTypeOf('number');
-  return { runId: runs[0]!.id, ah: runs[0]!.analysis.ampHours! };
+  expect(runs[0]?.analysis.wattHours, 'a demo discharge run').toBeTypeOf('number');
+  return { runId: runs[0]!.id, ah: runs[0]!.analysis.ampHours!, wh: runs[0]!.analysis.wattHours! };
 }
 
 beforeAll(async () => {
@@ -212,7 +213,7 @@ describe('the comparison', () => {
     const m = row.metrics as Record<string, number>;
     // The latest teardown the lead can see, and its discharge run.
     expect(row.teardown?.id).toBe(dev.duo!.latestTeardown!.id);
-    const { runId, ah } = await dischargeAh(as.lead!, row.teardown!.id);
+    const { runId, wh } = await dischargeAh(as.lead!, row.teardown!.id);
     // Pack: one 18650 cell, 3.7 V × 2.7 Ah = 9.99 Wh [S: Wh = V·Ah, REFERENCES §4]
     expect(m.packWh).toBeCloseTo(3.7 * 2.7, 9);
     expect(m.packWh).toBeCloseTo(9.99, 9);
@@ -223,17 +224,20 @@ describe('the comparison', () => {
     expect(m.whPerKg).toBeCloseTo(9.99 / 0.046, 6);
     expect(m.whPerKg).toBeGreaterThan(100);
     expect(m.whPerKg).toBeLessThan(265);
-    // Measured capacity vs label: delivered Ah of the discharge run ÷ the 5.2 Ah on the label [C]
-    expect(m.capacityVsLabel).toBeCloseTo(ah / 5.2, 9);
+    // Measured capacity vs label, in Wh (issue 10 §2.1): delivered Wh of the discharge run ÷ the
+    // 5.2 Ah on the label × the 3.7 V cell nominal voltage (labels quote mAh at the cell voltage) [C; CP]
+    expect(m.capacityVsLabel).toBeCloseTo(wh / (5.2 * 3.7), 9);
     expect(m.capacityVsLabel).toBeLessThan(0.55); // a 2.7 Ah cell sold as 5200 mAh
-    expect(row.sources.capacityVsLabel).toContain(`bench run #${runId}`);
-    // Runtime at the main load (the heater; the USB output is left out): two 3.0 Ω elements in
-    // parallel at 3.65 V: P = V² / (R/2) = 3.65² / 1.5 = 8.8817 W [C: Joule's law], duty 1, straight
-    // from the cell (efficiency 1); energy from the measured capacity at nominal voltage:
-    // t = ah × 3.7 V / 8.8817 W [C: energy balance]
+    expect(row.sources.capacityVsLabel).toContain(`discharge run`);
+    void runId;
+    // Runtime in the mode the lineup compares (default: the most power at the main load, the heater's
+    // "High"; the USB output is left out): two 3.0 Ω elements in parallel at 3.65 V: P = V² / (R/2) =
+    // 3.65² / 1.5 = 8.8817 W [C: Joule's law], duty 1, straight from the cell (efficiency 1); usable
+    // energy = the Wh the discharge run delivered: t = wh / 8.8817 W [C: energy balance]
     const heaterW = (3.65 * 3.65) / 1.5;
-    expect(m.runtimeH).toBeCloseTo((ah * 3.7) / heaterW, 6);
-    expect(row.sources.runtimeH).toMatch(/Flexible PCB heater elements/);
+    expect(m.runtimeH).toBeCloseTo(wh / heaterW, 6);
+    expect(row.mode).toMatchObject({ name: 'High', reason: 'the most power at the main load' });
+    expect(row.sources.runtimeH).toMatch(/Mode "High"/);
     expect(row.sources.runtimeH).not.toMatch(/USB/);
     // Heater power density at full duty: 8.8817 W over 2 × 6 cm × 4.5 cm = 54 cm² [C: p = P / A]
     expect(m.heaterWPerCm2).toBeCloseTo(heaterW / 54, 6);
@@ -252,19 +256,19 @@ describe('the comparison', () => {
   it('Pellam Works Stackcell 10: the metrics worked by hand', async () => {
     const row = rowOf(c, dev.pellam10!.id);
     const m = row.metrics as Record<string, number>;
-    const { ah } = await dischargeAh(as.lead!, row.teardown!.id);
+    const { wh } = await dischargeAh(as.lead!, row.teardown!.id);
     // 1S3P of 3.35 Ah cells at 3.7 V: 3 × 3.35 Ah × 3.7 V = 37.185 Wh [S: Wh = V·Ah, REFERENCES §4]
     expect(m.packWh).toBeCloseTo(37.185, 9);
     expect(m.retailPrice).toBe(19.99);
     expect(m.whPerCurrency).toBeCloseTo(37.185 / 19.99, 9); // 1.860 Wh per USD [C]
     // 147 g pack: 37.185 / 0.147 = 252.96 Wh/kg, inside 100–265 Wh/kg [S: REFERENCES §4]
     expect(m.whPerKg).toBeCloseTo(37.185 / 0.147, 6);
-    // Label 10 000 mAh [C]
-    expect(m.capacityVsLabel).toBeCloseTo(ah / 10, 9);
-    // Main load: the USB-C output, 3 A at the 5 V of the boost stage = 15 W; through the boost at
-    // its measured 87 %: 15 / 0.87 = 17.24 W from the pack [C: converter power balance];
-    // t = ah × 3.7 V / 17.24 W [C]
-    expect(m.runtimeH).toBeCloseTo((ah * 3.7) / (15 / 0.87), 6);
+    // Label 10 000 mAh at the 3.7 V cell voltage = 37 Wh, against the run's delivered Wh [C; CP]
+    expect(m.capacityVsLabel).toBeCloseTo(wh / 37, 9);
+    // Mode "USB-C output": 3 A at the 5 V of the boost stage = 15 W; through the boost at its
+    // measured 87 %: 15 / 0.87 = 17.24 W from the pack [C: converter power balance]; t = wh / 17.24 W [C]
+    expect(m.runtimeH).toBeCloseTo(wh / (15 / 0.87), 6);
+    expect(row.mode?.name).toBe('USB-C output');
     // Not a heater: missing with the reason, never 0.
     expect(m.heaterWPerCm2).toBeNull();
     expect(row.missing.heaterWPerCm2).toMatch(/Not a heater/);

@@ -460,10 +460,12 @@ describe('figures of the demo heater', () => {
     // [S: Wh = V_nom·Ah, REFERENCES §4; C] 3.7 V × 2.7 Ah = 9.99 Wh
     expect(fig('pack.energy')).toMatchObject({ unit: 'Wh' });
     expect(fig('pack.energy').value).toBeCloseTo(9.99, 9);
-    // [C; CP "a little over one hour"] runtime = 9.99 Wh ÷ 8.881667 W (heaters straight on the cell: efficiency 1) = 1.1248 h
+    // [C; CP "a little over one hour"] runtime = 9.99 Wh × usable 0.9 (workspace default [CP]) ÷ 8.881667 W
+    // (heaters straight on the cell: efficiency 1) = 1.0123 h — the full rated energy (1.1248 h) was issue 10 §2.6
     expect(fig('runtime.hours').unit).toBe('h');
-    expect(fig('runtime.hours').value).toBeCloseTo(9.99 / 8.881667, 5);
-    expect(fig('runtime.hours').value).toBeCloseTo(1.1248, 4);
+    expect(fig('runtime.hours').value).toBeCloseTo((9.99 * 0.9) / 8.881667, 5);
+    expect(fig('runtime.hours').value).toBeCloseTo(1.0123, 4);
+    expect(fig('runtime.hours').inputs.find((i: { key: string }) => i.key === 'usableBasis').value).toMatch(/usable fraction 0.9 \(workspace setting\)/);
     // [S: IATA DGR, REFERENCES §4] 9.99 Wh does not exceed 100 Wh
     expect(fig('pack.transportClass').value).toBe('up-to-100-wh');
     // [C] 9.99 Wh ÷ 0.046 kg = 217.17 Wh/kg
