@@ -59,7 +59,8 @@ function labelCellVolts(ctx: AnalysisContext): { volts: number; words: string } 
 /** The label energy in words: its Wh, or its Ah × the cell voltage. */
 function labelWords(basis: 'label-wh' | 'label-ah-at-cell-volts', wh: number, ctx: AnalysisContext): string {
   if (basis === 'label-wh') return `the ${fmt(wh)} Wh on the label`;
-  return `the label's ${fmt(ctx.device.claimCapacityAh!)} Ah × ${labelCellVolts(ctx).words} = ${fmt(wh)} Wh (labels quote mAh at the cell voltage, whatever the cells in series)`;
+  const inSeries = ctx.pack && ctx.pack.series > 1 ? ` (labels quote mAh at the cell voltage: the ${ctx.pack.series} cells in series raise the voltage, not the mAh)` : '';
+  return `the label's ${fmt(ctx.device.claimCapacityAh!)} Ah × ${labelCellVolts(ctx).words} = ${fmt(wh)} Wh${inSeries}`;
 }
 
 function optionError(field: string, message: string): AppError {
