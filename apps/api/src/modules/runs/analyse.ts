@@ -155,7 +155,14 @@ export function analyseRun(kind: RunKind, series: StoredSeries, options: RunOpti
   if (kind === 'charge') {
     const terminationFraction = options.terminationFraction ?? DEFAULT_TERMINATION_FRACTION;
     const ratedAh = ctx.pack ? ctx.pack.cellRatedAh * ctx.pack.parallel : undefined;
-    const r = analyseCharge(series, { cvVolts: options.cvVolts ?? undefined, terminationFraction, ratedCapacityAh: ratedAh });
+    let r: ReturnType<typeof analyseCharge>;
+    try {
+      r = analyseCharge(series, { cvVolts: options.cvVolts ?? undefined, terminationFraction, ratedCapacityAh: ratedAh });
+    } catch (err) {
+      // A termination at or above the charger's current: name the field as the form labels it.
+      if (err instanceof RangeError && err.message.startsWith('terminationFraction: ')) throw optionError('terminationFraction', err.message.replace(/^terminationFraction: /, 'Termination (C): '));
+      throw err;
+    }
     if (options.cvVolts === undefined || options.cvVolts === null) notes.push(`Charge voltage estimated from the top of the log: ${fmt(r.plateauVolts, 4)} V.`);
     const ratedWords =
       ctx.pack && ctx.pack.parallel > 1 ? `${ctx.pack.parallel} cells of ${fmt(ctx.pack.cellRatedAh)} Ah in parallel, pack record` : 'pack record';
