@@ -728,6 +728,11 @@ describe('series packs against the label, the debounced cut-off and the terminat
     const tenth = (await upload(a, id, lines.join('\n'), mapping, { options: { terminationFraction: 0.1 } }).expect(201)).body.run;
     expect(tenth.analysis.charge.terminationCurrentA).toBeCloseTo(0.3, 9);
     expect(Math.abs(tenth.analysis.charge.chargeTimeS - (3000 + 900 * Math.log(5)))).toBeLessThanOrEqual(10);
+    // 0.5 C of 3.0 Ah is 1.5 A, not below the 1.5 A the charger gives: refused, naming the field, nothing stored.
+    const before = await stored();
+    const refused = await upload(a, id, lines.join('\n'), mapping, { options: { terminationFraction: 0.5 } }).expect(422);
+    expect(refused.body.error.fields['options.terminationFraction']).toMatch(/^Termination \(C\): 0\.5 C of the rated 3 Ah is 1\.5 A, not below the constant current of 1\.5 A/);
+    expect(await stored()).toEqual(before);
   });
 });
 

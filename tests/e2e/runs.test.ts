@@ -65,6 +65,28 @@ describe('bench runs', () => {
     await page.context().close();
   });
 
+  it("shows a demo discharge's pulse resistance with both levels, the debounce it used and the label in Wh; a charge's termination basis", async () => {
+    const page = await signedInPage(browser, 'engineer');
+    type Run = { id: number; teardownId: number; kind: string; analysis: { discharge?: { internalResistance?: { ohms: number } | null } } };
+    const all = ((await (await page.request.get('/api/runs')).json()) as { runs: Run[] }).runs;
+    const pulsed = all.find((r) => r.kind === 'discharge' && r.analysis.discharge?.internalResistance)!;
+    await page.goto(`/teardowns/${pulsed.teardownId}/runs?run=${pulsed.id}`);
+    const resistance = page.locator('dt', { hasText: 'Internal resistance (DC)' }).locator('xpath=following-sibling::dd');
+    await resistance.first().waitFor({ timeout: 30_000 });
+    await expect.poll(() => resistance.first().textContent(), { timeout: 10_000 }).toMatch(/^\d+(\.\d+)? mΩ$/);
+    // Both levels: I₁ at U₁ → I₂ at U₂.
+    await expect.poll(() => resistance.nth(1).textContent(), { timeout: 10_000 }).toMatch(/A at \d\.\d+ V → .*A at \d\.\d+ V/);
+    const duration = page.locator('dt', { hasText: 'Duration' }).locator('xpath=following-sibling::dd[2]');
+    await expect.poll(() => duration.textContent(), { timeout: 10_000 }).toMatch(/held 5 s \(workspace setting\)/);
+    await expect.poll(() => page.getByRole('region', { name: 'Comparison with the label' }).textContent(), { timeout: 10_000 }).toMatch(/of the label, in energy: .* Wh delivered, .* Wh claimed.*Basis:/);
+
+    const charge = all.find((r) => r.kind === 'charge' && r.teardownId === pulsed.teardownId)!;
+    await page.goto(`/teardowns/${charge.teardownId}/runs?run=${charge.id}`);
+    const termination = page.locator('dt', { hasText: 'Termination current' }).locator('xpath=following-sibling::dd[2]');
+    await expect.poll(() => termination.textContent(), { timeout: 30_000 }).toMatch(/0\.05 C of the rated .* Ah \(.*pack record\)/);
+    await page.context().close();
+  });
+
   it('names the row and column of a bad log and keeps the mapping to fix it', async () => {
     const page = await signedInPage(browser, 'engineer');
     const runs = (await (await page.request.get('/api/runs?kind=discharge')).json()) as { runs: { teardownId: number; device: { model: string } }[] };

@@ -28,6 +28,10 @@ export const workspaceSettingsSchema = z.object({
   cutoffDebounceSeconds: z.number({ error: 'A number of seconds' }).min(0, 'At least 0 s').max(600, 'At most 600 s').default(5),
 });
 export type WorkspaceSettings = z.infer<typeof workspaceSettingsSchema>;
+/** The cut-off debounce on its own, for the bench-runs page's setting form. */
+export const cutoffDebounceSettingBody = workspaceSettingsSchema.pick({ cutoffDebounceSeconds: true });
+export type CutoffDebounceSettingForm = z.input<typeof cutoffDebounceSettingBody>;
+export type CutoffDebounceSettingBody = z.output<typeof cutoffDebounceSettingBody>;
 export const settingsResponse = z.object({ settings: workspaceSettingsSchema });
 export const updateSettingsBody = workspaceSettingsSchema.partial().refine((b) => Object.keys(b).length > 0, { message: 'Change at least one setting' });
 export type UpdateSettingsBody = z.infer<typeof updateSettingsBody>;

@@ -59,7 +59,8 @@ function labelCellVolts(ctx: AnalysisContext): { volts: number; words: string } 
 /** The label energy in words: its Wh, or its Ah × the cell voltage. */
 function labelWords(basis: 'label-wh' | 'label-ah-at-cell-volts', wh: number, ctx: AnalysisContext): string {
   if (basis === 'label-wh') return `the ${fmt(wh)} Wh on the label`;
-  return `the label's ${fmt(ctx.device.claimCapacityAh!)} Ah × ${labelCellVolts(ctx).words} = ${fmt(wh)} Wh (labels quote mAh at the cell voltage, whatever the cells in series)`;
+  const inSeries = ctx.pack && ctx.pack.series > 1 ? ` (labels quote mAh at the cell voltage: the ${ctx.pack.series} cells in series raise the voltage, not the mAh)` : '';
+  return `the label's ${fmt(ctx.device.claimCapacityAh!)} Ah × ${labelCellVolts(ctx).words} = ${fmt(wh)} Wh${inSeries}`;
 }
 
 function optionError(field: string, message: string): AppError {
@@ -154,7 +155,14 @@ export function analyseRun(kind: RunKind, series: StoredSeries, options: RunOpti
   if (kind === 'charge') {
     const terminationFraction = options.terminationFraction ?? DEFAULT_TERMINATION_FRACTION;
     const ratedAh = ctx.pack ? ctx.pack.cellRatedAh * ctx.pack.parallel : undefined;
-    const r = analyseCharge(series, { cvVolts: options.cvVolts ?? undefined, terminationFraction, ratedCapacityAh: ratedAh });
+    let r: ReturnType<typeof analyseCharge>;
+    try {
+      r = analyseCharge(series, { cvVolts: options.cvVolts ?? undefined, terminationFraction, ratedCapacityAh: ratedAh });
+    } catch (err) {
+      // A termination at or above the charger's current: name the field as the form labels it.
+      if (err instanceof RangeError && err.message.startsWith('terminationFraction: ')) throw optionError('terminationFraction', err.message.replace(/^terminationFraction: /, 'Termination (C): '));
+      throw err;
+    }
     if (options.cvVolts === undefined || options.cvVolts === null) notes.push(`Charge voltage estimated from the top of the log: ${fmt(r.plateauVolts, 4)} V.`);
     const ratedWords =
       ctx.pack && ctx.pack.parallel > 1 ? `${ctx.pack.parallel} cells of ${fmt(ctx.pack.cellRatedAh)} Ah in parallel, pack record` : 'pack record';

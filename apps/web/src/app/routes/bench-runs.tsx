@@ -2,9 +2,10 @@ import { PageHeader } from '@/components/page';
 import { paths } from '@/config/paths';
 import { useMe } from '@/lib/session';
 import { CapacityWarningSetting } from '@/features/runs/components/capacity-warning-setting';
+import { CutoffDebounceSetting } from '@/features/runs/components/cutoff-debounce-setting';
 import { RunsOverview } from '@/features/runs/components/runs-overview';
 
-/** Bench runs across devices: overlay the same test on several units, and the capacity warning setting. */
+/** Bench runs across devices: overlay the same test on several units, the capacity warning and cut-off debounce settings. */
 export function Component() {
   const me = useMe().data;
   return (
@@ -16,8 +17,9 @@ export function Component() {
       />
       <div className="grid gap-5 xl:grid-cols-[minmax(0,1fr)_20rem]">
         <RunsOverview teardownLink={(r) => paths.teardownRun(r.teardownId, r.id)} />
-        <div>
+        <div className="space-y-5">
           <CapacityWarningSetting canEdit={me?.role === 'admin'} />
+          <CutoffDebounceSetting canEdit={me?.role === 'admin'} />
         </div>
       </div>
     </div>

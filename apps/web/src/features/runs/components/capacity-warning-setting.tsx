@@ -24,8 +24,8 @@ export function CapacityWarningSetting({ canEdit }: { canEdit: boolean }) {
     <Card title="Capacity warning">
       <div className="space-y-3 p-4 text-sm">
         <p className="text-graphite-700">
-          A discharge that delivers less than <strong className="num">{Math.round(current * 10) / 10} %</strong> of the capacity on the label is flagged, in the runs, the figures and the
-          suggested findings.
+          A discharge that delivers less than <strong className="num">{Math.round(current * 10) / 10} %</strong> of the label is flagged, in the runs, the figures and the suggested
+          findings. Runs compare energy: the label&apos;s Wh, or its mAh at the cell voltage.
         </p>
         {canEdit ? (
           <form

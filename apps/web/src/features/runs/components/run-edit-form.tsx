@@ -4,7 +4,9 @@ import { Button } from '@/components/button';
 import { ErrorPanel } from '@/components/error-boundary';
 import { Field, Input, Select } from '@/components/field';
 import { ApiError } from '@/lib/api-client';
+import { useSettings } from '../api/settings';
 import { useUpdateRun } from '../api/update-run';
+import { debounceDefaultText, TERMINATION_HINT } from './run-option-text';
 
 const text = (x: number | null | undefined) => (x === null || x === undefined ? '' : String(x));
 const numberOrNull = (s: string) => (s.trim() === '' ? null : Number(s.replace(',', '.')));
@@ -15,8 +17,10 @@ export function RunEditForm({ run, onClose }: { run: RunDto; onClose: () => void
   const o = run.options;
   const [label, setLabel] = useState(run.label);
   const [cutoffVolts, setCutoff] = useState(text(o.cutoffVolts));
+  const [debounce, setDebounce] = useState(text(o.cutoffDebounceSeconds));
   const [cvVolts, setCv] = useState(text(o.cvVolts));
-  const [termination, setTermination] = useState(o.terminationFraction ? String(o.terminationFraction * 100) : '');
+  const [termination, setTermination] = useState(text(o.terminationFraction));
+  const workspaceDebounce = useSettings().data?.cutoffDebounceSeconds;
   const [material, setMaterial] = useState<string>(o.material ?? '');
   const [contact, setContact] = useState(text(o.contactSeconds));
   const [threshold, setThreshold] = useState(text(o.thresholdC));
@@ -25,11 +29,8 @@ export function RunEditForm({ run, onClose }: { run: RunDto; onClose: () => void
   const fields = update.error instanceof ApiError ? update.error.fields : {};
 
   const options = (): RunOptions => {
-    if (run.kind === 'discharge') return { cutoffVolts: numberOrNull(cutoffVolts) };
-    if (run.kind === 'charge') {
-      const pct = numberOrNull(termination);
-      return { cvVolts: numberOrNull(cvVolts), terminationFraction: pct === null ? null : pct / 100 };
-    }
+    if (run.kind === 'discharge') return { cutoffVolts: numberOrNull(cutoffVolts), cutoffDebounceSeconds: numberOrNull(debounce) };
+    if (run.kind === 'charge') return { cvVolts: numberOrNull(cvVolts), terminationFraction: numberOrNull(termination) };
     if (run.kind === 'thermal') return { material: (material || null) as RunOptions['material'], contactSeconds: numberOrNull(contact), thresholdC: numberOrNull(threshold) };
     return { cellEnergyWh: numberOrNull(cellEnergy) };
   };
@@ -61,16 +62,21 @@ export function RunEditForm({ run, onClose }: { run: RunDto; onClose: () => void
           {(f) => <Input {...f} value={label} maxLength={160} onChange={(e) => setLabel(e.target.value)} />}
         </Field>
         {run.kind === 'discharge' && (
-          <Field label="Cut-off voltage (V)" error={fields['options.cutoffVolts']} hint="Blank: until the load stops">
-            {(f) => <Input {...f} inputMode="decimal" value={cutoffVolts} onChange={(e) => setCutoff(e.target.value)} />}
-          </Field>
+          <>
+            <Field label="Cut-off voltage (V)" error={fields['options.cutoffVolts']} hint="Blank: until the load stops">
+              {(f) => <Input {...f} inputMode="decimal" value={cutoffVolts} onChange={(e) => setCutoff(e.target.value)} />}
+            </Field>
+            <Field label="Cut-off debounce (s)" error={fields['options.cutoffDebounceSeconds']} hint={`Blank: the workspace ${debounceDefaultText(workspaceDebounce)}; 0: the first sample at the cut-off`}>
+              {(f) => <Input {...f} inputMode="decimal" value={debounce} onChange={(e) => setDebounce(e.target.value)} />}
+            </Field>
+          </>
         )}
         {run.kind === 'charge' && (
           <>
             <Field label="Charge voltage (V)" error={fields['options.cvVolts']} hint="Blank: estimated from the log">
               {(f) => <Input {...f} inputMode="decimal" value={cvVolts} onChange={(e) => setCv(e.target.value)} />}
             </Field>
-            <Field label="Termination (% of CC)" error={fields['options.terminationFraction']} hint="Blank: 5 %">
+            <Field label="Termination (C)" error={fields['options.terminationFraction']} hint={TERMINATION_HINT}>
               {(f) => <Input {...f} inputMode="decimal" value={termination} onChange={(e) => setTermination(e.target.value)} />}
             </Field>
           </>

@@ -85,7 +85,7 @@ export function RunPicker({
                     </span>
                     <span className="num hidden text-right text-xs text-graphite-600 sm:block">
                       {runHeadline(r)}
-                      <span className="block text-graphite-400">{formatElapsed(r.durationS)}</span>
+                      <span className="block text-graphite-500">{formatElapsed(r.durationS)}</span>
                     </span>
                   </label>
                 </li>

@@ -17,6 +17,19 @@ function Figure({ label, value, detail, tone = 'plain' }: { label: string; value
   );
 }
 
+type Discharge = NonNullable<RunDto['analysis']['discharge']>;
+type Charge = NonNullable<RunDto['analysis']['charge']>;
+
+/** The debounce a discharge's cut-off used, in words. */
+const debounceText = (d: NonNullable<Discharge['cutoffDebounce']>) =>
+  d.seconds > 0 ? `held ${formatElapsed(d.seconds)} (${d.source === 'run' ? 'this run' : 'workspace setting'})` : `no debounce (${d.source === 'run' ? 'this run' : 'workspace setting'})`;
+
+/** What the termination fraction was taken of: C of the rated capacity, or (older runs, no pack record) the CC current. */
+const terminationText = (c: Charge) =>
+  c.termination?.basis === 'rated-capacity' && c.termination.ratedAh !== null
+    ? `${Number(c.terminationFraction.toPrecision(3))} C of ${formatQuantity(c.termination.ratedAh, 'Ah')} rated`
+    : `${sig(c.terminationFraction * 100, 2)} % of CC`;
+
 const celsius = (c: number | null | undefined, digits = 3) => (c === null || c === undefined ? '—' : `${sig(c, digits)} °C`);
 const percent = (p: number) => `${sig(p, 3)} %`;
 
@@ -48,9 +61,13 @@ export function RunComparison({ run }: { run: RunDto }) {
     <section aria-label="Comparison with the label" className="space-y-2 rounded-md border border-graphite-100 p-3">
       <h3 className="text-xs font-semibold uppercase tracking-wide text-graphite-500">Measured against the claims</h3>
       {c.label && (
-        <Verdict warning={c.label.warning} warnBelow={c.warnBelowPercent}>
-          <strong className="num">{percent(c.label.percent)}</strong> of the label: {formatQuantity(c.label.measuredAh, 'Ah')} delivered, {formatQuantity(c.label.claimedAh, 'Ah')} claimed.
-        </Verdict>
+        <div className="space-y-0.5">
+          <Verdict warning={c.label.warning} warnBelow={c.warnBelowPercent}>
+            <strong className="num">{percent(c.label.percent)}</strong> of the label, in energy: {formatQuantity(c.label.measuredWh, 'Wh')} delivered, {formatQuantity(c.label.claimedWh, 'Wh')} claimed
+            {c.label.claimedAh !== null && <> ({formatQuantity(c.label.claimedAh, 'Ah')} on the label)</>}.
+          </Verdict>
+          <p className="text-xs text-graphite-500">Basis: {c.label.basis}</p>
+        </div>
       )}
       {c.rated && (
         <Verdict warning={c.rated.warning} warnBelow={c.warnBelowPercent}>
@@ -72,6 +89,7 @@ export function RunComparison({ run }: { run: RunDto }) {
             <strong className="num">{percent(c.labelEnergy.percent)}</strong>: {formatQuantity(c.labelEnergy.measuredWh, 'Wh')} at the output against {formatQuantity(c.labelEnergy.claimedWh, 'Wh')} on the
             label. Conversion usually keeps 80–90 % of the cell energy.
           </span>
+          <p className="w-full text-xs text-graphite-500">Basis: {c.labelEnergy.basis}</p>
         </div>
       )}
       {(c.label || c.rated) && <p className="text-xs text-graphite-500">Warning threshold: {sig(c.warnBelowPercent, 3)} % of the claimed capacity (workspace setting).</p>}
@@ -116,14 +134,40 @@ export function RunResults({ run }: { run: RunDto }) {
           : d.cutoffVolts
             ? `${formatQuantity(d.cutoffVolts, 'V')} not reached`
             : 'end of the log';
+    const debounce = d.cutoffVolts !== null && d.cutoffDebounce ? debounceText(d.cutoffDebounce) : null;
+    const ignored = d.ignoredDips ? `; ${d.ignoredDips.count === 1 ? 'one sag' : `${d.ignoredDips.count} sags`} below it ignored (longest ${formatElapsed(d.ignoredDips.longestS)})` : '';
+    const r = d.internalResistance;
     figures = (
       <>
         <Figure label="Delivered capacity" value={formatQuantity(a.ampHours, 'Ah')} detail="Trapezoidal ∫I dt to the cut-off" tone="energy" />
         <Figure label="Delivered energy" value={formatQuantity(a.wattHours, 'Wh')} detail="∫V·I dt, per sample" tone="energy" />
-        <Figure label="Duration" value={formatElapsed(a.durationS)} detail={`Cut-off: ${cutoff}`} />
+        <Figure label="Duration" value={formatElapsed(a.durationS)} detail={`Cut-off: ${cutoff}${debounce ? `; ${debounce}` : ''}${ignored}`} />
         <Figure label="Average voltage" value={formatQuantity(a.averageVolts, 'V')} detail={`Wh ÷ Ah; time-weighted ${formatQuantity(d.timeAverageVolts, 'V')}`} />
         <Figure label="End voltage" value={formatQuantity(a.endVolts, 'V')} detail={`Lowest ${formatQuantity(d.minVolts, 'V')}`} />
         <Figure label="Average load" value={formatQuantity(d.averageCurrentA, 'A')} detail={formatQuantity(d.averagePowerW, 'W')} />
+        {d.meanSquareVolts !== undefined && (
+          <Figure
+            label="Mean V²"
+            value={`${sig(d.meanSquareVolts, 4)} V²`}
+            detail={`RMS ${formatQuantity(Math.sqrt(d.meanSquareVolts), 'V', 4)}; a fixed resistance R takes mean(V²) ÷ R on average, not (mean V)² ÷ R`}
+          />
+        )}
+        {r !== undefined && (
+          <Figure
+            label="Internal resistance (DC)"
+            value={r ? formatQuantity(r.ohms, 'Ω') : 'no pulse in the log'}
+            detail={
+              r ? (
+                <>
+                  {formatQuantity(r.lowAmps, 'A')} at {formatQuantity(r.lowVolts, 'V', 4)} → {formatQuantity(r.highAmps, 'A')} at {formatQuantity(r.highVolts, 'V', 4)}, after {formatElapsed(r.atSeconds)}; (U₁ − U₂) ÷ (I₂ − I₁) at
+                  the pack terminals
+                </>
+              ) : (
+                'Step the load between two steady currents (e.g. 0.2 C, then 1 C for 1 s) to measure it'
+              )
+            }
+          />
+        )}
       </>
     );
   } else if (run.kind === 'charge' && a.charge) {
@@ -131,14 +175,18 @@ export function RunResults({ run }: { run: RunDto }) {
     figures = (
       <>
         <Figure label="Charge taken in" value={formatQuantity(a.ampHours, 'Ah')} detail={formatQuantity(a.wattHours, 'Wh')} tone="energy" />
-        <Figure label="Charge time" value={formatElapsed(c.chargeTimeS)} detail={c.terminated ? `To ${formatQuantity(c.terminationCurrentA, 'A')} (${sig(c.terminationFraction * 100, 2)} % of CC)` : 'Not terminated in the log'} />
+        <Figure label="Charge time" value={formatElapsed(c.chargeTimeS)} detail={c.terminated ? `To ${formatQuantity(c.terminationCurrentA, 'A')} (${terminationText(c)})` : 'Not terminated in the log'} />
         <Figure label="Constant current" value={formatQuantity(c.cc.currentA, 'A')} detail={`${formatElapsed(c.cc.endS - c.cc.startS)}, until ${formatElapsed(c.cc.endS)}`} />
         <Figure
           label="Constant voltage"
           value={c.cv ? formatQuantity(c.cv.volts, 'V') : 'none found'}
           detail={c.cv ? `${formatElapsed(c.cv.endS - c.cv.startS)}, from ${formatElapsed(c.cv.startS)}` : `Plateau ${formatQuantity(c.plateauVolts, 'V')}`}
         />
-        <Figure label="Termination current" value={formatQuantity(c.terminationCurrentA, 'A')} detail={c.terminated ? 'Reached' : 'Not reached'} />
+        <Figure
+          label="Termination current"
+          value={formatQuantity(c.terminationCurrentA, 'A')}
+          detail={`${c.terminated ? 'Reached' : 'Not reached'}; ${c.termination?.description ?? `${sig(c.terminationFraction * 100, 2)} % of the constant current`}`}
+        />
         <Figure label="Average voltage" value={formatQuantity(a.averageVolts, 'V')} detail={`End ${formatQuantity(a.endVolts, 'V')}`} />
       </>
     );

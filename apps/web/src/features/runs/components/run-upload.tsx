@@ -28,7 +28,9 @@ import { Field, Input, Select } from '@/components/field';
 import { Card } from '@/components/page';
 import { ApiError } from '@/lib/api-client';
 import { usePreviewRun } from '../api/preview-run';
+import { useSettings } from '../api/settings';
 import { useUploadRun } from '../api/upload-run';
+import { debounceDefaultText, TERMINATION_HINT } from './run-option-text';
 import { formatBytes } from './time-format';
 
 const UNIT_OPTIONS: Record<RunQuantityName, { values: readonly string[]; labels: Record<string, string> }> = {
@@ -52,15 +54,16 @@ type MappingDraft = Record<RunQuantityName, ColumnChoice>;
 
 interface OptionsDraft {
   cutoffVolts: string;
+  cutoffDebounceSeconds: string;
   cvVolts: string;
-  terminationPercent: string;
+  terminationC: string;
   material: string;
   contactSeconds: string;
   thresholdC: string;
   cellEnergyWh: string;
 }
 
-const EMPTY_OPTIONS: OptionsDraft = { cutoffVolts: '3.0', cvVolts: '', terminationPercent: '5', material: '', contactSeconds: '', thresholdC: '', cellEnergyWh: '' };
+const EMPTY_OPTIONS: OptionsDraft = { cutoffVolts: '3.0', cutoffDebounceSeconds: '', cvVolts: '', terminationC: '', material: '', contactSeconds: '', thresholdC: '', cellEnergyWh: '' };
 
 function draftFromGuess(preview: RunPreview): MappingDraft {
   const draft = {} as MappingDraft;
@@ -75,11 +78,8 @@ function draftFromGuess(preview: RunPreview): MappingDraft {
 const numberOrUndefined = (text: string) => (text.trim() === '' ? undefined : Number(text.replace(',', '.')));
 
 function buildOptions(kind: RunKind, o: OptionsDraft): RunOptions {
-  if (kind === 'discharge') return { cutoffVolts: numberOrUndefined(o.cutoffVolts) };
-  if (kind === 'charge') {
-    const pct = numberOrUndefined(o.terminationPercent);
-    return { cvVolts: numberOrUndefined(o.cvVolts), terminationFraction: pct === undefined ? undefined : pct / 100 };
-  }
+  if (kind === 'discharge') return { cutoffVolts: numberOrUndefined(o.cutoffVolts), cutoffDebounceSeconds: numberOrUndefined(o.cutoffDebounceSeconds) };
+  if (kind === 'charge') return { cvVolts: numberOrUndefined(o.cvVolts), terminationFraction: numberOrUndefined(o.terminationC) };
   if (kind === 'thermal') {
     return {
       material: (o.material || undefined) as RunOptions['material'],
@@ -134,6 +134,9 @@ export function RunUpload({ teardown, onDone, onCancel }: { teardown: TeardownDt
   const [decimalComma, setDecimalComma] = useState(false);
   const [headerRow, setHeaderRow] = useState('1');
   const [options, setOptions] = useState<OptionsDraft>(EMPTY_OPTIONS);
+  const workspaceDebounce = useSettings().data?.cutoffDebounceSeconds;
+  const debounceDefault = debounceDefaultText(workspaceDebounce);
+  const debouncePlaceholder = workspaceDebounce === undefined ? '' : String(workspaceDebounce);
   const [error, setError] = useState<ApiError | Error | null>(null);
   const [confirming, setConfirming] = useState(false);
 
@@ -396,17 +399,26 @@ export function RunUpload({ teardown, onDone, onCancel }: { teardown: TeardownDt
             <fieldset className="grid gap-3 sm:grid-cols-3" disabled={busy}>
               <legend className="mb-1 text-sm font-medium text-graphite-800">Analysis settings</legend>
               {kind === 'discharge' && (
-                <Field label="Cut-off voltage (V)" error={fields['options.cutoffVolts']} hint="The cell maker's end voltage; Li-ion usually 2.5–3.0 V. Blank: until the load stops.">
-                  {(f) => <Input {...f} inputMode="decimal" value={options.cutoffVolts} onChange={setOption('cutoffVolts')} />}
-                </Field>
+                <>
+                  <Field label="Cut-off voltage (V)" error={fields['options.cutoffVolts']} hint="The cell maker's end voltage; Li-ion usually 2.5–3.0 V. Blank: until the load stops.">
+                    {(f) => <Input {...f} inputMode="decimal" value={options.cutoffVolts} onChange={setOption('cutoffVolts')} />}
+                  </Field>
+                  <Field
+                    label="Cut-off debounce (s)"
+                    error={fields['options.cutoffDebounceSeconds']}
+                    hint={`How long the voltage must stay at or under the cut-off; shorter sags at a load step are ignored. Blank: the workspace ${debounceDefault}.`}
+                  >
+                    {(f) => <Input {...f} inputMode="decimal" value={options.cutoffDebounceSeconds} onChange={setOption('cutoffDebounceSeconds')} placeholder={debouncePlaceholder} />}
+                  </Field>
+                </>
               )}
               {kind === 'charge' && (
                 <>
                   <Field label="Charge voltage (V)" error={fields['options.cvVolts']} hint="Blank: estimated from the top of the log">
                     {(f) => <Input {...f} inputMode="decimal" value={options.cvVolts} onChange={setOption('cvVolts')} placeholder="e.g. 4.2" />}
                   </Field>
-                  <Field label="Termination (% of CC)" error={fields['options.terminationFraction']} hint="Common: 5–10 % (C/20–C/10)">
-                    {(f) => <Input {...f} inputMode="decimal" value={options.terminationPercent} onChange={setOption('terminationPercent')} />}
+                  <Field label="Termination (C)" error={fields['options.terminationFraction']} hint={TERMINATION_HINT}>
+                    {(f) => <Input {...f} inputMode="decimal" value={options.terminationC} onChange={setOption('terminationC')} placeholder="0.05" />}
                   </Field>
                 </>
               )}

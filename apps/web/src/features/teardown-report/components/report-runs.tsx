@@ -14,12 +14,17 @@ function keyResults(run: RunDto): { text: string; hot?: boolean }[] {
   if (a.discharge) {
     const d = a.discharge;
     push(`Mean ${formatQuantity(d.timeAverageVolts, 'V')}, ${formatQuantity(d.averageCurrentA, 'A')}, ${formatQuantity(d.averagePowerW, 'W')}; minimum ${formatQuantity(d.minVolts, 'V')}`);
-    if (d.cutoff) push(`Stopped at ${formatQuantity(d.cutoff.volts, 'V')} after ${duration(d.cutoff.t)} (${d.cutoff.reason.replace(/-/g, ' ')})`);
+    if (d.cutoff) {
+      const held = d.cutoff.reason === 'cutoff-voltage' && d.cutoffDebounce ? `, held ${d.cutoffDebounce.seconds} s` : '';
+      push(`Stopped at ${formatQuantity(d.cutoff.volts, 'V')} after ${duration(d.cutoff.t)} (${d.cutoff.reason.replace(/-/g, ' ')}${held})`);
+    }
+    const r = d.internalResistance;
+    if (r) push(`DC resistance ${formatQuantity(r.ohms, 'Ω')} at the terminals: ${formatQuantity(r.lowAmps, 'A')} at ${formatQuantity(r.lowVolts, 'V', 4)} → ${formatQuantity(r.highAmps, 'A')} at ${formatQuantity(r.highVolts, 'V', 4)}`);
   }
   if (a.charge) {
     const c = a.charge;
     push(`Constant current ${formatQuantity(c.cc.currentA, 'A')}${c.cv ? `, then constant voltage ${formatQuantity(c.cv.volts, 'V')}` : ''}; charge time ${duration(c.chargeTimeS)}`);
-    push(c.terminated ? `Terminated at ${formatQuantity(c.terminationCurrentA, 'A')}` : 'Did not reach termination in the log');
+    push(c.terminated ? `Terminated at ${c.termination?.description ?? formatQuantity(c.terminationCurrentA, 'A')}` : 'Did not reach termination in the log');
   }
   if (a.thermal) {
     const th = a.thermal;
@@ -39,7 +44,7 @@ function keyResults(run: RunDto): { text: string; hot?: boolean }[] {
 
 function againstLabel(run: RunDto): string {
   const c = run.comparison;
-  if (c.label) return `${sig(c.label.percent)} % of ${formatQuantity(c.label.claimedAh, 'Ah')}${c.label.warning ? ' (below threshold)' : ''}`;
+  if (c.label) return `${sig(c.label.percent)} % of ${formatQuantity(c.label.claimedWh, 'Wh')}${c.label.labelBasis === 'label-ah-at-cell-volts' ? ` (${formatQuantity(c.label.claimedAh, 'Ah')} at the cell voltage)` : ''}${c.label.warning ? ' (below threshold)' : ''}`;
   if (c.labelEnergy) return `${sig(c.labelEnergy.percent)} % of ${formatQuantity(c.labelEnergy.claimedWh, 'Wh')}${c.labelEnergy.warning ? ' (below 80 %)' : ''}`;
   if (c.rated) return `${sig(c.rated.percent)} % of the cell rating`;
   return '—';
