@@ -91,10 +91,10 @@ const SCHEME_SHORT_LABEL: Record<MarkingScheme, string> = {
   jumper: 'jumper',
   'three-digit': '3-digit',
   'four-digit': '4-digit',
-  'letter-and-digit': 'letter-and-digit',
+  'letter-and-digit': 'RKM code',
   'eia-96': 'EIA-96',
-  picofarads: 'pF digits',
-  'letter-decimal': 'letter as decimal point',
+  picofarads: 'pF',
+  'letter-decimal': 'unit letter',
   'value-with-unit': 'with unit',
   'colour-bands': 'colour bands',
 };

@@ -129,7 +129,7 @@ describe('readMarkingCode: the one decoder the bench tools and the parts list sh
     const r = readMarkingCode('102K', 'resistor');
     expect(r.map((x) => ({ rank: x.rank, value: x.value, unit: x.unit, scheme: x.scheme, label: x.schemeLabel, short: x.schemeShortLabel, tol: x.tolerance?.text ?? null }))).toEqual([
       { rank: 1, value: 1000, unit: 'Ω', scheme: 'three-digit', label: '3-digit code', short: '3-digit', tol: '±10 %' },
-      { rank: 2, value: 102000, unit: 'Ω', scheme: 'letter-and-digit', label: 'Letter-and-digit code (IEC 60062)', short: 'letter-and-digit', tol: null },
+      { rank: 2, value: 102000, unit: 'Ω', scheme: 'letter-and-digit', label: 'Letter-and-digit code (IEC 60062)', short: 'RKM code', tol: null },
     ]);
   });
 
