@@ -53,6 +53,23 @@ describe('parts, measurements and the pack at the bench', () => {
       .toContain('4.70 Ω');
   });
 
+  it('shows that a marking reads another way too, and lists every reading from the keyboard [S: IEC 60062; EIA-96; CP: ranking]', async () => {
+    await row(page, 'E2E chip resistor, pull-down').getByRole('button', { name: /^Edit R42/ }).click();
+    const marking = page.getByRole('textbox', { name: 'Marking', exact: true });
+    await marking.fill('10R');
+    await marking.press('Enter');
+    const line = row(page, 'E2E chip resistor, pull-down');
+    // 10R = 10 Ω (R-notation) first; as EIA-96, index 10 = 124 × 0.01 = 1.24 Ω
+    const other = line.getByRole('button', { name: /or 1\.24 Ω \(EIA-96\)/ });
+    await other.waitFor({ timeout: 10_000 });
+    await expect.poll(() => line.textContent(), { timeout: 10_000 }).toContain('10.0 Ω');
+    await other.focus();
+    await page.keyboard.press('Enter');
+    await expect.poll(() => other.getAttribute('aria-expanded'), { timeout: 10_000 }).toBe('true');
+    const list = page.getByRole('list', { name: 'Readings of the marking, most likely first' });
+    await expect.poll(() => list.textContent(), { timeout: 10_000 }).toMatch(/10\.0 Ω.*Letter-and-digit code.*most likely.*1\.24 Ω.*EIA-96 code/);
+  });
+
   it('imports a CSV: the preview names the bad row and column, nothing is saved until it is fixed', async () => {
     await page.getByRole('button', { name: 'Import CSV' }).click();
     const paste = page.getByLabel('…or paste it here');

@@ -38,6 +38,14 @@ describe('bench tools', () => {
     await expect.poll(() => reading.getByTestId('source').textContent(), { timeout: 10_000 }).toMatch(/IEC 60062/);
   });
 
+  it('lists every reading of "10R", ranked with its rule: 10.0 Ω R-notation first, 1.24 Ω EIA-96 second [S: IEC 60062; EIA-96; CP: ranking]', async () => {
+    await page.getByLabel('Marking as read').fill('10R');
+    await expect.poll(() => page.getByTestId('marking-reading').count(), { timeout: 10_000 }).toBe(2);
+    await expect.poll(() => page.getByTestId('marking-value').allTextContents(), { timeout: 10_000 }).toEqual(['10.0 Ω', '1.24 Ω']);
+    await expect.poll(() => page.getByTestId('marking-rule').allTextContents(), { timeout: 10_000 }).toEqual(['Letter-and-digit code (IEC 60062)', 'EIA-96 code']);
+    await expect.poll(() => page.getByRole('article', { name: 'Resistor reading 1 of 2' }).textContent(), { timeout: 10_000 }).toMatch(/most likely/);
+  });
+
   it('reads yellow-violet-red-gold as 4.70 kΩ ±5 % [C]', async () => {
     await page.getByText('Colour bands', { exact: true }).click();
     const colours = ['Yellow', 'Violet', 'Red', 'Gold'];

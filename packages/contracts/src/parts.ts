@@ -2,6 +2,7 @@
 import { z } from 'zod';
 import { patchOf } from './common';
 import { MOUNT_TYPE, PART_CATEGORY, type MountType, type PartCategory } from './domain';
+import { toleranceReading } from './tools';
 
 /** Categories put together by hand rather than placed on a board. */
 const MANUAL_CATEGORIES: readonly PartCategory[] = ['cell', 'pcb', 'enclosure', 'fastener', 'label', 'packaging', 'wire', 'heater', 'motor'];
@@ -52,6 +53,23 @@ export const reorderPartsBody = z.object({
 });
 export type ReorderPartsBody = z.infer<typeof reorderPartsBody>;
 
+/** One reading of a part's marking, by the same decoder as the bench tools' marking decoder. */
+export const decodedReadingSchema = z.object({
+  /** 1 for the most likely reading, 2 for the next. */
+  rank: z.number().int(),
+  value: z.number(),
+  unit: z.enum(['Ω', 'F']),
+  /** The rule (code form) that gives it: "letter-and-digit", "eia-96", "three-digit", … */
+  scheme: z.string(),
+  schemeLabel: z.string(),
+  schemeShortLabel: z.string(),
+  /** What the tolerance letter of the code means, when it has one ("102K" read as 1 kΩ: ±10 %). */
+  tolerance: toleranceReading.nullable(),
+  /** The rule that ranks the readings when there is more than one. */
+  rankReason: z.string().nullable(),
+});
+export type DecodedReadingDto = z.infer<typeof decodedReadingSchema>;
+
 export const partSchema = z.object({
   id: z.number().int(),
   teardownId: z.number().int(),
@@ -65,6 +83,11 @@ export const partSchema = z.object({
   decodedUnit: z.enum(['Ω', 'F']).nullable(),
   /** Why a resistor/capacitor marking gave no value (null when decoded or not applicable). */
   decodeNote: z.string().nullable(),
+  /**
+   * Every valid reading of the marking, most likely first; the first is decodedValue/decodedUnit. More
+   * than one when the code reads two ways ("10R": 10 Ω, or 1.24 Ω as EIA-96). Empty when not decoded.
+   */
+  decodedReadings: z.array(decodedReadingSchema),
   makerPartNumber: z.string().nullable(),
   package: z.string().nullable(),
   quantity: z.number().int(),
@@ -131,6 +154,7 @@ export const importPreviewRowSchema = z.object({
     marking: z.string().nullable(),
     decodedValue: z.number().nullable(),
     decodedUnit: z.enum(['Ω', 'F']).nullable(),
+    decodedReadings: z.array(decodedReadingSchema),
     makerPartNumber: z.string().nullable(),
     package: z.string().nullable(),
     quantity: z.number().nullable(),

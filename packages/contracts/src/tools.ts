@@ -125,8 +125,15 @@ export type PreferredValueReading = z.infer<typeof preferredValueReading>;
 
 export const markingReading = z.object({
   component: z.enum(['resistor', 'capacitor']),
+  /** The rule (code form) that gives this reading: "letter-and-digit", "eia-96", "three-digit", … */
   scheme: z.string(),
   schemeLabel: z.string(),
+  /** The rule in a word or two, for a table cell ("EIA-96"). */
+  schemeShortLabel: z.string(),
+  /** 1 for the most likely reading of the code on this kind of part, 2 for the next. */
+  rank: z.number().int(),
+  /** The rule that ranks the readings when the code has more than one on this kind of part. */
+  rankReason: z.string().nullable(),
   value: z.number(),
   unit: z.string(),
   formula: z.string(),
@@ -143,7 +150,9 @@ export const markingReading = z.object({
 export type MarkingReadingDto = z.infer<typeof markingReading>;
 
 export const markingToolResponse = z.object({
+  /** Every valid reading: resistor readings first, each kind of part ranked most likely first. */
   readings: z.array(markingReading),
+  /** More than one reading: on a resistor and on a capacitor, or two ways on one kind of part. */
   ambiguous: z.boolean(),
   note: z.string().nullable(),
 });

@@ -5,11 +5,11 @@
 import type { Explained } from '../shared/explained';
 import { formulaOf, type FormulaKey } from '../figures/formulas';
 import { withPrefix } from '../shared/text';
-import { readCapacitorMarking, type CapacitorScheme } from './capacitor-marking';
+import { readCapacitorMarkings, type CapacitorScheme } from './capacitor-marking';
 import { readColorBands } from './color-bands';
 import { E_SERIES, E_SERIES_TOLERANCE_PERCENT, isPreferredValue, nearestPreferredValue, type ESeries } from './e-series';
 import { decodeToleranceLetter, percentTolerance, toleranceRange, type MarkedComponent, type Tolerance } from './letter-codes';
-import { readResistorMarking, type ResistorScheme } from './resistor-marking';
+import { readResistorMarkings, type ResistorScheme } from './resistor-marking';
 
 export type MarkingKind = MarkedComponent | 'auto';
 export type MarkingScheme = ResistorScheme | CapacitorScheme | 'colour-bands';
@@ -27,14 +27,40 @@ export interface PreferredValueRow {
   member: boolean;
 }
 
+/**
+ * One valid reading of a printed code on one kind of part: what readMarkingCode gives the parts list and
+ * explainMarking builds the bench decoder's report on.
+ */
+export interface MarkingCodeReading {
+  component: MarkedComponent;
+  scheme: MarkingScheme;
+  /** The code form in words ("EIA-96 code"). */
+  schemeLabel: string;
+  /** The code form in a word or two, for a table cell ("EIA-96"). */
+  schemeShortLabel: string;
+  value: number;
+  unit: 'Ω' | 'F';
+  tolerance: Tolerance | null;
+  /** The reading step by step. */
+  meaning: string[];
+  /** 1 for the most likely reading of the code on this kind of part, 2 for the next (ranking rule: ranking.ts). */
+  rank: number;
+  /** The rule that ranks the readings when the code has more than one on this kind of part; null otherwise. */
+  rankReason: string | null;
+}
+
 export interface MarkingReading extends Explained<number> {
   component: MarkedComponent;
   scheme: MarkingScheme;
   /** The code form in words ("EIA-96 code"). */
   schemeLabel: string;
+  schemeShortLabel: string;
   /** The reading step by step. */
   meaning: string[];
   tolerance: Tolerance | null;
+  /** 1 for the most likely reading on this kind of part (see MarkingCodeReading). */
+  rank: number;
+  rankReason: string | null;
   /** Lowest and highest value at the tolerance. */
   range: { low: number; high: number } | null;
   temperatureCoefficientPpmPerK: number | null;
@@ -42,8 +68,9 @@ export interface MarkingReading extends Explained<number> {
 }
 
 export interface MarkingReport {
+  /** Every valid reading, resistor readings first, each kind of part ranked most likely first. */
   readings: MarkingReading[];
-  /** True when the code reads as both a resistor and a capacitor. */
+  /** True when the code has more than one reading: on a resistor and on a capacitor, or two ways on one part. */
   ambiguous: boolean;
   note: string | null;
 }
@@ -58,6 +85,18 @@ const SCHEME_LABEL: Record<MarkingScheme, string> = {
   'letter-decimal': 'Letter as the decimal point',
   'value-with-unit': 'Value with its unit',
   'colour-bands': 'Colour bands (IEC 60062)',
+};
+
+const SCHEME_SHORT_LABEL: Record<MarkingScheme, string> = {
+  jumper: 'jumper',
+  'three-digit': '3-digit',
+  'four-digit': '4-digit',
+  'letter-and-digit': 'RKM code',
+  'eia-96': 'EIA-96',
+  picofarads: 'pF',
+  'letter-decimal': 'unit letter',
+  'value-with-unit': 'with unit',
+  'colour-bands': 'colour bands',
 };
 
 const PREFERRED_SOURCE = formulaOf('marking.nearestPreferred');
@@ -79,6 +118,8 @@ export function preferredValueRows(value: number): PreferredValueRow[] {
 function reading(p: {
   component: MarkedComponent;
   scheme: MarkingScheme;
+  rank?: number;
+  rankReason?: string | null;
   value: number;
   formulaKey: FormulaKey;
   meaning: string[];
@@ -111,59 +152,75 @@ function reading(p: {
     component: p.component,
     scheme: p.scheme,
     schemeLabel: SCHEME_LABEL[p.scheme],
+    schemeShortLabel: SCHEME_SHORT_LABEL[p.scheme],
     meaning: p.meaning,
     tolerance: p.tolerance,
+    rank: p.rank ?? 1,
+    rankReason: p.rankReason ?? null,
     range: p.tolerance ? toleranceRange(p.value, p.tolerance) : null,
     temperatureCoefficientPpmPerK: p.temperatureCoefficientPpmPerK ?? null,
     preferred,
   };
 }
 
-function resistorReading(code: string): MarkingReading {
-  const r = readResistorMarking(code);
-  const tolerance = r.toleranceLetter ? decodeToleranceLetter(r.toleranceLetter, 'resistor') : null;
+function codeReading(
+  component: MarkedComponent,
+  r: { scheme: MarkingScheme; value: number; toleranceLetter: string | null; meaning: string[]; rank: number; rankReason: string | null },
+): MarkingCodeReading {
+  const tolerance = r.toleranceLetter ? decodeToleranceLetter(r.toleranceLetter, component, component === 'capacitor' ? r.value : undefined) : null;
   const meaning = [...r.meaning];
   if (tolerance) meaning.push(`"${r.toleranceLetter}" is the tolerance letter: ${tolerance.text}.`);
-  const assumptions: string[] = [];
-  if (r.scheme === 'three-digit' && !tolerance) assumptions.push('3-digit codes are usually found on ±2 % and ±5 % parts [CP].');
-  if (r.scheme === 'four-digit' && !tolerance) assumptions.push('4-digit codes are usually found on ±1 % parts [CP].');
-  if (r.scheme === 'eia-96') assumptions.push('EIA-96 codes mark values of the E96 series, the ±1 % series of IEC 60063 [S].');
-  if (r.scheme === 'eia-96' && /^\d{2}R$/.test(r.valueCode)) {
-    assumptions.push('Two digits followed by R are read as EIA-96 (R = × 0.01), as the code tables do.');
-  }
-  const formulaKey: FormulaKey =
-    r.scheme === 'eia-96' ? 'marking.eia96' : r.scheme === 'letter-and-digit' ? 'marking.letterCode' : r.scheme === 'jumper' ? 'marking.jumper' : 'marking.resistor';
-  return reading({
-    component: 'resistor',
+  return {
+    component,
     scheme: r.scheme,
-    value: r.ohms,
-    formulaKey,
-    meaning,
+    schemeLabel: SCHEME_LABEL[r.scheme],
+    schemeShortLabel: SCHEME_SHORT_LABEL[r.scheme],
+    value: r.value,
+    unit: component === 'resistor' ? 'Ω' : 'F',
     tolerance,
-    inputs: [
-      { label: 'Marking', value: code.trim() },
-      { label: 'Read as', value: 'resistor' },
-    ],
-    assumptions,
-  });
+    meaning,
+    rank: r.rank,
+    rankReason: r.rankReason,
+  };
 }
 
-function capacitorReading(code: string): MarkingReading {
-  const c = readCapacitorMarking(code);
-  const tolerance = c.toleranceLetter ? decodeToleranceLetter(c.toleranceLetter, 'capacitor', c.farads) : null;
-  const meaning = [...c.meaning];
-  if (tolerance) meaning.push(`"${c.toleranceLetter}" is the tolerance letter: ${tolerance.text}.`);
+/**
+ * Every valid reading of a printed code on a resistor or a capacitor, most likely first, each with the
+ * rule (scheme) that gives it, its value (Ω or F) and the tolerance its letter carries. The one decoder
+ * of the bench tools and the parts list. Throws a RangeError naming the code when nothing reads.
+ */
+export function readMarkingCode(code: string, component: MarkedComponent): MarkingCodeReading[] {
+  if (component === 'resistor') return readResistorMarkings(code).map((r) => codeReading('resistor', { ...r, value: r.ohms }));
+  if (component === 'capacitor') return readCapacitorMarkings(code).map((r) => codeReading('capacitor', { ...r, value: r.farads }));
+  throw new RangeError(`A marking is read on a resistor or a capacitor (got "${String(component)}").`);
+}
+
+function explained(code: string, r: MarkingCodeReading): MarkingReading {
+  const assumptions: string[] = [];
+  let formulaKey: FormulaKey;
+  if (r.component === 'resistor') {
+    if (r.scheme === 'three-digit' && !r.tolerance) assumptions.push('3-digit codes are usually found on ±2 % and ±5 % parts [CP].');
+    if (r.scheme === 'four-digit' && !r.tolerance) assumptions.push('4-digit codes are usually found on ±1 % parts [CP].');
+    if (r.scheme === 'eia-96') assumptions.push('EIA-96 codes mark values of the E96 series, the ±1 % series of IEC 60063 [S].');
+    formulaKey = r.scheme === 'eia-96' ? 'marking.eia96' : r.scheme === 'letter-and-digit' ? 'marking.letterCode' : r.scheme === 'jumper' ? 'marking.jumper' : 'marking.resistor';
+  } else {
+    formulaKey = r.scheme === 'three-digit' ? 'marking.capacitor' : 'marking.capacitorLetter';
+  }
+  if (r.rankReason) assumptions.push(`Reading ${r.rank} of this code on a ${r.component}. ${r.rankReason}`);
   return reading({
-    component: 'capacitor',
-    scheme: c.scheme,
-    value: c.farads,
-    formulaKey: c.scheme === 'three-digit' ? 'marking.capacitor' : 'marking.capacitorLetter',
-    meaning,
-    tolerance,
+    component: r.component,
+    scheme: r.scheme,
+    rank: r.rank,
+    rankReason: r.rankReason,
+    value: r.value,
+    formulaKey,
+    meaning: r.meaning,
+    tolerance: r.tolerance,
     inputs: [
       { label: 'Marking', value: code.trim() },
-      { label: 'Read as', value: 'capacitor' },
+      { label: 'Read as', value: r.component },
     ],
+    assumptions,
   });
 }
 
@@ -186,32 +243,38 @@ function colourReading(bands: string[]): MarkingReading {
   });
 }
 
-/** Decodes a marking (resistor, capacitor or either) or colour bands into readings with tolerance, meaning and preferred values. */
+/**
+ * Decodes a marking (resistor, capacitor or either) or colour bands into every valid reading, ranked, with
+ * tolerance, meaning and preferred values.
+ */
 export function explainMarking(p: { code: string; kind: MarkingKind } | { bands: string[] }): MarkingReport {
   if ('bands' in p) return { readings: [colourReading(p.bands)], ambiguous: false, note: null };
   const { code, kind } = p;
-  if (kind === 'resistor') return { readings: [resistorReading(code)], ambiguous: false, note: null };
-  if (kind === 'capacitor') return { readings: [capacitorReading(code)], ambiguous: false, note: null };
-  if (kind !== 'auto') throw new RangeError(`Marking kind must be "resistor", "capacitor" or "auto" (got "${String(kind)}").`);
+  if (kind !== 'auto' && kind !== 'resistor' && kind !== 'capacitor') {
+    throw new RangeError(`Marking kind must be "resistor", "capacitor" or "auto" (got "${String(kind)}").`);
+  }
+  const components: MarkedComponent[] = kind === 'auto' ? ['resistor', 'capacitor'] : [kind];
   const readings: MarkingReading[] = [];
   const errors: string[] = [];
-  for (const read of [resistorReading, capacitorReading]) {
+  const notes: string[] = [];
+  for (const component of components) {
+    let found: MarkingCodeReading[];
     try {
-      readings.push(read(code));
+      found = readMarkingCode(code, component);
     } catch (err) {
-      if (!(err instanceof RangeError)) throw err;
+      if (!(err instanceof RangeError) || kind !== 'auto') throw err;
       errors.push(err.message);
+      continue;
     }
+    readings.push(...found.map((r) => explained(code, r)));
+    if (found.length > 1) notes.push(`"${code.trim()}" has ${found.length} readings on a ${component}. ${found[0]!.rankReason}`);
   }
   if (readings.length === 0) {
     throw new RangeError(`Marking "${code}" is neither a resistor code nor a capacitor code. ${errors.join(' ')}`);
   }
-  const ambiguous = readings.length > 1;
-  return {
-    readings,
-    ambiguous,
-    note: ambiguous
-      ? 'This code reads differently on a resistor and on a capacitor; the part itself tells which (body colour, package, where it sits in the circuit).'
-      : null,
-  };
+  const bothParts = new Set(readings.map((r) => r.component)).size > 1;
+  if (bothParts) {
+    notes.unshift('This code reads differently on a resistor and on a capacitor; the part itself tells which (body colour, package, where it sits in the circuit).');
+  }
+  return { readings, ambiguous: readings.length > 1, note: notes.length > 0 ? notes.join(' ') : null };
 }

@@ -13,9 +13,17 @@ export {
   EIA96_MULTIPLIER_EXPONENT,
   eia96Significand,
   readResistorMarking,
+  readResistorMarkings,
   decodeResistorMarking,
 } from './resistor-marking';
-export { type CapacitorScheme, type CapacitorMarkingReading, readCapacitorMarking, decodeCapacitorMarking } from './capacitor-marking';
+export {
+  type CapacitorScheme,
+  type CapacitorMarkingReading,
+  readCapacitorMarking,
+  readCapacitorMarkings,
+  decodeCapacitorMarking,
+} from './capacitor-marking';
+export { coarsestSeries } from './ranking';
 export {
   type ColourCodeResult,
   type ColourCodeReading,
@@ -40,8 +48,10 @@ export {
   type MarkingKind,
   type MarkingScheme,
   type MarkingReading,
+  type MarkingCodeReading,
   type MarkingReport,
   type PreferredValueRow,
   preferredValueRows,
+  readMarkingCode,
   explainMarking,
 } from './explain';

@@ -1,15 +1,21 @@
-// Decoded values of resistor and capacitor markings, through the calculation core.
-import { decodeCapacitorMarking, decodeResistorMarking } from '@splitcase/calc';
-import type { PartCategory } from '@splitcase/contracts';
+// Decoded values of resistor and capacitor markings: calc's readMarkingCode, the same decoder as the
+// bench tools' marking decoder, so a part reads exactly as the marking does there.
+import { readMarkingCode } from '@splitcase/calc';
+import type { DecodedReadingDto, PartCategory } from '@splitcase/contracts';
 
 export interface DecodedMarking {
+  /** The first-ranked reading (Ω for resistors, F for capacitors). */
   value: number | null;
   unit: 'Ω' | 'F' | null;
+  /** Every valid reading, most likely first (empty when not decoded). */
+  readings: DecodedReadingDto[];
   /** Why a resistor/capacitor marking gave no value; null when decoded or when the part is neither. */
   note: string | null;
 }
 
 type PartLike = { category: PartCategory; designators?: string | null; description: string; marking?: string | null };
+
+const NOTHING: DecodedMarking = { value: null, unit: null, readings: [], note: null };
 
 const firstDesignator = (designators?: string | null) => (designators ?? '').trim().split(/[\s,;]+/)[0]?.toUpperCase() ?? '';
 
@@ -24,32 +30,32 @@ export function passiveKind(part: Omit<PartLike, 'marking'>): 'resistor' | 'capa
   return null;
 }
 
-/** Resistor codes: 3/4 digits, R as the decimal point, EIA-96 (two digits and a multiplier letter). */
-export const looksLikeResistorCode = (m: string) => /^\d{3,4}$/.test(m) || (/^\d*[Rr]\d*$/.test(m) && /\d/.test(m)) || /^\d{2}[ZYRXSABHCDEFzyrxsabhcdef]$/.test(m) || /^0$/.test(m);
-/** Capacitor codes: 3 digits (pF) with an optional tolerance letter, or p/n/u/R as the decimal point. */
-export const looksLikeCapacitorCode = (m: string) => /^\d{3}[BCDFGJKMZbcdfgjkmz]?$/.test(m) || (/^\d*[pnuµμRr]\d*[Ff]?$/.test(m) && /\d/.test(m)) || /^\d+(\.\d+)?\s*[pnuµμ][Ff]?$/.test(m);
-
 /**
  * Decode the marking of a resistor or capacitor line. A marking that does not read as a code is kept
- * with no value and a note; anything that is not a two-terminal passive (an IC, a connector…) is left alone.
+ * with no value and the decoder's message; anything that is not a two-terminal passive (an IC, a
+ * connector…) is left alone.
  */
 export function decodePartMarking(part: PartLike): DecodedMarking {
   const marking = (part.marking ?? '').trim();
   const kind = passiveKind(part);
-  if (!marking || !kind) return { value: null, unit: null, note: null };
-  const compact = marking.replace(/\s+/g, '');
-  if (kind === 'resistor') {
-    if (!looksLikeResistorCode(compact)) return { value: null, unit: null, note: `"${marking}" is not a resistor code (472, 4R7, R010, 4991 or EIA-96 68X); kept as read.` };
-    try {
-      return { value: decodeResistorMarking(compact), unit: 'Ω', note: null };
-    } catch (err) {
-      return { value: null, unit: null, note: `${(err as Error).message} Kept as read.` };
-    }
-  }
-  if (!looksLikeCapacitorCode(compact)) return { value: null, unit: null, note: `"${marking}" is not a capacitor code (104, 4n7, 2p2); kept as read.` };
+  if (!marking || !kind) return NOTHING;
   try {
-    return { value: decodeCapacitorMarking(compact), unit: 'F', note: null };
+    const readings = readMarkingCode(marking, kind).map(
+      (r): DecodedReadingDto => ({
+        rank: r.rank,
+        value: r.value,
+        unit: r.unit,
+        scheme: r.scheme,
+        schemeLabel: r.schemeLabel,
+        schemeShortLabel: r.schemeShortLabel,
+        tolerance: r.tolerance,
+        rankReason: r.rankReason,
+      }),
+    );
+    const first = readings[0]!;
+    return { value: first.value, unit: first.unit, readings, note: null };
   } catch (err) {
-    return { value: null, unit: null, note: `${(err as Error).message} Kept as read.` };
+    if (!(err instanceof RangeError)) throw err;
+    return { ...NOTHING, note: `${err.message} Kept as read.` };
   }
 }

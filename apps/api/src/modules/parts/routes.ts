@@ -75,7 +75,7 @@ export const partRoutes: RouteDef[] = [
       method: 'post',
       path: '/api/teardowns/:id/parts',
       tag: TAG,
-      summary: 'Add a part line; a resistor or capacitor marking is decoded into decodedValue (Ω or F)',
+      summary: 'Add a part line; a resistor or capacitor marking is decoded into decodedValue (Ω or F) and decodedReadings (every reading, ranked, as the bench marking decoder)',
       access: CONTENT_EDITORS,
       params: idParam,
       body: createPartBody,

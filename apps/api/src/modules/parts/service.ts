@@ -16,6 +16,7 @@ import { parseCsv, toCsv, unguardCell } from '../../lib/csv';
 import { PartSchema, type Part } from './part.entity';
 import { decodePartMarking } from './decode';
 
+/** A part as the API sends it. The decoded value and readings are worked out from the marking here, by the decoder of today. */
 export function toPartDto(p: Part): PartDto {
   const decoded = decodePartMarking(p);
   return {
@@ -26,9 +27,10 @@ export function toPartDto(p: Part): PartDto {
     category: p.category,
     description: p.description,
     marking: p.marking ?? null,
-    decodedValue: p.decodedValue === null || p.decodedValue === undefined ? null : Number(p.decodedValue),
-    decodedUnit: (p.decodedUnit as 'Ω' | 'F' | null | undefined) ?? null,
+    decodedValue: decoded.value,
+    decodedUnit: decoded.unit,
     decodeNote: decoded.note,
+    decodedReadings: decoded.readings,
     makerPartNumber: p.makerPartNumber ?? null,
     package: p.package ?? null,
     quantity: p.quantity,
@@ -54,7 +56,7 @@ export interface PartValues {
   notes: string | null;
 }
 
-/** Apply values to a part and refresh the decoded value from its marking. */
+/** Apply values to a part and refresh the decoded value from its marking (the stored columns; the DTO and CSV decode again). */
 export function applyPartValues(part: Part, values: Partial<PartValues>): void {
   Object.assign(part, values);
   const decoded = decodePartMarking(part);
@@ -241,7 +243,7 @@ export function planPartsImport(csv: string): ImportPlan {
       mount: mount ?? 'smt',
       notes: cell('notes'),
     };
-    const decoded = category && description ? decodePartMarking(v) : { value: null, unit: null };
+    const decoded = category && description ? decodePartMarking(v) : { value: null, unit: null, readings: [] };
     rows.push({
       row: line,
       part: {
@@ -251,6 +253,7 @@ export function planPartsImport(csv: string): ImportPlan {
         marking: v.marking,
         decodedValue: decoded.value,
         decodedUnit: decoded.unit,
+        decodedReadings: decoded.readings,
         makerPartNumber: v.makerPartNumber,
         package: v.package,
         quantity,
@@ -267,8 +270,9 @@ export function planPartsImport(csv: string): ImportPlan {
 
 export function partsCsv(parts: Part[]): string {
   const header = PART_CSV_COLUMNS.map((c) => c.header);
-  const rows = parts.map((p) =>
-    PART_CSV_COLUMNS.map((c) => {
+  const rows = parts.map((p) => {
+    const decoded = decodePartMarking(p);
+    return PART_CSV_COLUMNS.map((c) => {
       switch (c.key) {
         case 'designators':
           return p.designators ?? null;
@@ -279,9 +283,9 @@ export function partsCsv(parts: Part[]): string {
         case 'marking':
           return p.marking ?? null;
         case 'decodedValue':
-          return p.decodedValue ?? null;
+          return decoded.value;
         case 'decodedUnit':
-          return p.decodedUnit ?? null;
+          return decoded.unit;
         case 'makerPartNumber':
           return p.makerPartNumber ?? null;
         case 'package':
@@ -293,8 +297,8 @@ export function partsCsv(parts: Part[]): string {
         case 'notes':
           return p.notes ?? null;
       }
-    }),
-  );
+    });
+  });
   return toCsv(header, rows);
 }
 

@@ -16,7 +16,7 @@ export const toolRoutes: RouteDef[] = [
       method: 'post',
       path: '/api/tools/marking',
       tag: 'Bench tools',
-      summary: 'Decode a resistor or capacitor marking ({ code, kind }) or colour bands ({ bands }): value, tolerance, meaning, preferred values',
+      summary: 'Decode a resistor or capacitor marking ({ code, kind }) or colour bands ({ bands }): every valid reading, ranked, with its rule, value, tolerance, meaning, preferred values',
       access: 'signed-in',
       body: markingToolBody,
       response: markingToolResponse,

@@ -6,7 +6,7 @@ import { Button } from '@/components/button';
 import { Card } from '@/components/page';
 import type { EditGate } from '@/components/published-edit';
 import { ApiError } from '@/lib/api-client';
-import { formatQuantity } from '@/lib/format';
+import { DecodedMarking } from '@/components/decoded-marking';
 import { useCommitPartsImport, usePreviewPartsImport } from '../api/import-parts';
 
 const MAX_BYTES = 900_000;
@@ -215,7 +215,7 @@ export function ImportPanel({ teardownId, gate, onClose }: { teardownId: number;
                           {r.part.description}
                         </td>
                         <td className="px-2 font-mono">{r.part.marking ?? '—'}</td>
-                        <td className="num px-2 text-cell-700">{r.part.decodedValue !== null && r.part.decodedUnit ? formatQuantity(r.part.decodedValue, r.part.decodedUnit) : '—'}</td>
+                        <td className="num whitespace-nowrap px-2">{r.part.decodedReadings.length > 0 ? <DecodedMarking readings={r.part.decodedReadings} /> : '—'}</td>
                         <td className="px-2 font-mono">{r.part.makerPartNumber ?? '—'}</td>
                         <td className="px-2">{r.part.package ?? '—'}</td>
                         <td className="num px-2 text-right">{r.part.quantity ?? '?'}</td>

@@ -4,6 +4,7 @@ import { ArrowDown, ArrowUp, Check, ChevronDown, ChevronRight, Pencil, Plus, Tra
 import { MOUNT_TYPE, PART_CATEGORY, type PartDto } from '@splitcase/contracts';
 import { Button } from '@/components/button';
 import { DataTable, type Column } from '@/components/data-table';
+import { DecodedMarking, DecodedReadingList } from '@/components/decoded-marking';
 import type { EditGate } from '@/components/published-edit';
 import { ApiError } from '@/lib/api-client';
 import { formatQuantity } from '@/lib/format';
@@ -205,8 +206,8 @@ export function PartList({
         align: 'right',
         className: 'min-w-20 whitespace-nowrap',
         cell: (p) =>
-          decodedText(p) ? (
-            <span className="text-cell-700">{decodedText(p)}</span>
+          p.decodedReadings.length > 0 ? (
+            <DecodedMarking readings={p.decodedReadings} expanded={expanded.has(p.id)} onShowAll={() => toggle(p.id)} />
           ) : p.decodeNote ? (
             <span className="inline-flex items-center gap-1 text-xs text-amber-700" title={p.decodeNote}>
               <TriangleAlert className="size-3.5" aria-hidden /> not a code
@@ -311,7 +312,7 @@ export function PartList({
           <dd className="font-mono">{p.marking ?? '—'}</dd>
           <dt className="text-graphite-500">Decoded value</dt>
           <dd>
-            {decodedText(p) ?? '—'}
+            {p.decodedReadings.length > 1 ? <DecodedReadingList readings={p.decodedReadings} /> : p.decodedReadings[0] ? <DecodedMarking readings={p.decodedReadings} /> : '—'}
             {p.decodeNote && <span className="ml-2 text-amber-700">{p.decodeNote}</span>}
             {!p.decodeNote && decodedText(p) === null && p.marking && <span className="ml-2 text-graphite-500">Only resistor and capacitor markings are decoded.</span>}
           </dd>

@@ -1,5 +1,6 @@
 import { MOUNT_TYPE, PART_CATEGORY, type CostRollUpDto, type PartDto, type PhotoDto } from '@splitcase/contracts';
-import { formatDate, formatQuantity } from '@/lib/format';
+import { DecodedMarking } from '@/components/decoded-marking';
+import { formatDate } from '@/lib/format';
 import { NoneRecorded, ReportTable } from './report-layout';
 import { photoNumber } from './report-photos';
 
@@ -41,7 +42,7 @@ export function ReportBom({ parts, photos, cost, costProblem }: { parts: PartDto
                 </span>
               </td>
               <td className="font-mono text-2xs">{p.marking ?? '—'}</td>
-              <td className="num whitespace-nowrap">{p.decodedValue !== null && p.decodedUnit ? formatQuantity(p.decodedValue, p.decodedUnit) : '—'}</td>
+              <td className="num whitespace-nowrap">{p.decodedReadings.length > 0 ? <DecodedMarking readings={p.decodedReadings} /> : '—'}</td>
               <td className="num text-right">{p.quantity}</td>
               <td className="whitespace-nowrap">{MOUNT_TYPE.labels[p.mount]}</td>
               {cost && (

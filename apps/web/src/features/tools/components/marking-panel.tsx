@@ -79,17 +79,32 @@ function PreferredTable({ reading }: { reading: MarkingReadingDto }) {
 
 const SUBHEAD = 'text-xs font-medium uppercase tracking-wider text-graphite-500';
 
-/** One reading of a marking; `wide` puts the preferred values beside the reading. */
-function Reading({ reading, wide }: { reading: MarkingReadingDto; wide: boolean }) {
+/**
+ * One reading of a marking; `wide` puts the preferred values beside the reading. `of` is how many
+ * readings the code has on this kind of part: with more than one, the card says which it is.
+ */
+function Reading({ reading, wide, of }: { reading: MarkingReadingDto; wide: boolean; of: number }) {
   const unit = reading.unit;
+  const component = capitalise(reading.component);
   return (
-    <article className="rounded-lg border border-graphite-150 bg-white px-4 pb-2 pt-3 shadow-card" aria-label={`${capitalise(reading.component)} reading`}>
+    <article
+      className="rounded-lg border border-graphite-150 bg-white px-4 pb-2 pt-3 shadow-card"
+      aria-label={of > 1 ? `${component} reading ${reading.rank} of ${of}` : `${component} reading`}
+      data-testid="marking-reading"
+    >
       <div className={wide ? 'grid gap-x-8 xl:grid-cols-2' : ''}>
         <div>
+          {of > 1 && (
+            <div className="mb-1.5">
+              <Badge tone={reading.rank === 1 ? 'cell' : 'neutral'} icon={reading.rank === 1 ? Check : undefined}>
+                {reading.rank === 1 ? `Reading 1 of ${of} · most likely` : `Reading ${reading.rank} of ${of}`}
+              </Badge>
+            </div>
+          )}
           <div className="flex flex-wrap items-center gap-2 text-sm text-graphite-600">
-            <span>{capitalise(reading.component)}</span>
+            <span>{component}</span>
             <span aria-hidden>·</span>
-            <span>{reading.schemeLabel}</span>
+            <span data-testid="marking-rule">{reading.schemeLabel}</span>
           </div>
           <div className="mt-0.5 flex flex-wrap items-baseline gap-x-3 gap-y-1">
             <span className="num text-3xl font-semibold tracking-tight text-cell-700" data-testid="marking-value">
@@ -181,7 +196,7 @@ export function MarkingPanel() {
                 value={code}
                 onChange={setCode}
                 placeholder="472, 4R7, 68X, 104K, 4n7"
-                hint="3- or 4-digit codes, R/K/M or p/n/u as the decimal point, EIA-96, a tolerance letter."
+                hint="3- or 4-digit codes, R/K/M or p/n/u as the decimal point, EIA-96, a tolerance letter. A code that reads more than one way shows every reading, most likely first."
                 error={state.fieldErrors.code}
                 mono
               />
@@ -233,9 +248,15 @@ export function MarkingPanel() {
         {state.result && (
           <div className="space-y-4">
             {state.result.note && <p className="rounded-md bg-graphite-100 px-3 py-2 text-sm text-graphite-700">{state.result.note}</p>}
+            {/* Every valid reading, ranked on each kind of part: resistor readings first. */}
             <div className={`grid gap-4 ${state.result.readings.length > 1 ? 'xl:grid-cols-2' : ''}`}>
               {state.result.readings.map((r) => (
-                <Reading key={r.component} reading={r} wide={state.result!.readings.length === 1} />
+                <Reading
+                  key={`${r.component}-${r.rank}`}
+                  reading={r}
+                  wide={state.result!.readings.length === 1}
+                  of={state.result!.readings.filter((x) => x.component === r.component).length}
+                />
               ))}
             </div>
           </div>
