@@ -2,6 +2,7 @@
 // Shares are fractions (0.03 = 3 %); money is in the currency named beside it.
 import { z } from 'zod';
 import { optionalText } from './common';
+import { percentInput } from './inputs';
 import { PART_CATEGORY, MOUNT_TYPE } from './domain';
 import { currencyCode } from './settings';
 
@@ -269,6 +270,30 @@ export const salesTaxSchema = z.object({
   currency: z.string(),
 });
 export type SalesTaxDto = z.infer<typeof salesTaxSchema>;
+
+/**
+ * The form behind the workspace's sales-tax defaults: one row per currency, the rate typed as a
+ * percentage; it becomes settings' `salesTaxByCurrency` (currency → fraction).
+ */
+export const salesTaxFormSchema = z.object({
+  rows: z
+    .array(
+      z.object({
+        currency: currencyCode,
+        rate: percentInput('the sales tax').refine((v) => v !== null && v !== undefined, 'Give the rate, 0 % for prices quoted before tax'),
+      }),
+    )
+    .max(60, 'At most 60 currencies')
+    .superRefine((rows, ctx) => {
+      const seen = new Set<string>();
+      rows.forEach((r, k) => {
+        if (seen.has(r.currency)) ctx.addIssue({ code: 'custom', path: [k, 'currency'], message: `${r.currency} is listed twice` });
+        seen.add(r.currency);
+      });
+    }),
+});
+export type SalesTaxFormValues = z.input<typeof salesTaxFormSchema>;
+export type SalesTaxForm = z.output<typeof salesTaxFormSchema>;
 
 /**
  * Net to maker − landed cost. While any BOM line is unpriced (or there are none) the margin is
