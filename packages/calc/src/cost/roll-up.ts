@@ -557,7 +557,7 @@ export function rollUpCost(p: RollUpInput): CostRollUp {
       totalLines === 0
         ? 'No parts listed yet: the margin needs a priced parts list.'
         : pricedCount < totalLines
-          ? `${pricedCount} of ${totalLines} lines priced: the margin needs a price on every line (unpriced lines would add nothing to the cost and overstate it).`
+          ? `${pricedCount} of ${totalLines} lines priced: price every line to see the margin (an unpriced line adds nothing to the cost, so the margin would be overstated).`
           : null;
     const marginAmount = netToMaker - mid.landed;
     impliedMargin =

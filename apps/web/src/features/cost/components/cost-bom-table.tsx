@@ -76,7 +76,7 @@ export function CostBomTable({ cost, canEdit, editingId, onEdit }: { cost: CostR
               <div className="text-2xs text-graphite-500" title="Attrition of this line's category">+{formatPercent(l.attrition)} attrition</div>
             </div>
           ) : (
-            <span className="text-xs text-graphite-400">not priced</span>
+            <span className="text-xs text-graphite-500">not priced</span>
           ),
       },
       {
@@ -106,7 +106,7 @@ export function CostBomTable({ cost, canEdit, editingId, onEdit }: { cost: CostR
               <div className="text-2xs text-graphite-500">{formatDate(l.price.priceDate)}</div>
             </div>
           ) : (
-            <span className="text-xs text-graphite-400">No price</span>
+            <span className="text-xs text-graphite-500">No price</span>
           ),
       },
     ];
