@@ -181,7 +181,7 @@ describe('GET /api/teardowns/:id/cost — a small BOM worked by hand [C]', () =>
     await as.sourcing!.put(`/api/teardowns/${ids.published}/cost-model`, MODEL).expect(200);
   });
 
-  it('prices each line at the break for quantity × volume, converted to USD before attrition', async () => {
+  it('prices each line at the break for the purchased quantity, converted to USD before attrition', async () => {
     const c = await cost(as.viewer!, ids.published);
     expect(c).toMatchObject({ volume: 1000, currency: 'USD', rateDate: '2026-11-27', model: { source: 'teardown', currency: 'CNY', volumes: [100, 1000, 5000] } });
     const line = Object.fromEntries(c.lines.map((l) => [l.partId, l]));
@@ -189,11 +189,11 @@ describe('GET /api/teardowns/:id/cost — a small BOM worked by hand [C]', () =>
     // BT1 cell: 1 × 1000 = 1000 bought → break 1000 → 2.16 USD; 'cell' not listed → attrition 0 → extended 1 × 2.16 × 1.00 = 2.16
     expect(line[ids.cell]).toMatchObject({ quantity: 1, buyQuantity: 1000, breakMinQty: 1000, unitPrice: 2.16, attrition: 0 });
     expect(line[ids.cell]!.extended).toBeCloseTo(2.16, 12);
-    // U1 IC: 1000 bought → break 1000 → 2.34 CNY × 0.138461538 = 0.324 USD; ic attrition 2 % → 1 × 0.324 × 1.02 = 0.33048
+    // U1 IC: ceil(1000 × 1.02) = 1020 bought → break 1000 → 2.34 CNY × 0.138461538 = 0.324 USD; ic attrition 2 % → 1 × 0.324 × 1.02 = 0.33048
     expect(line[ids.ic]!.unitPrice).toBeCloseTo(0.324, 12);
     expect(line[ids.ic]!.extended).toBeCloseTo(0.33048, 12);
-    // R1–R4: 4 × 1000 = 4000 bought → break 4000 → 0.0054 USD; passive 5 % → 4 × 0.0054 × 1.05 = 0.02268
-    expect(line[ids.res]).toMatchObject({ quantity: 4, buyQuantity: 4000, breakMinQty: 4000, unitPrice: 0.0054, attrition: 0.05 });
+    // R1–R4: ceil(4 × 1000 × 1.05) = 4200 bought (attrition included) → break 4000 → 0.0054 USD; passive 5 % → 4 × 0.0054 × 1.05 = 0.02268
+    expect(line[ids.res]).toMatchObject({ quantity: 4, buyQuantity: 4200, breakMinQty: 4000, unitPrice: 0.0054, attrition: 0.05 });
     expect(line[ids.res]!.extended).toBeCloseTo(0.02268, 12);
     // J1: 1000 bought → break 500 → 0.17 GBP × 1.270588235 = 0.216 USD; connector → attrition 0 → 0.216
     expect(line[ids.usb]!.unitPrice).toBeCloseTo(0.216, 12);
@@ -237,15 +237,18 @@ describe('GET /api/teardowns/:id/cost — a small BOM worked by hand [C]', () =>
     expect(c.low).toBeCloseTo(3.720976832, 9);
     // high: 2.376 + 0.347004 + 0.023814 + 0.2592 = 3.006018 → (3.006018 + 0.706153846) × 1.1781 = 4.373309652
     expect(c.high).toBeCloseTo(4.373309652, 9);
-    // retail 20.00 GBP = 25.411764706 USD; retailer 40 % = 10.164705882; platform 10 % of the rest = 1.524705882
-    // net to maker = 25.411764706 × 0.6 × 0.9 = 13.722352941; implied margin = 13.722352941 − 4.047143242 = 9.675209699 (70.507 % of net)
-    expect(c.retail).toMatchObject({ seen: { amount: 20, currency: 'GBP', on: '2026-11-01' } });
+    // retail 20.00 GBP = 25.411764706 USD as seen, with the workspace default 20 % VAT for GBP in it [CP: REFERENCES §12]:
+    // before tax 25.411764706 / 1.2 = 21.176470588; retailer 40 % = 8.470588235; platform 10 % of the rest = 1.270588235
+    // net to maker = 21.176470588 × 0.6 × 0.9 = 11.435294118
+    expect(c.retail).toMatchObject({ seen: { amount: 20, currency: 'GBP', on: '2026-11-01' }, salesTax: { rate: 0.2, source: 'workspace', currency: 'GBP' } });
     expect(c.retail!.amount).toBeCloseTo(25.411764706, 9);
-    expect(c.retail!.retailerShare).toBeCloseTo(10.164705882, 9);
-    expect(c.retail!.platformShare).toBeCloseTo(1.524705882, 9);
-    expect(c.retail!.netToMaker).toBeCloseTo(13.722352941, 9);
-    expect(c.impliedMargin!.amount).toBeCloseTo(9.675209699, 9);
-    expect(c.impliedMargin!.fraction).toBeCloseTo(0.705069294, 9);
+    expect(c.retail!.beforeTax).toBeCloseTo(21.176470588, 9);
+    expect(c.retail!.retailerShare).toBeCloseTo(8.470588235, 9);
+    expect(c.retail!.platformShare).toBeCloseTo(1.270588235, 9);
+    expect(c.retail!.netToMaker).toBeCloseTo(11.435294118, 9);
+    // The shell is unpriced: the margin is incomplete (no number), with the count of priced lines.
+    expect(c.impliedMargin).toMatchObject({ amount: null, fraction: null, complete: false, pricedLines: 4, totalLines: 5 });
+    expect(c.impliedMargin!.reason).toMatch(/^4 of 5 lines priced/);
   });
 
   it('shows how: steps with formulas and inputs, categories, the rates used with their date, a waterfall and the volume table', async () => {
@@ -266,7 +269,8 @@ describe('GET /api/teardowns/:id/cost — a small BOM worked by hand [C]', () =>
     const bars = Object.fromEntries(c.waterfall.map((b) => [b.key, b]));
     expect(bars.exWorks!.end).toBeCloseTo(c.exWorks, 12);
     expect(bars.landed!.end).toBeCloseTo(c.landed, 12);
-    expect(bars.retail!.end).toBeCloseTo(c.retail!.amount, 12);
+    // The margin is incomplete (the shell is unpriced): the waterfall stops at landed cost.
+    expect(c.waterfall.at(-1)!.key).toBe('landed');
     // The volume table: at 100 units the cell, IC and resistors sit on their first breaks and J1 below its minimum order:
     //   2.50 + 3.12 × 0.138461538 × 1.02 + 4 × 0.01 × 1.05 + 0.216 = 3.19864;
     //   at 5000: 2.16 + 1.95 × 0.138461538 × 1.02 + 0.02268 + 0.216 = 2.67408
@@ -525,5 +529,181 @@ describe('the demo seed step prices the parts that exist and creates none', () =
     } finally {
       await app.close();
     }
+  });
+});
+
+describe('implied margin with sales tax, unpriced lines, the price break on the purchased quantity and CIF insurance', () => {
+  // A second invented device priced in EUR, costed in EUR (nothing to convert), with a flat model:
+  // no assembly, labour, overhead or channel shares, so each figure can be followed by hand.
+  const FLAT: CostModelBody = {
+    currency: 'EUR',
+    volumes: [100, 1000, 5000],
+    attritionByCategory: { passive: 0.05 },
+    defaultAttrition: 0,
+    smtCostPerPlacement: 0,
+    thtCostPerJoint: 0,
+    thtJointsPerPart: 2,
+    manualOperations: [],
+    labourRatePerHour: 0,
+    testMinutes: 0,
+    packagingCost: 0,
+    firstPassYield: 1,
+    overheadFraction: 0,
+    freightFraction: 0.05,
+    insuranceFraction: 0.01,
+    dutyFraction: 0.02,
+    retailMarginFraction: 0,
+    platformMarginFraction: 0,
+    confidenceBand: { high: 0, medium: 0, low: 0 },
+  };
+  const p2 = { device: 0, teardown: 0, ic: 0, res: 0, cell: 0 };
+  const eur = (a: Agent, q = 'volume=1000&currency=EUR') => cost(a, p2.teardown, q);
+  const price = (breaks: { minQty: number; unitPrice: number }[]) => ({ currency: 'EUR', breaks, source: 'quote', confidence: 'high' });
+
+  beforeAll(async () => {
+    await importFixture(as.sourcing!).expect(200);
+    const em = t.orm.em.fork();
+    const engineer = await em.findOneOrFail(UserSchema, { email: 'engineer@splitcase.test' });
+    const device = em.create(DeviceSchema, { maker: 'Testbrook (invented)', model: 'Cost Cube 2', category: 'power-bank', retailPrice: 24.99, retailCurrency: 'EUR' } as never);
+    const teardown = em.create(TeardownSchema, { device, engineer, date: '2026-11-22', status: 'published', publishedAt: new Date() } as never);
+    const part = (position: number, v: Record<string, unknown>) => em.create(PartSchema, { teardown, position, quantity: 1, ...v } as never);
+    const ic = part(1, { designators: 'U1', category: 'ic', description: 'Boost IC', mount: 'smt' });
+    const res = part(2, { designators: 'R1, R2', category: 'passive', description: 'Resistor 0402', mount: 'smt', quantity: 2 });
+    const cell = part(3, { designators: 'BT1', category: 'cell', description: 'Pouch cell', mount: 'manual' });
+    await em.flush();
+    Object.assign(p2, { device: device.id, teardown: teardown.id, ic: ic.id, res: res.id, cell: cell.id });
+    await as.sourcing!.put(`/api/teardowns/${p2.teardown}/cost-model`, FLAT).expect(200);
+    await as.sourcing!.put(`/api/parts/${p2.ic}/price`, price([{ minQty: 1, unitPrice: 4 }])).expect(200);
+    await as.sourcing!.put(`/api/parts/${p2.res}/price`, price([{ minQty: 10, unitPrice: 0.1 }, { minQty: 2000, unitPrice: 0.05 }])).expect(200);
+    await as.sourcing!.put(`/api/parts/${p2.cell}/price`, price([{ minQty: 1, unitPrice: 1.895 }])).expect(200);
+  });
+
+  it('CIF insurance (the default basis): 1 % of goods + freight, then duty on CIF [S: REFERENCES §10 CIF = FOB + freight + insurance; C]', async () => {
+    const c = await eur(as.lead!);
+    // parts at 1000: 4.00 + 2 × 0.05 × 1.05 + 1.895 = 6.00; ex-works 6.00; freight 5 % = 0.30
+    expect(c.partsTotal).toBeCloseTo(6, 12);
+    expect(c.freight).toBeCloseTo(0.3, 12);
+    // insurance on goods + freight: 0.01 × 6.30 = 0.063 (goods only would be 0.06)
+    expect(c.insurance).toBeCloseTo(0.063, 12);
+    // duty 2 % × CIF (6.30 + 0.063 = 6.363) = 0.12726; landed 6.363 + 0.12726 = 6.49026
+    expect(c.duty).toBeCloseTo(0.12726, 12);
+    expect(c.landed).toBeCloseTo(6.49026, 12);
+    expect(c.steps.find((s) => s.key === 'insurance')).toMatchObject({ label: 'Insurance (CIF basis)', formula: '0.01 × (6 + 0.3) = 0.063' });
+    const model = (await as.lead!.get(`/api/teardowns/${p2.teardown}/cost-model`).expect(200)).body.model;
+    expect(model.insuranceBasis).toBe('cif');
+  });
+
+  it('the goods-only basis insures the ex-works value alone, as the §10 worked example does [S/CP; C]', async () => {
+    await as.sourcing!.put(`/api/teardowns/${p2.teardown}/cost-model`, { ...FLAT, insuranceBasis: 'goods' }).expect(200);
+    const c = await eur(as.lead!);
+    // 0.01 × 6.00 = 0.06; duty 0.02 × 6.36 = 0.1272; landed 6.36 + 0.1272 = 6.4872
+    expect(c.insurance).toBeCloseTo(0.06, 12);
+    expect(c.landed).toBeCloseTo(6.4872, 12);
+    const bad = await as.sourcing!.put(`/api/teardowns/${p2.teardown}/cost-model`, { ...FLAT, insuranceBasis: 'fob' });
+    expect(bad.status).toBe(400);
+    expect(Object.keys(bad.body.error.fields)).toEqual(['insuranceBasis']);
+    await as.sourcing!.put(`/api/teardowns/${p2.teardown}/cost-model`, FLAT).expect(200);
+  });
+
+  it('the price break is chosen on the purchased quantity, attrition included: 952 units buy 2 000, 951 buy 1 998 [C]', async () => {
+    // R1, R2: 2 per unit, passive attrition 5 %. 952 units: 2 × 952 = 1 904 fitted (the 10 break by that rule),
+    // but ceil(1 904 × 1.05 = 1 999.2) = 2 000 bought → the 2 000 break at 0.05.
+    const at952 = (await eur(as.lead!, 'volume=952&currency=EUR')).lines.find((l) => l.partId === p2.res)!;
+    expect(at952).toMatchObject({ buyQuantity: 2000, breakMinQty: 2000, unitPrice: 0.05 });
+    // 951 units: ceil(1 902 × 1.05 = 1 997.1) = 1 998 → the 10 break at 0.10.
+    const at951 = (await eur(as.lead!, 'volume=951&currency=EUR')).lines.find((l) => l.partId === p2.res)!;
+    expect(at951).toMatchObject({ buyQuantity: 1998, breakMinQty: 10, unitPrice: 0.1 });
+  });
+
+  it('sales tax from the workspace default for the currency: EUR 20 %, 24.99 → 20.825 before tax [CP: REFERENCES §12; C]', async () => {
+    const settings = (await as.viewer!.get('/api/settings').expect(200)).body.settings;
+    expect(settings.salesTaxByCurrency).toMatchObject({ EUR: 0.2, USD: 0 });
+    const c = await eur(as.lead!);
+    expect(c.retail).toMatchObject({ amount: 24.99, salesTax: { rate: 0.2, source: 'workspace', currency: 'EUR' } });
+    expect(c.retail!.beforeTax).toBeCloseTo(20.825, 12);
+    expect(c.retail!.salesTax.amount).toBeCloseTo(4.165, 12);
+    // no channel shares: net to maker = 20.825; margin = 20.825 − 6.49026 = 14.33474, 68.834 % of net
+    expect(c.retail!.netToMaker).toBeCloseTo(20.825, 12);
+    expect(c.impliedMargin).toMatchObject({ complete: true, reason: null, pricedLines: 3, totalLines: 3, salesTax: { rate: 0.2, source: 'workspace', currency: 'EUR' } });
+    expect(c.impliedMargin!.amount).toBeCloseTo(14.33474, 12);
+    expect(c.impliedMargin!.fraction).toBeCloseTo(14.33474 / 20.825, 12);
+    expect(c.steps.find((s) => s.key === 'retailBeforeTax')!.formula).toBe('24.99 ÷ (1 + 0.2) = 20.825');
+    const bars = Object.fromEntries(c.waterfall.map((b) => [b.key, b]));
+    expect(bars.salesTax!.value).toBeCloseTo(4.165, 12);
+    expect(bars.retail!.end).toBeCloseTo(24.99, 12);
+  });
+
+  it('a changed workspace default moves the margin: EUR 21 % → 24.99 / 1.21 = 20.652892562 [C]', async () => {
+    const bad = await as.admin!.patch('/api/settings', { salesTaxByCurrency: { EUR: 1.2, usd: 0 } });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields['salesTaxByCurrency.EUR']).toMatch(/not be above 100 %/);
+    await as.admin!.patch('/api/settings', { salesTaxByCurrency: { EUR: 0.21, USD: 0 } }).expect(200);
+    const c = await eur(as.lead!);
+    expect(c.retail!.beforeTax).toBeCloseTo(20.652892562, 9);
+    expect(c.impliedMargin!.amount).toBeCloseTo(20.652892562 - 6.49026, 9);
+    await as.admin!.patch('/api/settings', { salesTaxByCurrency: { EUR: 0.2, USD: 0, GBP: 0.2 } }).expect(200);
+  });
+
+  it('sales tax from the device: "10 %" typed on the device wins over the default; 0 means a price before tax', async () => {
+    const set = await as.engineer!.patch(`/api/devices/${p2.device}`, { salesTaxRate: '10 %' }).expect(200);
+    expect(set.body.device.salesTaxRate).toBe(0.1);
+    let c = await eur(as.lead!);
+    // 24.99 / 1.10 = 22.718181818; margin 22.718181818 − 6.49026 = 16.227921818
+    expect(c.retail!.salesTax).toMatchObject({ rate: 0.1, source: 'device', currency: 'EUR' });
+    expect(c.retail!.beforeTax).toBeCloseTo(22.718181818, 9);
+    expect(c.impliedMargin!.amount).toBeCloseTo(16.227921818, 9);
+    // 0: quoted before tax, nothing taken out (the usual US quote [CP]).
+    expect((await as.engineer!.patch(`/api/devices/${p2.device}`, { salesTaxRate: 0 }).expect(200)).body.device.salesTaxRate).toBe(0);
+    c = await eur(as.lead!);
+    expect(c.retail).toMatchObject({ beforeTax: 24.99, salesTax: { rate: 0, amount: 0, source: 'device' } });
+    expect(c.impliedMargin!.amount).toBeCloseTo(24.99 - 6.49026, 12);
+    // Bad input names the field and changes nothing; blank goes back to the workspace default.
+    for (const [value, message] of [
+      ['abc', /as a percentage such as "20 %"/],
+      ['120 %', /At most 100 %/],
+      [-0.1, /fraction from 0 to 1/],
+      [20, /fraction from 0 to 1/],
+    ] as const) {
+      const res = await as.engineer!.patch(`/api/devices/${p2.device}`, { salesTaxRate: value });
+      expect(res.status, String(value)).toBe(400);
+      expect(res.body.error.fields.salesTaxRate, String(value)).toMatch(message);
+    }
+    expect((await as.lead!.get(`/api/devices/${p2.device}`).expect(200)).body.device.salesTaxRate).toBe(0);
+    expect((await as.engineer!.patch(`/api/devices/${p2.device}`, { salesTaxRate: '' }).expect(200)).body.device.salesTaxRate).toBeNull();
+    expect((await eur(as.lead!)).retail!.salesTax).toMatchObject({ rate: 0.2, source: 'workspace' });
+    const audit = (await as.admin!.get(`/api/audit?entityType=device&entityId=${p2.device}`).expect(200)).body.entries;
+    expect(audit[0].changes.salesTaxRate).toEqual({ from: 0, to: null });
+  });
+
+  it('a new device takes the rate typed as a percentage', async () => {
+    const res = await as.engineer!.post('/api/devices', { maker: 'Testbrook (invented)', model: 'Cost Cube 3', category: 'usb-fan', retailPrice: 12, currency: 'GBP', salesTaxRate: '20' }).expect(201);
+    expect(res.body.device.salesTaxRate).toBe(0.2);
+  });
+
+  it('with a line unpriced the margin is incomplete: no number, the reason and "2 of 3 lines priced", at every volume', async () => {
+    await as.sourcing!.delete(`/api/parts/${p2.cell}/price`).expect(204);
+    const c = await eur(as.lead!);
+    expect(c.impliedMargin).toMatchObject({ amount: null, fraction: null, complete: false, pricedLines: 2, totalLines: 3, salesTax: { rate: 0.2, source: 'workspace' } });
+    expect(c.impliedMargin!.reason).toMatch(/^2 of 3 lines priced/);
+    for (const row of c.volumes) expect(row.impliedMargin).toMatchObject({ amount: null, complete: false, pricedLines: 2 });
+    expect(c.steps.map((s) => s.key)).not.toContain('impliedMargin');
+    expect(c.waterfall.at(-1)!.key).toBe('landed');
+    // The retail split does not depend on the parts list and is still given.
+    expect(c.retail!.beforeTax).toBeCloseTo(20.825, 12);
+    await as.sourcing!.put(`/api/parts/${p2.cell}/price`, price([{ minQty: 1, unitPrice: 1.895 }])).expect(200);
+    expect((await eur(as.lead!)).impliedMargin!.complete).toBe(true);
+  });
+
+  it('a currency with no workspace default and no rate on the device: the margin is incomplete and says what to set', async () => {
+    await as.engineer!.patch(`/api/devices/${p2.device}`, { retailPrice: 36000, currency: 'KRW' }).expect(200);
+    const c = await eur(as.lead!);
+    expect(c.retail).toBeNull();
+    expect(c.impliedMargin).toMatchObject({ amount: null, fraction: null, complete: false, salesTax: null, pricedLines: 3, totalLines: 3 });
+    expect(c.impliedMargin!.reason).toMatch(/No sales-tax rate for KRW.*Sales tax in the price/);
+    expect(c.warnings.join(' ')).toMatch(/No sales-tax rate for KRW/);
+    await as.engineer!.patch(`/api/devices/${p2.device}`, { salesTaxRate: '10 %' }).expect(200);
+    // 36 000 KRW / 1500 × 1 = 24.00 EUR; before tax 24 / 1.1 = 21.818181818
+    expect((await eur(as.lead!)).retail!.beforeTax).toBeCloseTo(21.818181818, 9);
+    await as.engineer!.patch(`/api/devices/${p2.device}`, { retailPrice: 24.99, currency: 'EUR', salesTaxRate: null }).expect(200);
   });
 });

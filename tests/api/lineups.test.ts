@@ -5,6 +5,7 @@ import { METRIC_KEYS } from '@splitcase/calc';
 import { LINEUP_METRIC_KEYS, type ComparisonDto, type ComparisonRowDto, type DeviceDto, type LineupDto } from '@splitcase/contracts';
 import { LineupSchema } from '../../apps/api/src/modules/lineups/lineup.entity';
 import { LineupDeviceSchema } from '../../apps/api/src/modules/lineups/lineup-device.entity';
+import { PartSchema } from '../../apps/api/src/modules/parts/part.entity';
 import { makeTestApp, type Agent, type TestApp } from '../support/test-app';
 
 let t: TestApp;
@@ -411,6 +412,33 @@ describe('the comparison', () => {
     expect(gaps.pareto.leftOut.find((x) => x.deviceId === bare.id)!.reason).toMatch(/^No retail price/);
     // The JSON says null, not 0, for every missing value.
     for (const row of gaps.rows) for (const [key, v] of Object.entries(row.metrics)) if (row.missing[key]) expect(v, key).toBeNull();
+  });
+
+  it('the implied margin is missing with the reason while a line of the teardown is unpriced, and a number once all are priced', async () => {
+    // An invented device with a two-line BOM, one line priced.
+    const d = (await as.engineer!.post('/api/devices', { maker: 'Testbrook (invented)', model: 'Half-priced 2', category: 'power-bank', retailPrice: 24.99, currency: 'USD' }).expect(201)).body.device as DeviceDto;
+    const td = (await as.engineer!.post('/api/teardowns', { deviceId: d.id }).expect(201)).body.teardown as { id: number };
+    const em = t.orm.em.fork();
+    const part = (position: number, v: Record<string, unknown>) => em.create(PartSchema, { teardown: td.id, position, quantity: 1, mount: 'manual', ...v } as never);
+    const cell = part(1, { designators: 'BT1', category: 'cell', description: 'Pouch cell' });
+    const shell = part(2, { designators: null, category: 'enclosure', description: 'Shell' });
+    await em.flush();
+    const price = { currency: 'USD', breaks: [{ minQty: 1, unitPrice: 2 }], source: 'quote', confidence: 'high' };
+    await as.sourcing!.put(`/api/parts/${cell.id}/price`, price).expect(200);
+    const l = await create(as.lead!, { name: 'Half priced', currency: 'USD', deviceIds: [dev.duo!.id, d.id], weights: { impliedMargin: 1 } });
+    const row = rowOf(await comparison(as.lead!, l.id), d.id);
+    // The should-cost is shown (flagged low); the margin is not: 1 of 2 lines priced.
+    expect(row.metrics.shouldCost).toBeTypeOf('number');
+    expect(row.metrics.impliedMargin).toBeNull();
+    expect(row.missing.impliedMargin).toMatch(/^Implied margin incomplete: 1 of 2 lines priced/);
+    expect(row.score).toBeNull();
+    // Priced in full, the margin is the cost service's figure.
+    await as.sourcing!.put(`/api/parts/${shell.id}/price`, price).expect(200);
+    const full = rowOf(await comparison(as.lead!, l.id), d.id);
+    const cost = (await as.lead!.get(`/api/teardowns/${td.id}/cost?currency=USD`).expect(200)).body;
+    expect(cost.impliedMargin.complete).toBe(true);
+    expect(full.metrics.impliedMargin).toBeCloseTo(cost.impliedMargin.fraction, 12);
+    expect(full.missing.impliedMargin).toBeUndefined();
   });
 
   it('notes the nature of the figures, and the hot-surface caution when heaters are in the lineup', () => {

@@ -109,4 +109,30 @@ describe('the cost section of a demo teardown', () => {
     expect(restore.status()).toBe(200);
     await page.context().close();
   });
+
+  it.runIf(partsRouteExists)('with a line unpriced the implied margin reads "Incomplete" with the count of priced lines, and comes back once priced', async () => {
+    const page = await signedInPage(browser, 'sourcing');
+    await page.goto('/teardowns/1/cost');
+    const before = await costOf(page);
+    const line = before.lines.find((l) => l.priced)!;
+    const token = ((await (await page.request.get('/api/auth/csrf')).json()) as { token: string }).token;
+    expect((await page.request.delete(`/api/parts/${line.partId}/price`, { headers: { 'X-CSRF-Token': token } })).status()).toBe(204);
+    try {
+      await page.reload();
+      const priced = before.lines.filter((l) => l.priced).length - 1;
+      await expect.poll(() => page.getByTestId('cost-margin').textContent(), { timeout: 10_000 }).toBe('Incomplete');
+      await expect.poll(() => page.getByTestId('cost-margin').locator('xpath=..').textContent(), { timeout: 10_000 }).toContain(`${priced} of ${before.lines.length} lines priced`);
+      await page.getByRole('table', { name: 'Cost at each volume' }).getByText('incomplete').first().waitFor();
+    } finally {
+      const p = line.price!;
+      const restore = await page.request.put(`/api/parts/${line.partId}/price`, {
+        headers: { 'X-CSRF-Token': token },
+        data: { currency: p.currency, breaks: p.breaks, source: p.source, confidence: p.confidence, priceDate: p.priceDate },
+      });
+      expect(restore.status()).toBe(200);
+    }
+    await page.reload();
+    await expect.poll(() => page.getByTestId('cost-margin').textContent(), { timeout: 10_000 }).not.toBe('Incomplete');
+    await page.context().close();
+  });
 });

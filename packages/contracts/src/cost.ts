@@ -2,6 +2,7 @@
 // Shares are fractions (0.03 = 3 %); money is in the currency named beside it.
 import { z } from 'zod';
 import { optionalText } from './common';
+import { percentInput } from './inputs';
 import { PART_CATEGORY, MOUNT_TYPE } from './domain';
 import { currencyCode } from './settings';
 
@@ -17,6 +18,20 @@ export type PriceSource = (typeof PRICE_SOURCE.values)[number];
 
 export const PRICE_CONFIDENCE = labelled(['high', 'medium', 'low'] as const, { high: 'High', medium: 'Medium', low: 'Low' });
 export type PriceConfidence = (typeof PRICE_CONFIDENCE.values)[number];
+
+/** What the insurance rate applies to (the cost model's insurance basis). */
+export const INSURANCE_BASIS = labelled(['cif', 'goods'] as const, {
+  cif: 'Goods + freight (CIF)',
+  goods: 'Goods only (ex-works)',
+});
+export type InsuranceBasisKey = (typeof INSURANCE_BASIS.values)[number];
+
+/** Where the sales-tax rate of a retail price came from. */
+export const SALES_TAX_SOURCE = labelled(['device', 'workspace'] as const, {
+  device: 'Set on the device',
+  workspace: 'Workspace default for the currency',
+});
+export type SalesTaxSource = (typeof SALES_TAX_SOURCE.values)[number];
 
 export const RATE_TABLE_KIND = labelled(['import', 'manual', 'demo'] as const, {
   import: 'Reference-rate file',
@@ -171,6 +186,8 @@ export const costModelSchema = z.object({
   overheadFraction: fraction('Overhead'),
   freightFraction: fraction('Freight'),
   insuranceFraction: fraction('Insurance').default(0),
+  /** cif: insurance on goods + freight, the CIF value duty is levied on [S]; goods: on the ex-works value alone. */
+  insuranceBasis: INSURANCE_BASIS.schema.default('cif'),
   dutyFraction: fraction('Duty'),
   retailMarginFraction: fraction('Retailer margin'),
   platformMarginFraction: fraction('Platform fee'),
@@ -215,7 +232,7 @@ export const costLineSchema = z.object({
   makerPartNumber: z.string().nullable(),
   mount: MOUNT_TYPE.schema,
   quantity: z.number(),
-  /** quantity × volume: the quantity bought, which picks the price break. */
+  /** The quantity bought, attrition included: ceil(quantity × volume × (1 + attrition)); it picks the price break. */
   buyQuantity: z.number(),
   /** Price of the break at this volume, converted to the reporting currency, before attrition. */
   unitPrice: z.number().nullable(),
@@ -242,7 +259,59 @@ export const waterfallBarSchema = z.object({
 });
 export type WaterfallBarDto = z.infer<typeof waterfallBarSchema>;
 
-const impliedMargin = z.object({ amount: z.number(), fraction: z.number().nullable() }).nullable();
+/** The sales tax taken out of the retail price: its rate, the amount, and where the rate came from. */
+export const salesTaxSchema = z.object({
+  /** Share of sales tax in the price (0.2 = 20 %; 0 for a price quoted before tax). */
+  rate: z.number(),
+  /** retail − retail / (1 + rate), in the reporting currency. */
+  amount: z.number(),
+  source: SALES_TAX_SOURCE.schema,
+  /** The price's currency: the workspace default is set per currency. */
+  currency: z.string(),
+});
+export type SalesTaxDto = z.infer<typeof salesTaxSchema>;
+
+/**
+ * The form behind the workspace's sales-tax defaults: one row per currency, the rate typed as a
+ * percentage; it becomes settings' `salesTaxByCurrency` (currency → fraction).
+ */
+export const salesTaxFormSchema = z.object({
+  rows: z
+    .array(
+      z.object({
+        currency: currencyCode,
+        rate: percentInput('the sales tax').refine((v) => v !== null && v !== undefined, 'Give the rate, 0 % for prices quoted before tax'),
+      }),
+    )
+    .max(60, 'At most 60 currencies')
+    .superRefine((rows, ctx) => {
+      const seen = new Set<string>();
+      rows.forEach((r, k) => {
+        if (seen.has(r.currency)) ctx.addIssue({ code: 'custom', path: [k, 'currency'], message: `${r.currency} is listed twice` });
+        seen.add(r.currency);
+      });
+    }),
+});
+export type SalesTaxFormValues = z.input<typeof salesTaxFormSchema>;
+export type SalesTaxForm = z.output<typeof salesTaxFormSchema>;
+
+/**
+ * Net to maker − landed cost. While any BOM line is unpriced (or there are none) the margin is
+ * incomplete: amount and fraction are null and `reason` says why ("3 of 13 lines priced: …").
+ */
+const impliedMargin = z
+  .object({
+    amount: z.number().nullable(),
+    fraction: z.number().nullable(),
+    complete: z.boolean(),
+    reason: z.string().nullable(),
+    pricedLines: z.number().int(),
+    totalLines: z.number().int(),
+    /** The sales tax taken out of the retail price first; null when its rate is not known. */
+    salesTax: salesTaxSchema.nullable(),
+  })
+  .nullable();
+export type ImpliedMarginDto = z.infer<typeof impliedMargin>;
 
 export const volumeRowSchema = z.object({
   volume: z.number().int(),
@@ -285,7 +354,11 @@ export const costResponse = z.object({
   high: z.number(),
   retail: z
     .object({
+      /** The retail price as seen (sales tax included when its rate is above 0), in the reporting currency. */
       amount: z.number(),
+      /** amount / (1 + sales-tax rate). */
+      beforeTax: z.number(),
+      salesTax: salesTaxSchema,
       retailerShare: z.number(),
       platformShare: z.number(),
       netToMaker: z.number(),

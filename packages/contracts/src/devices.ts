@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { text, patchOf } from './common';
 import { DEVICE_CATEGORY, TEARDOWN_STATUS } from './domain';
-import { clearableDay, clearableNumber, clearableText, quantityInput } from './inputs';
+import { clearableDay, clearableNumber, clearableText, percentInput, quantityInput } from './inputs';
 import { currencyCode } from './settings';
 
 /**
@@ -28,6 +28,11 @@ const deviceFields = z.object({
   category: DEVICE_CATEGORY.schema,
   retailPrice: clearableNumber({ min: 0, max: 10_000_000, what: 'a price such as 24.99' }),
   currency: currencyInput,
+  /**
+   * Share of sales tax (VAT) in the retail price, as a fraction (0.2 = 20 %) or typed as a percentage
+   * ("20 %"). 0: the price is quoted before tax. Blank/null: the workspace default for the price's currency.
+   */
+  salesTaxRate: percentInput('the sales tax'),
   priceSeenOn: clearableDay,
   whereBought: clearableText(300),
   claimCapacityAh: quantityInput,
@@ -74,6 +79,8 @@ export const deviceSchema = z.object({
   category: DEVICE_CATEGORY.schema,
   retailPrice: z.number().nullable(),
   currency: z.string().nullable(),
+  /** Share of sales tax in the retail price (0.2 = 20 %); null: the workspace default for the currency applies. */
+  salesTaxRate: z.number().nullable(),
   priceSeenOn: z.string().nullable(),
   whereBought: z.string().nullable(),
   claimCapacityAh: z.number().nullable(),

@@ -60,3 +60,37 @@ export const clearableNumber = (opts: { min: number; max: number; integer?: bool
       }
       return n;
     });
+
+/**
+ * A rate typed as a percentage in a form ("20", "20 %", "8,1%"), or a fraction as a number (0.2 =
+ * 20 %); '' or null clears it. The result is a fraction 0..1 (null when cleared).
+ */
+export const percentInput = (what: string) =>
+  z
+    .union([z.number(), z.string().trim().max(20, 'At most 20 characters'), z.null()])
+    .optional()
+    .transform((v, ctx) => {
+      if (v === undefined || v === null || v === '') return v === undefined ? undefined : null;
+      if (typeof v === 'number') {
+        if (!Number.isFinite(v) || v < 0 || v > 1) {
+          ctx.addIssue({ code: 'custom', message: `Give ${what} as a fraction from 0 to 1 (0.2 = 20 %), or as text such as "20 %"` });
+          return z.NEVER;
+        }
+        return v;
+      }
+      const typed = v.replace(/\s*%$/, '').replace(',', '.').trim();
+      const n = /^[+-]?(\d+\.?\d*|\.\d+)$/.test(typed) ? Number(typed) : Number.NaN;
+      if (!Number.isFinite(n)) {
+        ctx.addIssue({ code: 'custom', message: `Enter ${what} as a percentage such as "20 %"` });
+        return z.NEVER;
+      }
+      if (n < 0) {
+        ctx.addIssue({ code: 'custom', message: 'At least 0 %' });
+        return z.NEVER;
+      }
+      if (n > 100) {
+        ctx.addIssue({ code: 'custom', message: 'At most 100 %' });
+        return z.NEVER;
+      }
+      return Number((n / 100).toPrecision(12));
+    });

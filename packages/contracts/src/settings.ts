@@ -7,6 +7,36 @@ export const currencyCode = z
   .toUpperCase()
   .regex(/^[A-Z]{3}$/, 'Use a three-letter ISO 4217 code such as USD');
 
+/**
+ * Default share of sales tax (VAT, GST) in a retail price, by the price's currency, used when a
+ * device does not set its own. Rates differ by country inside one currency and change over time:
+ * each workspace should set its own. Defaults:
+ * - USD 0, CAD 0: shop prices there are usually quoted before sales tax [CP: REFERENCES §12].
+ * - EUR 0.20: a round value inside the euro area's standard VAT rates (about 17 % to 25.5 %) [CP; M for the range].
+ * - GBP 0.20 (UK standard VAT rate), CHF 0.081, JPY 0.10 (consumption tax), CNY 0.13, AUD 0.10 (GST),
+ *   HKD 0 (no sales tax) [M: standard rates as remembered; check before relying on them].
+ */
+export const DEFAULT_SALES_TAX_BY_CURRENCY: Readonly<Record<string, number>> = {
+  USD: 0,
+  CAD: 0,
+  EUR: 0.2,
+  GBP: 0.2,
+  CHF: 0.081,
+  JPY: 0.1,
+  CNY: 0.13,
+  AUD: 0.1,
+  HKD: 0,
+};
+
+/** Sales tax in retail prices by currency: currency code → fraction 0..1. */
+export const salesTaxByCurrencySchema = z.record(
+  z.string().trim().toUpperCase().regex(/^[A-Z]{3}$/, 'Use a three-letter ISO 4217 code such as EUR'),
+  z
+    .number({ error: 'The sales tax must be a number' })
+    .min(0, 'The sales tax must not be below 0 %')
+    .max(1, 'The sales tax must not be above 100 %'),
+);
+
 /** Workspace-wide settings, with their defaults. */
 export const workspaceSettingsSchema = z.object({
   /** Currency that cost figures and comparisons are reported in. */
@@ -26,6 +56,8 @@ export const workspaceSettingsSchema = z.object({
   usableFraction: z.number().min(0.5, 'At least 0.5').max(1, 'At most 1').default(0.9),
   /** A discharge ends at its cut-off voltage only once the voltage stays at or below it this long (s); shorter sags at a load step are ignored. */
   cutoffDebounceSeconds: z.number({ error: 'A number of seconds' }).min(0, 'At least 0 s').max(600, 'At most 600 s').default(5),
+  /** Share of sales tax in retail prices by currency, for devices that do not set their own (0.2 = 20 %). */
+  salesTaxByCurrency: salesTaxByCurrencySchema.default(() => ({ ...DEFAULT_SALES_TAX_BY_CURRENCY })),
 });
 export type WorkspaceSettings = z.infer<typeof workspaceSettingsSchema>;
 /** The cut-off debounce on its own, for the bench-runs page's setting form. */

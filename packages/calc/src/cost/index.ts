@@ -17,6 +17,8 @@ export {
   type CostLineResult,
   type CostRollUp,
   type CostStep,
+  type ImpliedMargin,
+  type InsuranceBasis,
   type RollUpInput,
   type PriceConfidence,
   type MountKind,

@@ -55,3 +55,15 @@ describe('markup and margin', () => {
     expect(() => markupFromMargin(Number.NaN)).toThrow(/margin must be a finite number/);
   });
 });
+
+describe('landedCost — insurance basis', () => {
+  it('CIF basis insures goods + freight: 1 % × (15.00 + 0.80) = 0.158, CIF 15.958 (the §10 example insures goods only: 15.95) [S/CP; C]', () => {
+    const r = landedCost({ fob: 15, freight: 0.8, insuranceFraction: 0.01, insuranceBasis: 'cif', dutyFraction: 0.027, vatFraction: 0.2 });
+    expect(r.insurance).toBeCloseTo(0.158, 12);
+    expect(r.cif).toBeCloseTo(15.958, 12);
+    expect(r.duty).toBeCloseTo(0.430866, 12);
+    const goods = landedCost({ fob: 15, freight: 0.8, insuranceFraction: 0.01, insuranceBasis: 'goods', dutyFraction: 0.027, vatFraction: 0.2 });
+    expect(goods.cif).toBeCloseTo(15.95, 12);
+    expect(() => landedCost({ fob: 15, freight: 0.8, insuranceFraction: 0.01, insuranceBasis: 'x' as never, dutyFraction: 0, vatFraction: 0 })).toThrow(/insuranceBasis/);
+  });
+});

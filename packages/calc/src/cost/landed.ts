@@ -9,8 +9,10 @@ export interface LandedCostInput {
   fob: number;
   /** International freight, same currency. */
   freight: number;
-  /** Insurance as a fraction of the goods value (0.5–2 % typical [S/CP]). */
+  /** Insurance rate (0.5–2 % of the goods value typical [S/CP]). */
   insuranceFraction: number;
+  /** What the rate applies to: 'goods' (default, FOB alone, as the REFERENCES §10 worked example) or 'cif' (FOB + freight). */
+  insuranceBasis?: 'goods' | 'cif';
   /** Import duty as a fraction of the CIF value. */
   dutyFraction: number;
   /** Import VAT as a fraction of CIF + duty. */
@@ -34,14 +36,16 @@ export interface LandedCostResult {
 
 /**
  * Landed cost on a CIF duty basis (EU, UK and most of Asia [S]): insurance =
- * fraction × FOB, CIF = FOB + freight + insurance, duty on CIF, VAT on CIF +
+ * fraction × FOB (or × (FOB + freight) on a 'cif' insurance basis), CIF = FOB + freight + insurance, duty on CIF, VAT on CIF +
  * duty, landed = CIF + duty + VAT + brokerage. (The US levies duty on the
  * transaction value without international freight [M]; not modelled here.)
  */
 export function landedCost(input: LandedCostInput): LandedCostResult {
   const fob = requireNonNegative(input.fob, 'fob');
   const freight = requireNonNegative(input.freight, 'freight');
-  const insurance = requireFraction(input.insuranceFraction, 'insuranceFraction') * fob;
+  const basis = input.insuranceBasis ?? 'goods';
+  if (basis !== 'goods' && basis !== 'cif') throw new RangeError(`insuranceBasis must be goods or cif (got ${JSON.stringify(basis)}).`);
+  const insurance = requireFraction(input.insuranceFraction, 'insuranceFraction') * (basis === 'cif' ? fob + freight : fob);
   const dutyFraction = requireFraction(input.dutyFraction, 'dutyFraction');
   const vatFraction = requireFraction(input.vatFraction, 'vatFraction');
   const brokerage = requireNonNegative(input.brokerage ?? 0, 'brokerage');

@@ -24,6 +24,8 @@ const model: CostModel = {
   overheadFraction: 0.1,
   freightFraction: 0.05,
   insuranceFraction: 0.01,
+  // Insured on the goods alone, as the REFERENCES §10 example; the CIF basis is checked below.
+  insuranceBasis: 'goods',
   dutyFraction: 0.027,
   retailMarginFraction: 0.4,
   platformMarginFraction: 0.15,
@@ -87,19 +89,24 @@ const input: RollUpInput = {
 
 describe('rollUpCost — a small BOM worked by hand [C]', () => {
   const r = rollUpCost(input);
+  // The same BOM with the connector priced at nothing: every line priced, the same totals, so the margin is complete.
+  const full = rollUpCost({
+    ...input,
+    lines: input.lines.map((l) => (l.partId === 'J-USB' ? { ...l, price: { currency: 'USD', confidence: 'high' as const, breaks: [{ minQty: 1, unitPrice: 0 }] } } : l)),
+  });
 
-  it('prices each line at the break for quantity × volume, converted before attrition', () => {
-    // CELL-1: 1 × 1000 = 1000 pieces → break 1000 → 1.80 USD; 'cell' not listed → default attrition 0.005
+  it('prices each line at the break for the purchased quantity, converted before attrition', () => {
+    // CELL-1: ceil(1 × 1000 × 1.005) = 1005 pieces bought → break 1000 → 1.80 USD; 'cell' not listed → default attrition 0.005
     //   extended = 1 × 1.80 × 1.005 = 1.809
-    // R-10K: 6 × 1000 = 6000 → break 5000 → 0.01 CNY = 0.00138293 USD; passive 0.03
+    // R-10K: ceil(6 × 1000 × 1.03) = 6180 → break 5000 → 0.01 CNY = 0.00138293 USD; passive 0.03
     //   extended = 6 × 0.00138293 × 1.03 = 0.00854651
-    // IC-CHG: 1000 → break 1000 → 0.95 CNY = 0.131378 USD; ic 0.01
+    // IC-CHG: ceil(1000 × 1.01) = 1010 → break 1000 → 0.95 CNY = 0.131378 USD; ic 0.01
     //   extended = 0.131378 × 1.01 = 0.132692
     // J-USB: no price → unpriced, adds nothing
     const [cell, res, ic, usb] = r.lines;
-    expect(cell).toMatchObject({ buyQuantity: 1000, unitPrice: 1.8, attrition: 0.005, priced: true, confidence: 'medium', breakMinQty: 1000 });
+    expect(cell).toMatchObject({ buyQuantity: 1005, unitPrice: 1.8, attrition: 0.005, priced: true, confidence: 'medium', breakMinQty: 1000 });
     expect(cell!.extended).toBeCloseTo(1.809, 12);
-    expect(res!.buyQuantity).toBe(6000);
+    expect(res!.buyQuantity).toBe(6180);
     expect(res!.breakMinQty).toBe(5000);
     expect(res!.unitPrice).toBeCloseTo(0.01 * CNY, 12);
     expect(res!.extended).toBeCloseTo(0.008546507, 9);
@@ -156,13 +163,17 @@ describe('rollUpCost — a small BOM worked by hand [C]', () => {
   });
 
   it('works out the implied margin against a retail price in a third currency', () => {
-    // retail = 19.99 GBP / 0.8567 × 1.0856 = 25.331089063 USD
+    // With J-USB unpriced the margin is incomplete; priced (at nothing) it is the figure below.
+    expect(r.impliedMargin).toMatchObject({ amount: null, fraction: null, complete: false, pricedLines: 3, totalLines: 4 });
+    expect(full.landed).toBeCloseTo(r.landed, 12);
+    // retail = 19.99 GBP / 0.8567 × 1.0856 = 25.331089063 USD (no sales tax given: the price is taken as before tax)
     expect(r.retail!.amount).toBeCloseTo(25.331089063, 8);
     // net to maker = 25.331089063 × (1 − 0.40) × (1 − 0.15) = 12.918855422
     expect(r.retail!.netToMaker).toBeCloseTo(12.918855422, 8);
     // implied margin = 12.918855422 − 3.248229508 = 9.670625914, i.e. 74.857 % of net
-    expect(r.impliedMargin!.amount).toBeCloseTo(9.670625914, 8);
-    expect(r.impliedMargin!.fraction).toBeCloseTo(0.748566773, 8);
+    expect(full.impliedMargin!.amount).toBeCloseTo(9.670625914, 8);
+    expect(full.impliedMargin!.fraction).toBeCloseTo(0.748566773, 8);
+    expect(full.impliedMargin).toMatchObject({ complete: true, reason: null, pricedLines: 4, totalLines: 4 });
     // retailer's share = 25.331089063 × 0.40 = 10.132435625
     expect(r.retail!.retailerShare).toBeCloseTo(10.132435625, 8);
     // platform fee on what the retailer passes on = (25.331089063 − 10.132435625) × 0.15 = 2.279798016
@@ -172,7 +183,7 @@ describe('rollUpCost — a small BOM worked by hand [C]', () => {
   });
 
   it('lists the steps with their formulas', () => {
-    expect(r.steps.map((s) => s.key)).toEqual([
+    expect(full.steps.map((s) => s.key)).toEqual([
       'parts',
       'assembly',
       'labour',
@@ -187,14 +198,18 @@ describe('rollUpCost — a small BOM worked by hand [C]', () => {
       'landed',
       'low',
       'high',
+      'retailBeforeTax',
       'netToMaker',
       'impliedMargin',
     ]);
+    // With a line unpriced the margin step is left out (the figure is incomplete).
+    expect(r.steps.map((s) => s.key)).not.toContain('impliedMargin');
     const step = Object.fromEntries(r.steps.map((s) => [s.key, s]));
     expect(step.landed!.value).toBe(r.landed);
     expect(step.assembly!.formula).toBe('7 placements × 0.0110634 + 2 joints × 0.00691465 = 0.0912734');
     expect(step.parts!.formula).toMatch(/over 3 priced lines = 1\.95024$/);
-    expect(step.impliedMargin!.formula).toMatch(/\(74\.8567 % of net\)$/);
+    const fullStep = Object.fromEntries(full.steps.map((s) => [s.key, s]));
+    expect(fullStep.impliedMargin!.formula).toMatch(/\(74\.8567 % of net\)$/);
   });
 
   it('gives each step the inputs its formula used, with units', () => {
@@ -273,7 +288,7 @@ describe('rollUpCost — REFERENCES §10 examples', () => {
       lines: [{ partId: 'X', category: 'x', quantity: 1, mount: 'manual', price: { currency: 'USD', confidence: 'high', breaks: [{ minQty: 1, unitPrice: 20 }] } }],
       retail: { amount: 40, currency: 'USD' },
     });
-    expect(r.impliedMargin).toEqual({ amount: 20, fraction: 0.5 });
+    expect(r.impliedMargin).toMatchObject({ amount: 20, fraction: 0.5, complete: true });
     // With every margin taken by the channel there is nothing left to share.
     const all = rollUpCost({
       volume: 1,
@@ -299,22 +314,23 @@ describe('rollUpCost — price breaks at the volume boundary', () => {
     { minQty: 2000, unitPrice: 0.5 },
   ];
 
-  it('uses the break exactly at quantity × volume, and the one below just under it [CP]', () => {
-    expect(rollUpCost({ ...line(breaks), volume: 1000 }).lines[0]!.unitPrice).toBe(0.5); // 2 × 1000 = 2000
-    expect(rollUpCost({ ...line(breaks), volume: 999 }).lines[0]!.unitPrice).toBe(1); // 1998
+  it('uses the break exactly at the purchased quantity, and the one below just under it [CP]', () => {
+    // ic attrition 1 %: ceil(2 × 990 × 1.01) = 2000 bought; ceil(2 × 989 × 1.01) = 1998
+    expect(rollUpCost({ ...line(breaks), volume: 990 }).lines[0]!.unitPrice).toBe(0.5);
+    expect(rollUpCost({ ...line(breaks), volume: 989 }).lines[0]!.unitPrice).toBe(1);
   });
 
   it('prices below the first break at that break, with a warning', () => {
-    const r = rollUpCost({ ...line(breaks), volume: 4 }); // 8 pieces < 10
+    const r = rollUpCost({ ...line(breaks), volume: 4 }); // ceil(8 × 1.01) = 9 pieces < 10
     expect(r.lines[0]).toMatchObject({ unitPrice: 1, belowMinimumOrder: true, breakMinQty: 10 });
-    expect(r.warnings[0]).toMatch(/P: 8 pieces is below the smallest price break \(10\)/);
+    expect(r.warnings[0]).toMatch(/P: 9 pieces is below the smallest price break \(10\)/);
   });
 
   it('gives the volume table in the order asked', () => {
-    const rows = costAtVolumes([1000, 999, 5000], line(breaks));
+    const rows = costAtVolumes([1000, 989, 5000], line(breaks));
     expect(rows.map((x) => [x.volume, x.lines[0]!.unitPrice])).toEqual([
       [1000, 0.5],
-      [999, 1],
+      [989, 1],
       [5000, 0.5],
     ]);
     expect(() => costAtVolumes([], line(breaks))).toThrow(/volumes needs at least one/);
@@ -382,5 +398,204 @@ describe('rollUpCost — errors name the field', () => {
     expect(bad({ attritionByCategory: 5 as never })).toThrow(/model\.attritionByCategory must map/);
     expect(bad({ smtCostPerPlacement: -0.01 })).toThrow(/model\.smtCostPerPlacement/);
     expect(() => rollUpCost({ ...input, model: null as never })).toThrow(/model must be a cost model/);
+  });
+});
+
+describe('rollUpCost — sales tax in the retail price (REFERENCES §12 "Sales tax in the retail price" [CP])', () => {
+  // One priced line of 10.00 USD and nothing else: landed = 10.00 exactly, so the margin is read off by hand.
+  const flat: CostModel = {
+    currency: 'USD',
+    attritionByCategory: {},
+    defaultAttrition: 0,
+    smtCostPerPlacement: 0,
+    thtCostPerJoint: 0,
+    manualOperations: [],
+    labourRatePerHour: 0,
+    testMinutes: 0,
+    packagingCost: 0,
+    overheadFraction: 0,
+    freightFraction: 0,
+    dutyFraction: 0,
+    retailMarginFraction: 0,
+    platformMarginFraction: 0,
+    confidenceBand: { high: 0, medium: 0, low: 0 },
+  };
+  const ten = { currency: 'USD', confidence: 'high' as const, breaks: [{ minQty: 1, unitPrice: 10 }] };
+  const base = { volume: 1, currency: 'USD', rates: { base: 'USD', rates: {} }, model: flat, lines: [{ partId: 'X', category: 'x', quantity: 1, mount: 'manual' as const, price: ten }] };
+
+  it('takes 20 % VAT out of a price quoted with it: US$24.99 → US$20.825 net [C: net = gross / (1 + v)]', () => {
+    const r = rollUpCost({ ...base, retail: { amount: 24.99, currency: 'USD', salesTaxRate: 0.2 } });
+    expect(r.landed).toBeCloseTo(10, 12);
+    // gross 24.99 as seen; before tax 24.99 / 1.20 = 20.825; tax 24.99 − 20.825 = 4.165
+    expect(r.retail!.amount).toBeCloseTo(24.99, 12);
+    expect(r.retail!.beforeTax).toBeCloseTo(20.825, 12);
+    expect(r.retail!.salesTax).toBeCloseTo(4.165, 12);
+    expect(r.retail!.salesTaxRate).toBe(0.2);
+    // no channel shares in this model: net to maker = 20.825; margin = 20.825 − 10 = 10.825, 51.981 % of net
+    expect(r.retail!.netToMaker).toBeCloseTo(20.825, 12);
+    expect(r.impliedMargin!.amount).toBeCloseTo(10.825, 12);
+    expect(r.impliedMargin!.fraction).toBeCloseTo(10.825 / 20.825, 12);
+    expect(r.impliedMargin!.fraction).toBeCloseTo(0.519807923, 9);
+    const step = Object.fromEntries(r.steps.map((s) => [s.key, s]));
+    expect(step.retailBeforeTax!.formula).toBe('24.99 ÷ (1 + 0.2) = 20.825');
+    expect(step.retailBeforeTax!.inputs).toEqual([
+      { label: 'Retail price as seen', value: 24.99, unit: 'USD' },
+      { label: 'Sales tax in the price', value: 20, unit: '%' },
+    ]);
+  });
+
+  it('leaves a price quoted before tax (rate 0, the usual US quote) whole [CP]', () => {
+    const r = rollUpCost({ ...base, retail: { amount: 24.99, currency: 'USD', salesTaxRate: 0 } });
+    expect(r.retail!.beforeTax).toBe(24.99);
+    expect(r.retail!.salesTax).toBe(0);
+    expect(r.impliedMargin!.amount).toBeCloseTo(14.99, 12);
+  });
+
+  it('takes the tax out before the retailer and platform shares: 19.99 GBP at 20 % with 40 % / 15 % [C]', () => {
+    const r = rollUpCost({ ...base, model: { ...flat, retailMarginFraction: 0.4, platformMarginFraction: 0.15 }, retail: { amount: 19.99, currency: 'USD', salesTaxRate: 0.2 } });
+    // before tax 19.99 / 1.2 = 16.658333333; retailer 40 % = 6.663333333; platform 15 % of 9.995 = 1.49925; net 8.49575
+    expect(r.retail!.beforeTax).toBeCloseTo(16.658333333, 9);
+    expect(r.retail!.retailerShare).toBeCloseTo(6.663333333, 9);
+    expect(r.retail!.platformShare).toBeCloseTo(1.49925, 9);
+    expect(r.retail!.netToMaker).toBeCloseTo(8.49575, 9);
+    // the four parts give back the price as seen
+    expect(r.retail!.netToMaker + r.retail!.platformShare + r.retail!.retailerShare + r.retail!.salesTax).toBeCloseTo(19.99, 12);
+  });
+
+  it('refuses a rate outside 0–100 %', () => {
+    expect(() => rollUpCost({ ...base, retail: { amount: 10, currency: 'USD', salesTaxRate: 20 } })).toThrow(/retail\.salesTaxRate must be between 0 and 1/);
+  });
+});
+
+describe('rollUpCost — a margin with unpriced lines is incomplete, not a number', () => {
+  const model0: CostModel = { ...model, currency: 'USD', packagingCost: 0, manualOperations: [], testMinutes: 0 };
+  const unpriced = (n: number) => Array.from({ length: n }, (_, k) => ({ partId: `P${k + 1}`, category: 'passive', quantity: 1, mount: 'smt' as const }));
+  const priced = (n: number) =>
+    unpriced(n).map((l) => ({ ...l, price: { currency: 'USD', confidence: 'high' as const, breaks: [{ minQty: 1, unitPrice: 0.1 }] } }));
+
+  it('0 of 13 lines priced: no margin figure, the reason and the count instead', () => {
+    const r = rollUpCost({ volume: 1000, currency: 'USD', rates, model: model0, lines: unpriced(13), retail: { amount: 24.99, currency: 'USD', salesTaxRate: 0 } });
+    expect(r.impliedMargin).toMatchObject({ amount: null, fraction: null, complete: false, pricedLines: 0, totalLines: 13 });
+    expect(r.impliedMargin!.reason).toMatch(/^0 of 13 lines priced/);
+    // The retail split does not depend on the BOM and is still given; the margin step is left out.
+    expect(r.retail!.netToMaker).toBeGreaterThan(0);
+    expect(r.steps.map((s) => s.key)).not.toContain('impliedMargin');
+  });
+
+  it('3 of 13 lines priced: incomplete, at every volume', () => {
+    const lines = [...priced(3), ...unpriced(10)];
+    const rows = costAtVolumes([100, 1000], { currency: 'USD', rates, model: model0, lines, retail: { amount: 24.99, currency: 'USD', salesTaxRate: 0 } });
+    for (const row of rows) {
+      expect(row.impliedMargin).toMatchObject({ amount: null, fraction: null, complete: false, pricedLines: 3, totalLines: 13 });
+      expect(row.impliedMargin!.reason).toMatch(/^3 of 13 lines priced/);
+    }
+  });
+
+  it('every line priced: complete, with no reason', () => {
+    const r = rollUpCost({ volume: 1000, currency: 'USD', rates, model: model0, lines: priced(13), retail: { amount: 24.99, currency: 'USD', salesTaxRate: 0 } });
+    expect(r.impliedMargin).toMatchObject({ complete: true, reason: null, pricedLines: 13, totalLines: 13 });
+    expect(typeof r.impliedMargin!.amount).toBe('number');
+  });
+
+  it('no parts at all: incomplete too', () => {
+    const r = rollUpCost({ volume: 1, currency: 'USD', rates, model: model0, lines: [], retail: { amount: 24.99, currency: 'USD', salesTaxRate: 0 } });
+    expect(r.impliedMargin).toMatchObject({ amount: null, complete: false, pricedLines: 0, totalLines: 0 });
+    expect(r.impliedMargin!.reason).toMatch(/no parts/i);
+  });
+});
+
+describe('rollUpCost — the price break is chosen on the purchased quantity, attrition included', () => {
+  // Purchased = ceil(quantity × volume × (1 + attrition)); the break is the highest minQty ≤ purchased
+  // [CP: attrition is extra parts bought to cover losses, REFERENCES §10].
+  const breaks = [
+    { minQty: 10, unitPrice: 1 },
+    { minQty: 2000, unitPrice: 0.5 },
+  ];
+  const at = (volume: number) =>
+    rollUpCost({
+      ...input,
+      volume,
+      currency: 'USD',
+      retail: null,
+      // 'ic' attrition is 1 % in the model above.
+      lines: [{ partId: 'P', category: 'ic', quantity: 2, mount: 'smt', price: { currency: 'USD', confidence: 'high', breaks } }],
+    }).lines[0]!;
+
+  it('990 units: 2 × 990 = 1 980 fitted, but ceil(1 980 × 1.01) = 2 000 bought → the 2 000 break [C]', () => {
+    // quantity × volume alone (1 980) would pick the 10 break at 1.00.
+    expect(at(990)).toMatchObject({ buyQuantity: 2000, breakMinQty: 2000, unitPrice: 0.5 });
+  });
+
+  it('989 units: ceil(1 978 × 1.01 = 1 997.78) = 1 998 bought → still the 10 break [C]', () => {
+    expect(at(989)).toMatchObject({ buyQuantity: 1998, breakMinQty: 10, unitPrice: 1 });
+  });
+
+  it('no float noise in the purchased quantity: 1 000 × 1.07 is 1 070, not 1 071 [C]', () => {
+    const r = rollUpCost({
+      ...input,
+      volume: 1000,
+      currency: 'USD',
+      retail: null,
+      model: { ...model, attritionByCategory: { passive: 0.07 } },
+      lines: [{ partId: 'R', category: 'passive', quantity: 1, mount: 'smt', price: { currency: 'USD', confidence: 'high', breaks: [{ minQty: 1, unitPrice: 0.01 }] } }],
+    });
+    expect(r.lines[0]!.buyQuantity).toBe(1070);
+  });
+});
+
+describe('rollUpCost — insurance basis (REFERENCES §10: CIF = FOB + freight + insurance; insurance 0.5–2 % of goods value [S/CP])', () => {
+  // Goods (ex-works) 15.00 USD and freight 0.80 USD as in the §10 worked example; insurance 1 %, duty 2.7 % on CIF [S].
+  const goods: CostModel = {
+    currency: 'USD',
+    attritionByCategory: {},
+    defaultAttrition: 0,
+    smtCostPerPlacement: 0,
+    thtCostPerJoint: 0,
+    manualOperations: [],
+    labourRatePerHour: 0,
+    testMinutes: 0,
+    packagingCost: 0,
+    overheadFraction: 0,
+    freightFraction: 0.8 / 15,
+    insuranceFraction: 0.01,
+    dutyFraction: 0.027,
+    retailMarginFraction: 0,
+    platformMarginFraction: 0,
+    confidenceBand: { high: 0, medium: 0, low: 0 },
+  };
+  const fob = (m: CostModel) =>
+    rollUpCost({
+      volume: 1,
+      currency: 'USD',
+      rates: { base: 'USD', rates: {} },
+      model: m,
+      lines: [{ partId: 'G', category: 'x', quantity: 1, mount: 'manual', price: { currency: 'USD', confidence: 'high', breaks: [{ minQty: 1, unitPrice: 15 }] } }],
+    });
+
+  it('CIF basis (the default): insurance = 1 % × (15.00 + 0.80) = 0.158, CIF 15.958, duty 0.430866 [C]', () => {
+    for (const r of [fob(goods), fob({ ...goods, insuranceBasis: 'cif' })]) {
+      expect(r.exWorks).toBeCloseTo(15, 12);
+      expect(r.freight).toBeCloseTo(0.8, 12);
+      expect(r.insurance).toBeCloseTo(0.158, 12);
+      expect(r.duty).toBeCloseTo(0.027 * 15.958, 12);
+      expect(r.landed).toBeCloseTo(15.958 + 0.430866, 12);
+      const step = Object.fromEntries(r.steps.map((s) => [s.key, s]));
+      expect(step.insurance!.formula).toBe('0.01 × (15 + 0.8) = 0.158');
+      expect(step.insurance!.inputs[0]).toEqual({ label: 'Goods + freight (CIF basis)', value: expect.closeTo(15.8, 12), unit: 'USD' });
+    }
+  });
+
+  it('goods basis, as the §10 worked example insures: 1 % × 15.00 = 0.15, CIF 15.95, 16.38065 with duty [S/C]', () => {
+    const r = fob({ ...goods, insuranceBasis: 'goods' });
+    expect(r.insurance).toBeCloseTo(0.15, 12);
+    expect(r.exWorks + r.freight + r.insurance).toBeCloseTo(15.95, 12);
+    expect(r.duty).toBeCloseTo(0.43065, 12);
+    expect(r.landed).toBeCloseTo(16.38065, 12);
+    const step = Object.fromEntries(r.steps.map((s) => [s.key, s]));
+    expect(step.insurance!.formula).toBe('0.01 × 15 = 0.15');
+  });
+
+  it('refuses an unknown basis', () => {
+    expect(() => fob({ ...goods, insuranceBasis: 'fob' as never })).toThrow(/model\.insuranceBasis must be one of cif, goods/);
   });
 });

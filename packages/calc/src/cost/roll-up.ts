@@ -11,9 +11,12 @@ import { assertPriceBreaks, breakIndexAt, type PriceBreak } from './price-breaks
 
 export type PriceConfidence = 'high' | 'medium' | 'low';
 export type MountKind = 'smt' | 'tht' | 'manual';
+/** What insurance is a share of: goods + freight (CIF, the base duty is levied on) or the goods alone. */
+export type InsuranceBasis = 'cif' | 'goods';
 
 const CONFIDENCES: readonly PriceConfidence[] = ['high', 'medium', 'low'];
 const MOUNTS: readonly MountKind[] = ['smt', 'tht', 'manual'];
+const INSURANCE_BASES: readonly InsuranceBasis[] = ['cif', 'goods'];
 
 /**
  * Assumptions that turn a BOM into a should-cost. Money amounts are in
@@ -39,8 +42,14 @@ export interface CostModel {
   overheadFraction: number;
   /** Freight as a share of the ex-works cost. */
   freightFraction: number;
-  /** Insurance as a share of the ex-works cost (0.5–2 % of goods value typical [S/CP]); default 0. */
+  /** Insurance rate (0.5–2 % of goods value typical [S/CP]); default 0. */
   insuranceFraction?: number;
+  /**
+   * What the insurance rate applies to: 'cif' (default) insures goods + freight, the CIF value the
+   * duty is levied on [S: CIF = FOB + freight + insurance, REFERENCES §10]; 'goods' insures the
+   * ex-works value alone, as the §10 worked example does.
+   */
+  insuranceBasis?: InsuranceBasis;
   /** Import duty on the CIF value (ex-works + freight + insurance) [S: CIF basis in the EU, UK and most of Asia]. */
   dutyFraction: number;
   /** Retailer's share of the retail price. */
@@ -68,7 +77,11 @@ export interface RollUpInput {
   rates: RateTable;
   lines: CostLineInput[];
   model: CostModel;
-  retail?: { amount: number; currency: string } | null;
+  /**
+   * The retail price as seen and the share of sales tax (VAT) in it (0.2 = 20 %; 0 for a price quoted
+   * before tax, the usual US quote [CP]; default 0): net = amount / (1 + salesTaxRate) [CP; C].
+   */
+  retail?: { amount: number; currency: string; salesTaxRate?: number } | null;
 }
 
 export interface CostLineResult {
@@ -76,7 +89,7 @@ export interface CostLineResult {
   category: string;
   quantity: number;
   mount: MountKind;
-  /** Quantity bought for the volume (quantity × volume), used to pick the price break. */
+  /** Quantity bought for the volume, attrition included: ceil(quantity × volume × (1 + attrition)); picks the price break. */
   buyQuantity: number;
   /** Price of the break for buyQuantity in the reporting currency, before attrition; null when unpriced. */
   unitPrice: number | null;
@@ -125,12 +138,38 @@ export interface CostRollUp {
   low: number;
   /** Landed cost with every priced unit price × (1 + its confidence band). */
   high: number;
-  /** Retail price in the reporting currency, split into the retailer's share, the platform's fee and what reaches the maker. */
-  retail: { amount: number; retailerShare: number; platformShare: number; netToMaker: number } | null;
-  impliedMargin: { amount: number; fraction: number | null } | null;
+  /**
+   * Retail price in the reporting currency as seen (tax included), split into sales tax, the
+   * retailer's share, the platform's fee and what reaches the maker.
+   */
+  retail: {
+    amount: number;
+    salesTaxRate: number;
+    salesTax: number;
+    beforeTax: number;
+    retailerShare: number;
+    platformShare: number;
+    netToMaker: number;
+  } | null;
+  impliedMargin: ImpliedMargin | null;
   unpricedPartIds: string[];
   warnings: string[];
   steps: CostStep[];
+}
+
+/**
+ * Net to maker − landed cost. Incomplete (amount and fraction null, with the reason) while any BOM
+ * line is unpriced or there are no lines: a cost that leaves parts out would overstate the margin.
+ */
+export interface ImpliedMargin {
+  amount: number | null;
+  /** amount / net to maker; null when incomplete or when nothing reaches the maker. */
+  fraction: number | null;
+  complete: boolean;
+  /** Why the margin is incomplete ("3 of 13 lines priced: …"); null when complete. */
+  reason: string | null;
+  pricedLines: number;
+  totalLines: number;
 }
 
 /** Short number for formulas: six significant digits, no trailing zeros. */
@@ -158,6 +197,7 @@ interface CheckedModel {
   overhead: number;
   freight: number;
   insurance: number;
+  insuranceBasis: InsuranceBasis;
   duty: number;
   retailMargin: number;
   platformMargin: number;
@@ -181,6 +221,10 @@ function checkModel(model: CostModel): CheckedModel {
   const band = model.confidenceBand;
   if (band === null || typeof band !== 'object') throw new RangeError('model.confidenceBand must give high, medium and low fractions.');
   const yieldFraction = requireFraction(model.firstPassYield ?? 1, 'model.firstPassYield');
+  const insuranceBasis = model.insuranceBasis ?? 'cif';
+  if (!INSURANCE_BASES.includes(insuranceBasis)) {
+    throw new RangeError(`model.insuranceBasis must be one of ${INSURANCE_BASES.join(', ')} (got ${JSON.stringify(insuranceBasis)}).`);
+  }
   if (yieldFraction === 0) throw new RangeError('model.firstPassYield must be greater than zero (got 0).');
   return {
     currency: normaliseCurrency(model.currency, 'model.currency'),
@@ -197,6 +241,7 @@ function checkModel(model: CostModel): CheckedModel {
     overhead: requireFraction(model.overheadFraction, 'model.overheadFraction'),
     freight: requireFraction(model.freightFraction, 'model.freightFraction'),
     insurance: requireFraction(model.insuranceFraction ?? 0, 'model.insuranceFraction'),
+    insuranceBasis,
     duty: requireFraction(model.dutyFraction, 'model.dutyFraction'),
     retailMargin: requireFraction(model.retailMarginFraction, 'model.retailMarginFraction'),
     platformMargin: requireFraction(model.platformMarginFraction, 'model.platformMarginFraction'),
@@ -214,14 +259,21 @@ function afterParts(parts: number, fixed: { assembly: number; labour: number; te
   const overhead = m.overhead * (parts + fixed.assembly + fixed.labour + fixed.test + fixed.packaging + yieldLoss);
   const exWorks = parts + fixed.assembly + fixed.labour + fixed.test + fixed.packaging + yieldLoss + overhead;
   const freight = m.freight * exWorks;
-  const insurance = m.insurance * exWorks;
+  const insured = m.insuranceBasis === 'cif' ? exWorks + freight : exWorks;
+  const insurance = m.insurance * insured;
   const duty = m.duty * (exWorks + freight + insurance);
-  return { yieldLoss, overhead, exWorks, freight, insurance, duty, landed: exWorks + freight + insurance + duty };
+  return { yieldLoss, overhead, exWorks, freight, insured, insurance, duty, landed: exWorks + freight + insurance + duty };
+}
+
+/** Pieces bought: ceil(quantity × volume × (1 + attrition)), rounded to 12 digits first so 1000 × 1.07 is 1070, not 1071. */
+function purchasedQuantity(quantity: number, volume: number, attrition: number): number {
+  return Math.ceil(Number((quantity * volume * (1 + attrition)).toPrecision(12)));
 }
 
 /**
  * Should-cost of one unit at a production volume, in p.currency. Unit prices
- * come from the break for quantity × volume, converted before attrition;
+ * come from the break for the purchased quantity, ceil(quantity × volume ×
+ * (1 + attrition)) [CP: attrition is extra parts bought], converted before attrition;
  * model money amounts are converted from model.currency. Unpriced lines add
  * nothing to the parts total and are listed in unpricedPartIds.
  */
@@ -257,7 +309,7 @@ export function rollUpCost(p: RollUpInput): CostRollUp {
     if (line.mount === 'smt') placements += quantity;
     if (line.mount === 'tht') thtParts += quantity;
     const attrition = m.attritionByCategory[category] ?? m.defaultAttrition;
-    const buyQuantity = quantity * volume;
+    const buyQuantity = purchasedQuantity(quantity, volume, attrition);
     byCategory[category] ??= 0;
     const price = line.price;
     if (!price || (Array.isArray(price.breaks) && price.breaks.length === 0)) {
@@ -324,7 +376,8 @@ export function rollUpCost(p: RollUpInput): CostRollUp {
     test: (m.testMinutes / 60) * labourRate,
     packaging: m.packaging * modelFactor,
   };
-  const mid = afterParts(partsTotal, fixed, m);
+  const { insured: _insured, ...mid } = afterParts(partsTotal, fixed, m);
+  const insured = _insured;
   const low = afterParts(partsLow, fixed, m).landed;
   const high = afterParts(partsHigh, fixed, m).landed;
 
@@ -427,11 +480,16 @@ export function rollUpCost(p: RollUpInput): CostRollUp {
     },
     {
       key: 'insurance',
-      label: 'Insurance',
+      label: m.insuranceBasis === 'cif' ? 'Insurance (CIF basis)' : 'Insurance (goods only)',
       value: mid.insurance,
-      formula: `${fmt(m.insurance)} × ${fmt(mid.exWorks)} = ${fmt(mid.insurance)}`,
+      formula:
+        m.insuranceBasis === 'cif'
+          ? `${fmt(m.insurance)} × (${fmt(mid.exWorks)} + ${fmt(mid.freight)}) = ${fmt(mid.insurance)}`
+          : `${fmt(m.insurance)} × ${fmt(mid.exWorks)} = ${fmt(mid.insurance)}`,
       inputs: [
-        { label: 'Ex-works cost', value: mid.exWorks, unit: cur },
+        m.insuranceBasis === 'cif'
+          ? { label: 'Goods + freight (CIF basis)', value: insured, unit: cur }
+          : { label: 'Ex-works cost (goods only)', value: insured, unit: cur },
         { label: 'Insurance', value: pct(m.insurance), unit: '%' },
       ],
     },
@@ -486,25 +544,51 @@ export function rollUpCost(p: RollUpInput): CostRollUp {
   if (p.retail) {
     const retailCurrency = normaliseCurrency(p.retail.currency, 'retail.currency');
     const amount = toReport(requirePositive(p.retail.amount, 'retail.amount'), retailCurrency, 'retail.currency');
-    const retailerShare = amount * m.retailMargin;
-    const platformShare = (amount - retailerShare) * m.platformMargin;
-    const netToMaker = amount * (1 - m.retailMargin) * (1 - m.platformMargin);
+    const salesTaxRate = requireFraction(p.retail.salesTaxRate ?? 0, 'retail.salesTaxRate');
+    // A price quoted with sales tax holds net = gross / (1 + v) [CP; C: REFERENCES §12].
+    const beforeTax = salesTaxRate === 0 ? amount : amount / (1 + salesTaxRate);
+    const salesTax = amount - beforeTax;
+    const retailerShare = beforeTax * m.retailMargin;
+    const platformShare = (beforeTax - retailerShare) * m.platformMargin;
+    const netToMaker = beforeTax * (1 - m.retailMargin) * (1 - m.platformMargin);
+    retail = { amount, salesTaxRate, salesTax, beforeTax, retailerShare, platformShare, netToMaker };
+    const totalLines = lines.length;
+    const reason =
+      totalLines === 0
+        ? 'No parts listed yet: the margin needs a priced parts list.'
+        : pricedCount < totalLines
+          ? `${pricedCount} of ${totalLines} lines priced: price every line to see the margin (an unpriced line adds nothing to the cost, so the margin would be overstated).`
+          : null;
     const marginAmount = netToMaker - mid.landed;
-    retail = { amount, retailerShare, platformShare, netToMaker };
-    impliedMargin = { amount: marginAmount, fraction: netToMaker > 0 ? marginAmount / netToMaker : null };
+    impliedMargin =
+      reason === null
+        ? { amount: marginAmount, fraction: netToMaker > 0 ? marginAmount / netToMaker : null, complete: true, reason: null, pricedLines: pricedCount, totalLines }
+        : { amount: null, fraction: null, complete: false, reason, pricedLines: pricedCount, totalLines };
     steps.push(
+      {
+        key: 'retailBeforeTax',
+        label: 'Retail price before sales tax',
+        value: beforeTax,
+        formula: `${fmt(amount)} ÷ (1 + ${fmt(salesTaxRate)}) = ${fmt(beforeTax)}`,
+        inputs: [
+          { label: 'Retail price as seen', value: amount, unit: cur },
+          { label: 'Sales tax in the price', value: pct(salesTaxRate), unit: '%' },
+        ],
+      },
       {
         key: 'netToMaker',
         label: 'Net to maker',
         value: netToMaker,
-        formula: `${fmt(amount)} × (1 − ${fmt(m.retailMargin)}) × (1 − ${fmt(m.platformMargin)}) = ${fmt(netToMaker)}`,
+        formula: `${fmt(beforeTax)} × (1 − ${fmt(m.retailMargin)}) × (1 − ${fmt(m.platformMargin)}) = ${fmt(netToMaker)}`,
         inputs: [
-          { label: 'Retail price', value: amount, unit: cur },
+          { label: 'Retail price', value: beforeTax, unit: cur },
           { label: 'Retailer margin', value: pct(m.retailMargin), unit: '%' },
           { label: 'Platform fee', value: pct(m.platformMargin), unit: '%' },
         ],
       },
-      {
+    );
+    if (impliedMargin.complete) {
+      steps.push({
         key: 'impliedMargin',
         label: 'Implied margin',
         value: marginAmount,
@@ -515,8 +599,8 @@ export function rollUpCost(p: RollUpInput): CostRollUp {
           { label: 'Net to maker', value: netToMaker, unit: cur },
           { label: 'Landed cost', value: mid.landed, unit: cur },
         ],
-      },
-    );
+      });
+    }
   }
 
   return {

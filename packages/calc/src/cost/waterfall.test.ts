@@ -77,3 +77,28 @@ describe('costWaterfall — from parts to retail [C]', () => {
     expect(noRetail.at(-1)!.key).toBe('landed');
   });
 });
+
+describe('costWaterfall — sales tax and an incomplete margin', () => {
+  const base = { volume: 100, currency: 'USD', rates: { base: 'USD', rates: {} }, model };
+  const lines = [
+    { partId: 'A', category: 'ic', quantity: 1, mount: 'smt' as const, price: price(3) },
+    { partId: 'B', category: 'passive', quantity: 100, mount: 'smt' as const, price: price(0.01) },
+  ];
+
+  it('puts the sales tax on top of the retailer margin: 24.00 at 20 % → 20.00 before tax, 4.00 tax [CP; C]', () => {
+    const bars = costWaterfall(rollUpCost({ ...base, lines, retail: { amount: 24, currency: 'USD', salesTaxRate: 0.2 } }));
+    const bar = Object.fromEntries(bars.map((b) => [b.key, b]));
+    expect(bars.map((b) => b.key).slice(-6)).toEqual(['impliedMargin', 'netToMaker', 'platform', 'retailer', 'salesTax', 'retail']);
+    // before tax 20; retailer 10; platform 2; net 8 — as in the test above; tax 24 − 20 = 4
+    expect(bar.retailer!.end).toBeCloseTo(20, 12);
+    expect(bar.salesTax!.start).toBeCloseTo(20, 12);
+    expect(bar.salesTax!.value).toBeCloseTo(4, 12);
+    expect(bar.retail).toMatchObject({ kind: 'total', start: 0, end: 24 });
+  });
+
+  it('stops at landed cost while a line is unpriced: no margin is drawn', () => {
+    const bars = costWaterfall(rollUpCost({ ...base, lines: [...lines, { partId: 'C', category: 'x', quantity: 1, mount: 'manual' }], retail: { amount: 24, currency: 'USD', salesTaxRate: 0.2 } }));
+    expect(bars.at(-1)!.key).toBe('landed');
+    expect(bars.map((b) => b.key)).not.toContain('impliedMargin');
+  });
+});

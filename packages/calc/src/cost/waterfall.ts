@@ -1,6 +1,7 @@
 /**
  * A waterfall from parts to retail price, read off a roll-up: each cost adds a step on top of
- * the last, subtotals (ex-works, landed, net to maker) and the retail price stand on zero.
+ * the last, subtotals (ex-works, landed, net to maker) and the retail price stand on zero;
+ * sales tax in the price sits on top of the retailer's margin.
  * start/end are the bar's bottom and top edges in the reporting currency; nothing is recomputed
  * but the running sum [C].
  */
@@ -39,11 +40,13 @@ export function costWaterfall(r: CostRollUp): WaterfallBar[] {
   step('insurance', 'Insurance', r.insurance);
   step('duty', 'Duty', r.duty);
   subtotal('landed', 'Landed', r.landed);
-  if (r.retail && r.impliedMargin) {
+  // An incomplete margin (a line unpriced) is not drawn: the chart stops at landed cost.
+  if (r.retail && r.impliedMargin && r.impliedMargin.amount !== null) {
     step('impliedMargin', 'Maker margin', r.impliedMargin.amount);
     subtotal('netToMaker', 'Net to maker', r.retail.netToMaker);
     step('platform', 'Platform fee', r.retail.platformShare);
     step('retailer', 'Retailer margin', r.retail.retailerShare);
+    if (r.retail.salesTax > 0) step('salesTax', 'Sales tax', r.retail.salesTax);
     subtotal('retail', 'Retail price', r.retail.amount, 'total');
   }
   return bars;

@@ -133,8 +133,8 @@ const CATALOGUE = {
   },
   'cost.margin': { formula: 'margin = markup / (1 + markup); markup = margin / (1 − margin)', source: '[S: marketing dictionaries] keystone = 100 % markup = 50 % margin; [C]' },
   'cost.impliedMargin': {
-    formula: 'net = retail · (1 − m_retail) · (1 − m_platform); margin = net − landed cost',
-    source: 'Price build-down [CP]',
+    formula: 'net = retail / (1 + v_sales tax) · (1 − m_retail) · (1 − m_platform); margin = net − landed cost (incomplete while a BOM line is unpriced)',
+    source: 'Price build-down [CP]; sales tax in the retail price, net = gross / (1 + v) [CP]',
   },
   // comparison
   'compare.whPerCurrency': { formula: 'Wh / retail price', source: 'Normalised metric [C]' },

@@ -9,10 +9,11 @@ import {
   type CostModel,
   type RateTable as CalcRateTable,
 } from '@splitcase/calc';
-import type { CostModelDto, CostRollUpDto, PartCategory, PartPriceDto } from '@splitcase/contracts';
+import { SALES_TAX_SOURCE, type CostModelDto, type CostRollUpDto, type ImpliedMarginDto, type PartCategory, type PartPriceDto, type SalesTaxSource, type WorkspaceSettings } from '@splitcase/contracts';
 import { AppError, validationError } from '../../http/errors';
 import { PartSchema, type Part } from '../parts/part.entity';
 import { getSettings } from '../settings/settings.service';
+import type { Device } from '../devices/device.entity';
 import type { Teardown } from '../teardowns/teardown.entity';
 import { getTeardownModel } from './cost-model.service';
 import { PartPriceSchema, type PartPrice } from './part-price.entity';
@@ -50,11 +51,24 @@ export function toCalcModel(m: CostModelDto): CostModel {
     overheadFraction: m.overheadFraction,
     freightFraction: m.freightFraction,
     insuranceFraction: m.insuranceFraction,
+    insuranceBasis: m.insuranceBasis,
     dutyFraction: m.dutyFraction,
     retailMarginFraction: m.retailMarginFraction,
     platformMarginFraction: m.platformMarginFraction,
     confidenceBand: m.confidenceBand,
   };
+}
+
+/**
+ * The share of sales tax in a device's retail price: the device's own rate, else the workspace
+ * default for the price's currency; null when neither is set.
+ */
+export function salesTaxFor(device: Pick<Device, 'salesTaxRate' | 'retailCurrency'>, settings: Pick<WorkspaceSettings, 'salesTaxByCurrency'>): { rate: number; source: SalesTaxSource; currency: string } | null {
+  const currency = device.retailCurrency;
+  if (!currency) return null;
+  if (device.salesTaxRate !== null && device.salesTaxRate !== undefined) return { rate: Number(device.salesTaxRate), source: 'device', currency };
+  const rate = settings.salesTaxByCurrency[currency];
+  return rate === undefined ? null : { rate, source: 'workspace', currency };
 }
 
 /** A part's name for messages: its designators, else its description. */
@@ -106,10 +120,18 @@ export async function teardownCost(em: EntityManager, teardown: Teardown, query:
   const rates: CalcRateTable = table ? { base: table.base, rates: table.rates } : { base: currency, rates: {} };
   const warnings: string[] = [];
   const device = teardown.device;
-  let retail: { amount: number; currency: string } | null = null;
+  let retail: { amount: number; currency: string; salesTaxRate: number } | null = null;
+  const tax = salesTaxFor(device, settings);
+  // Without a sales-tax rate the price cannot be netted: the margin is incomplete, with what to set.
+  let noTaxRate: string | null = null;
   if (device.retailPrice && device.retailCurrency) {
-    if (device.retailCurrency === currency || (hasRate(table, device.retailCurrency) && hasRate(table, currency))) retail = { amount: Number(device.retailPrice), currency: device.retailCurrency };
-    else warnings.push(`The retail price is in ${device.retailCurrency}, which the current rate table cannot convert: no implied margin.`);
+    if (device.retailCurrency === currency || (hasRate(table, device.retailCurrency) && hasRate(table, currency))) {
+      if (tax) retail = { amount: Number(device.retailPrice), currency: device.retailCurrency, salesTaxRate: tax.rate };
+      else {
+        noTaxRate = `No sales-tax rate for ${device.retailCurrency}: set "Sales tax in the price" on the device (0 % for a price quoted before tax), or a default for ${device.retailCurrency} under sales tax on the Rates & cost model page.`;
+        warnings.push(noTaxRate);
+      }
+    } else warnings.push(`The retail price is in ${device.retailCurrency}, which the current rate table cannot convert: no implied margin.`);
   } else warnings.push('The device has no retail price: add it to see the implied margin.');
 
   const lines: CostLineInput[] = items.map(({ part, price }) => ({
@@ -133,12 +155,26 @@ export async function teardownCost(em: EntityManager, teardown: Teardown, query:
   warnings.unshift(...r.warnings.map((w) => w.replace(/^(\d+):/, (_m, id: string) => `${partLabel(id)}:`)));
   if (r.unpricedPartIds.length) {
     const n = r.unpricedPartIds.length;
-    warnings.push(`${n} of ${items.length} parts ${n === 1 ? 'has' : 'have'} no price and ${n === 1 ? 'adds' : 'add'} nothing to the totals.`);
+    warnings.push(
+      `${n} of ${items.length} parts ${n === 1 ? 'has' : 'have'} no price and ${n === 1 ? 'adds' : 'add'} nothing to the totals${retail ? '; the implied margin stays incomplete until every line is priced' : ''}.`,
+    );
   }
 
   const used = new Set<string>([model.currency, ...items.flatMap((i) => (i.price ? [i.price.currency] : [])), ...(retail ? [retail.currency] : [])]);
   used.delete(currency);
   const ratesUsed = [...used].sort().map((code) => ({ currency: code, perBase: rateFor(rates, code), toReporting: crossRate(rates, code, currency) }));
+
+  const salesTax = (roll: typeof r) => (roll.retail && tax ? { rate: tax.rate, amount: roll.retail.salesTax, source: tax.source, currency: tax.currency } : null);
+  const marginOf = (roll: typeof r): ImpliedMarginDto => {
+    const pricedLines = roll.lines.length - roll.unpricedPartIds.length;
+    if (noTaxRate) return { amount: null, fraction: null, complete: false, reason: noTaxRate, pricedLines, totalLines: roll.lines.length, salesTax: null };
+    const tx = salesTax(roll);
+    return roll.impliedMargin && tx ? { ...roll.impliedMargin, salesTax: tx } : null;
+  };
+  // Say where the sales-tax rate came from beside the step that uses it.
+  const steps = r.steps.map((s) =>
+    s.key === 'retailBeforeTax' && tax ? { ...s, inputs: [...s.inputs, { label: 'Rate from', value: tax.source === 'device' ? SALES_TAX_SOURCE.labels.device : `Workspace default for ${tax.currency}` }] } : s,
+  );
 
   const categories = Object.entries(r.byCategory)
     .map(([category, total]) => ({
@@ -197,12 +233,20 @@ export async function teardownCost(em: EntityManager, teardown: Teardown, query:
     high: r.high,
     retail:
       r.retail && retail
-        ? { ...r.retail, seen: { amount: retail.amount, currency: retail.currency, on: device.priceSeenOn ?? null } }
+        ? {
+            amount: r.retail.amount,
+            beforeTax: r.retail.beforeTax,
+            salesTax: salesTax(r)!,
+            retailerShare: r.retail.retailerShare,
+            platformShare: r.retail.platformShare,
+            netToMaker: r.retail.netToMaker,
+            seen: { amount: retail.amount, currency: retail.currency, on: device.priceSeenOn ?? null },
+          }
         : null,
-    impliedMargin: r.impliedMargin,
-    steps: r.steps,
+    impliedMargin: marginOf(r),
+    steps,
     waterfall: costWaterfall(r),
-    volumes: atVolumes.map((v) => ({ volume: v.volume, partsTotal: v.partsTotal, exWorks: v.exWorks, landed: v.landed, low: v.low, high: v.high, impliedMargin: v.impliedMargin })),
+    volumes: atVolumes.map((v) => ({ volume: v.volume, partsTotal: v.partsTotal, exWorks: v.exWorks, landed: v.landed, low: v.low, high: v.high, impliedMargin: marginOf(v) })),
     unpricedPartIds: r.unpricedPartIds.map(Number),
     warnings,
   };

@@ -4,7 +4,8 @@ import type { CostModelDto } from '@splitcase/contracts';
  * The cost model a new workspace starts from, until sourcing saves its own. Values are typical
  * of contract assembly of small battery-powered devices (REFERENCES §10 [CP]): SMT placement
  * $75/h ÷ 5 000 placements/h = $0.015 [S: industry expert panel]; attrition 1–5 % for passives,
- * 0.5–1 % for ICs; first-pass yield 95–99 %; insurance 0.5–2 % of the goods value.
+ * 0.5–1 % for ICs; first-pass yield 95–99 %; insurance 0.5–2 % of the goods value [S/CP], here on
+ * goods + freight (the CIF value duty is levied on).
  */
 export const BUILT_IN_COST_MODEL: CostModelDto = {
   currency: 'USD',
@@ -39,6 +40,7 @@ export const BUILT_IN_COST_MODEL: CostModelDto = {
   overheadFraction: 0.12,
   freightFraction: 0.04,
   insuranceFraction: 0.01,
+  insuranceBasis: 'cif',
   dutyFraction: 0.027,
   retailMarginFraction: 0.4,
   platformMarginFraction: 0.15,

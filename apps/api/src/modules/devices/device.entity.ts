@@ -14,6 +14,8 @@ export const DeviceSchema = defineEntity({
     category: p.enum([...DEVICE_CATEGORY.values]),
     retailPrice: p.double().nullable(),
     retailCurrency: p.string().length(3).nullable(),
+    /** Share of sales tax in the retail price (0.2 = 20 %); 0 before tax; null: the workspace default for the currency. */
+    salesTaxRate: p.double().nullable(),
     priceSeenOn: p.string().length(10).nullable(),
     whereBought: p.string().length(300).nullable(),
     /** Label claims, as printed on the device or its box (SI: Ah, Wh, W, h). */

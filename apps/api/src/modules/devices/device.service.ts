@@ -62,6 +62,7 @@ export function toDeviceDto(d: Device, teardowns: Pick<Teardown, 'id' | 'date' |
     category: d.category,
     retailPrice: num(d.retailPrice),
     currency: d.retailCurrency ?? null,
+    salesTaxRate: num(d.salesTaxRate),
     priceSeenOn: d.priceSeenOn ?? null,
     whereBought: d.whereBought ?? null,
     claimCapacityAh: num(d.claimCapacityAh),

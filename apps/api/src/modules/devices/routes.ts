@@ -36,6 +36,7 @@ function snapshot(d: Device) {
     category: d.category,
     retailPrice: d.retailPrice ?? null,
     currency: d.retailCurrency ?? null,
+    salesTaxRate: d.salesTaxRate ?? null,
     priceSeenOn: d.priceSeenOn ?? null,
     whereBought: d.whereBought ?? null,
     claimCapacityAh: d.claimCapacityAh ?? null,
@@ -90,6 +91,7 @@ export const deviceRoutes: RouteDef[] = [
           category: body.category,
           retailPrice: body.retailPrice ?? null,
           retailCurrency: body.currency ?? null,
+          salesTaxRate: body.salesTaxRate ?? null,
           priceSeenOn: body.priceSeenOn ?? null,
           whereBought: body.whereBought ?? null,
           claimOutputText: body.claimOutputText ?? null,
@@ -152,6 +154,7 @@ export const deviceRoutes: RouteDef[] = [
       if (body.category !== undefined) device.category = body.category;
       if (body.retailPrice !== undefined) device.retailPrice = body.retailPrice;
       if (body.currency !== undefined) device.retailCurrency = body.currency;
+      if (body.salesTaxRate !== undefined) device.salesTaxRate = body.salesTaxRate;
       if (body.priceSeenOn !== undefined) device.priceSeenOn = body.priceSeenOn;
       if (body.whereBought !== undefined) device.whereBought = body.whereBought;
       if (body.claimOutputText !== undefined) device.claimOutputText = body.claimOutputText;

@@ -346,11 +346,15 @@ async function deviceRow(
         fig.shouldCost = cost.landed;
         const partial = unpriced ? `; ${unpriced} of ${cost.lines.length} parts unpriced (the figure is low)` : '';
         sources.shouldCost = `Landed should-cost at ${cost.volume.toLocaleString('en-GB')} units (${cost.model.source} cost model), rates of ${cost.rateDate ?? '—'}${partial}, ${from}`;
-        if (unpriced) notes.push(`${unpriced} of ${cost.lines.length} parts of ${from} have no price: its should-cost is low and its margin high.`);
-        const fraction = cost.impliedMargin?.fraction;
-        if (cost.impliedMargin && typeof fraction === 'number' && cost.retail) {
+        if (unpriced) notes.push(`${unpriced} of ${cost.lines.length} parts of ${from} have no price: its should-cost is low and its margin is left out.`);
+        const margin = cost.impliedMargin;
+        const fraction = margin?.fraction;
+        if (margin && !margin.complete) missing.impliedMargin = `Implied margin incomplete: ${margin.reason ?? 'some lines are unpriced.'}`;
+        else if (margin && typeof fraction === 'number' && margin.amount !== null && cost.retail) {
           fig.impliedMarginFraction = fraction;
-          sources.impliedMargin = `Net to maker ${money(cost.retail.netToMaker, currency)} − landed ${money(cost.landed, currency)} = ${money(cost.impliedMargin.amount, currency)}, ${from}`;
+          const tax = cost.retail.salesTax;
+          const taxNote = tax.rate > 0 ? ` (retail less ${n4(tax.rate * 100)} % sales tax, ${tax.source === 'device' ? 'set on the device' : `workspace default for ${tax.currency}`})` : '';
+          sources.impliedMargin = `Net to maker ${money(cost.retail.netToMaker, currency)}${taxNote} − landed ${money(cost.landed, currency)} = ${money(margin.amount, currency)}, ${from}`;
         } else missing.impliedMargin = cost.warnings.find((w) => /retail|margin/i.test(w)) ?? 'No retail price to set the should-cost against.';
       }
     }

@@ -18,3 +18,15 @@ export function useSetReportingCurrency() {
     },
   });
 }
+
+/** Sourcing and admin set the default sales tax in retail prices by currency; margins everywhere follow. */
+export function useSetSalesTaxByCurrency() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (salesTaxByCurrency: Record<string, number>) => api.patch<{ settings: WorkspaceSettings }>('/api/settings', { salesTaxByCurrency }),
+    onSuccess: (data) => {
+      qc.setQueryData(settingsKey, data.settings);
+      return Promise.all([qc.invalidateQueries({ queryKey: ['teardowns'] }), qc.invalidateQueries({ queryKey: ['lineups'] })]);
+    },
+  });
+}

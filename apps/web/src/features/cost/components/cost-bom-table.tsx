@@ -50,12 +50,12 @@ export function CostBomTable({ cost, canEdit, editingId, onEdit }: { cost: CostR
           if (!p || l.breakMinQty === null) return <span className="text-graphite-400">—</span>;
           const used = p.breaks.find((b) => b.minQty === l.breakMinQty);
           return (
-            <div title={`${l.buyQuantity.toLocaleString('en-GB')} pieces bought at this volume${l.belowMinimumOrder ? ': below the smallest break' : ''}`} className={`leading-tight ${l.belowMinimumOrder ? 'text-amber-800' : ''}`}>
+            <div title={`${l.buyQuantity.toLocaleString('en-GB')} pieces bought at this volume, attrition included${l.belowMinimumOrder ? ': below the smallest break' : ''}`} className={`leading-tight ${l.belowMinimumOrder ? 'text-amber-800' : ''}`}>
               <div>
                 {used ? plain(used.unitPrice) : ''} <span className="text-xs text-graphite-500">{p.currency}</span>
               </div>
               <div className="text-2xs text-graphite-500">
-                from {l.breakMinQty.toLocaleString('en-GB')}
+                from {l.breakMinQty.toLocaleString('en-GB')} · {l.buyQuantity.toLocaleString('en-GB')} bought
                 {l.belowMinimumOrder && <span className="text-amber-800"> (below)</span>}
               </div>
             </div>
@@ -76,7 +76,7 @@ export function CostBomTable({ cost, canEdit, editingId, onEdit }: { cost: CostR
               <div className="text-2xs text-graphite-500" title="Attrition of this line's category">+{formatPercent(l.attrition)} attrition</div>
             </div>
           ) : (
-            <span className="text-xs text-graphite-400">not priced</span>
+            <span className="text-xs text-graphite-500">not priced</span>
           ),
       },
       {
@@ -106,7 +106,7 @@ export function CostBomTable({ cost, canEdit, editingId, onEdit }: { cost: CostR
               <div className="text-2xs text-graphite-500">{formatDate(l.price.priceDate)}</div>
             </div>
           ) : (
-            <span className="text-xs text-graphite-400">No price</span>
+            <span className="text-xs text-graphite-500">No price</span>
           ),
       },
     ];
@@ -140,8 +140,8 @@ export function CostBomTable({ cost, canEdit, editingId, onEdit }: { cost: CostR
   return (
     <div>
       <p className="mb-1.5 text-xs text-graphite-500">
-        Unit price: the break for quantity × {cost.volume.toLocaleString('en-GB')} units, converted to {cur} at the {ratesOf(cost.rateDate)}, before attrition. Extended = quantity × unit price ×
-        (1 + attrition).
+        Unit price: the break for the pieces bought, quantity × {cost.volume.toLocaleString('en-GB')} units × (1 + attrition) rounded up, converted to {cur} at the {ratesOf(cost.rateDate)}, before
+        attrition. Extended = quantity × unit price × (1 + attrition).
       </p>
       <DataTable caption="Costed bill of materials" rows={cost.lines} columns={columns} rowId={(l) => String(l.partId)} initialSort={{ id: 'pos' }} maxHeight="32rem" />
     </div>

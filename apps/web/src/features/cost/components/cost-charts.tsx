@@ -11,6 +11,7 @@ function waterfallSeries(b: WaterfallBarDto): SeriesName {
   if (b.kind !== 'step') return 'black';
   if (b.key === 'impliedMargin') return b.value < 0 ? 'vermilion' : 'green';
   if (b.key === 'platform' || b.key === 'retailer') return 'orange';
+  if (b.key === 'salesTax') return 'purple';
   return 'blue';
 }
 
@@ -20,6 +21,7 @@ const LEGEND: { series: SeriesName; label: string }[] = [
   { series: 'green', label: 'Maker margin' },
   { series: 'vermilion', label: 'Loss' },
   { series: 'orange', label: 'Channel share' },
+  { series: 'purple', label: 'Sales tax' },
 ];
 
 function Swatch({ series }: { series: SeriesName }) {
@@ -99,12 +101,15 @@ export default function CostCharts({ cost }: { cost: CostRollUpDto }) {
           </ResponsiveContainer>
         </div>
         <ul className="mt-1 flex flex-wrap gap-x-4 gap-y-1 text-xs text-graphite-600" aria-label="Legend">
-          {LEGEND.map((l) => (
+          {LEGEND.filter((l) => waterfall.some((b) => b.series === l.series)).map((l) => (
             <li key={l.series} className="inline-flex items-center gap-1.5">
               <Swatch series={l.series} /> {l.label}
             </li>
           ))}
         </ul>
+        {cost.impliedMargin && !cost.impliedMargin.complete && (
+          <p className="mt-2 text-xs text-graphite-600">Stops at landed cost: the implied margin is incomplete ({cost.impliedMargin.reason})</p>
+        )}
         <table className="mt-3 w-full text-sm" aria-label="From parts to retail price, data">
           <thead>
             <tr className="border-b border-graphite-150 text-left text-xs uppercase tracking-wide text-graphite-500">

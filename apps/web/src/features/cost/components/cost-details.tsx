@@ -44,9 +44,13 @@ export function VolumeTable({ cost, onPick }: { cost: CostRollUpDto; onPick: (vo
                     {money(v.low, cur)} – {money(v.high, cur)}
                   </td>
                   <td className="num px-3 py-1.5 text-right">
-                    {v.impliedMargin ? (
+                    {v.impliedMargin && !v.impliedMargin.complete ? (
+                      <span className="text-graphite-600" title={v.impliedMargin.reason ?? undefined}>
+                        incomplete <span className="text-xs text-graphite-600">({v.impliedMargin.pricedLines} of {v.impliedMargin.totalLines} lines priced)</span>
+                      </span>
+                    ) : v.impliedMargin ? (
                       <>
-                        {money(v.impliedMargin.amount, cur)} <span className="text-xs text-graphite-500">({formatPercent(v.impliedMargin.fraction)})</span>
+                        {money(v.impliedMargin.amount, cur)} <span className="text-xs text-graphite-600">({formatPercent(v.impliedMargin.fraction)})</span>
                       </>
                     ) : (
                       '—'

@@ -1,8 +1,8 @@
 import { useState, type ReactNode } from 'react';
 import { Plus, Trash2 } from 'lucide-react';
-import { PART_CATEGORY, type CostModelBody, type CostModelDto, type PartCategory } from '@splitcase/contracts';
+import { INSURANCE_BASIS, PART_CATEGORY, type CostModelBody, type CostModelDto, type InsuranceBasisKey, type PartCategory } from '@splitcase/contracts';
 import { Button } from '@/components/button';
-import { Field, Input, FormError } from '@/components/field';
+import { Field, Input, FormError, LabelledOptions, Select } from '@/components/field';
 import { ApiError } from '@/lib/api-client';
 import { plain, toPercentText } from './display';
 
@@ -13,7 +13,7 @@ const PLAIN = ['thtJointsPerPart', 'testMinutes'] as const;
 const BANDS = ['high', 'medium', 'low'] as const;
 
 function toDraft(m: CostModelDto): { draft: Draft; ops: { label: string; minutes: string }[] } {
-  const draft: Draft = { currency: m.currency, volumes: m.volumes.join(', ') };
+  const draft: Draft = { currency: m.currency, volumes: m.volumes.join(', '), insuranceBasis: m.insuranceBasis };
   for (const k of PERCENT) draft[k] = toPercentText(m[k]);
   for (const k of MONEY) draft[k] = plain(m[k]);
   for (const k of PLAIN) draft[k] = plain(m[k]);
@@ -60,6 +60,7 @@ function toBody(d: Draft, ops: { label: string; minutes: string }[]): CostModelB
     overheadFraction: share(d.overheadFraction),
     freightFraction: share(d.freightFraction),
     insuranceFraction: share(d.insuranceFraction),
+    insuranceBasis: (d.insuranceBasis ?? 'cif') as InsuranceBasisKey,
     dutyFraction: share(d.dutyFraction),
     retailMarginFraction: share(d.retailMarginFraction),
     platformMarginFraction: share(d.platformMarginFraction),
@@ -222,7 +223,14 @@ export function CostModelForm({
       <Group title="Overhead, freight and duty">
         {field('overheadFraction', 'Overhead', { unit: '%' })}
         {field('freightFraction', 'Freight', { unit: '%', hint: 'Share of the ex-works cost' })}
-        {field('insuranceFraction', 'Insurance', { unit: '%', hint: 'Share of the ex-works cost' })}
+        {field('insuranceFraction', 'Insurance', { unit: '%', hint: 'Typical 0.5–2 %' })}
+        <Field label="Insurance on" error={errors.insuranceBasis} hint="CIF: goods + freight, the value duty is levied on">
+          {(f) => (
+            <Select {...f} name="insuranceBasis" disabled={readOnly} value={draft.insuranceBasis ?? 'cif'} onChange={(e) => setDraft((d) => ({ ...d, insuranceBasis: e.target.value }))}>
+              <LabelledOptions list={INSURANCE_BASIS} />
+            </Select>
+          )}
+        </Field>
         {field('dutyFraction', 'Import duty', { unit: '%', hint: 'On the CIF value' })}
       </Group>
 

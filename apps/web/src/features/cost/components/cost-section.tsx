@@ -11,6 +11,7 @@ import { useCost } from '../api/get-cost';
 import { useRates } from '../api/rates';
 import { CostBomTable } from './cost-bom-table';
 import { CostSteps, RatesUsed, VolumeTable } from './cost-details';
+import { salesTaxText } from '@/lib/sales-tax';
 import { money, ratesOf } from './display';
 import { PriceEditor } from './price-editor';
 import { PriceImport } from './price-import';
@@ -30,9 +31,36 @@ function Figure({ label, value, sub, strong = false, loss = false, testId }: { l
   );
 }
 
-function Summary({ cost }: { cost: CostRollUpDto }) {
+/** The implied margin: a number only when every line is priced; otherwise "Incomplete" with the reason. */
+function MarginFigure({ cost }: { cost: CostRollUpDto }) {
   const cur = cost.currency;
   const m = cost.impliedMargin;
+  if (m && !m.complete) {
+    return <Figure label="Implied margin" value={<span className="text-graphite-600">Incomplete</span>} testId="cost-margin" sub={m.reason} />;
+  }
+  const loss = Boolean(m && m.amount !== null && m.amount < 0);
+  return (
+    <Figure
+      label={loss ? 'Implied margin: a loss' : 'Implied margin'}
+      loss={loss}
+      value={m ? money(m.amount, cur) : '—'}
+      testId="cost-margin"
+      sub={
+        cost.retail ? (
+          <>
+            {formatPercent(m?.fraction ?? null)} of {money(cost.retail.netToMaker, cur)} net, from retail {cost.retail.seen.amount.toFixed(2)} {cost.retail.seen.currency}
+            {cost.retail.seen.currency !== cur ? ` (${money(cost.retail.amount, cur)})` : ''} {salesTaxText(cost.retail.salesTax)}
+          </>
+        ) : (
+          'No retail price on the device'
+        )
+      }
+    />
+  );
+}
+
+function Summary({ cost }: { cost: CostRollUpDto }) {
+  const cur = cost.currency;
   return (
     <div className="grid gap-3 sm:grid-cols-2 2xl:grid-cols-4">
       <Figure label="Parts with attrition" value={money(cost.partsTotal, cur)} testId="cost-parts-total" sub={`${cost.lines.length - cost.unpricedPartIds.length} of ${cost.lines.length} lines priced · ${ratesOf(cost.rateDate)}`} />
@@ -48,22 +76,7 @@ function Summary({ cost }: { cost: CostRollUpDto }) {
           </>
         }
       />
-      <Figure
-        label={m && m.amount < 0 ? 'Implied margin: a loss' : 'Implied margin'}
-        loss={Boolean(m && m.amount < 0)}
-        value={m ? money(m.amount, cur) : '—'}
-        testId="cost-margin"
-        sub={
-          cost.retail ? (
-            <>
-              {formatPercent(m?.fraction ?? null)} of {money(cost.retail.netToMaker, cur)} net, from retail {cost.retail.seen.amount.toFixed(2)} {cost.retail.seen.currency}
-              {cost.retail.seen.currency !== cur ? ` (${money(cost.retail.amount, cur)})` : ''}
-            </>
-          ) : (
-            'No retail price on the device'
-          )
-        }
-      />
+      <MarginFigure cost={cost} />
     </div>
   );
 }

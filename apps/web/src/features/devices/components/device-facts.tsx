@@ -27,6 +27,15 @@ export function DeviceFacts({ device }: { device: DeviceDto }) {
               </span>
             ) : null}
           </Row>
+          {device.retailPrice !== null && (
+            <Row label="Sales tax in the price">
+              {device.salesTaxRate !== null ? (
+                <span className="num">{device.salesTaxRate === 0 ? '0 % (quoted before tax)' : `${Number((device.salesTaxRate * 100).toPrecision(10))} %`}</span>
+              ) : (
+                <span className="text-graphite-600">Workspace default for {device.currency ?? 'the currency'}</span>
+              )}
+            </Row>
+          )}
           <Row label="Price seen on">{device.priceSeenOn ? formatDate(device.priceSeenOn) : null}</Row>
           <Row label="Where bought">{device.whereBought}</Row>
           {device.notes && <Row label="Notes">{device.notes}</Row>}

@@ -9,12 +9,12 @@ import { applyServerErrors } from '@/lib/form-errors';
 import { claimText } from './claims';
 
 const CLAIMS = Object.keys(DEVICE_CLAIM_FIELDS) as DeviceClaimField[];
-const KNOWN = ['maker', 'model', 'category', 'retailPrice', 'currency', 'priceSeenOn', 'whereBought', 'claimOutputText', 'notes', ...CLAIMS] as const;
+const KNOWN = ['maker', 'model', 'category', 'retailPrice', 'currency', 'salesTaxRate', 'priceSeenOn', 'whereBought', 'claimOutputText', 'notes', ...CLAIMS] as const;
 
 /** Form values for an existing device: each claim as typed (or its stored value with the unit). */
 export function deviceFormValues(d?: DeviceDto): DeviceFormValues {
   if (!d) {
-    return { maker: '', model: '', category: 'pocket-heater', retailPrice: '', currency: '', priceSeenOn: '', whereBought: '', claimCapacityAh: '', claimCapacityWh: '', claimOutputWatts: '', claimRuntimeH: '', claimPowerW: '', claimOutputText: '', notes: '' };
+    return { maker: '', model: '', category: 'pocket-heater', retailPrice: '', currency: '', salesTaxRate: '', priceSeenOn: '', whereBought: '', claimCapacityAh: '', claimCapacityWh: '', claimOutputWatts: '', claimRuntimeH: '', claimPowerW: '', claimOutputText: '', notes: '' };
   }
   return {
     maker: d.maker,
@@ -22,6 +22,8 @@ export function deviceFormValues(d?: DeviceDto): DeviceFormValues {
     category: d.category,
     retailPrice: d.retailPrice === null ? '' : String(d.retailPrice),
     currency: d.currency ?? '',
+    // Stored as a share (0.2), typed as a percentage ("20").
+    salesTaxRate: d.salesTaxRate === null ? '' : String(Number((d.salesTaxRate * 100).toPrecision(10))),
     priceSeenOn: d.priceSeenOn ?? '',
     whereBought: d.whereBought ?? '',
     ...Object.fromEntries(CLAIMS.map((k) => [k, claimText(d, k) ?? ''])),
@@ -69,12 +71,20 @@ export function DeviceForm({ initial, submitLabel, onSubmit, onCancel }: { initi
         </div>
       </Card>
       <Card title="Where and for how much">
-        <div className="grid gap-4 p-4 sm:grid-cols-4">
-          <Field label="Retail price" error={errors.retailPrice?.message} hint="e.g. 24.99">
+        <div className="grid gap-4 p-4 sm:grid-cols-3">
+          <Field label="Retail price" error={errors.retailPrice?.message} hint="e.g. 24.99, as on the shelf or listing">
             {(p) => <Input {...p} {...register('retailPrice')} inputMode="decimal" className="num" />}
           </Field>
           <Field label="Currency" error={errors.currency?.message} hint="ISO code, e.g. USD">
             {(p) => <Input {...p} {...register('currency')} maxLength={3} className="font-mono uppercase" />}
+          </Field>
+          <Field label="Sales tax in the price" error={errors.salesTaxRate?.message} hint="Blank: the workspace default for the currency; 0 if quoted before tax">
+            {(p) => (
+              <div className="relative">
+                <Input {...p} {...register('salesTaxRate')} inputMode="decimal" className="num pr-8" placeholder="Default" />
+                <span className="pointer-events-none absolute inset-y-0 right-3 flex items-center text-xs text-graphite-500">%</span>
+              </div>
+            )}
           </Field>
           <Field label="Price seen on" error={errors.priceSeenOn?.message}>
             {(p) => <Input {...p} {...register('priceSeenOn')} type="date" />}

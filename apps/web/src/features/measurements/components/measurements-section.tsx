@@ -26,6 +26,7 @@ const EXAMPLE: Record<MeasuredQuantity, string> = {
   energy: '9.8 Wh',
   capacity: '2620 mAh',
   temperature: '45 °C',
+  'surface-temperature': '47.5 °C',
   mass: '46 g',
   length: '0.25 mm',
   time: '10 min',

@@ -1,6 +1,7 @@
 import { MOUNT_TYPE, PART_CATEGORY, type CostRollUpDto, type PartDto, type PhotoDto } from '@splitcase/contracts';
 import { DecodedMarking } from '@/components/decoded-marking';
-import { formatDate } from '@/lib/format';
+import { formatDate, formatPercent, formatQuantity } from '@/lib/format';
+import { salesTaxText } from '@/lib/sales-tax';
 import { NoneRecorded, ReportTable } from './report-layout';
 import { photoNumber } from './report-photos';
 
@@ -72,6 +73,39 @@ export function ReportBom({ parts, photos, cost, costProblem }: { parts: PartDto
             } Should-cost figures are estimates.`
           : `Prices are not shown: ${costProblem ?? 'the should-cost could not be worked out.'}`}
       </p>
+      {cost && <ReportCostSummary cost={cost} money={money} />}
     </div>
+  );
+}
+
+/**
+ * Landed cost and the implied margin as the cost section gives them: the margin is a number only
+ * when every line is priced, and names the sales tax taken out of the retail price.
+ */
+function ReportCostSummary({ cost, money }: { cost: CostRollUpDto; money: (v: number | null | undefined) => string }) {
+  const m = cost.impliedMargin;
+  const cur = cost.currency;
+  return (
+    <dl className="mt-2 grid grid-cols-[max-content_1fr] gap-x-4 gap-y-0.5 text-xs break-inside-avoid" data-testid="report-cost-summary">
+      <dt className="text-graphite-500">Landed should-cost</dt>
+      <dd className="num text-graphite-950">
+        {money(cost.landed)} {cur} per unit at {cost.volume.toLocaleString('en-GB')} units (range {money(cost.low)}–{money(cost.high)} from price confidence)
+      </dd>
+      <dt className="text-graphite-500">Implied margin</dt>
+      <dd className="text-graphite-950" data-testid="report-margin">
+        {m === null ? (
+          'not worked out: no retail price that can be converted'
+        ) : !m.complete ? (
+          <>
+            <strong className="font-semibold">incomplete</strong> — {m.reason}
+          </>
+        ) : (
+          <span className="num">
+            {money(m.amount)} {cur} ({formatPercent(m.fraction)} of {money(cost.retail?.netToMaker)} {cur} net to maker)
+            {cost.retail ? `, from retail ${cost.retail.seen.amount.toFixed(2)} ${cost.retail.seen.currency} ${salesTaxText(cost.retail.salesTax)}` : ''}
+          </span>
+        )}
+      </dd>
+    </dl>
   );
 }
