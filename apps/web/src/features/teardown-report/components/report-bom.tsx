@@ -1,6 +1,6 @@
 import { MOUNT_TYPE, PART_CATEGORY, type CostRollUpDto, type PartDto, type PhotoDto } from '@splitcase/contracts';
 import { DecodedMarking } from '@/components/decoded-marking';
-import { formatDate, formatPercent, formatQuantity } from '@/lib/format';
+import { formatDate, formatPercent } from '@/lib/format';
 import { salesTaxText } from '@/lib/sales-tax';
 import { NoneRecorded, ReportTable } from './report-layout';
 import { photoNumber } from './report-photos';
