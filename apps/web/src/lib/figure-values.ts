@@ -24,17 +24,30 @@ export function figureInputValue(i: FigureInputDto): string {
   return Number.isInteger(i.value) ? String(i.value) : sig(i.value);
 }
 
-/** Figures grouped by what they describe (the key's first word). */
+/** Whole-device figures grouped by what they describe (the key's first word). */
 const GROUPS: { title: string; match: RegExp }[] = [
   { title: 'Battery', match: /^pack\./ },
   { title: 'Loads', match: /^load\./ },
-  { title: 'Runtime and charging', match: /^(runtime|powerbank|charge|capacity)\./ },
+  { title: 'Runtime and charging', match: /^(runtime|powerbank|charge|capacity|claim)\./ },
   { title: 'Heater and touch', match: /^heater\./ },
   { title: 'Heater traces', match: /^trace\./ },
 ];
 
-export function groupFigures(figures: FigureDto[]): { title: string; figures: FigureDto[] }[] {
-  const out = GROUPS.map((g) => ({ title: g.title, figures: figures.filter((f) => g.match.test(f.key)) }));
-  const rest = figures.filter((f) => !GROUPS.some((g) => g.match.test(f.key)));
-  return [...out, { title: 'Other', figures: rest }].filter((g) => g.figures.length > 0);
+export interface FigureGroup {
+  title: string;
+  /** Set for the group of one operating mode. */
+  mode?: { id: number; name: string; note: string | null };
+  figures: FigureDto[];
 }
+
+/** Whole-device figures by subject, then one group per operating mode, in the modes' order. */
+export function groupFigures(figures: FigureDto[], modes: { id: number; name: string; note: string | null }[] = []): FigureGroup[] {
+  const device = figures.filter((f) => f.modeId === null);
+  const out: FigureGroup[] = GROUPS.map((g) => ({ title: g.title, figures: device.filter((f) => g.match.test(f.key)) }));
+  const rest = device.filter((f) => !GROUPS.some((g) => g.match.test(f.key)));
+  const perMode: FigureGroup[] = modes.map((m) => ({ title: `Mode: ${m.name}`, mode: m, figures: figures.filter((f) => f.modeId === m.id) }));
+  return [...out, { title: 'Other', figures: rest }, ...perMode].filter((g) => g.figures.length > 0 || g.mode);
+}
+
+/** A stable id for a figure on a page: its key, with its mode when it has one. */
+export const figureId = (f: FigureDto) => (f.modeId === null ? f.key : `${f.key}@${f.modeId}`);

@@ -10,7 +10,7 @@ import { Spinner } from '@/components/page';
 import { EstimatesNote, HotSurfaceNote } from '@/components/safety';
 import { SeverityBadge } from '@/components/status';
 import { paths } from '@/config/paths';
-import { figureInputValue as inputValue, figureValue, groupFigures } from '@/lib/figure-values';
+import { figureId, figureInputValue as inputValue, figureValue, groupFigures } from '@/lib/figure-values';
 import { mutationErrorMessage } from '@/lib/unpublish-confirm';
 import { useAcceptSuggestion } from '../api/accept-suggestion';
 import { useDismissSuggestion } from '../api/dismiss-suggestion';
@@ -22,15 +22,20 @@ const ENERGY_UNITS = new Set(['W', 'Wh', 'Ah', 'h', 'Wh/kg', 'A', 'W/cm²']);
 
 function FigureRow({ f, showCaution }: { f: FigureDto; showCaution: boolean }) {
   const [open, setOpen] = useState(false);
-  const id = `figure-${f.key.replace(/[^a-z0-9]+/gi, '-')}`;
+  const id = `figure-${figureId(f).replace(/[^a-z0-9]+/gi, '-')}`;
   return (
-    <li className="border-b border-graphite-100 last:border-0" data-figure={f.key}>
+    <li className="border-b border-graphite-100 last:border-0" data-figure={f.key} data-mode={f.modeId ?? undefined}>
       <button type="button" onClick={() => setOpen(!open)} aria-expanded={open} aria-controls={id} className="flex w-full items-start gap-2 px-3 py-2 text-left hover:bg-graphite-50">
         {open ? <ChevronDown className="mt-0.5 size-3.5 shrink-0 text-graphite-400" aria-hidden /> : <ChevronRight className="mt-0.5 size-3.5 shrink-0 text-graphite-400" aria-hidden />}
         <span className="min-w-0 flex-1 text-xs leading-5 text-graphite-600">{f.label}</span>
-        <span className={`num shrink-0 text-sm font-semibold ${ENERGY_UNITS.has(f.unit) ? 'text-cell-700' : 'text-graphite-900'}`} data-testid="figure-value">
+        <span className={`num shrink-0 text-sm font-semibold ${f.implausible ? 'text-brick-700' : ENERGY_UNITS.has(f.unit) ? 'text-cell-700' : 'text-graphite-900'}`} data-testid="figure-value">
           {figureValue(f.value, f.unit)}
         </span>
+        {f.implausible && (
+          <span className="shrink-0 rounded bg-brick-50 px-1 text-2xs font-semibold uppercase text-brick-700" title="Outside what the physics or the chemistry allows: check the inputs">
+            Implausible
+          </span>
+        )}
         {f.warnings.length > 0 && <TriangleAlert className="mt-0.5 size-3.5 shrink-0 text-amber-600" aria-label={`${f.warnings.length} warning${f.warnings.length === 1 ? '' : 's'}`} />}
       </button>
       {f.caution && showCaution && (
@@ -172,15 +177,27 @@ export function FiguresPanel({ teardownId, canEdit }: { teardownId: number; canE
             <p className="px-3 py-3 text-sm text-graphite-600">No figures yet. Record the cells and the loads of the power system, and the power, energy and runtime figures appear here.</p>
           ) : (
             <div aria-label="Derived figures" role="list">
-              {groupFigures(figures.data.figures).map((g) => (
-                <section key={g.title} aria-label={g.title} role="listitem">
-                  <h3 className="bg-graphite-50 px-3 py-1 text-2xs font-semibold uppercase tracking-wide text-graphite-500">{g.title}</h3>
-                  <ul>
-                    {g.figures.map((f, i) => (
-                      // One caution after a run of figures that share it (surface rise, then touch margin).
-                      <FigureRow key={f.key} f={f} showCaution={g.figures[i + 1]?.caution !== f.caution} />
-                    ))}
-                  </ul>
+              {figures.data.modes.length === 0 && figures.data.figures.some((f) => f.key === 'load.power') && (
+                <p className="border-b border-graphite-100 px-3 py-2 text-xs text-graphite-600" data-testid="all-at-once">
+                  All loads at once: record the operating modes in the power system for power and runtime per mode.
+                </p>
+              )}
+              {groupFigures(figures.data.figures, figures.data.modes).map((g) => (
+                <section key={g.mode ? `mode-${g.mode.id}` : g.title} aria-label={g.title} role="listitem" data-mode-group={g.mode?.name}>
+                  <h3 className={`px-3 py-1 text-2xs font-semibold uppercase tracking-wide ${g.mode ? 'bg-cell-50 text-cell-800' : 'bg-graphite-50 text-graphite-600'}`}>
+                    {g.title}
+                    {g.mode?.note && <span className="ml-1 font-normal normal-case tracking-normal">({g.mode.note})</span>}
+                  </h3>
+                  {g.figures.length === 0 ? (
+                    <p className="px-3 py-2 text-xs text-graphite-600">Nothing on in this mode.</p>
+                  ) : (
+                    <ul>
+                      {g.figures.map((f, i) => (
+                        // One caution after a run of figures that share it (surface rise, then touch margin).
+                        <FigureRow key={figureId(f)} f={f} showCaution={g.figures[i + 1]?.caution !== f.caution} />
+                      ))}
+                    </ul>
+                  )}
                 </section>
               ))}
             </div>

@@ -1,7 +1,7 @@
 import { useMemo, useState, type FormEvent } from 'react';
 import { toast } from 'sonner';
 import { Plus } from 'lucide-react';
-import { CONNECTION, LOAD_KIND, SURFACE_MATERIAL, type Connection, type ConverterDto, type CreateLoadBody, type LoadDto, type LoadKind, type SurfaceMaterial } from '@splitcase/contracts';
+import { CONNECTION, ELEMENT_MATERIAL, LOAD_KIND, SURFACE_MATERIAL, type Connection, type ConverterDto, type CreateLoadBody, type ElementMaterial, type LoadDto, type LoadKind, type SurfaceMaterial } from '@splitcase/contracts';
 import { Button } from '@/components/button';
 import { rowActionsColumn } from '@/components/row-actions';
 import { DataTable, type Column } from '@/components/data-table';
@@ -23,6 +23,7 @@ const QUANTITIES = [
   { key: 'count', label: 'Count', unit: '', placeholder: '2' },
   { key: 'duty', label: 'Duty', unit: '', placeholder: '60 %' },
   { key: 'heatedAreaM2', label: 'Heated area', unit: 'm²', placeholder: '27 cm²' },
+  { key: 'heatedMassKg', label: 'Heated mass', unit: 'kg', placeholder: '40 g' },
 ] as const;
 type QKey = (typeof QUANTITIES)[number]['key'];
 
@@ -32,6 +33,7 @@ interface Draft {
   connection: Connection;
   converterId: string;
   surfaceMaterial: SurfaceMaterial | '';
+  elementMaterial: ElementMaterial | '';
   q: Record<QKey, string>;
 }
 
@@ -41,6 +43,7 @@ const draftOf = (l: LoadDto | null): Draft => ({
   connection: l?.connection ?? 'parallel',
   converterId: l?.converterId ? String(l.converterId) : '',
   surfaceMaterial: l?.surfaceMaterial ?? '',
+  elementMaterial: l?.elementMaterial ?? '',
   q: Object.fromEntries(QUANTITIES.map((f) => [f.key, l ? typedOr(l.entered, f.key, l[f.key]) : f.key === 'count' || f.key === 'duty' ? '1' : ''])) as Record<QKey, string>,
 });
 
@@ -152,6 +155,7 @@ function LoadForm({ teardownId, load, converters, gate, onDone }: { teardownId: 
       connection: draft.connection,
       converterId: draft.converterId ? Number(draft.converterId) : null,
       surfaceMaterial: draft.surfaceMaterial || null,
+      elementMaterial: draft.elementMaterial || null,
       ...(Object.fromEntries(QUANTITIES.map((f) => [f.key, draft.q[f.key].trim() === '' ? null : draft.q[f.key]])) as Record<QKey, string | null>),
       count: draft.q.count.trim() || '1',
       duty: draft.q.duty.trim() || '1',
@@ -234,6 +238,28 @@ function LoadForm({ teardownId, load, converters, gate, onDone }: { teardownId: 
             </Select>
           )}
         </Field>
+        {draft.kind === 'heater' && (
+          <>
+            <Field label="Element material" error={errors.elementMaterial} hint="Copper elements lose power as they warm (R rises about 0.39 %/K)">
+              {(p) => (
+                <Select {...p} value={draft.elementMaterial} onChange={(e) => setDraft({ ...draft, elementMaterial: e.target.value as ElementMaterial | '' })}>
+                  <option value="">Not recorded</option>
+                  <LabelledOptions list={ELEMENT_MATERIAL} />
+                </Select>
+              )}
+            </Field>
+            <QuantityField
+              name="heatedMassKg"
+              label="Heated mass"
+              unit="kg"
+              value={draft.q.heatedMassKg}
+              error={errors.heatedMassKg}
+              placeholder="40 g"
+              saved={load ? { value: load.heatedMassKg, text: typedOr(load.entered, 'heatedMassKg', load.heatedMassKg) } : undefined}
+              onChange={(v) => setDraft({ ...draft, q: { ...draft.q, heatedMassKg: v } })}
+            />
+          </>
+        )}
       </div>
       <div className="flex gap-2">
         <Button type="submit" variant="primary" busy={create.isPending || update.isPending}>

@@ -20,7 +20,17 @@ const QUANTITIES = [
   { key: 'series', label: 'Cells in series', unit: '', placeholder: '1', pick: (p: PackDto) => p.series },
   { key: 'parallel', label: 'Cells in parallel', unit: '', placeholder: '1', pick: (p: PackDto) => p.parallel },
   { key: 'massKg', label: 'Pack mass', unit: 'kg', placeholder: '46 g', pick: (p: PackDto) => p.massKg },
+  { key: 'internalResistanceOhms', label: 'Internal resistance (per cell, DC)', unit: 'Ω', placeholder: '50 mΩ', pick: (p: PackDto) => p.internalResistanceOhms },
 ] as const;
+
+/** The two readings of the DC method (IEC 61960-3): the cell voltage at a low and at a high current. */
+const READINGS = [
+  { key: 'lowAmps', label: 'Low current I₁', placeholder: '0.6 A' },
+  { key: 'lowVolts', label: 'Voltage at I₁', placeholder: '3.912 V' },
+  { key: 'highAmps', label: 'High current I₂', placeholder: '3 A' },
+  { key: 'highVolts', label: 'Voltage at I₂ (after 1 s)', placeholder: '3.792 V' },
+] as const;
+type RKey = (typeof READINGS)[number]['key'];
 type QKey = (typeof QUANTITIES)[number]['key'];
 
 interface Draft {
@@ -29,6 +39,7 @@ interface Draft {
   protection: boolean;
   joining: Joining | '';
   q: Record<QKey, string>;
+  readings: Record<RKey, string>;
 }
 
 const draftOf = (p: PackDto | null): Draft => ({
@@ -37,6 +48,7 @@ const draftOf = (p: PackDto | null): Draft => ({
   protection: p?.protection ?? false,
   joining: p?.joining ?? '',
   q: Object.fromEntries(QUANTITIES.map((f) => [f.key, p ? typedOr(p.entered, f.key, f.pick(p)) : f.key === 'series' || f.key === 'parallel' ? '1' : ''])) as Record<QKey, string>,
+  readings: Object.fromEntries(READINGS.map((r) => [r.key, p?.internalResistanceReadings ? String(p.internalResistanceReadings[r.key]) : ''])) as Record<RKey, string>,
 });
 
 /**
@@ -71,6 +83,8 @@ export function PackCard({ teardownId, pack, gate }: { teardownId: number; pack:
           series: draft.q.series || 1,
           parallel: draft.q.parallel || 1,
           massKg: draft.q.massKg || null,
+          internalResistanceOhms: draft.q.internalResistanceOhms || null,
+          internalResistanceReadings: READINGS.some((r) => draft.readings[r.key].trim() !== '') ? draft.readings : null,
         },
       });
       toast.success('Pack saved.');
@@ -149,6 +163,26 @@ export function PackCard({ teardownId, pack, gate }: { teardownId: number; pack:
               onChange={(v) => setDraft({ ...draft, q: { ...draft.q, [f.key]: v } })}
             />
           ))}
+          <fieldset className="rounded-md border border-graphite-150 p-3 sm:col-span-2 xl:col-span-3">
+            <legend className="px-1 text-sm font-medium text-graphite-800">Internal resistance from two readings (DC method)</legend>
+            <p className="mb-2 text-xs text-graphite-600">
+              Discharge at a low current for 10 s and read the cell voltage, step to a high current and read it again after 1 s: R = (U₁ − U₂) / (I₂ − I₁). Given, it replaces the value above.
+            </p>
+            <div className="grid gap-3 sm:grid-cols-2 xl:grid-cols-4">
+              {READINGS.map((r) => (
+                <QuantityField
+                  key={r.key}
+                  name={`internalResistanceReadings.${r.key}`}
+                  label={r.label}
+                  unit=""
+                  placeholder={r.placeholder}
+                  value={draft.readings[r.key]}
+                  error={errors[`internalResistanceReadings.${r.key}`]}
+                  onChange={(v) => setDraft({ ...draft, readings: { ...draft.readings, [r.key]: v } })}
+                />
+              ))}
+            </div>
+          </fieldset>
           <label className="flex items-center gap-2 self-end pb-2 text-sm font-medium text-graphite-800">
             <input type="checkbox" checked={draft.protection} onChange={(e) => setDraft({ ...draft, protection: e.target.checked })} className="size-4 accent-copper-600" />
             Protection circuit present
@@ -174,6 +208,14 @@ function PackSummary({ pack }: { pack: PackDto }) {
       f.label,
       <TypedQuantity key={f.key} typed={pack.entered[f.key]} si={formatStored(f.pick(pack), f.unit)} />,
     ]),
+    ...(pack.internalResistanceReadings
+      ? ([
+          [
+            'Internal resistance from',
+            `${pack.internalResistanceReadings.lowVolts} V at ${pack.internalResistanceReadings.lowAmps} A and ${pack.internalResistanceReadings.highVolts} V at ${pack.internalResistanceReadings.highAmps} A (DC method)`,
+          ],
+        ] as [string, ReactNode][])
+      : []),
     ['Protection circuit', pack.protection ? 'Present' : 'None found'],
     ['Joining', pack.joining ? JOINING.labels[pack.joining] : '—'],
   ];

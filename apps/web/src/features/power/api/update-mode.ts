@@ -1,0 +1,12 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { ModeDto, UpdateModeBody } from '@splitcase/contracts';
+import { api } from '@/lib/api-client';
+import { teardownScope } from '@/lib/query-keys';
+
+export const updateMode = ({ teardownId, id, body, headers }: { teardownId: number; id: number; body: UpdateModeBody; headers?: Record<string, string> }) =>
+  api.patch<{ mode: ModeDto }>(`/api/teardowns/${teardownId}/modes/${id}`, body, { headers }).then((r) => r.mode);
+
+export function useUpdateMode(teardownId: number) {
+  const qc = useQueryClient();
+  return useMutation({ mutationFn: updateMode, onSuccess: () => qc.invalidateQueries({ queryKey: teardownScope(teardownId) }) });
+}
