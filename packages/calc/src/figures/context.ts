@@ -69,6 +69,7 @@ export function readContext(input: TeardownFigureInput): FigureContext {
   if (claims.capacityWh !== undefined) requirePositive(claims.capacityWh, 'Claimed energy (Wh)');
   if (claims.runtimeH !== undefined) requirePositive(claims.runtimeH, 'Claimed runtime (h)');
   if (claims.outputWatts !== undefined) requirePositive(claims.outputWatts, 'Claimed output power (W)');
+  if (claims.powerWatts !== undefined) requirePositive(claims.powerWatts, 'Claimed power (W)');
   const md = input.measuredDischarge;
   if (md) {
     requireNonNegative(md.ampHours, 'Measured discharge capacity (Ah)');

@@ -148,6 +148,10 @@ function modeFigures(ctx: FigureContext, m: ModeResult): Figure[] {
         assumptions: [...effNotes, 'Average over the PWM period; pulses draw the full-duty current.'],
         modeId,
       }),
+    );
+  }
+  if (pack && m.packAmps !== undefined && active.length > 0) {
+    out.push(
       figure({
         key: 'mode.cRate',
         label: 'Discharge rate',

@@ -102,3 +102,23 @@ describe('smaller ones (issue 10 §2.14)', () => {
     expect(f.warnings.join(' ')).not.toMatch(/spares/);
   });
 });
+
+describe('claimed output and power (issue 10 §2.14)', () => {
+  const withUsb: TeardownFigureInput = {
+    ...pocketHeater,
+    loads: [heaterPair, { id: 'u', kind: 'usb-output', label: 'USB', currentAmps: 1, supplyVolts: 5, count: 1, connection: 'series', duty: 1 }],
+    claims: { outputWatts: 5, powerWatts: 10 },
+  };
+  it('the output claim is set against the USB output (5 W of 5 W), the power claim against the heat (8.88 of 10 W) [C]', () => {
+    const { figures } = teardownFigures(withUsb);
+    expect(num(figures, 'claim.outputWatts')).toBeCloseTo(100, 9);
+    expect(byKey(figures, 'claim.outputWatts').warnings).toEqual([]);
+    expect(num(figures, 'claim.powerWatts')).toBeCloseTo(88.81667, 4);
+  });
+  it('with modes, the highest mode counts', () => {
+    const { figures } = teardownFigures({ ...withUsb, modes: [{ id: 'low', name: 'Low', loads: [{ loadId: 'heater', duty: 0.5 }] }, { id: 'high', name: 'High', loads: [{ loadId: 'heater', duty: 1 }] }] });
+    expect(num(figures, 'claim.powerWatts')).toBeCloseTo(88.81667, 4);
+    expect(byKey(figures, 'claim.powerWatts').inputs.find((i) => i.key === 'computedWatts')!.label).toMatch(/mode "High"/);
+    expect(figures.find((f) => f.key === 'claim.outputWatts')).toBeUndefined(); // the USB output runs in no mode
+  });
+});

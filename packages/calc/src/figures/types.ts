@@ -101,7 +101,8 @@ export interface TeardownFigureInput {
   converters: TeardownConverter[];
   /** Categories of the BOM lines, e.g. 'cell', 'ic', 'passive', 'sensor', 'heater'. */
   partCategories: string[];
-  claims?: { capacityAh?: number; capacityWh?: number; runtimeH?: number; outputWatts?: number };
+  /** Label claims: outputWatts is the output (a USB port's); powerWatts the power claimed for the heat, light or motion. */
+  claims?: { capacityAh?: number; capacityWh?: number; runtimeH?: number; outputWatts?: number; powerWatts?: number };
   /** Pack capacity delivered in a bench run, at the pack terminals (Ah). */
   measuredCapacityAh?: number;
   /** Measured ÷ label below this is flagged; default 0.9. */

@@ -55,6 +55,7 @@ export async function figureInputs(em: EntityManager, teardowns: Teardown[]): Pr
     if (d.claimCapacityWh != null) claims.capacityWh = n(d.claimCapacityWh);
     if (d.claimRuntimeH != null) claims.runtimeH = n(d.claimRuntimeH);
     if (d.claimOutputWatts != null) claims.outputWatts = n(d.claimOutputWatts);
+    if (d.claimPowerW != null) claims.powerWatts = n(d.claimPowerW);
     const base: TeardownFigureInput = {
       pack: pack
         ? {

@@ -193,8 +193,8 @@ export function FiguresPanel({ teardownId, canEdit }: { teardownId: number; canE
                   ) : (
                     <ul>
                       {g.figures.map((f, i) => (
-                        // One caution after a run of figures that share it (surface rise, then touch margin).
-                        <FigureRow key={figureId(f)} f={f} showCaution={g.figures[i + 1]?.caution !== f.caution} />
+                        // One caution per group, after the last figure that carries it.
+                        <FigureRow key={figureId(f)} f={f} showCaution={f.caution !== null && !g.figures.slice(i + 1).some((x) => x.caution === f.caution)} />
                       ))}
                     </ul>
                   )}
