@@ -8,6 +8,7 @@ import type { FigureInput } from '../shared/explained';
 import { requireFraction, requireInteger, requireNonNegative, requirePositive } from '../shared/validate';
 import { normaliseCurrency, rateFor, type RateTable } from './currency';
 import { assertPriceBreaks, breakIndexAt, type PriceBreak } from './price-breaks';
+import { plain } from '../shared/text';
 
 export type PriceConfidence = 'high' | 'medium' | 'low';
 export type MountKind = 'smt' | 'tht' | 'manual';
@@ -174,7 +175,7 @@ export interface ImpliedMargin {
 
 /** Short number for formulas: six significant digits, no trailing zeros. */
 function fmt(x: number): string {
-  return String(Number(x.toPrecision(6)));
+  return plain(x, 6);
 }
 
 function requireText(value: unknown, name: string): string {

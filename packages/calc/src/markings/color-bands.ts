@@ -1,3 +1,5 @@
+import { plain } from '../shared/text';
+
 /** Colour-code digits [S: IEC 60062:2016 summary pages]. */
 export const COLOUR_DIGITS: Record<string, number> = {
   black: 0, brown: 1, red: 2, orange: 3, yellow: 4, green: 5, blue: 6, violet: 7, grey: 8, white: 9,
@@ -80,7 +82,7 @@ export interface ColourCodeReading extends ColourCodeResult {
   meaning: string[];
 }
 
-const plainNumber = (x: number) => String(Number(x.toPrecision(6)));
+const plainNumber = (x: number) => plain(x, 6);
 
 /** Reads a resistor colour code band by band (see decodeColorBands), for showing what each band means. */
 export function readColorBands(colors: string[]): ColourCodeReading {

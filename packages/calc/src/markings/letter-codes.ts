@@ -4,6 +4,7 @@
  * are from memory [M]. On capacitors under 10 pF, B, C and D mean ±0.1, ±0.25 and ±0.5 pF [S] and
  * F means ±1 pF [M].
  */
+import { plain } from '../shared/text';
 
 export type MarkedComponent = 'resistor' | 'capacitor';
 
@@ -54,7 +55,7 @@ export const SMALL_CAPACITOR_LETTERS_PF: Readonly<Record<string, LetterRow>> = {
   F: { plus: 1, minus: 1, source: '[M: IEC 60062] F ±1 pF under 10 pF' },
 };
 
-const num = (x: number) => String(Number(x.toPrecision(6)));
+const num = (x: number) => plain(x, 6);
 
 function percentText(plus: number, minus: number): string {
   return plus === minus ? `±${num(plus)} %` : `+${num(plus)} / −${num(minus)} %`;

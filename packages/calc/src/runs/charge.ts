@@ -7,6 +7,7 @@
 import { requireFraction, requirePositive } from '../shared/validate';
 import { integrateRange } from './integrate';
 import { at, checkSeries, optionalFinite, type Column, type RunSeries } from './series';
+import { plain } from '../shared/text';
 
 export interface ChargeRunOptions {
   /** Charge (CV) voltage, V. Default: estimated from the plateau at the top of the log. */
@@ -148,7 +149,7 @@ export function analyseCharge(series: RunSeries, opts: ChargeRunOptions = {}): C
   const terminationCurrentA = terminationFraction * (ratedAh ?? ccCurrent);
   if (terminationBasis === 'rated-capacity' && !(terminationCurrentA < ccCurrent)) {
     throw new RangeError(
-      `terminationFraction: ${terminationFraction} C of the rated ${ratedAh} Ah is ${Number(terminationCurrentA.toPrecision(3))} A, not below the constant current of ${Number(ccCurrent.toPrecision(3))} A; lower the termination or check the rated capacity.`,
+      `terminationFraction: ${terminationFraction} C of the rated ${ratedAh} Ah is ${plain(terminationCurrentA, 3)} A, not below the constant current of ${plain(ccCurrent, 3)} A; lower the termination or check the rated capacity.`,
     );
   }
   const searchFrom = transitionIndex ?? 0;

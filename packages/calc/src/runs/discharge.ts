@@ -6,6 +6,7 @@ import { requireFraction, requireNonNegative, requirePositive } from '../shared/
 import { integrateRange } from './integrate';
 import { findCurrentPulse, type CurrentPulse } from './pulse';
 import { at, checkSeries, columnLabel, LOAD_OFF_FRACTION, optionalFinite, type Column, type RunSeries } from './series';
+import { plain } from '../shared/text';
 
 /** Why a run's analysed part ends where it does. */
 export type CutoffReason = 'cutoff-voltage' | 'current-stopped' | 'end-of-run';
@@ -229,7 +230,7 @@ export function analysePowerBank(series: RunSeries, opts: { cellEnergyWh: number
   const warnings: string[] = [];
   if (efficiency > 1) {
     warnings.push(
-      `The output energy (${wattHours.toFixed(2)} Wh) exceeds the cell energy (${cellEnergyWh} Wh); check the cell capacity and voltage.`,
+      `The output energy (${plain(wattHours, 4)} Wh) exceeds the cell energy (${cellEnergyWh} Wh); check the cell capacity and voltage.`,
     );
   }
   return {

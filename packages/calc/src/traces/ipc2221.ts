@@ -1,5 +1,6 @@
 import { requireNonNegative, requirePositive } from '../shared/validate';
 import { COPPER_OZ_THICKNESS_M, METRES_PER_MIL } from './copper';
+import { plain } from '../shared/text';
 
 export type TraceLayer = 'external' | 'internal';
 
@@ -50,7 +51,7 @@ export function ipc2221RangeWarnings(p: { currentA?: number; widthM?: number; te
     out.push(`Current ${p.currentA} A is above the 35 A the IPC-2221 fit is quoted for.`);
   }
   if (p.widthM !== undefined && p.widthM / METRES_PER_MIL > 400) {
-    out.push(`Width ${(p.widthM / METRES_PER_MIL).toFixed(0)} mil is above the 400 mil the IPC-2221 fit is quoted for.`);
+    out.push(`Width ${plain(p.widthM / METRES_PER_MIL, 3)} mil is above the 400 mil the IPC-2221 fit is quoted for.`);
   }
   if (p.temperatureRiseC !== undefined && (p.temperatureRiseC < 10 || p.temperatureRiseC > 100)) {
     out.push(`Temperature rise ${p.temperatureRiseC} °C is outside the 10–100 °C the IPC-2221 fit is quoted for.`);
