@@ -179,6 +179,26 @@ describe('upload refusals', () => {
     expect((await engineer.get(`/api/teardowns/${draftId}/photos`).expect(200)).body.photos.length).toBe(photosBefore);
   });
 
+  it('keeps nothing when the files cannot be moved into place after the row is committed', async () => {
+    const before = storageFolders(t).sort();
+    const photosBefore = (await engineer.get(`/api/teardowns/${draftId}/photos`).expect(200)).body.photos.length;
+    const [audit] = (await t.orm.em.fork().getConnection().execute("select count(*) as n from audit_entries where action = 'photo.uploaded'")) as { n: number }[];
+    const spy = vi.spyOn(fileOps, 'rename').mockRejectedValue(Object.assign(new Error('permission denied (simulated)'), { code: 'EACCES' }));
+    const log = vi.spyOn(t.deps, 'log').mockImplementation(() => {});
+    try {
+      const res = await uploadAs(engineer, draftId, await jpegFixture(), 'unmovable.jpg');
+      expect(res.status).toBe(500);
+    } finally {
+      spy.mockRestore();
+      log.mockRestore();
+    }
+    expect(storageFolders(t).sort()).toEqual(before);
+    expect(readdirSync(join(photoDir(t), '.incoming'))).toEqual([]);
+    expect((await engineer.get(`/api/teardowns/${draftId}/photos`).expect(200)).body.photos.length).toBe(photosBefore);
+    const [auditAfter] = (await t.orm.em.fork().getConnection().execute("select count(*) as n from audit_entries where action = 'photo.uploaded'")) as { n: number }[];
+    expect(auditAfter!.n).toBe(audit!.n);
+  });
+
   it('refuses a file over the configured size limit with 413', async () => {
     const small = await makeTestApp({ seed: 'demo', env: { uploadMaxBytes: 20_000 } });
     try {
