@@ -6,6 +6,7 @@ import type { AppDeps } from './http/deps';
 import { startCaptureServer, type CaptureServer } from './modules/mail/capture-server';
 import { sweepUploadLeftovers } from './modules/leftovers';
 import { createMailer } from './modules/mail/mailer';
+import { clearRunning, markRunning } from './modules/system/server-lock';
 import { seedIfEmpty } from './seed/index';
 
 export interface Running {
@@ -39,6 +40,8 @@ export async function startServer(env: Env, options: CreateAppOptions & { seed?:
   });
   const address = server.address();
   const port = typeof address === 'object' && address ? address.port : env.port;
+  // `npm run restore` refuses while this file names a live process.
+  markRunning(env, port);
   return {
     url: `http://localhost:${port}`,
     port,
@@ -52,6 +55,7 @@ export async function startServer(env: Env, options: CreateAppOptions & { seed?:
       mailer.close();
       await capture?.close();
       await orm.close();
+      clearRunning(env);
     },
   };
 }
