@@ -3,12 +3,17 @@
 // and drives it with autocannon: 50 connections (each keeps one session) cycling through reads
 // (home, a teardown, its figures and cost, search, a run's chart series, lineups) and writes (a
 // comment; a reading added and removed again on a draft) for 60 s, or 10 minutes with --soak.
-// Reports errors, latency p50/p95/p99, and the server's resident memory (RSS, from /proc, Linux)
-// sampled every second. Passes when there are no errors, no non-2xx answers, and no memory growth:
-// a least-squares line through the samples after the first 20 % (warm-up) rises by less than 5 % of
-// their mean over the window. Exit code 1 otherwise. Not part of `npm test`.
-//   --soak            10 minutes instead of 60 s
+// Reports errors, latency p50/p95/p99, and the server's memory over time: resident memory (RSS, from
+// /proc, Linux) every second, and the V8 heap in use right after a full garbage collection every
+// 10 s (scripts/load-server.ts answers over IPC). Passes when there are no errors, no non-2xx
+// answers, and no memory growth trend: a least-squares line through the heap-after-GC samples
+// rises by less than 5 % of their mean over the measured run (retained memory, which is what a
+// leak grows; RSS saws with collection and is reported only). The same load runs first for a
+// warm-up (60 s, not measured) so caches and the heap reach their working size. Exit code 1
+// otherwise. Not part of `npm test`.
+//   --soak            10 minutes measured instead of 60 s
 //   --duration <s>    any other length
+//   --warm-up <s>     instead of 60 (0: none)
 //   --connections <n> instead of 50
 import { spawn } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
@@ -24,14 +29,14 @@ const option = (name: string) => {
 };
 const DURATION_S = Number(option('--duration') ?? (args.includes('--soak') ? 600 : 60));
 const CONNECTIONS = Number(option('--connections') ?? 50);
-const WARM_UP = 0.2;
+const WARM_UP_S = Number(option('--warm-up') ?? 60);
 const GROWTH_LIMIT = 0.05;
 const root = join(dirname(fileURLToPath(import.meta.url)), '..');
 const PASSWORD = 'load-test-password';
 
 // ---- the server, in a child process on loopback -------------------------------------------------
 const dataDir = mkdtempSync(join(tmpdir(), 'splitcase-load-'));
-const server = spawn(process.execPath, ['--import', 'tsx', join(root, 'apps/api/src/main.ts')], {
+const server = spawn(process.execPath, ['--expose-gc', '--import', 'tsx', join(root, 'scripts/load-server.ts')], {
   cwd: root,
   env: {
     ...process.env,
@@ -44,9 +49,10 @@ const server = spawn(process.execPath, ['--import', 'tsx', join(root, 'apps/api/
     SPLITCASE_LOGIN_LIMIT_IP: '100000',
     SPLITCASE_LOGIN_LIMIT_ACCOUNT: '100000',
   },
-  stdio: ['ignore', 'pipe', 'pipe'],
+  stdio: ['ignore', 'pipe', 'pipe', 'ipc'],
 });
 let serverLog = '';
+server.stdout!.on('data', (c: Buffer) => (serverLog += c.toString('utf8')));
 server.stderr!.on('data', (c: Buffer) => (serverLog += c.toString('utf8')));
 const stopServer = () => {
   if (server.exitCode === null) server.kill('SIGTERM');
@@ -56,15 +62,26 @@ process.on('exit', () => {
   rmSync(dataDir, { recursive: true, force: true });
 });
 
+interface Memory {
+  heapUsed: number;
+  rss: number;
+  external: number;
+  collected: boolean;
+}
+const memoryWaiters: ((m: Memory) => void)[] = [];
 const base = await new Promise<string>((resolve, reject) => {
-  let out = '';
-  server.stdout!.on('data', (c: Buffer) => {
-    out += c.toString('utf8');
-    const m = /Splitcase API on http:\/\/localhost:(\d+)/.exec(out);
-    if (m) resolve(`http://127.0.0.1:${m[1]}`);
+  server.on('message', (m: { port?: number; memory?: Memory }) => {
+    if (m.port) resolve(`http://127.0.0.1:${m.port}`);
+    if (m.memory) memoryWaiters.shift()?.(m.memory);
   });
   server.once('exit', (code) => reject(new Error(`The server exited (${code}) before listening:\n${serverLog}`)));
 });
+/** The server's memory right after a full garbage collection. */
+const memoryAfterGc = () =>
+  new Promise<Memory>((resolve) => {
+    memoryWaiters.push(resolve);
+    server.send('memory');
+  });
 console.log(`Server (pid ${server.pid}) on ${base}, demo workspace seeded in ${dataDir}`);
 
 // ---- sessions ------------------------------------------------------------------------------------
@@ -174,20 +191,41 @@ const rssMb = () => {
   const m = /VmRSS:\s+(\d+) kB/.exec(readFileSync(`/proc/${server.pid}/status`, 'utf8'));
   return m ? Number(m[1]) / 1024 : Number.NaN;
 };
+const load = (seconds: number, onResponse?: (status: number, ms: number) => void) =>
+  new Promise<autocannon.Result>((resolve, reject) => {
+    const instance = autocannon({ url: base, connections: CONNECTIONS, duration: seconds, requests: requests as never, timeout: 10 }, (err, res) => (err ? reject(err) : resolve(res)));
+    if (onResponse) instance.on('response', (_client, statusCode, _bytes, responseTime) => onResponse(statusCode, responseTime));
+  });
+const warmUp = new Map<number, number>();
+if (WARM_UP_S > 0) {
+  console.log(`Warm-up: the same load for ${WARM_UP_S} s, not measured`);
+  const w = await load(WARM_UP_S, (status) => warmUp.set(status, (warmUp.get(status) ?? 0) + 1));
+  console.log(`  ${w.requests.total} requests, ${w.errors} errors, answers ${JSON.stringify(Object.fromEntries(warmUp))}`);
+}
+
+const HEAP_EVERY_S = 10;
 const samples: { t: number; mb: number }[] = [];
+const heap: { t: number; mb: number }[] = [];
 const started = Date.now();
-const sampler = setInterval(() => samples.push({ t: (Date.now() - started) / 1000, mb: rssMb() }), 1000);
+const since = () => (Date.now() - started) / 1000;
+const takeHeap = async () => {
+  const m = await memoryAfterGc();
+  heap.push({ t: since(), mb: m.heapUsed / 1024 / 1024 });
+};
+await takeHeap();
+const sampler = setInterval(() => samples.push({ t: since(), mb: rssMb() }), 1000);
+const heapSampler = setInterval(() => void takeHeap(), HEAP_EVERY_S * 1000);
 
 const latencies: number[] = [];
 const byStatus = new Map<number, number>();
-const result = await new Promise<autocannon.Result>((resolve, reject) => {
-  const instance = autocannon({ url: base, connections: CONNECTIONS, duration: DURATION_S, requests: requests as never, timeout: 10 }, (err, res) => (err ? reject(err) : resolve(res)));
-  instance.on('response', (_client, statusCode, _bytes, responseTime) => {
-    latencies.push(responseTime);
-    byStatus.set(statusCode, (byStatus.get(statusCode) ?? 0) + 1);
-  });
+console.log(`Measured: ${DURATION_S} s`);
+const result = await load(DURATION_S, (status, ms) => {
+  latencies.push(ms);
+  byStatus.set(status, (byStatus.get(status) ?? 0) + 1);
 });
 clearInterval(sampler);
+clearInterval(heapSampler);
+await takeHeap();
 
 // ---- report ------------------------------------------------------------------------------------------
 latencies.sort((a, b) => a - b);
@@ -207,26 +245,37 @@ console.table({
 });
 console.log('Answers by status:', Object.fromEntries([...byStatus].sort()));
 
-const steady = samples.filter((s) => s.t >= DURATION_S * WARM_UP);
-const n = steady.length;
-const meanT = steady.reduce((a, s) => a + s.t, 0) / n;
-const meanMb = steady.reduce((a, s) => a + s.mb, 0) / n;
-const slope = steady.reduce((a, s) => a + (s.t - meanT) * (s.mb - meanMb), 0) / steady.reduce((a, s) => a + (s.t - meanT) ** 2, 0);
-const window = steady.length ? steady[n - 1]!.t - steady[0]!.t : 0;
-const rise = slope * window;
-console.log('\nServer memory (RSS, MB) over time');
+/** Least-squares slope (MB per second) and mean of a set of samples. */
+function fit(points: { t: number; mb: number }[]) {
+  const meanT = points.reduce((a, p) => a + p.t, 0) / points.length;
+  const meanMb = points.reduce((a, p) => a + p.mb, 0) / points.length;
+  const slope = points.reduce((a, p) => a + (p.t - meanT) * (p.mb - meanMb), 0) / points.reduce((a, p) => a + (p.t - meanT) ** 2, 0);
+  return { slope, meanMb };
+}
+const span = heap.length ? heap[heap.length - 1]!.t - heap[0]!.t : 0;
+const trend = fit(heap);
+const rise = trend.slope * span;
+const rss = fit(samples);
+console.log('\nServer memory over time (RSS every second; V8 heap in use right after a full collection every 10 s)');
 const step = Math.max(1, Math.round(samples.length / 12));
-console.table(samples.filter((_, k) => k % step === 0 || k === samples.length - 1).map((s) => ({ 't s': Math.round(s.t), 'RSS MB': s.mb.toFixed(1) })));
+const nearestHeap = (t: number) => heap.reduce((best, h) => (Math.abs(h.t - t) < Math.abs(best.t - t) ? h : best));
+console.table(
+  samples
+    .filter((_, k) => k % step === 0 || k === samples.length - 1)
+    .map((s) => ({ 't s': Math.round(s.t), 'RSS MB': s.mb.toFixed(1), 'heap after GC MB': nearestHeap(s.t).mb.toFixed(1), 'heap at s': Math.round(nearestHeap(s.t).t) })),
+);
 console.log(
-  `Trend after the ${Math.round(WARM_UP * 100)} % warm-up: ${(slope * 60).toFixed(2)} MB/min over ${window.toFixed(0)} s (${n} samples) = ${rise.toFixed(1)} MB, ` +
-    `${((rise / meanMb) * 100).toFixed(1)} % of the mean ${meanMb.toFixed(1)} MB (limit ${GROWTH_LIMIT * 100} %)`,
+  `Heap after GC: ${(trend.slope * 60).toFixed(2)} MB/min over ${span.toFixed(0)} s (${heap.length} samples, after ${WARM_UP_S} s of warm-up) = ${rise.toFixed(1)} MB, ` +
+    `${((rise / trend.meanMb) * 100).toFixed(1)} % of the mean ${trend.meanMb.toFixed(1)} MB (limit ${GROWTH_LIMIT * 100} %). RSS: ${(rss.slope * 60).toFixed(2)} MB/min around ${rss.meanMb.toFixed(0)} MB.`,
 );
 
 const failures: string[] = [];
+const warmNon2xx = [...warmUp].filter(([code]) => code < 200 || code >= 300).reduce((a, [, k]) => a + k, 0);
+if (warmNon2xx) failures.push(`${warmNon2xx} answers of the warm-up were not 2xx`);
 if (result.errors || result.timeouts) failures.push(`${result.errors} connection errors (${result.timeouts} timeouts)`);
 if (non2xx) failures.push(`${non2xx} answers were not 2xx`);
-if (!(n >= 5)) failures.push('too few memory samples for a trend');
-else if (rise > GROWTH_LIMIT * meanMb) failures.push(`memory grew ${rise.toFixed(1)} MB over the window (more than ${GROWTH_LIMIT * 100} % of ${meanMb.toFixed(1)} MB)`);
+if (heap.length < 4) failures.push('too few memory samples for a trend');
+else if (rise > GROWTH_LIMIT * trend.meanMb) failures.push(`the heap after GC rose ${rise.toFixed(1)} MB over ${span.toFixed(0)} s (more than ${GROWTH_LIMIT * 100} % of ${trend.meanMb.toFixed(1)} MB)`);
 stopServer();
 if (failures.length) {
   for (const f of failures) console.log(`✗ ${f}`);
