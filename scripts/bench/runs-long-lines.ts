@@ -1,10 +1,13 @@
 // Bench-log ingest against line length: the same bytes as a normal log (the reference, measured in
 // the same run), as one line with no line break, and as wide lines just under the line-length cap.
 // Each case runs in its own child process, so its peak memory (maxRSS) is its own. Reported as
-// ratios: a one-line file must cost no more than the reference of the same size (it is refused at
-// the first over-long line), and every case must grow linearly with the file (time at 2× the bytes
-// ≤ 3× the time at 1×; a quadratic parse gives about 4×). Exit code 1 when a target is missed.
+// ratios of CPU time (user + system, which other work on a shared machine barely moves; wall time is
+// shown too), the fastest of BENCH_REPEAT interleaved runs: a one-line file must cost no more than
+// the reference of the same size (it is refused at the first over-long line), and every case must
+// grow linearly with the file (2× the bytes ≤ 3× the CPU time; a quadratic parse gives about 4×).
+// Exit code 1 when a target is missed.
 //   BENCH_LONG_LINE_MB  the smaller size in MB (default 40; the larger is twice that)
+//   BENCH_REPEAT        runs of each case (default 3)
 import { spawnSync } from 'node:child_process';
 import { once } from 'node:events';
 import { createWriteStream, mkdtempSync, renameSync, rmSync, statSync } from 'node:fs';
@@ -78,6 +81,7 @@ async function child(shape: Shape, file: string) {
     global.gc?.();
     const rssBefore = process.memoryUsage().rss;
     const t0 = performance.now();
+    const cpu0 = process.cpuUsage();
     let outcome: string;
     try {
       const run = await ingestRun(em, env, { teardown, user: null, incomingPath: path, originalName: `bench-${shape}.csv`, fileBytes: size, mapping });
@@ -86,9 +90,11 @@ async function child(shape: Shape, file: string) {
       outcome = `refused: ${(err as Error).message.slice(0, 70)}`;
     }
     const ms = performance.now() - t0;
+    const cpu = process.cpuUsage(cpu0);
+    const cpuMs = (cpu.user + cpu.system) / 1000;
     const peak = process.resourceUsage().maxRSS * 1024;
     await orm.close();
-    process.stdout.write(`RESULT ${JSON.stringify({ shape, size, ms, rssBefore, peak, outcome })}\n`);
+    process.stdout.write(`RESULT ${JSON.stringify({ shape, size, ms, cpuMs, rssBefore, peak, outcome })}\n`);
   } finally {
     rmSync(dataDir, { recursive: true, force: true });
   }
@@ -98,6 +104,8 @@ interface Result {
   shape: Shape;
   size: number;
   ms: number;
+  /** CPU time of the ingest (user + system): what the ratios use, as other work on the machine barely moves it. */
+  cpuMs: number;
   rssBefore: number;
   peak: number;
   outcome: string;
@@ -118,8 +126,18 @@ async function runCase(shape: Shape, bytes: number): Promise<Result> {
 
 async function parent() {
   const base = Math.round(Number(process.env.BENCH_LONG_LINE_MB ?? 40) * 1024 * 1024);
+  // Each case BENCH_REPEAT times (default 3), interleaved; the fastest run of each counts.
+  const repeat = Number(process.env.BENCH_REPEAT ?? 3);
+  const all: Result[] = [];
+  for (let k = 0; k < repeat; k++) for (const factor of [1, 2]) for (const shape of SHAPES) all.push(await runCase(shape, base * factor));
   const results: Result[] = [];
-  for (const factor of [1, 2]) for (const shape of SHAPES) results.push(await runCase(shape, base * factor));
+  for (const factor of [1, 2]) {
+    for (const shape of SHAPES) {
+      const runs = all.filter((r) => r.shape === shape && Math.abs(r.size / base - factor) < 0.2);
+      const best = runs.reduce((a, b) => (b.cpuMs < a.cpuMs ? b : a));
+      results.push({ ...best, ms: Math.min(...runs.map((r) => r.ms)), peak: Math.min(...runs.map((r) => r.peak - r.rssBefore)) + best.rssBefore });
+    }
+  }
   const find = (shape: Shape, factor: number) => results.find((r) => r.shape === shape && Math.abs(r.size / base - factor) < 0.2)!;
   const extra = (r: Result) => Math.max(0, r.peak - r.rssBefore);
   console.table(
@@ -127,7 +145,8 @@ async function parent() {
       log: r.shape,
       file: mb(r.size),
       'ingest s': (r.ms / 1000).toFixed(2),
-      'MB/s': (r.size / 1024 / 1024 / (r.ms / 1000)).toFixed(1),
+      'CPU s': (r.cpuMs / 1000).toFixed(2),
+      'MB/CPU s': (r.size / 1024 / 1024 / (r.cpuMs / 1000)).toFixed(1),
       'peak − before': mb(extra(r)),
       outcome: r.outcome,
     })),
@@ -138,23 +157,23 @@ async function parent() {
     const ref = find('lines', factor);
     for (const shape of ['one-line', 'wide'] as const) {
       const r = find(shape, factor);
-      const timeRatio = r.ms / ref.ms;
+      const timeRatio = r.cpuMs / ref.cpuMs;
       const memRatio = extra(r) / Math.max(extra(ref), 1);
-      rows.push({ check: `${shape} ÷ lines at ${mb(ref.size)}`, time: timeRatio.toFixed(3), 'peak memory': memRatio.toFixed(3) });
-      if (shape === 'one-line' && timeRatio > 1) failures.push(`one-line at ${mb(r.size)} took ${timeRatio.toFixed(2)}× the reference (target ≤ 1)`);
+      rows.push({ check: `${shape} ÷ lines at ${mb(ref.size)}`, 'CPU time': timeRatio.toFixed(3), 'peak memory': memRatio.toFixed(3) });
+      if (shape === 'one-line' && timeRatio > 1) failures.push(`one-line at ${mb(r.size)} took ${timeRatio.toFixed(2)}× the CPU time of the reference (target ≤ 1)`);
       if (shape === 'one-line' && extra(r) > extra(ref) + 16 * 1024 * 1024) failures.push(`one-line at ${mb(r.size)} used ${mb(extra(r))} over its start (reference ${mb(extra(ref))})`);
     }
   }
   for (const shape of SHAPES) {
     const small = find(shape, 1);
     const large = find(shape, 2);
-    const growth = large.ms / small.ms;
-    rows.push({ check: `${shape}: 2× the bytes`, time: growth.toFixed(3), 'peak memory': (extra(large) / Math.max(extra(small), 1)).toFixed(3) });
+    const growth = large.cpuMs / small.cpuMs;
+    rows.push({ check: `${shape}: 2× the bytes`, 'CPU time': growth.toFixed(3), 'peak memory': (extra(large) / Math.max(extra(small), 1)).toFixed(3) });
     // A refused one-line file reads the same 64 KiB at every size: its time does not grow at all.
-    if (shape !== 'one-line' && growth > 3) failures.push(`${shape}: twice the bytes took ${growth.toFixed(2)}× the time (target ≤ 3, linear ≈ 2)`);
+    if (shape !== 'one-line' && growth > 3) failures.push(`${shape}: twice the bytes took ${growth.toFixed(2)}× the CPU time (target ≤ 3, linear ≈ 2)`);
   }
   console.table(rows);
-  console.log('Ratios of the same run: time and peak memory above the process start (Node, the ORM and the app modules loaded). Linear ≈ 2 at twice the bytes; quadratic ≈ 4.');
+  console.log(`Ratios of the same run, fastest of ${repeat}: CPU time of the ingest, and peak memory above the process start (Node, the ORM and the app modules loaded). Linear ≈ 2 at twice the bytes; quadratic ≈ 4.`);
   if (failures.length) {
     for (const f of failures) console.log(`✗ ${f}`);
     process.exitCode = 1;
