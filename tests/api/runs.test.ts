@@ -2,9 +2,10 @@ import { createWriteStream, existsSync, mkdtempSync, readdirSync, rmSync } from 
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { once } from 'node:events';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { CONFIRM_UNPUBLISH_HEADER } from '@splitcase/contracts';
 import { benchRunFigureInputs } from '../../apps/api/src/modules/runs/figures';
+import { runFileOps } from '../../apps/api/src/modules/runs/storage';
 import { TeardownSchema } from '../../apps/api/src/modules/teardowns/teardown.entity';
 import { makeTestApp, type Agent, type TestApp } from '../support/test-app';
 
@@ -524,6 +525,24 @@ describe('series, reads and changes', () => {
     expect(again.comparison.warnBelowPercent).toBe(75);
     expect(again.comparison.label.warning).toBe(false);
     await admin.patch('/api/settings', { capacityWarnFraction: 0.9 }).expect(200);
+  });
+
+  it('keeps nothing when the files cannot be moved into place after the row is committed', async () => {
+    const a = await t.as('engineer');
+    const before = await stored();
+    const real = runFileOps.rename;
+    const spy = vi.spyOn(runFileOps, 'rename').mockImplementation((from, to) => {
+      if (!String(to).includes('.incoming')) throw Object.assign(new Error('permission denied (simulated)'), { code: 'EACCES' });
+      real(from, to);
+    });
+    const log = vi.spyOn(t.deps, 'log').mockImplementation(() => {});
+    try {
+      expect((await upload(a, ids[DRAFT]!, constantDischarge(), dischargeMapping())).status).toBe(500);
+    } finally {
+      spy.mockRestore();
+      log.mockRestore();
+    }
+    expect(await stored()).toEqual(before);
   });
 
   it('deletes the run and its files', async () => {

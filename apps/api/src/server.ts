@@ -4,7 +4,9 @@ import { migrate, openOrm, type Orm } from './db/orm';
 import { createApp, type CreateAppOptions } from './http/create-app';
 import type { AppDeps } from './http/deps';
 import { startCaptureServer, type CaptureServer } from './modules/mail/capture-server';
+import { sweepUploadLeftovers } from './modules/leftovers';
 import { createMailer } from './modules/mail/mailer';
+import { clearRunning, markRunning } from './modules/system/server-lock';
 import { seedIfEmpty } from './seed/index';
 
 export interface Running {
@@ -22,6 +24,11 @@ export async function startServer(env: Env, options: CreateAppOptions & { seed?:
   const log = options.log ?? ((...a: unknown[]) => console.error(...a));
   const orm = await openOrm(env.dbPath);
   await migrate(orm);
+  // Nothing is in flight yet: finish or undo uploads a crash interrupted.
+  const swept = await sweepUploadLeftovers(orm.em.fork(), env.uploadsDir);
+  for (const [what, r] of Object.entries(swept)) {
+    if (r.removed.length || r.restored.length) log(`Upload leftovers (${what}): removed ${r.removed.length}, moved into place ${r.restored.length}`, { removed: r.removed, restored: r.restored });
+  }
   const seeded = options.seed ? await seedIfEmpty(orm, env) : false;
   const capture = env.smtpUrl ? null : await startCaptureServer(orm, env.captureSmtpPort, log);
   const mailer = createMailer({ smtpUrl: env.smtpUrl, capturePort: capture?.port, from: env.mailFrom });
@@ -33,6 +40,8 @@ export async function startServer(env: Env, options: CreateAppOptions & { seed?:
   });
   const address = server.address();
   const port = typeof address === 'object' && address ? address.port : env.port;
+  // `npm run restore` refuses while this file names a live process.
+  markRunning(env, port);
   return {
     url: `http://localhost:${port}`,
     port,
@@ -46,6 +55,7 @@ export async function startServer(env: Env, options: CreateAppOptions & { seed?:
       mailer.close();
       await capture?.close();
       await orm.close();
+      clearRunning(env);
     },
   };
 }

@@ -64,3 +64,18 @@ export const auditQuery = z.object({
   before: z.coerce.number().int().positive().optional(),
 });
 export const auditResponse = z.object({ entries: z.array(auditEntrySchema) });
+
+/** The newest complete backup (`npm run backup`) in the server's backups folder, or null. */
+export const backupStatusResponse = z.object({
+  lastBackup: z
+    .object({
+      /** When the snapshot was taken (ISO 8601). */
+      at: z.string(),
+      /** The dated folder name, as `npm run restore` takes it. */
+      folder: z.string(),
+      bytes: z.number().int(),
+      files: z.number().int(),
+    })
+    .nullable(),
+});
+export type BackupStatus = z.infer<typeof backupStatusResponse>;

@@ -10,6 +10,7 @@ const schema = z.object({
   HOST: z.string().default('0.0.0.0'),
   SPLITCASE_DATA_DIR: z.string().default('./data'),
   SPLITCASE_UPLOADS_DIR: z.string().default('./uploads'),
+  SPLITCASE_BACKUPS_DIR: z.string().default('./backups'),
   SPLITCASE_DEMO_PASSWORD: z.string().min(10, 'SPLITCASE_DEMO_PASSWORD must be at least 10 characters').default('splitcase-demo'),
   SPLITCASE_PUBLIC_URL: z.string().optional(),
   SPLITCASE_SESSION_SECRET: z.string().optional(),
@@ -29,6 +30,8 @@ export interface Env {
   host: string;
   dataDir: string;
   uploadsDir: string;
+  /** Where `npm run backup` writes its dated folders (and the admin page looks for the latest). */
+  backupsDir: string;
   dbPath: string;
   demoPassword: string;
   publicUrl: string;
@@ -58,6 +61,7 @@ export function readEnv(source: NodeJS.ProcessEnv = process.env): Env {
     host: e.HOST,
     dataDir,
     uploadsDir: resolve(e.SPLITCASE_UPLOADS_DIR),
+    backupsDir: resolve(e.SPLITCASE_BACKUPS_DIR),
     dbPath: resolve(dataDir, 'splitcase.sqlite'),
     demoPassword: e.SPLITCASE_DEMO_PASSWORD,
     publicUrl: (e.SPLITCASE_PUBLIC_URL ?? `http://localhost:${e.PORT}`).replace(/\/$/, ''),
@@ -79,6 +83,7 @@ export function testEnv(overrides: Partial<Env> & { dataDir: string }): Env {
   return {
     ...base,
     uploadsDir: resolve(overrides.dataDir, 'uploads'),
+    backupsDir: resolve(overrides.dataDir, 'backups'),
     dbPath: resolve(overrides.dataDir, 'splitcase.sqlite'),
     ...overrides,
   };

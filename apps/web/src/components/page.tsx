@@ -4,7 +4,7 @@ export function PageHeader({ title, subtitle, actions, eyebrow }: { title: React
   return (
     <header className="mb-6 flex flex-wrap items-end justify-between gap-4">
       <div className="min-w-0">
-        {eyebrow && <div className="mb-1 text-xs font-medium uppercase tracking-wider text-graphite-500">{eyebrow}</div>}
+        {eyebrow && <div className="mb-1 text-xs font-medium uppercase tracking-wider text-graphite-600">{eyebrow}</div>}
         <h1 className="text-2xl font-semibold tracking-tight text-graphite-950">{title}</h1>
         {subtitle && <p className="mt-1 max-w-3xl text-sm text-graphite-600">{subtitle}</p>}
       </div>

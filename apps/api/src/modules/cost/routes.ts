@@ -17,6 +17,7 @@ import {
   type PartPriceDto,
 } from '@splitcase/contracts';
 import { notFound, validationError } from '../../http/errors';
+import { uploadOne } from '../../http/multipart';
 import { route, type AuthUser, type RouteDef } from '../../http/route';
 import { recordAudit, type Changes } from '../audit/audit.service';
 import { PartSchema, type Part } from '../parts/part.entity';
@@ -31,7 +32,7 @@ import { RateTableSchema } from './rate-table.entity';
 import { addRateTable, currentRateTable, hasRate, listRateTables, missingRateWarnings, toRateTableDto } from './rates.service';
 
 const today = () => new Date().toISOString().slice(0, 10);
-const upload = (maxBytes: number) => multer({ storage: multer.memoryStorage(), limits: { fileSize: maxBytes, files: 1, fields: 10 } }).single('file');
+const upload = (maxBytes: number) => uploadOne({ field: 'file', maxBytes, storage: multer.memoryStorage(), fields: 4, fieldSize: 4000 });
 const TAG = 'Cost';
 
 type PriceFields = Pick<PartPriceDto, 'currency' | 'breaks' | 'source' | 'confidence' | 'priceDate' | 'note'>;

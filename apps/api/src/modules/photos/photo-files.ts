@@ -1,8 +1,9 @@
 // Photo files: sniff the real type, decode with limits, auto-rotate, strip every piece of metadata,
-// and keep three files per photo under <uploads>/<storageKey>/ — the re-encoded original, a display
-// image and a thumbnail. Nothing is kept half-written.
+// and keep three files per photo under <uploads>/photos/<storageKey>/ — the re-encoded original, a
+// display image and a thumbnail. The files are written to photos/.incoming/<storageKey>/ first and
+// moved into place after the row is committed; the start-up sweep clears what a crash leaves.
 import { randomBytes } from 'node:crypto';
-import { mkdir, rm, writeFile } from 'node:fs/promises';
+import { mkdir, rename, rm, writeFile } from 'node:fs/promises';
 import { join, resolve, sep } from 'node:path';
 import { fileTypeFromBuffer } from 'file-type';
 import sharp, { type Metadata } from 'sharp';
@@ -116,7 +117,7 @@ export async function processImage(buffer: Buffer, type: Accepted): Promise<Proc
 }
 
 /** File operations, grouped so a test can make one of them fail. */
-export const fileOps = { mkdir, writeFile, rm };
+export const fileOps = { mkdir, writeFile, rm, rename };
 
 /** A fresh storage key: 32 hex characters from the OS random source, never derived from the client's name. */
 export const newStorageKey = () => randomBytes(16).toString('hex');
@@ -124,9 +125,14 @@ export const newStorageKey = () => randomBytes(16).toString('hex');
 /** Photos live in uploads/photos/<key>/ (bench runs keep their own folder beside it). */
 export const photosRoot = (uploadsDir: string) => resolve(uploadsDir, 'photos');
 
-function folderOf(uploadsDir: string, storageKey: string): string {
-  if (!/^[a-f0-9]{32}$/.test(storageKey)) throw new Error(`Bad storage key ${storageKey}`);
-  const root = photosRoot(uploadsDir);
+/** Where a photo's files are written before its row is committed. */
+export const photosStaging = (uploadsDir: string) => resolve(photosRoot(uploadsDir), '.incoming');
+
+export const STORAGE_KEY = /^[a-f0-9]{32}$/;
+
+function folderOf(uploadsDir: string, storageKey: string, staged = false): string {
+  if (!STORAGE_KEY.test(storageKey)) throw new Error(`Bad storage key ${storageKey}`);
+  const root = staged ? photosStaging(uploadsDir) : photosRoot(uploadsDir);
   const dir = resolve(root, storageKey);
   if (!dir.startsWith(root + sep)) throw new Error('Storage folder outside uploads');
   return dir;
@@ -135,19 +141,28 @@ function folderOf(uploadsDir: string, storageKey: string): string {
 export const variantPath = (uploadsDir: string, storageKey: string, variant: PhotoVariant, originalExt: string) =>
   join(folderOf(uploadsDir, storageKey), VARIANT_FILES[variant](originalExt));
 
-/** Write the three files into a new folder; if any write fails, remove the folder and rethrow. */
+/** Write the three files into a new staging folder; if any write fails, remove the folder and rethrow. */
 export async function writePhotoFiles(uploadsDir: string, storageKey: string, p: ProcessedPhoto): Promise<void> {
-  const dir = folderOf(uploadsDir, storageKey);
-  await fileOps.mkdir(photosRoot(uploadsDir), { recursive: true });
+  const dir = folderOf(uploadsDir, storageKey, true);
+  await fileOps.mkdir(photosStaging(uploadsDir), { recursive: true });
   await fileOps.mkdir(dir); // not recursive: fails if the key somehow exists already
   try {
     await fileOps.writeFile(join(dir, VARIANT_FILES.original(p.original.ext)), p.original.data, { flag: 'wx' });
     await fileOps.writeFile(join(dir, VARIANT_FILES.display('')), p.display, { flag: 'wx' });
     await fileOps.writeFile(join(dir, VARIANT_FILES.thumb('')), p.thumb, { flag: 'wx' });
   } catch (err) {
-    await removePhotoFiles(uploadsDir, storageKey);
+    await removeStagedPhotoFiles(uploadsDir, storageKey);
     throw err;
   }
+}
+
+/** After the commit: move the staged folder into place (one rename on the same file system). */
+export async function publishPhotoFiles(uploadsDir: string, storageKey: string): Promise<void> {
+  await fileOps.rename(folderOf(uploadsDir, storageKey, true), folderOf(uploadsDir, storageKey));
+}
+
+export async function removeStagedPhotoFiles(uploadsDir: string, storageKey: string): Promise<void> {
+  await fileOps.rm(folderOf(uploadsDir, storageKey, true), { recursive: true, force: true });
 }
 
 export async function removePhotoFiles(uploadsDir: string, storageKey: string): Promise<void> {

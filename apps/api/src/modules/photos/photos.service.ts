@@ -8,7 +8,20 @@ import { PartSchema, type Part } from '../parts/part.entity';
 import type { Teardown } from '../teardowns/teardown.entity';
 import { UserSchema } from '../users/user.entity';
 import { CalloutSchema, type Callout } from './callout.entity';
-import { newStorageKey, processImage, removePhotoFiles, sanitiseFileName, sniffImage, writePhotoFiles } from './photo-files';
+import { sweepFolders, type SweepResult } from '../../lib/leftovers';
+import { AuditEntrySchema } from '../audit/audit-entry.entity';
+import {
+  newStorageKey,
+  photosRoot,
+  photosStaging,
+  processImage,
+  publishPhotoFiles,
+  removeStagedPhotoFiles,
+  sanitiseFileName,
+  sniffImage,
+  STORAGE_KEY,
+  writePhotoFiles,
+} from './photo-files';
 import { PhotoSchema, type Photo } from './photo.entity';
 
 export const photoUrl = (id: number, variant: PhotoVariant) => `/api/photos/${id}/${variant}`;
@@ -104,14 +117,17 @@ export interface SavePhotoInput {
 }
 
 /**
- * The one way a photo is stored (uploads and the demo seed): sniff, process, write the three files,
- * then the row. If the row cannot be written the files go; if a file cannot be written nothing is kept.
+ * The one way a photo is stored (uploads and the demo seed): sniff, process, write the three files
+ * to the staging folder, commit the row, then move the files into place. If the row cannot be
+ * written the staged files go; if they cannot be moved into place the row goes: nothing is kept
+ * half-saved. A crash in between is finished or undone by the start-up sweep.
  */
 export async function savePhoto(em: EntityManager, uploadsDir: string, input: SavePhotoInput): Promise<Photo> {
   const type = await sniffImage(input.buffer);
   const processed = await processImage(input.buffer, type);
   const storageKey = newStorageKey();
   await writePhotoFiles(uploadsDir, storageKey, processed);
+  let photo: Photo;
   try {
     const layer = input.layer ?? 1;
     let step = input.step;
@@ -120,8 +136,8 @@ export async function savePhoto(em: EntityManager, uploadsDir: string, input: Sa
       step = (last?.step ?? 0) + 1;
     }
     const name = sanitiseFileName(input.clientName);
-    return await em.transactional(async (tx) => {
-      const photo = tx.create(PhotoSchema, {
+    photo = await em.transactional(async (tx) => {
+      const created = tx.create(PhotoSchema, {
         teardown: input.teardown,
         storageKey,
         originalName: name,
@@ -140,17 +156,36 @@ export async function savePhoto(em: EntityManager, uploadsDir: string, input: Sa
         recordAudit(tx, input.actor, {
           action: 'photo.uploaded',
           entityType: 'photo',
-          entityId: photo.id,
+          entityId: created.id,
           scope: { type: 'teardown', id: input.teardown.id },
           summary: `Added photo "${name}" (layer ${layer}, step ${step}, ${processed.width} × ${processed.height} px)`,
         });
       }
-      return photo;
+      return created;
     });
   } catch (err) {
-    await removePhotoFiles(uploadsDir, storageKey);
+    await removeStagedPhotoFiles(uploadsDir, storageKey);
     throw err;
   }
+  try {
+    await publishPhotoFiles(uploadsDir, storageKey);
+  } catch (err) {
+    // The files cannot be served: take the row (and its audit entry) back.
+    await em.transactional(async (tx) => {
+      await tx.nativeDelete(AuditEntrySchema, { entityType: 'photo', entityId: String(photo.id), action: 'photo.uploaded' });
+      await tx.nativeDelete(PhotoSchema, { id: photo.id });
+    });
+    em.getUnitOfWork().unsetIdentity(photo);
+    await removeStagedPhotoFiles(uploadsDir, storageKey);
+    throw err;
+  }
+  return photo;
+}
+
+/** Start-up: finish or undo photo uploads a crash interrupted, and remove folders without a photo. */
+export async function sweepPhotoLeftovers(em: EntityManager, uploadsDir: string): Promise<SweepResult> {
+  const rows = (await em.getConnection().execute('select storage_key from photos')) as { storage_key: string }[];
+  return sweepFolders({ root: photosRoot(uploadsDir), staging: photosStaging(uploadsDir), keys: new Set(rows.map((r) => r.storage_key)), keyPattern: STORAGE_KEY });
 }
 
 /** The next pin number on a photo: one after the highest in use (numbers of deleted pins are not reused). */

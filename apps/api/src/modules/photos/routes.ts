@@ -19,6 +19,7 @@ import {
   uploadPhotoFields,
 } from '@splitcase/contracts';
 import { AppError, forbidden, notFound, validationError } from '../../http/errors';
+import { uploadOne } from '../../http/multipart';
 import { route, type AuthUser, type RouteDef } from '../../http/route';
 import type { AppDeps } from '../../http/deps';
 import { diffChanges, recordAudit } from '../audit/audit.service';
@@ -91,10 +92,7 @@ function describeCalloutChanges(keys: string[]): string {
 const pinSummary = (c: { number: number; label: string }) => `#${c.number} "${c.label}"`;
 
 export function photoRoutes(deps: AppDeps): RouteDef[] {
-  const upload = multer({
-    storage: multer.memoryStorage(),
-    limits: { fileSize: deps.env.uploadMaxBytes, files: 1, fields: 10, fieldSize: 4000, parts: 12 },
-  }).single('file');
+  const upload = uploadOne({ field: 'file', maxBytes: deps.env.uploadMaxBytes, storage: multer.memoryStorage(), fields: 10, fieldSize: 4000 });
 
   return [
     route(

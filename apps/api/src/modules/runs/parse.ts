@@ -3,6 +3,7 @@
 // typed arrays, never an object per row), and anything wrong stops the parse with a message
 // naming the row (the line of the file) and the column.
 import { closeSync, createReadStream, openSync, readSync, statSync } from 'node:fs';
+import { Transform, type TransformCallback } from 'node:stream';
 import Papa from 'papaparse';
 import { convertColumnInPlace, type RunQuantity } from '@splitcase/calc';
 import { RUN_DELIMITER, RUN_QUANTITIES, type RunDelimiter, type RunMapping, type RunQuantityName } from '@splitcase/contracts';
@@ -13,6 +14,54 @@ import type { StoredSeries } from './storage';
 export class LogError extends AppError {
   constructor(message: string, where: { row?: number; column?: string; field?: string } = {}) {
     super('unprocessable', message, { [where.field ?? 'file']: message }, { row: where.row ?? null, column: where.column ?? null });
+  }
+}
+
+/**
+ * The longest line a log may have. A logger writes one reading per line (a few dozen bytes; a wide
+ * one a few kilobytes); a longer line is not a log, and a parser that has to hold a line until it
+ * ends would cost time and memory growing with the square of its length.
+ */
+export const MAX_LINE_BYTES = 64 * 1024;
+
+/**
+ * Passes the bytes through unchanged and fails at the first line longer than `max` bytes (CR, LF
+ * and CRLF all end a line), naming it, so an over-long line is refused as soon as it is seen.
+ */
+export class LineLengthGuard extends Transform {
+  private run = 0;
+  private line = 1;
+  private afterCr = false;
+  constructor(private readonly max: number) {
+    super();
+  }
+  override _transform(chunk: Buffer, _encoding: BufferEncoding, done: TransformCallback): void {
+    let { run, line, afterCr } = this;
+    for (let k = 0; k < chunk.length; k++) {
+      const b = chunk[k];
+      if (b === 0x0a) {
+        if (!afterCr) line++;
+        run = 0;
+        afterCr = false;
+      } else if (b === 0x0d) {
+        line++;
+        run = 0;
+        afterCr = true;
+      } else {
+        afterCr = false;
+        if (++run > this.max) {
+          done(
+            new LogError(
+              `Row ${line} is longer than ${this.max / 1024} KiB without a line break. A bench log has one reading per line: check that this is the logger's CSV or TSV export and that its line breaks survived.`,
+              { row: line },
+            ),
+          );
+          return;
+        }
+      }
+    }
+    Object.assign(this, { run, line, afterCr });
+    done(null, chunk);
   }
 }
 
@@ -206,7 +255,8 @@ export async function parseRunFile(path: string, mapping: RunMapping): Promise<P
       if (!m) continue;
       const index = header.indexOf(m.column.trim());
       if (index === -1) {
-        fail(`Column ${quote(m.column)} (mapped to ${quantity}) is not in the header (row ${row}), which has: ${header.map(quote).join(', ')}.`, {
+        const shown = header.slice(0, 12).map(quote).join(', ') + (header.length > 12 ? ` and ${header.length - 12} more` : '');
+        fail(`Column ${quote(m.column)} (mapped to ${quantity}) is not in the header (row ${row}), which has: ${shown}.`, {
           row,
           column: m.column,
           field: `mapping.${quantity}.column`,
@@ -298,17 +348,22 @@ export async function parseRunFile(path: string, mapping: RunMapping): Promise<P
   };
 
   await new Promise<void>((resolve, reject) => {
-    const stream = createReadStream(path, { encoding: 'utf8', highWaterMark: 1 << 16 });
+    const file = createReadStream(path, { highWaterMark: 1 << 16 });
+    const stream = file.pipe(new LineLengthGuard(MAX_LINE_BYTES));
+    stream.setEncoding('utf8');
     let settled = false;
     const finish = (err?: unknown) => {
       if (settled) return;
       settled = true;
+      file.destroy();
       stream.destroy();
       if (err) reject(err);
       else resolve();
     };
+    // Before papaparse's own listeners, so an over-long line is reported as itself.
+    file.on('error', (err) => finish(err));
     stream.on('error', (err) => finish(err));
-    Papa.parse<string[]>(stream, {
+    Papa.parse<string[]>(stream as unknown as NodeJS.ReadableStream, {
       delimiter,
       skipEmptyLines: false,
       chunk: (results, parser) => {

@@ -20,6 +20,7 @@ import {
 import type { ZodType } from 'zod';
 import type { AppDeps } from '../../http/deps';
 import { validationError, zodFields } from '../../http/errors';
+import { uploadOne } from '../../http/multipart';
 import { route, type RouteDef } from '../../http/route';
 import { CONTENT_EDITORS, editableTeardown, readableTeardown } from '../teardowns/access';
 import { previewLog } from './preview';
@@ -70,7 +71,9 @@ function headStorage(limit: number): multer.StorageEngine {
 
 export function runRoutes(deps: AppDeps): RouteDef[] {
   const env = deps.env;
-  const upload = multer({
+  const upload = uploadOne({
+    field: 'file',
+    maxBytes: env.runUploadMaxBytes,
     storage: multer.diskStorage({
       destination: (_req, _file, cb) => {
         try {
@@ -81,9 +84,10 @@ export function runRoutes(deps: AppDeps): RouteDef[] {
       },
       filename: (_req, _file, cb) => cb(null, `${randomBytes(16).toString('hex')}.part`),
     }),
-    limits: { fileSize: env.runUploadMaxBytes, files: 1, fields: 6, fieldSize: 64 * 1024 },
-  }).single('file');
-  const preview = multer({ storage: headStorage(RUN_PREVIEW_BYTES), limits: { files: 1, fields: 2 } }).single('file');
+    fields: 6,
+    fieldSize: 64 * 1024,
+  });
+  const preview = uploadOne({ field: 'file', maxBytes: env.runUploadMaxBytes, storage: headStorage(RUN_PREVIEW_BYTES), fields: 2 });
   const uploadMb = Math.round(env.runUploadMaxBytes / 1024 / 1024);
 
   return [

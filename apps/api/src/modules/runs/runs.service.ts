@@ -18,7 +18,24 @@ import { UserSchema } from '../users/user.entity';
 import { analyseRun, compareRun, type AnalysisContext } from './analyse';
 import { BenchRunSchema, type BenchRun } from './bench-run.entity';
 import { parseRunFile } from './parse';
-import { columnsOf, newStorageKey, rawPath, readSeries, readTimes, removeRunFiles, seriesPath, storeRunFiles, type StoredSeries } from './storage';
+import { sweepFolders, type SweepResult } from '../../lib/leftovers';
+import { AuditEntrySchema } from '../audit/audit-entry.entity';
+import {
+  columnsOf,
+  incomingDir,
+  newStorageKey,
+  publishRunFiles,
+  rawPath,
+  readSeries,
+  readTimes,
+  removeRunFiles,
+  removeStagedRunFiles,
+  runsRoot,
+  seriesPath,
+  stageRunFiles,
+  STORAGE_KEY,
+  type StoredSeries,
+} from './storage';
 
 const numberOrNull = (x: number | string | null | undefined) => (x === null || x === undefined ? null : Number(x));
 
@@ -67,7 +84,8 @@ export interface IngestInput {
 
 /**
  * Parses, analyses and keeps a run, then flushes once (with whatever else the unit of work holds,
- * e.g. a teardown moved back to draft). On any error nothing is kept: no row, no files.
+ * e.g. a teardown moved back to draft). The files are staged, the row committed, then the files
+ * moved into place. On any error nothing is kept: no row, no files.
  */
 export async function ingestRun(em: EntityManager, env: Env, input: IngestInput): Promise<BenchRun> {
   const { teardown, mapping } = input;
@@ -76,11 +94,12 @@ export async function ingestRun(em: EntityManager, env: Env, input: IngestInput)
   const ctx = await analysisContext(em, teardown);
   const analysis = analyseRun(mapping.kind, parsed.series, options, ctx);
   const storageKey = newStorageKey();
-  storeRunFiles(env.uploadsDir, storageKey, input.incomingPath, input.originalName, parsed.series);
+  stageRunFiles(env.uploadsDir, storageKey, input.incomingPath, input.originalName, parsed.series);
   // One transaction: the row needs its id for the audit entry, and a failure undoes both.
+  let run: BenchRun;
   await em.begin();
   try {
-    const run = em.create(BenchRunSchema, {
+    run = em.create(BenchRunSchema, {
       teardown,
       kind: mapping.kind,
       label: input.label?.trim() || defaultLabel(input.originalName),
@@ -104,12 +123,30 @@ export async function ingestRun(em: EntityManager, env: Env, input: IngestInput)
       summary: `Added ${RUN_KIND.labels[mapping.kind].toLowerCase()} run "${run.label}" (${parsed.samples.toLocaleString('en-GB')} samples)`,
     });
     await em.commit();
-    return run;
   } catch (err) {
     await em.rollback();
-    removeRunFiles(env.uploadsDir, storageKey);
+    removeStagedRunFiles(env.uploadsDir, storageKey);
     throw err;
   }
+  try {
+    publishRunFiles(env.uploadsDir, storageKey);
+  } catch (err) {
+    // The files cannot be served: take the row (and its audit entry) back.
+    await em.transactional(async (tx) => {
+      await tx.nativeDelete(AuditEntrySchema, { entityType: 'bench_run', entityId: String(run.id), action: 'run.created' });
+      await tx.nativeDelete(BenchRunSchema, { id: run.id });
+    });
+    em.getUnitOfWork().unsetIdentity(run);
+    removeStagedRunFiles(env.uploadsDir, storageKey);
+    throw err;
+  }
+  return run;
+}
+
+/** Start-up: finish or undo run uploads a crash interrupted, drop temporary uploads, and remove folders without a run. */
+export async function sweepRunLeftovers(em: EntityManager, uploadsDir: string): Promise<SweepResult> {
+  const rows = (await em.getConnection().execute('select storage_key from bench_runs')) as { storage_key: string }[];
+  return sweepFolders({ root: runsRoot(uploadsDir), staging: incomingDir(uploadsDir), keys: new Set(rows.map((r) => r.storage_key)), keyPattern: STORAGE_KEY });
 }
 
 /** Loads a run with its teardown if the user may read that teardown (404 otherwise, as if it did not exist). */

@@ -1,6 +1,8 @@
 // Files of a bench run: the raw log as uploaded and the parsed series as Float64 columns, both under
 // uploads/runs/<storageKey>/. Incoming uploads land in uploads/runs/.incoming/ (same file system,
-// so keeping one is a rename) and are removed whatever happens to the request.
+// so keeping one is a rename) and are removed whatever happens to the request. A kept run is
+// staged in uploads/runs/.incoming/<storageKey>/ and moved into place after its row is committed;
+// the start-up sweep clears what a crash leaves there.
 import { closeSync, mkdirSync, openSync, readSync, renameSync, rmSync, writeSync, fstatSync } from 'node:fs';
 import { randomBytes } from 'node:crypto';
 import { extname, join } from 'node:path';
@@ -61,17 +63,37 @@ function readAll(fd: number, into: Uint8Array, position: number): void {
 
 const bytesOf = (a: Float64Array) => new Uint8Array(a.buffer, a.byteOffset, a.byteLength);
 
-/** Keeps a run: moves the incoming raw file into the run folder and writes the series beside it. */
-export function storeRunFiles(uploadsDir: string, storageKey: string, incomingPath: string, originalName: string, series: StoredSeries): void {
-  const dir = runDir(uploadsDir, storageKey);
+export const STORAGE_KEY = /^[a-f0-9]{32}$/;
+
+/** Where a run's files are written before its row is committed. */
+export const stagedRunDir = (uploadsDir: string, storageKey: string) => {
+  if (!STORAGE_KEY.test(storageKey)) throw new Error(`Bad storage key ${storageKey}`);
+  return join(incomingDir(uploadsDir), storageKey);
+};
+
+/** File moves, grouped so a test can make one fail or stop the process at one. */
+export const runFileOps = { rename: renameSync };
+
+/** Stages a run: writes the series into a new staging folder and moves the incoming raw file beside it. */
+export function stageRunFiles(uploadsDir: string, storageKey: string, incomingPath: string, originalName: string, series: StoredSeries): void {
+  const dir = stagedRunDir(uploadsDir, storageKey);
   mkdirSync(dir, { recursive: true });
   try {
-    writeSeries(seriesPath(uploadsDir, storageKey), series);
-    renameSync(incomingPath, rawPath(uploadsDir, storageKey, originalName));
+    writeSeries(join(dir, 'series.f64'), series);
+    runFileOps.rename(incomingPath, join(dir, rawName(originalName)));
   } catch (err) {
     rmSync(dir, { recursive: true, force: true });
     throw err;
   }
+}
+
+/** After the commit: move the staged folder into place (one rename on the same file system). */
+export function publishRunFiles(uploadsDir: string, storageKey: string): void {
+  runFileOps.rename(stagedRunDir(uploadsDir, storageKey), runDir(uploadsDir, storageKey));
+}
+
+export function removeStagedRunFiles(uploadsDir: string, storageKey: string): void {
+  rmSync(stagedRunDir(uploadsDir, storageKey), { recursive: true, force: true });
 }
 
 export function writeSeries(path: string, series: StoredSeries): void {

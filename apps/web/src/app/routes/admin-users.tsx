@@ -1,6 +1,7 @@
 import { RequireRole } from '@/app/guards';
 import { PageHeader } from '@/components/page';
 import { AdminTabs } from '@/features/admin/components/admin-tabs';
+import { BackupLine } from '@/features/admin/components/backup-line';
 import { UsersPanel } from '@/features/admin/components/users-panel';
 
 export function Component() {
@@ -8,6 +9,7 @@ export function Component() {
     <RequireRole roles={['admin']}>
       <PageHeader eyebrow="Admin" title="Users" />
       <AdminTabs />
+      <BackupLine />
       <UsersPanel />
     </RequireRole>
   );

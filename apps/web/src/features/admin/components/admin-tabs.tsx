@@ -16,7 +16,7 @@ export function AdminTabs() {
           key={t.to}
           to={t.to}
           className={({ isActive }) =>
-            `-mb-px border-b-2 px-3 py-2 text-sm font-medium ${isActive ? 'border-copper-500 text-graphite-950' : 'border-transparent text-graphite-500 hover:text-graphite-800'}`
+            `-mb-px border-b-2 px-3 py-2 text-sm font-medium ${isActive ? 'border-copper-500 text-graphite-950' : 'border-transparent text-graphite-600 hover:text-graphite-800'}`
           }
         >
           {t.label}
