@@ -25,7 +25,7 @@ export function ModeChoice({
   const id = useId();
   const nameId = `${id}-name`;
   return (
-    <fieldset className="min-w-0">
+    <fieldset className="min-w-0" data-testid="mode-choice">
       <legend className={hideLegend ? 'sr-only' : 'mb-1.5 text-sm font-medium text-graphite-800'}>Mode compared</legend>
       <div className={layout === 'row' ? 'flex flex-wrap gap-x-5 gap-y-1.5' : 'space-y-1.5'}>
         {LINEUP_MODE_RULE.values.map((rule) => (
