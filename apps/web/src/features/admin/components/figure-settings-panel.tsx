@@ -85,8 +85,8 @@ function FigureSettingsEditor({ settings }: { settings: WorkspaceSettings }) {
         <div className="space-y-4 p-4 text-sm">
           <div className="space-y-2 text-graphite-700">
             <p>
-              The touch margin compares a heated surface with the temperature at which skin burns after a given time of contact (ISO 13732-1, values from memory [M]). For 1 min of
-              contact the threshold depends on the material: bare or coated metal 51 °C, ceramics and glass 56 °C, plastics 60 °C, wood 60 °C. For 10 min it is 48 °C and for 8 h or
+              The touch margin compares a heated surface with the burn threshold: the temperature at which skin burns after a given time of contact (ISO 13732-1, values from memory
+              [M]). For 1 min of contact the threshold depends on the material: bare or coated metal 51 °C, ceramics and glass 56 °C, plastics 60 °C, wood 60 °C. For 10 min it is 48 °C and for 8 h or
               longer 43 °C, whatever the material. A time between two listed ones is judged at the next longer one.
             </p>
             <p>
