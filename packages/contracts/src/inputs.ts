@@ -94,3 +94,66 @@ export const percentInput = (what: string) =>
       }
       return Number((n / 100).toPrecision(12));
     });
+
+/** Units a duration may be typed in, with their length in seconds. */
+const DURATION_UNITS: Record<string, number> = { s: 1, sec: 1, secs: 1, second: 1, seconds: 1, min: 60, mins: 60, minute: 60, minutes: 60, h: 3600, hr: 3600, hrs: 3600, hour: 3600, hours: 3600 };
+
+/**
+ * Read a duration as typed — "10 min", "8 h", "60 s", "1 h 30 min", "1,5 h" — into whole seconds.
+ * A bare number is refused (its unit would be a guess). Throws a RangeError whose message names
+ * what to type.
+ */
+export function readDurationSeconds(typed: string): number {
+  const text = typed.trim().toLowerCase().replace(/(\d),(\d)/g, '$1.$2');
+  const part = /(\d+(?:\.\d+)?|\.\d+)\s*([a-z]+)\s*/gy;
+  let seconds = 0;
+  let read = 0;
+  let m: RegExpExecArray | null;
+  while ((m = part.exec(text)) !== null) {
+    const factor = DURATION_UNITS[m[2]!];
+    if (factor === undefined) throw new RangeError(`“${m[2]}” is not a unit of time: use s, min or h, such as 10 min`);
+    seconds += Number(m[1]) * factor;
+    read = part.lastIndex;
+  }
+  if (text === '' || read !== text.length) {
+    throw new RangeError(/^\s*[\d.]+\s*$/.test(text) ? 'Give the unit too, such as 10 min, 8 h or 60 s' : 'Enter a time such as 10 min, 8 h or 60 s');
+  }
+  const whole = Math.round(seconds);
+  if (Math.abs(seconds - whole) > 1e-6) throw new RangeError('Give a whole number of seconds');
+  return whole;
+}
+
+/** A duration typed in a form ("10 min"), read into whole seconds within bounds; '' or null clears it. */
+export const durationInput = (opts: { min: number; max: number }) =>
+  z
+    .union([z.string().trim().max(40, 'At most 40 characters'), z.null()])
+    .optional()
+    .transform((v, ctx) => {
+      if (v === undefined || v === null || v === '') return v === undefined ? undefined : null;
+      let s: number;
+      try {
+        s = readDurationSeconds(v);
+      } catch (err) {
+        ctx.addIssue({ code: 'custom', message: (err as Error).message });
+        return z.NEVER;
+      }
+      if (s < opts.min) {
+        ctx.addIssue({ code: 'custom', message: `At least ${durationText(opts.min)}` });
+        return z.NEVER;
+      }
+      if (s > opts.max) {
+        ctx.addIssue({ code: 'custom', message: `At most ${durationText(opts.max)}` });
+        return z.NEVER;
+      }
+      return s;
+    });
+
+/** Whole seconds as people say them, in the units durationInput reads back: "10 min", "8 h", "1 h 30 min", "45 s". */
+export function durationText(seconds: number): string {
+  const s = Math.round(seconds);
+  const h = Math.floor(s / 3600);
+  const min = Math.floor((s % 3600) / 60);
+  const sec = s % 60;
+  const parts = [h ? `${h} h` : '', min ? `${min} min` : '', sec ? `${sec} s` : ''].filter(Boolean);
+  return parts.length ? parts.join(' ') : '0 s';
+}

@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { DEVICE_CATEGORY } from './domain';
+import { DEVICE_CATEGORY, type DeviceCategory } from './domain';
+import { durationInput, percentInput } from './inputs';
 
 export const currencyCode = z
   .string()
@@ -64,6 +65,29 @@ export type WorkspaceSettings = z.infer<typeof workspaceSettingsSchema>;
 export const cutoffDebounceSettingBody = workspaceSettingsSchema.pick({ cutoffDebounceSeconds: true });
 export type CutoffDebounceSettingForm = z.input<typeof cutoffDebounceSettingBody>;
 export type CutoffDebounceSettingBody = z.output<typeof cutoffDebounceSettingBody>;
+/** Contact times are whole seconds from 1 s to 8 h, as in the settings above. */
+const contactTime = durationInput({ min: 1, max: 28_800 });
+
+/**
+ * The figures and safety settings as an admin types them (Admin → Figures & safety): contact times
+ * as durations ("10 min", "8 h", "60 s"; a blank category uses the workspace default) and the usable
+ * share of the rated energy in per cent. The output is the settings fields, in seconds and a fraction.
+ */
+export const figureSettingsFormSchema = z
+  .object({
+    defaultContact: contactTime.refine((v) => v !== null && v !== undefined, 'Give the default contact time, such as 1 min'),
+    byCategory: z.partialRecord(DEVICE_CATEGORY.schema, contactTime),
+    usablePercent: percentInput('the usable share')
+      .refine((v) => v !== null && v !== undefined, 'Give the usable share, such as 90 %')
+      .refine((v) => v === null || v === undefined || v >= 0.5, 'At least 50 %'),
+  })
+  .transform((f) => ({
+    defaultContactSeconds: f.defaultContact!,
+    contactSecondsByCategory: Object.fromEntries(Object.entries(f.byCategory).filter(([, v]) => typeof v === 'number')) as Partial<Record<DeviceCategory, number>>,
+    usableFraction: f.usablePercent!,
+  }));
+export type FigureSettingsFormValues = z.input<typeof figureSettingsFormSchema>;
+export type FigureSettingsForm = z.output<typeof figureSettingsFormSchema>;
 export const settingsResponse = z.object({ settings: workspaceSettingsSchema });
 export const updateSettingsBody = workspaceSettingsSchema.partial().refine((b) => Object.keys(b).length > 0, { message: 'Change at least one setting' });
 export type UpdateSettingsBody = z.infer<typeof updateSettingsBody>;

@@ -47,6 +47,7 @@ export const router = createBrowserRouter([
           { path: '/admin/invitations', lazy: () => import('./routes/admin-invitations') },
           { path: '/admin/outbox', lazy: () => import('./routes/admin-outbox') },
           { path: '/admin/audit', lazy: () => import('./routes/admin-audit') },
+          { path: '/admin/figures', lazy: () => import('./routes/admin-figures') },
           { path: '/tools', lazy: () => import('./routes/bench-tools') },
           { path: '/rates', lazy: () => import('./routes/rates') },
           { path: '/bench/runs', lazy: () => import('./routes/bench-runs') },

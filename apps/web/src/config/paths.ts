@@ -23,6 +23,8 @@ export const paths = {
     invitations: () => '/admin/invitations',
     outbox: () => '/admin/outbox',
     audit: () => '/admin/audit',
+    /** Contact times and the usable share behind the touch and runtime figures. */
+    figures: () => '/admin/figures',
   },
   tools: (tool?: ToolTab) => (tool && tool !== 'marking' ? `/tools?tool=${tool}` : '/tools'),
   api: {

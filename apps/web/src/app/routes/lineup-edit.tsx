@@ -35,7 +35,7 @@ export function Component() {
           </Link>
         }
         title={l ? `Edit “${l.name}”` : 'Edit lineup'}
-        subtitle="Change the devices, the currency or the weights. The comparison is worked out again from the latest teardowns."
+        subtitle="Change the devices, the currency, the mode compared or the weights. The comparison is worked out again from the latest teardowns."
       />
       {failed ? (
         <ErrorPanel error={failed.error} onRetry={() => failed.refetch()} />

@@ -30,7 +30,7 @@ export function Component() {
           </Link>
         }
         title="New lineup"
-        subtitle="Pick the devices to compare, the currency to compare them in, and how much each metric counts in the ranking."
+        subtitle="Pick the devices to compare, the currency to compare them in, the operating mode their runtimes come from, and how much each metric counts in the ranking."
       />
       {failed ? (
         <ErrorPanel error={failed.error} onRetry={() => failed.refetch()} />

@@ -11,6 +11,7 @@ import { formatDate } from '@/lib/format';
 import { useDeleteLineup } from '@/features/lineups/api/delete-lineup';
 import { useLineup } from '@/features/lineups/api/get-lineup';
 import { useUpdateLineup } from '@/features/lineups/api/update-lineup';
+import { modeChoiceText } from '@/features/lineups/components/display';
 import { LineupStatusBadge } from '@/features/lineups/components/lineup-status';
 import { LineupWorkspace } from '@/features/lineups/components/lineup-workspace';
 
@@ -111,6 +112,12 @@ export function Component() {
         <div className="flex gap-1.5">
           <dt>Devices</dt>
           <dd className="num font-medium text-graphite-950">{l.devices.length}</dd>
+        </div>
+        <div className="flex gap-1.5">
+          <dt>Mode compared</dt>
+          <dd className="text-graphite-950" data-testid="lineup-mode">
+            {modeChoiceText(l.mode)}
+          </dd>
         </div>
         <div className="flex gap-1.5">
           <dt>Built by</dt>

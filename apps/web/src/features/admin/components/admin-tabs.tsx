@@ -6,6 +6,7 @@ const TABS = [
   { to: paths.admin.invitations(), label: 'Invitations' },
   { to: paths.admin.outbox(), label: 'Outbox' },
   { to: paths.admin.audit(), label: 'Audit log' },
+  { to: paths.admin.figures(), label: 'Figures & safety' },
 ];
 
 export function AdminTabs() {

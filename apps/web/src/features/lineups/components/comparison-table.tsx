@@ -1,10 +1,11 @@
 import { Link } from 'react-router';
+import { CircleAlert } from 'lucide-react';
 import { DEVICE_CATEGORY, type ComparisonDto, type ComparisonRowDto } from '@splitcase/contracts';
 import { DataTable, type Column } from '@/components/data-table';
 import { StatusBadge } from '@/components/status';
 import { paths } from '@/config/paths';
 import { formatDate } from '@/lib/format';
-import { coverageText, metricText, scoreText, shortHeader } from './display';
+import { coverageText, lackedMetricsText, metricText, rowMode, rowModeText, scoreText, shortHeader } from './display';
 
 /** A missing value: "—" with the reason on hover (and for screen readers), never a zero. */
 export function Missing({ reason }: { reason: string }) {
@@ -72,17 +73,55 @@ export function ComparisonTable({ comparison }: { comparison: ComparisonDto }) {
         ),
     },
     {
+      id: 'mode',
+      header: 'Runtime from mode',
+      value: (r) => rowModeText(r),
+      cell: (r) => {
+        const m = rowMode(r);
+        if (m.kind === 'mode')
+          return (
+            <span className="block min-w-36 text-xs" data-testid="row-mode">
+              <span className="font-medium text-graphite-950">{m.name}</span> <span className="text-graphite-600">— {m.reason}</span>
+            </span>
+          );
+        if (m.kind === 'no-modes')
+          return (
+            <span className="block min-w-36 text-xs text-graphite-600" data-testid="row-mode">
+              No modes recorded <span className="block">(the main load at its recorded duty)</span>
+            </span>
+          );
+        return (
+          <span className="block min-w-36 text-xs text-graphite-600" data-testid="row-mode">
+            {m.reason}
+          </span>
+        );
+      },
+    },
+    {
       id: 'score',
       header: 'Score',
       align: 'right',
       value: (r) => r.score ?? undefined,
       cell: (r) => {
-        if (r.score === null) return <Missing reason="None of the weighted metrics is known for this device." />;
+        const lacks = lackedMetricsText(r, comparison.metrics);
         const partial = coverageText(r.coverage);
+        const incomplete = lacks && (
+          <span className="mt-0.5 flex items-start justify-end gap-1 whitespace-normal text-left text-xs font-normal text-amber-800" data-testid="row-incomplete">
+            <CircleAlert className="mt-px size-3.5 shrink-0" aria-hidden />
+            <span>Incomplete, lacks {lacks}</span>
+          </span>
+        );
+        if (r.score === null)
+          return (
+            <span className="block min-w-36">
+              <Missing reason="None of the weighted metrics is known for this device." />
+              {incomplete}
+            </span>
+          );
         return (
-          <span className="whitespace-nowrap font-semibold text-copper-800" title={partial ? `Scored ${partial}` : 'Scored on every weighted metric'}>
+          <span className="block min-w-36 font-semibold text-copper-800" title={partial ? `Scored ${partial}` : 'Scored on every weighted metric'}>
             {scoreText(r.score)}
-            {partial && <span className="ml-0.5 text-amber-700">*</span>}
+            {incomplete}
           </span>
         );
       },

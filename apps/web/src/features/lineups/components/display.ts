@@ -1,5 +1,5 @@
 // Display rules of the lineup pages: rounding for the eye only; every value comes from the API.
-import type { ComparisonMetricDto } from '@splitcase/contracts';
+import { LINEUP_MODE_RULE, type ComparisonMetricDto, type ComparisonRowDto, type LineupModeChoice } from '@splitcase/contracts';
 import { formatMoney, formatPercent, formatQuantity } from '@/lib/format';
 
 /** A metric value with its unit; null (missing) as "—". */
@@ -46,4 +46,38 @@ export const rateCurrencies = (table: { base: string; rates: Record<string, numb
 export function coverageText(c: { known: number; weighted: number; weightShare: number }): string | null {
   if (c.known >= c.weighted) return null;
   return `on ${c.known} of ${c.weighted} weighted metrics (${Math.round(c.weightShare * 100)} % of the weight)`;
+}
+
+/** The mode rule a lineup compares, in words: its contract label, or the name asked for ("A mode by name: “High”"). */
+export function modeChoiceText(m: LineupModeChoice): string {
+  if (m.rule === 'named') return `${LINEUP_MODE_RULE.labels.named}: “${m.name ?? ''}”`;
+  return LINEUP_MODE_RULE.labels[m.rule];
+}
+
+/** Two mode choices that ask for the same mode (a name is compared as typed, spaces trimmed). */
+export const sameModeChoice = (a: LineupModeChoice, b: LineupModeChoice) => a.rule === b.rule && (a.rule !== 'named' || (a.name ?? '').trim() === (b.name ?? '').trim());
+
+/**
+ * Where a row's runtime comes from: the mode the server chose (name and reason), "No modes
+ * recorded" when the runtime is the main load's at its recorded duty, or why there is none.
+ */
+export type RowMode = { kind: 'mode'; name: string; reason: string } | { kind: 'no-modes'; text: string } | { kind: 'missing'; reason: string };
+export function rowMode(r: Pick<ComparisonRowDto, 'mode' | 'teardown' | 'metrics' | 'missing'>): RowMode {
+  if (r.mode) return { kind: 'mode', name: r.mode.name, reason: r.mode.reason };
+  const runtime = r.metrics.runtimeH;
+  // The server gives a runtime without a mode only when the teardown records no modes.
+  if (r.teardown && runtime !== null && runtime !== undefined) return { kind: 'no-modes', text: 'No modes recorded: the main load at its recorded duty' };
+  return { kind: 'missing', reason: r.missing.runtimeH ?? (r.teardown ? 'No runtime for this device.' : 'No teardown yet.') };
+}
+
+/** "High — the most power at the main load", "No modes recorded: …", or "— (why)": for print and plain text. */
+export function rowModeText(r: Pick<ComparisonRowDto, 'mode' | 'teardown' | 'metrics' | 'missing'>): string {
+  const m = rowMode(r);
+  return m.kind === 'mode' ? `${m.name} — ${m.reason}` : m.kind === 'no-modes' ? m.text : `— (${m.reason})`;
+}
+
+/** The labels of the weighted metrics a row lacks ("Runtime, Should-cost"); null when it lacks none. */
+export function lackedMetricsText(r: Pick<ComparisonRowDto, 'incompleteMetrics'>, metrics: Pick<ComparisonMetricDto, 'key' | 'label'>[]): string | null {
+  if (!r.incompleteMetrics.length) return null;
+  return r.incompleteMetrics.map((k) => metrics.find((m) => m.key === k)?.label ?? k).join(', ');
 }

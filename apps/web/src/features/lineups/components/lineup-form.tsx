@@ -1,11 +1,12 @@
 import { useState, type FormEvent } from 'react';
-import { createLineupBody, type CreateLineupBody, type DeviceDto, type LineupDto } from '@splitcase/contracts';
+import { createLineupBody, DEFAULT_LINEUP_MODE, type CreateLineupBody, type DeviceDto, type LineupDto, type LineupModeChoice } from '@splitcase/contracts';
 import { Button } from '@/components/button';
 import { Field, Input, Select, Textarea, FormError, InlineError } from '@/components/field';
 import { Card } from '@/components/page';
 import { ApiError } from '@/lib/api-client';
 import type { LineupMetrics } from '../api/metrics';
 import { DevicePicker } from './device-picker';
+import { ModeChoice } from './mode-choice';
 import { WeightSliders } from './weight-sliders';
 
 type Errors = Record<string, string>;
@@ -46,6 +47,7 @@ export function LineupForm({
   const [currency, setCurrency] = useState(initial?.currency ?? defaultCurrency);
   const [deviceIds, setDeviceIds] = useState<number[]>(initial?.devices.map((d) => d.id) ?? []);
   const [weights, setWeights] = useState<Record<string, number>>(initial?.weights ?? metrics.defaults);
+  const [mode, setMode] = useState<LineupModeChoice>(initial?.mode ?? DEFAULT_LINEUP_MODE);
   const [errors, setErrors] = useState<Errors>({});
   const [formError, setFormError] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
@@ -65,7 +67,7 @@ export function LineupForm({
   const submit = async (e: FormEvent) => {
     e.preventDefault();
     setFormError(null);
-    const parsed = createLineupBody.safeParse({ name, description, currency, deviceIds, weights });
+    const parsed = createLineupBody.safeParse({ name, description, currency, deviceIds, weights, mode });
     if (!parsed.success) {
       setErrors(fieldsOf(parsed.error.issues));
       return;
@@ -77,7 +79,7 @@ export function LineupForm({
     } catch (err) {
       if (err instanceof ApiError && Object.keys(err.fields).length) {
         setErrors(err.fields);
-        const known = Object.keys(err.fields).every((k) => ['name', 'description', 'currency', 'deviceIds', 'weights'].some((f) => k === f || k.startsWith(`${f}.`)));
+        const known = Object.keys(err.fields).every((k) => ['name', 'description', 'currency', 'deviceIds', 'weights', 'mode'].some((f) => k === f || k.startsWith(`${f}.`)));
         setFormError(known ? null : err.message);
       } else setFormError(err instanceof Error ? err.message : 'Something went wrong.');
     } finally {
@@ -113,10 +115,19 @@ export function LineupForm({
           <DevicePicker devices={devices} value={deviceIds} onChange={setDeviceIds} error={errors.deviceIds} itemErrors={itemErrors} />
         </div>
       </Card>
+      <Card title="Operating mode compared">
+        <div className="space-y-3 p-4">
+          <p className="text-sm text-graphite-600">
+            Each device’s runtime comes from one of the operating modes recorded in its teardown; the lineup says which and why. A device without a matching mode has no runtime, and a device
+            without recorded modes is taken at its main load.
+          </p>
+          <ModeChoice value={mode} onChange={setMode} error={errors['mode.name'] ?? errors.mode} hideLegend />
+        </div>
+      </Card>
       <Card title="Weights of the ranking">
         <div className="space-y-3 p-4">
           <p className="text-sm text-graphite-600">
-            How much each metric counts in the ranking, from off to {metrics.weightMax}. A device missing a metric is ranked on the others. You can also move these on the lineup page and watch the
+            How much each metric counts in the ranking, from off to {metrics.weightMax}. A device missing a weighted metric is scored on the others and ranked after every device that has them all. You can also move these on the lineup page and watch the
             ranking change before saving.
           </p>
           <WeightSliders metrics={metrics.metrics} weights={weights} max={metrics.weightMax} onChange={(k, v) => setWeights((w) => ({ ...w, [k]: v }))} errors={weightErrors} columns={2} />

@@ -1,11 +1,11 @@
 // The printable lineup report: reads like a lab report on screen and through the browser's
 // print-to-PDF (page numbers from @page in styles.css). Every figure comes from the API.
-import { lazy, Suspense, type ReactNode } from 'react';
+import { Fragment, lazy, Suspense, type ReactNode } from 'react';
 import { DEVICE_CATEGORY, ESTIMATES_NOTE, HOT_SURFACE_CAUTION, LINEUP_STATUS, LITHIUM_CELL_CAUTION, TEARDOWN_STATUS, type ComparisonDto, type LineupDto } from '@splitcase/contracts';
 import { Logo } from '@/components/logo';
 import { Spinner } from '@/components/page';
 import { formatDate, formatDateTime, formatMoney } from '@/lib/format';
-import { betterText, coverageText, metricHeader, metricText, scoreText } from './display';
+import { betterText, coverageText, lackedMetricsText, metricHeader, metricText, modeChoiceText, rowModeText, scoreText } from './display';
 import { ParetoTable } from './pareto-table';
 
 const ParetoChart = lazy(() => import('./pareto-chart'));
@@ -40,6 +40,7 @@ export function LineupReport({ lineup, comparison, printedBy }: { lineup: Lineup
   const off = c.metrics.filter((m) => m.applies && (c.weights[m.key] ?? 0) === 0);
   const deviceNotes = c.notes.filter((n) => n !== ESTIMATES_NOTE && n !== HOT_SURFACE_CAUTION);
   const dense = rows.length > 5;
+  const firstIncomplete = rows.findIndex((r) => !r.complete);
   // A metric that applies to no device of the lineup (heater power density without heaters) is left out.
   const shown = c.metrics.filter((m) => m.applies);
 
@@ -88,6 +89,12 @@ export function LineupReport({ lineup, comparison, printedBy }: { lineup: Lineup
             {c.hiddenDevices > 0 ? ` (${c.hiddenDevices} without a published teardown left out)` : ''}
           </dd>
         </div>
+        <div className="col-span-3">
+          <dt className="text-graphite-500">Operating mode compared</dt>
+          <dd data-testid="report-mode">
+            {modeChoiceText(c.mode)}: each device’s runtime comes from that mode of its teardown (section 1 names it); a device without recorded modes is taken at its main load.
+          </dd>
+        </div>
       </dl>
 
       <Section n={1} title="Devices and the teardowns behind the figures">
@@ -97,6 +104,7 @@ export function LineupReport({ lineup, comparison, printedBy }: { lineup: Lineup
               <th className={th}>Device</th>
               <th className={th}>Category</th>
               <th className={th}>Figures from</th>
+              <th className={th}>Runtime from mode</th>
               <th className={`${th} text-right`}>Retail as seen</th>
               <th className={`${th} text-right`}>In {c.currency}</th>
             </tr>
@@ -108,6 +116,15 @@ export function LineupReport({ lineup, comparison, printedBy }: { lineup: Lineup
                 <td className={td}>{DEVICE_CATEGORY.labels[r.device.category]}</td>
                 <td className={td}>
                   {r.teardown ? `Teardown #${r.teardown.id}, ${formatDate(r.teardown.date)}${r.teardown.unitLabel ? `, ${r.teardown.unitLabel}` : ''} (${TEARDOWN_STATUS.labels[r.teardown.status].toLowerCase()})` : 'No teardown yet'}
+                </td>
+                <td className={td} data-testid="report-row-mode">
+                  {r.mode ? (
+                    <>
+                      <span className="font-medium">{r.mode.name}</span> — {r.mode.reason}
+                    </>
+                  ) : (
+                    <span className="text-graphite-600">{rowModeText(r)}</span>
+                  )}
                 </td>
                 <td className={`${td} num text-right`}>
                   {r.retail ? (
@@ -175,6 +192,7 @@ export function LineupReport({ lineup, comparison, printedBy }: { lineup: Lineup
               {rows.map((r) => (
                 <td key={r.deviceId} className={`${td} num text-right`}>
                   {scoreText(r.score)} <span className="font-normal text-graphite-500">(#{r.rank})</span>
+                  {!r.complete && <span className="block text-[0.65rem] font-normal text-amber-800">incomplete</span>}
                 </td>
               ))}
             </tr>
@@ -220,16 +238,29 @@ export function LineupReport({ lineup, comparison, printedBy }: { lineup: Lineup
               </tr>
             </thead>
             <tbody>
-              {rows.map((r) => (
-                <tr key={r.deviceId}>
-                  <td className={`${td} num text-right font-semibold`}>{r.rank}</td>
-                  <td className={td}>
-                    {r.device.label}
-                    {coverageText(r.coverage) && <span className="block text-[0.7rem] text-graphite-600">Scored {coverageText(r.coverage)}</span>}
-                  </td>
-                  <td className={`${td} num text-right`}>{scoreText(r.score)}</td>
-                </tr>
-              ))}
+              {rows.map((r, k) => {
+                const lacks = lackedMetricsText(r, c.metrics);
+                return (
+                  <Fragment key={r.deviceId}>
+                    {k === firstIncomplete && (
+                      <tr>
+                        <th colSpan={3} scope="colgroup" className={`${td} pt-2 text-left text-[0.7rem] font-semibold uppercase tracking-wide text-graphite-600`}>
+                          Incomplete (lacking a weighted metric): ranked after every complete device
+                        </th>
+                      </tr>
+                    )}
+                    <tr data-testid="report-ranking-row" data-complete={r.complete ? 'true' : 'false'}>
+                      <td className={`${td} num text-right font-semibold`}>{r.rank}</td>
+                      <td className={td}>
+                        {r.device.label}
+                        {lacks && <span className="block text-[0.7rem] text-amber-800">Incomplete, lacks {lacks}</span>}
+                        {coverageText(r.coverage) && <span className="block text-[0.7rem] text-graphite-600">Scored {coverageText(r.coverage)}</span>}
+                      </td>
+                      <td className={`${td} num text-right`}>{scoreText(r.score)}</td>
+                    </tr>
+                  </Fragment>
+                );
+              })}
             </tbody>
           </table>
           <div>
@@ -256,7 +287,8 @@ export function LineupReport({ lineup, comparison, printedBy }: { lineup: Lineup
         </div>
         <p className="mt-2 text-[0.7rem] text-graphite-600">
           Each weighted metric is scaled 0–1 across the lineup (min–max, 1 = best in its better direction); a device's score is the weighted mean of the metrics it has × 100, the
-          weights renormalised over those [C].
+          weights renormalised over those [C]. A device that lacks a weighted metric is marked incomplete and ranks after every complete device, whatever its score: a missing figure
+          is never rewarded.
         </p>
       </Section>
 

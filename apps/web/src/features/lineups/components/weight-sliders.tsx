@@ -33,7 +33,7 @@ export function WeightSliders({
               <label htmlFor={id} className={`truncate ${w > 0 ? 'font-medium text-graphite-900' : 'text-graphite-500'}`} title={`${m.description} (${betterText(m)})`}>
                 {m.label}
               </label>
-              <output htmlFor={id} className={`num shrink-0 text-xs ${w > 0 ? 'font-semibold text-copper-700' : 'text-graphite-400'}`}>
+              <output htmlFor={id} className={`num shrink-0 text-xs ${w > 0 ? 'font-semibold text-copper-700' : 'text-graphite-500'}`}>
                 {w > 0 ? `× ${w}` : 'off'}
               </output>
             </div>

@@ -5,10 +5,14 @@ import { Facts, NoneRecorded, ReportSubheading, ReportTable } from './report-lay
 /** What the engineer typed ("2700 mAh") when there is one, else the stored SI value formatted. */
 const shown = (entered: Record<string, string>, key: string, value: number | null | undefined, unit: string) => entered[key] ?? formatStored(value, unit);
 
-/** The pack, the loads and the converters as recorded. */
+/** A duty in a mode as a percentage ("50 %", "33.3 %"). */
+const dutyText = (duty: number) => formatPercent(duty, Number.isInteger(Math.round(duty * 1000) / 10) ? 0 : 1);
+
+/** The pack, the loads, the operating modes and the converters as recorded. */
 export function ReportPower({ power }: { power: PowerSystemDto }) {
-  const { pack, loads, converters } = power;
-  if (!pack && !loads.length && !converters.length) return <NoneRecorded>No power system recorded.</NoneRecorded>;
+  const { pack, loads, converters, modes } = power;
+  if (!pack && !loads.length && !converters.length && !modes.length) return <NoneRecorded>No power system recorded.</NoneRecorded>;
+  const loadName = new Map(loads.map((l) => [l.id, l.label]));
   const converterName = new Map(converters.map((c) => [c.id, c.label || CONVERTER_TOPOLOGY.labels[c.topology]]));
   return (
     <div>
@@ -64,6 +68,30 @@ export function ReportPower({ power }: { power: PowerSystemDto }) {
         </ReportTable>
       ) : (
         <NoneRecorded>No loads recorded.</NoneRecorded>
+      )}
+
+      <ReportSubheading>Operating modes</ReportSubheading>
+      {modes.length ? (
+        <ReportTable label="Operating modes" keep head={['Mode', 'Note', 'Loads at their duty in the mode', 'Quiescent current']}>
+          {modes.map((m) => (
+            <tr key={m.id} data-mode={m.id}>
+              <td className="font-medium text-graphite-950">{m.name}</td>
+              <td>{m.note ?? '—'}</td>
+              <td>
+                {m.loads.length
+                  ? m.loads.map((l) => (
+                      <span key={l.loadId} className="block">
+                        {loadName.get(l.loadId) ?? `Load #${l.loadId}`} <span className="num text-graphite-700">at {dutyText(l.duty)}</span>
+                      </span>
+                    ))
+                  : 'No loads'}
+              </td>
+              <td className="num">{m.quiescentAmps !== null ? shown(m.entered, 'quiescentAmps', m.quiescentAmps, 'A') : '—'}</td>
+            </tr>
+          ))}
+        </ReportTable>
+      ) : (
+        <NoneRecorded>No operating modes recorded: the figures take all loads at once, each at its own duty.</NoneRecorded>
       )}
 
       <ReportSubheading>Converters</ReportSubheading>

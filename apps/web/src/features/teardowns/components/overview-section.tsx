@@ -4,6 +4,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { toast } from 'sonner';
 import { CircleCheck, Eye, MessageSquare, Undo2 } from 'lucide-react';
 import {
+  DEVICE_CATEGORY,
   TEARDOWN_FIELD_LABELS,
   teardownConflictDetails,
   updateTeardownBody,
@@ -132,7 +133,13 @@ function RecordForm({ teardown }: { teardown: TeardownDto }) {
   };
 
   const onSubmit = handleSubmit(() => save(base, getValues() as unknown as FormValues));
-  const contactDefault = settings.data ? `${settings.data.defaultContactSeconds} s` : 'the workspace default';
+  // Without its own time, a teardown is judged at its device category's time, else the workspace default (Admin → Figures & safety).
+  const categoryContact = settings.data?.contactSecondsByCategory[teardown.device.category];
+  const contactDefault = !settings.data
+    ? 'the workspace default'
+    : categoryContact !== undefined
+      ? `${categoryContact} s, the workspace time for the category “${DEVICE_CATEGORY.labels[teardown.device.category]}”`
+      : `${settings.data.defaultContactSeconds} s, the workspace default`;
 
   return (
     <Card title="Teardown record" actions={<span className="text-xs text-graphite-500">Version {base.version}</span>}>
