@@ -18,9 +18,16 @@ export const password = z
   .min(10, 'At least 10 characters')
   .max(200, 'At most 200 characters');
 
-/** A PATCH body: any subset of the fields, but at least one of them (400 otherwise). */
+/** A field without its `.default()`: in a PATCH, a field left out stays as it is, it is not reset. */
+const withoutDefault = (field: z.ZodType): z.ZodType => (field instanceof z.ZodDefault ? withoutDefault(field.unwrap() as z.ZodType) : field);
+
+/**
+ * A PATCH body: any subset of the fields, but at least one of them (400 otherwise). Defaults of the
+ * fields are dropped, so a field that is not sent is not changed (zod's `.partial()` alone would
+ * fill it with its default).
+ */
 export const patchOf = <S extends z.ZodRawShape>(shape: S, message = 'Change at least one field') =>
   z
-    .object(shape)
+    .object(Object.fromEntries(Object.entries(shape).map(([k, v]) => [k, withoutDefault(v as z.ZodType)])) as unknown as S)
     .partial()
     .refine((b) => Object.values(b).some((v) => v !== undefined), { message });

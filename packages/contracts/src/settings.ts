@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { patchOf } from './common';
 
 export const currencyCode = z
   .string()
@@ -17,5 +18,6 @@ export const workspaceSettingsSchema = z.object({
 });
 export type WorkspaceSettings = z.infer<typeof workspaceSettingsSchema>;
 export const settingsResponse = z.object({ settings: workspaceSettingsSchema });
-export const updateSettingsBody = workspaceSettingsSchema.partial().refine((b) => Object.keys(b).length > 0, { message: 'Change at least one setting' });
+/** PATCH /api/settings: the settings sent change, the others stay as they are. */
+export const updateSettingsBody = patchOf(workspaceSettingsSchema.shape, 'Change at least one setting');
 export type UpdateSettingsBody = z.infer<typeof updateSettingsBody>;

@@ -19,7 +19,7 @@ export const settingsRoutes: RouteDef[] = [
       response: settingsResponse,
     },
     async ({ em, user, body }) => {
-      if (user.role === 'sourcing' && Object.keys(body).some((k) => k !== 'reportingCurrency')) throw forbidden('Sourcing may change only the reporting currency.');
+      if (user.role === 'sourcing' && Object.entries(body).some(([k, v]) => v !== undefined && k !== 'reportingCurrency')) throw forbidden('Sourcing may change only the reporting currency.');
       return { settings: await updateSettings(em, user, body) };
     },
   ),
