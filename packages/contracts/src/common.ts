@@ -1,20 +1,33 @@
 import { z } from 'zod';
 
+/**
+ * Control characters a text field may not hold: C0 (NUL, bell, escape…) other than tab and line feed,
+ * a carriage return that does not start a CRLF line break, DEL, and the C1 range.
+ */
+const CONTROL_CHARACTERS = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F-\u009F]|\r(?!\n)/;
+export const CONTROL_CHARACTERS_MESSAGE = 'Remove the control characters (only tabs and line breaks may be in text)';
+export const hasControlCharacters = (value: string) => CONTROL_CHARACTERS.test(value);
+
+/**
+ * The one string schema of contracts: every text a client sends goes through it, so NUL and other
+ * control characters are a 400 naming the field instead of reaching the database.
+ */
+export const safeString = (params?: Parameters<typeof z.string>[0]) =>
+  z.string(params).refine((v) => !CONTROL_CHARACTERS.test(v), { message: CONTROL_CHARACTERS_MESSAGE, abort: true });
+
 /** Trimmed, non-empty text with a length cap. */
-export const text = (max = 200) => z.string().trim().min(1, 'Required').max(max, `At most ${max} characters`);
+export const text = (max = 200) => safeString().trim().min(1, 'Required').max(max, `At most ${max} characters`);
 export const optionalText = (max = 2000) =>
-  z
-    .string()
+  safeString()
     .trim()
     .max(max, `At most ${max} characters`)
     .optional()
     .transform((v) => (v === '' ? undefined : v));
-export const email = z.string().trim().toLowerCase().pipe(z.email('Enter a valid e-mail address').max(254));
+export const email = safeString().trim().toLowerCase().pipe(z.email('Enter a valid e-mail address').max(254));
 export const idParam = z.object({ id: z.coerce.number().int().positive('Must be a positive whole number') });
 export type IdParam = z.infer<typeof idParam>;
-export const isoDateTime = z.string();
-export const password = z
-  .string()
+export const isoDateTime = safeString();
+export const password = safeString()
   .min(10, 'At least 10 characters')
   .max(200, 'At most 200 characters');
 

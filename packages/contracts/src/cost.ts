@@ -1,7 +1,7 @@
 // Should-cost: part prices, currency rate tables, cost models and the roll-up of a teardown.
 // Shares are fractions (0.03 = 3 %); money is in the currency named beside it.
 import { z } from 'zod';
-import { optionalText } from './common';
+import { optionalText, safeString } from './common';
 import { PART_CATEGORY, MOUNT_TYPE } from './domain';
 import { currencyCode } from './settings';
 
@@ -26,8 +26,7 @@ export const RATE_TABLE_KIND = labelled(['import', 'manual', 'demo'] as const, {
 export type RateTableKind = (typeof RATE_TABLE_KIND.values)[number];
 
 /** A calendar date YYYY-MM-DD that exists. */
-export const isoDate = z
-  .string()
+export const isoDate = safeString()
   .trim()
   .regex(/^\d{4}-\d{2}-\d{2}$/, 'Use the form YYYY-MM-DD')
   .refine((s) => {
@@ -77,14 +76,14 @@ export type PartPriceBody = z.input<typeof partPriceBody>;
 
 export const partPriceSchema = z.object({
   partId: z.number().int(),
-  currency: z.string(),
+  currency: safeString(),
   breaks: z.array(priceBreakSchema),
   source: PRICE_SOURCE.schema,
   confidence: PRICE_CONFIDENCE.schema,
-  priceDate: z.string(),
-  note: z.string().nullable(),
-  updatedBy: z.string().nullable(),
-  updatedAt: z.string(),
+  priceDate: safeString(),
+  note: safeString().nullable(),
+  updatedBy: safeString().nullable(),
+  updatedAt: safeString(),
 });
 export type PartPriceDto = z.infer<typeof partPriceSchema>;
 export const partPriceResponse = z.object({ price: partPriceSchema });
@@ -93,16 +92,16 @@ export const partPriceResponse = z.object({ price: partPriceSchema });
 
 export const rateTableSchema = z.object({
   id: z.number().int(),
-  base: z.string(),
+  base: safeString(),
   /** The day the rates are for. */
-  date: z.string(),
-  source: z.string(),
+  date: safeString(),
+  source: safeString(),
   kind: RATE_TABLE_KIND.schema,
   /** Units of each currency per 1 unit of base (the base itself is 1 and not listed). */
-  rates: z.record(z.string(), z.number()),
-  note: z.string().nullable(),
-  createdBy: z.string().nullable(),
-  createdAt: z.string(),
+  rates: z.record(safeString(), z.number()),
+  note: safeString().nullable(),
+  createdBy: safeString().nullable(),
+  createdAt: safeString(),
   /** The latest saved table is the current one. */
   current: z.boolean(),
 });
@@ -112,7 +111,7 @@ export type RatesList = z.infer<typeof ratesListResponse>;
 export const rateTableResponse = z.object({
   rates: rateTableSchema,
   /** Things to know about the new table, e.g. a currency in use that it has no rate for. */
-  warnings: z.array(z.string()),
+  warnings: z.array(safeString()),
 });
 export type RateTableResponse = z.infer<typeof rateTableResponse>;
 
@@ -121,9 +120,9 @@ export const manualRatesBody = z
   .object({
     base: currencyCode,
     date: isoDate,
-    source: z.string().trim().min(1, 'Say where the rates come from').max(200, 'At most 200 characters'),
+    source: safeString().trim().min(1, 'Say where the rates come from').max(200, 'At most 200 characters'),
     rates: z.record(
-      z.string().trim().toUpperCase().regex(/^[A-Z]{3}$/, 'Currency codes have three letters'),
+      safeString().trim().toUpperCase().regex(/^[A-Z]{3}$/, 'Currency codes have three letters'),
       z.number({ error: 'A rate must be a number' }).gt(0, 'A rate must be greater than zero'),
     ),
     note: optionalText(300),
@@ -138,7 +137,7 @@ export type ManualRatesBody = z.input<typeof manualRatesBody>;
 // ---- Cost models ----
 
 export const manualOperationSchema = z.object({
-  label: z.string().trim().min(1, 'Name the operation').max(120, 'At most 120 characters'),
+  label: safeString().trim().min(1, 'Name the operation').max(120, 'At most 120 characters'),
   minutes: z.number({ error: 'Minutes must be a number' }).min(0, 'Minutes must not be negative').max(600, 'At most 600 minutes'),
 });
 
@@ -180,14 +179,14 @@ export const costModelSchema = z.object({
 export type CostModelDto = z.output<typeof costModelSchema>;
 export type CostModelBody = z.input<typeof costModelSchema>;
 
-export const costModelResponse = z.object({ model: costModelSchema, updatedAt: z.string().nullable(), updatedBy: z.string().nullable() });
+export const costModelResponse = z.object({ model: costModelSchema, updatedAt: safeString().nullable(), updatedBy: safeString().nullable() });
 export const teardownCostModelResponse = z.object({
   /** The model the teardown is costed with. */
   model: costModelSchema,
   source: z.enum(['workspace', 'teardown']),
   defaults: costModelSchema,
-  updatedAt: z.string().nullable(),
-  updatedBy: z.string().nullable(),
+  updatedAt: safeString().nullable(),
+  updatedBy: safeString().nullable(),
 });
 export type TeardownCostModel = z.infer<typeof teardownCostModelResponse>;
 
@@ -204,15 +203,15 @@ export const costQuery = z.object({
 });
 export type CostQuery = z.infer<typeof costQuery>;
 
-const figureInput = z.object({ label: z.string(), value: z.union([z.number(), z.string(), z.boolean(), z.null()]), unit: z.string().optional() });
+const figureInput = z.object({ label: safeString(), value: z.union([z.number(), safeString(), z.boolean(), z.null()]), unit: safeString().optional() });
 
 export const costLineSchema = z.object({
   partId: z.number().int(),
   position: z.number().int(),
-  designators: z.string().nullable(),
-  description: z.string(),
+  designators: safeString().nullable(),
+  description: safeString(),
   category: PART_CATEGORY.schema,
-  makerPartNumber: z.string().nullable(),
+  makerPartNumber: safeString().nullable(),
   mount: MOUNT_TYPE.schema,
   quantity: z.number(),
   /** quantity × volume: the quantity bought, which picks the price break. */
@@ -229,12 +228,12 @@ export const costLineSchema = z.object({
 });
 export type CostLine = z.infer<typeof costLineSchema>;
 
-export const costStepSchema = z.object({ key: z.string(), label: z.string(), value: z.number(), formula: z.string(), inputs: z.array(figureInput) });
+export const costStepSchema = z.object({ key: safeString(), label: safeString(), value: z.number(), formula: safeString(), inputs: z.array(figureInput) });
 export type CostStepDto = z.infer<typeof costStepSchema>;
 
 export const waterfallBarSchema = z.object({
-  key: z.string(),
-  label: z.string(),
+  key: safeString(),
+  label: safeString(),
   kind: z.enum(['step', 'subtotal', 'total']),
   value: z.number(),
   start: z.number(),
@@ -258,13 +257,13 @@ export type VolumeRow = z.infer<typeof volumeRowSchema>;
 export const costResponse = z.object({
   teardownId: z.number().int(),
   volume: z.number().int(),
-  currency: z.string(),
+  currency: safeString(),
   /** Date of the rate table every converted figure used; null when nothing needed converting and no table exists. */
-  rateDate: z.string().nullable(),
-  rateTable: z.object({ id: z.number().int(), base: z.string(), date: z.string(), source: z.string() }).nullable(),
+  rateDate: safeString().nullable(),
+  rateTable: z.object({ id: z.number().int(), base: safeString(), date: safeString(), source: safeString() }).nullable(),
   /** Rates of the currencies this teardown uses: per 1 base, and the cross rate into the reporting currency. */
-  ratesUsed: z.array(z.object({ currency: z.string(), perBase: z.number(), toReporting: z.number() })),
-  model: z.object({ source: z.enum(['workspace', 'teardown']), currency: z.string(), volumes: z.array(z.number().int()) }),
+  ratesUsed: z.array(z.object({ currency: safeString(), perBase: z.number(), toReporting: z.number() })),
+  model: z.object({ source: z.enum(['workspace', 'teardown']), currency: safeString(), volumes: z.array(z.number().int()) }),
   lines: z.array(costLineSchema),
   partsTotal: z.number(),
   byCategory: z.array(z.object({ category: PART_CATEGORY.schema, total: z.number(), share: z.number().nullable(), lines: z.number().int() })),
@@ -289,7 +288,7 @@ export const costResponse = z.object({
       retailerShare: z.number(),
       platformShare: z.number(),
       netToMaker: z.number(),
-      seen: z.object({ amount: z.number(), currency: z.string(), on: z.string().nullable() }),
+      seen: z.object({ amount: z.number(), currency: safeString(), on: safeString().nullable() }),
     })
     .nullable(),
   impliedMargin,
@@ -297,7 +296,7 @@ export const costResponse = z.object({
   waterfall: z.array(waterfallBarSchema),
   volumes: z.array(volumeRowSchema),
   unpricedPartIds: z.array(z.number().int()),
-  warnings: z.array(z.string()),
+  warnings: z.array(safeString()),
 });
 export type CostRollUpDto = z.infer<typeof costResponse>;
 
@@ -312,8 +311,8 @@ export const priceImportRowSchema = z.object({
   /** Line number in the file (the header is line 1). */
   line: z.number().int(),
   partId: z.number().int(),
-  description: z.string(),
-  designators: z.string().nullable(),
+  description: safeString(),
+  designators: safeString().nullable(),
   matchedBy: z.enum(['designators', 'makerPartNumber', 'description']),
   before: partPriceSchema.omit({ partId: true, updatedBy: true, updatedAt: true }).nullable(),
   after: partPriceSchema.omit({ partId: true, updatedBy: true, updatedAt: true }),
@@ -324,7 +323,7 @@ export const priceImportResponse = z.object({
   mode: z.enum(['preview', 'apply']),
   rows: z.array(priceImportRowSchema),
   /** Lines left alone because they carry no price (e.g. unpriced lines of an export). */
-  skipped: z.array(z.object({ line: z.number().int(), reason: z.string() })),
+  skipped: z.array(z.object({ line: z.number().int(), reason: safeString() })),
   saved: z.number().int(),
 });
 export type PriceImportResult = z.infer<typeof priceImportResponse>;

@@ -1,26 +1,27 @@
 import { z } from 'zod';
+import { safeString } from './common';
 import { FINDING_KIND, SEVERITY } from './domain';
 
 export const figureInputSchema = z.object({
-  label: z.string(),
-  value: z.union([z.number(), z.string(), z.boolean(), z.null()]),
-  unit: z.string().optional(),
+  label: safeString(),
+  value: z.union([z.number(), safeString(), z.boolean(), z.null()]),
+  unit: safeString().optional(),
 });
 export type FigureInputDto = z.infer<typeof figureInputSchema>;
 
 /** A derived figure with how it was obtained (computed on the server by packages/calc). */
 export const figureSchema = z.object({
-  key: z.string(),
-  label: z.string(),
-  value: z.union([z.number(), z.string()]),
-  unit: z.string(),
-  formula: z.string(),
-  source: z.string(),
+  key: safeString(),
+  label: safeString(),
+  value: z.union([z.number(), safeString()]),
+  unit: safeString(),
+  formula: safeString(),
+  source: safeString(),
   inputs: z.array(figureInputSchema),
-  assumptions: z.array(z.string()),
-  warnings: z.array(z.string()),
+  assumptions: z.array(safeString()),
+  warnings: z.array(safeString()),
   /** A safety caution to show beside this figure (e.g. hot surface next to touch-temperature figures). */
-  caution: z.string().nullable(),
+  caution: safeString().nullable(),
 });
 export type FigureDto = z.infer<typeof figureSchema>;
 
@@ -28,16 +29,16 @@ export const SUGGESTION_STATUS = ['open', 'accepted', 'dismissed'] as const;
 export type SuggestionStatus = (typeof SUGGESTION_STATUS)[number];
 
 export const suggestionSchema = z.object({
-  key: z.string(),
-  title: z.string(),
+  key: safeString(),
+  title: safeString(),
   kind: FINDING_KIND.schema,
   severity: SEVERITY.schema,
-  detail: z.string(),
+  detail: safeString(),
   status: z.enum(SUGGESTION_STATUS),
   /** The finding made when it was accepted. */
   findingId: z.number().int().nullable(),
-  decidedBy: z.string().nullable(),
-  decidedAt: z.string().nullable(),
+  decidedBy: safeString().nullable(),
+  decidedAt: safeString().nullable(),
 });
 export type SuggestionDto = z.infer<typeof suggestionSchema>;
 
@@ -45,14 +46,13 @@ export const figuresResponse = z.object({
   figures: z.array(figureSchema),
   suggestions: z.array(suggestionSchema),
   /** "Engineering estimates, not certification results" — shown with the figures. */
-  note: z.string(),
+  note: safeString(),
 });
 export type FiguresResponse = z.infer<typeof figuresResponse>;
 
 export const suggestionParams = z.object({
   id: z.coerce.number().int().positive('Must be a positive whole number'),
-  key: z
-    .string()
+  key: safeString()
     .max(120, 'At most 120 characters')
     .regex(/^[a-z0-9][a-z0-9.-]*$/i, 'Not a suggestion key'),
 });

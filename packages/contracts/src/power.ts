@@ -2,12 +2,12 @@
 // Numeric inputs take a number in SI or text with a unit ("2700 mAh", "3.65V", "3R0", "60 %"); the
 // server stores SI and keeps the typed text in `entered`, keyed by the field name.
 import { z } from 'zod';
-import { patchOf } from './common';
+import { patchOf, safeString } from './common';
 import { CHEMISTRY, CONNECTION, CONVERTER_ROLE, CONVERTER_TOPOLOGY, JOINING, LOAD_KIND, SURFACE_MATERIAL } from './domain';
 
 /** A number (SI) or text with a unit. Blank or null clears an optional value. */
 /** A number in SI or a value with its unit ("2700 mAh"), parsed by the server. */
-const powerQuantity = z.union([z.number(), z.string().trim().max(40, 'At most 40 characters')], {
+const powerQuantity = z.union([z.number(), safeString().trim().max(40, 'At most 40 characters')], {
   error: (issue) => (issue.input === undefined ? 'Required' : 'Enter a number or a value with its unit'),
 });
 const required = powerQuantity;
@@ -16,8 +16,7 @@ const optional = powerQuantity.nullable().optional();
 const choice = <T extends readonly [string, ...string[]]>(values: T) => z.enum(values, { error: `Choose one of: ${values.join(', ')}` });
 
 const label = (max: number) =>
-  z
-    .string()
+  safeString()
     .trim()
     .max(max, `At most ${max} characters`)
     .nullable()
@@ -51,7 +50,7 @@ export const packSchema = z.object({
   id: z.number().int(),
   teardownId: z.number().int(),
   chemistry: choice(CHEMISTRY.values),
-  cellFormat: z.string().nullable(),
+  cellFormat: safeString().nullable(),
   nominalVolts: z.number(),
   maxVolts: z.number().nullable(),
   capacityAh: z.number(),
@@ -62,10 +61,10 @@ export const packSchema = z.object({
   protection: z.boolean(),
   joining: choice(JOINING.values).nullable(),
   /** What the user typed, by field ("capacityAh": "2700 mAh"). */
-  entered: z.record(z.string(), z.string()),
+  entered: z.record(safeString(), safeString()),
   /** A lithium chemistry: the section shows the lithium cautions. */
   lithium: z.boolean(),
-  updatedAt: z.string(),
+  updatedAt: safeString(),
 });
 export type PackDto = z.infer<typeof packSchema>;
 export const packResponse = z.object({ pack: packSchema.nullable() });
@@ -99,7 +98,7 @@ export type UpdateConverterBody = z.input<typeof updateConverterBody>;
 export const converterSchema = z.object({
   id: z.number().int(),
   teardownId: z.number().int(),
-  label: z.string(),
+  label: safeString(),
   topology: choice(CONVERTER_TOPOLOGY.values),
   role: choice(CONVERTER_ROLE.values),
   inputVolts: z.number(),
@@ -108,8 +107,8 @@ export const converterSchema = z.object({
   chargeCurrentAmps: z.number().nullable(),
   efficiency: z.number().nullable(),
   efficiencySource: z.enum(['measured', 'assumed']),
-  entered: z.record(z.string(), z.string()),
-  createdAt: z.string(),
+  entered: z.record(safeString(), safeString()),
+  createdAt: safeString(),
 });
 export type ConverterDto = z.infer<typeof converterSchema>;
 export const converterResponse = z.object({ converter: converterSchema });
@@ -152,7 +151,7 @@ export const loadSchema = z.object({
   id: z.number().int(),
   teardownId: z.number().int(),
   kind: choice(LOAD_KIND.values),
-  label: z.string(),
+  label: safeString(),
   resistanceOhms: z.number().nullable(),
   currentAmps: z.number().nullable(),
   powerWatts: z.number().nullable(),
@@ -163,8 +162,8 @@ export const loadSchema = z.object({
   converterId: z.number().int().nullable(),
   heatedAreaM2: z.number().nullable(),
   surfaceMaterial: choice(SURFACE_MATERIAL.values).nullable(),
-  entered: z.record(z.string(), z.string()),
-  createdAt: z.string(),
+  entered: z.record(safeString(), safeString()),
+  createdAt: safeString(),
 });
 export type LoadDto = z.infer<typeof loadSchema>;
 export const loadResponse = z.object({ load: loadSchema });

@@ -1,8 +1,7 @@
 import { z } from 'zod';
-import { patchOf } from './common';
+import { patchOf, safeString } from './common';
 
-export const currencyCode = z
-  .string()
+export const currencyCode = safeString()
   .trim()
   .toUpperCase()
   .regex(/^[A-Z]{3}$/, 'Use a three-letter ISO 4217 code such as USD');

@@ -1,4 +1,4 @@
-import type { ErrorCode } from '@splitcase/contracts';
+import { CONTROL_CHARACTERS_MESSAGE, type ErrorCode } from '@splitcase/contracts';
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { OptimisticLockError } from '@mikro-orm/core';
 import { ZodError } from 'zod';
@@ -42,12 +42,20 @@ export class AppError extends Error {
 export const notFound = (what: string) => new AppError('not_found', `${what} was not found.`);
 export const forbidden = (message = 'Your role does not allow this.') => new AppError('forbidden', message);
 
+type Issue = ZodError['issues'][number];
+
+/** A field that takes text or something else (a number, null) says "Invalid input" for any refused text: say why when it held control characters. */
+function issueMessage(issue: Issue): string {
+  if (issue.code === 'invalid_union' && issue.errors.some((branch) => branch.some((i) => i.message === CONTROL_CHARACTERS_MESSAGE))) return CONTROL_CHARACTERS_MESSAGE;
+  return issue.message;
+}
+
 /** Turn a ZodError into field → message pairs (the first message per field). */
 export function zodFields(err: ZodError, prefix?: string): Record<string, string> {
   const fields: Record<string, string> = {};
   for (const issue of err.issues) {
     const key = [prefix, ...issue.path.map(String)].filter(Boolean).join('.') || '_';
-    fields[key] ??= issue.message;
+    fields[key] ??= issueMessage(issue);
   }
   return fields;
 }
