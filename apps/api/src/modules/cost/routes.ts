@@ -268,7 +268,7 @@ export const costRoutes: RouteDef[] = [
       const slug = `${teardown.device.maker}-${teardown.device.model}`.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '');
       res.setHeader('Content-Type', 'text/csv; charset=utf-8');
       res.setHeader('Content-Disposition', `attachment; filename="costed-bom-${slug}-${cost.volume}-${cost.currency}.csv"`);
-      res.send(`\uFEFF${costedBomCsv(cost)}\r\n`);
+      res.send(costedBomCsv(cost));
       return undefined;
     },
   ),
