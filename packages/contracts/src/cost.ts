@@ -34,12 +34,15 @@ export const isoDate = safeString()
     return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === s;
   }, 'Not a calendar date');
 
-const money = (what: string) => z.number({ error: `${what} must be a number` }).min(0, `${what} must not be negative`);
+/** Largest amount of money, quantity or rate accepted anywhere in costing (1e9): sane bounds for any currency. */
+export const COST_MAX = 1_000_000_000;
+const AT_MOST = 'At most 1 000 000 000';
+const money = (what: string) => z.number({ error: `${what} must be a number` }).min(0, `${what} must not be negative`).max(COST_MAX, AT_MOST);
 const fraction = (what: string) =>
   z.number({ error: `${what} must be a number` }).min(0, `${what} must not be below 0 %`).max(1, `${what} must not be above 100 %`);
 
 export const priceBreakSchema = z.object({
-  minQty: z.number({ error: 'Minimum quantity must be a number' }).gt(0, 'Minimum quantity must be greater than zero'),
+  minQty: z.number({ error: 'Minimum quantity must be a number' }).gt(0, 'Minimum quantity must be greater than zero').max(COST_MAX, AT_MOST),
   unitPrice: money('Unit price'),
 });
 export type PriceBreakDto = z.infer<typeof priceBreakSchema>;
@@ -123,7 +126,7 @@ export const manualRatesBody = z
     source: safeString().trim().min(1, 'Say where the rates come from').max(200, 'At most 200 characters'),
     rates: z.record(
       safeString().trim().toUpperCase().regex(/^[A-Z]{3}$/, 'Currency codes have three letters'),
-      z.number({ error: 'A rate must be a number' }).gt(0, 'A rate must be greater than zero'),
+      z.number({ error: 'A rate must be a number' }).gt(0, 'A rate must be greater than zero').max(COST_MAX, AT_MOST),
     ),
     note: optionalText(300),
   })

@@ -1,6 +1,6 @@
 import { CONTROL_CHARACTERS_MESSAGE, type ErrorCode } from '@splitcase/contracts';
 import type { ErrorRequestHandler, RequestHandler } from 'express';
-import { OptimisticLockError } from '@mikro-orm/core';
+import { OptimisticLockError, UniqueConstraintViolationException } from '@mikro-orm/core';
 import { ZodError } from 'zod';
 
 const STATUS: Record<ErrorCode, number> = {
@@ -99,6 +99,10 @@ function toAppError(err: unknown): AppError {
   if (err instanceof ZodError) return validationError(zodFields(err));
   if (err instanceof OptimisticLockError) {
     return new AppError('stale_version', 'Someone else changed this record since you opened it.');
+  }
+  // Two requests creating the same record at once (e.g. two first prices of a part): the second loses.
+  if (err instanceof UniqueConstraintViolationException) {
+    return new AppError('conflict', 'Someone else saved the same record at the same moment, so this change was not saved. Reload and try again.');
   }
   if (err instanceof RangeError) return new AppError('unprocessable', err.message);
   const e = err as { type?: string; status?: number; code?: string; message?: string; field?: string };
