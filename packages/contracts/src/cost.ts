@@ -257,8 +257,19 @@ export const volumeRowSchema = z.object({
 });
 export type VolumeRow = z.infer<typeof volumeRowSchema>;
 
+/**
+ * What the caller sees of prices: 'detail' (admin, engineer, sourcing, lead) or 'totals' (the others:
+ * should-cost totals only; each line's unitPrice, extended, breakMinQty and price are null).
+ */
+export const PRICE_VIEW = ['detail', 'totals'] as const;
+export const priceViewSchema = z.enum(PRICE_VIEW);
+export type PriceView = z.infer<typeof priceViewSchema>;
+/** Said where a 'totals' view leaves the line prices out. */
+export const PRICE_VIEW_NOTE = 'Line prices, price breaks and quote sources are shown to engineers, sourcing, leads and admins; you see the should-cost totals.';
+
 export const costResponse = z.object({
   teardownId: z.number().int(),
+  priceView: priceViewSchema,
   volume: z.number().int(),
   currency: safeString(),
   /** Date of the rate table every converted figure used; null when nothing needed converting and no table exists. */
