@@ -52,7 +52,7 @@ const cases = (): Record<string, PatchCase> => ({
   'PATCH /api/settings': {
     url: () => '/api/settings',
     read: async (a) => (await get(a, '/api/settings')).settings,
-    values: { capacityWarnFraction: 0.8, reportingCurrency: 'EUR', defaultContactSeconds: 30 },
+    values: { capacityWarnFraction: 0.8, reportingCurrency: 'EUR', defaultContactSeconds: 30, sessionMaxHours: 24, sessionIdleMinutes: 90 },
   },
   'PATCH /api/users/:id': {
     url: () => `/api/users/${d.users.engineer2}`,

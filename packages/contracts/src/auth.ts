@@ -34,4 +34,10 @@ export const resetConfirmBody = z.object({
   password,
 });
 export type ResetConfirmBody = z.infer<typeof resetConfirmBody>;
+/** POST /api/auth/password: change your own password (your other sessions end). */
+export const changePasswordBody = z.object({
+  currentPassword: safeString().min(1, 'Required').max(200),
+  newPassword: password,
+});
+export type ChangePasswordBody = z.infer<typeof changePasswordBody>;
 export const acceptedResponse = z.object({ ok: z.literal(true), message: safeString() });

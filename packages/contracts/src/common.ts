@@ -27,8 +27,11 @@ export const email = safeString().trim().toLowerCase().pipe(z.email('Enter a val
 export const idParam = z.object({ id: z.coerce.number().int().positive('Must be a positive whole number') });
 export type IdParam = z.infer<typeof idParam>;
 export const isoDateTime = safeString();
+/** The password rule as the forms show it; the server also checks it against a common-password list. */
+export const PASSWORD_MIN_LENGTH = 12;
+export const PASSWORD_RULE = `At least ${PASSWORD_MIN_LENGTH} characters, not your e-mail address or name, and not a common password. A phrase of a few unrelated words works well.`;
 export const password = safeString()
-  .min(10, 'At least 10 characters')
+  .min(PASSWORD_MIN_LENGTH, `At least ${PASSWORD_MIN_LENGTH} characters`)
   .max(200, 'At most 200 characters');
 
 /** A field without its `.default()`: in a PATCH, a field left out stays as it is, it is not reset. */

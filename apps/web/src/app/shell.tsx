@@ -43,14 +43,14 @@ export function Shell() {
           <a href={paths.api.docs()} className="flex items-center gap-2 text-xs text-graphite-400 hover:text-white">
             <BookOpen className="size-3.5" aria-hidden /> API reference
           </a>
-          <div>
+          <NavLink to={paths.account()} className="block rounded-sm hover:text-white" title="Your account and password">
             <div className="truncate font-medium text-white" data-testid="current-user">
               {me.name}
             </div>
             <div className="truncate text-xs text-graphite-400">
               {ROLE_LABELS[me.role]} · {me.email}
             </div>
-          </div>
+          </NavLink>
           <button
             type="button"
             onClick={() => logout.mutate(undefined, { onSettled: () => navigate(paths.signIn(), { replace: true }) })}

@@ -1,6 +1,7 @@
 import { RequireRole } from '@/app/guards';
 import { PageHeader } from '@/components/page';
 import { AdminTabs } from '@/features/admin/components/admin-tabs';
+import { SessionSettings } from '@/features/admin/components/session-settings';
 import { UsersPanel } from '@/features/admin/components/users-panel';
 
 export function Component() {
@@ -9,6 +10,9 @@ export function Component() {
       <PageHeader eyebrow="Admin" title="Users" />
       <AdminTabs />
       <UsersPanel />
+      <div className="mt-6">
+        <SessionSettings />
+      </div>
     </RequireRole>
   );
 }
