@@ -7,12 +7,12 @@ import { Spinner } from '@/components/page';
 import { WidgetBoundary } from '@/components/error-boundary';
 import { navFor } from '@/config/nav';
 import { paths } from '@/config/paths';
-import { useMe } from '@/lib/session';
+import { useSignedInUser } from '@/lib/session';
 import { useLogout } from '@/features/auth/api/logout';
 
 /** Left rail navigation; the content area is the workspace. */
 export function Shell() {
-  const me = useMe().data!;
+  const me = useSignedInUser();
   const logout = useLogout();
   const navigate = useNavigate();
   const location = useLocation();

@@ -1,12 +1,11 @@
 import { ROLE_DESCRIPTIONS, ROLE_LABELS } from '@splitcase/contracts';
 import { Card, PageHeader } from '@/components/page';
 import { ChangePasswordForm } from '@/features/auth/components/change-password-form';
-import { useMe } from '@/lib/session';
+import { useSignedInUser } from '@/lib/session';
 
 /** Your account: who you are in the workspace, and your password. */
 export function Component() {
-  const me = useMe().data;
-  if (!me) return null;
+  const me = useSignedInUser();
   return (
     <>
       <PageHeader title="Your account" subtitle={`${me.name} · ${me.email}`} />
