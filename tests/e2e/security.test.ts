@@ -1,5 +1,6 @@
 // In the browser: signing out leaves no render error behind, a viewer's cost section and printable
 // report show the should-cost totals without line prices, and the password forms state the rule.
+import AxeBuilder from '@axe-core/playwright';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { PASSWORD_RULE, PRICE_VIEW_NOTE } from '@splitcase/contracts';
@@ -10,6 +11,12 @@ beforeAll(async () => {
   browser = await launch();
 });
 afterAll(() => browser?.close());
+
+/** Serious and critical accessibility violations on the page as it is now. */
+async function axeProblems(page: Page): Promise<string[]> {
+  const result = await new AxeBuilder({ page }).analyze();
+  return result.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical').map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`);
+}
 
 /** Console errors and uncaught page errors, from now on. */
 function collectErrors(page: Page): string[] {
@@ -68,6 +75,7 @@ describe('price detail in the browser', () => {
     const headers = await table.locator('th').allTextContents();
     for (const hidden of ['Break used', 'Confidence', 'Source']) expect(headers.join('|')).not.toContain(hidden);
     expect(headers.some((h) => /^Unit /.test(h))).toBe(false);
+    expect(await axeProblems(page)).toEqual([]);
     await page.goto(`/teardowns/${id}/report`);
     await expect.poll(() => page.getByTestId('bom-total').textContent(), { timeout: 10_000 }).toBeTruthy();
     await expect.poll(() => page.locator('body').textContent(), { timeout: 10_000 }).toContain(PRICE_VIEW_NOTE);
@@ -90,14 +98,35 @@ describe('price detail in the browser', () => {
 describe('password forms', () => {
   it('the account page and the reset page state the password rule', async () => {
     const page = await signedInPage(browser, 'engineer');
+    await page.goto('/');
     await page.getByTestId('current-user').click();
     await page.getByRole('heading', { name: 'Your account' }).waitFor();
     await expect.poll(() => page.getByText(PASSWORD_RULE).count(), { timeout: 10_000 }).toBe(1);
+    expect(await axeProblems(page)).toEqual([]);
     const context = await browser.newContext({ baseURL: baseUrl() });
     const anon = await context.newPage();
     await anon.goto('/reset-password?token=an-incomplete-link-token');
     await expect.poll(() => anon.getByText(PASSWORD_RULE).count(), { timeout: 10_000 }).toBe(1);
     await context.close();
+    await page.context().close();
+  });
+
+  it('admins set the session limits on the Users page', async () => {
+    const page = await signedInPage(browser, 'admin');
+    await page.goto('/admin/users');
+    const idle = page.getByLabel('Sign out after inactivity (minutes)');
+    await idle.waitFor();
+    await expect.poll(() => idle.inputValue(), { timeout: 10_000 }).toBe('60');
+    await idle.fill('2');
+    await page.getByRole('button', { name: 'Save' }).click();
+    await expect.poll(() => page.getByText('At least 5 min').count(), { timeout: 10_000 }).toBe(1);
+    await idle.fill('90');
+    await page.getByRole('button', { name: 'Save' }).click();
+    await expect.poll(async () => (await (await page.request.get('/api/settings')).json()).settings.sessionIdleMinutes, { timeout: 10_000 }).toBe(90);
+    expect(await axeProblems(page)).toEqual([]);
+    await idle.fill('60');
+    await page.getByRole('button', { name: 'Save' }).click();
+    await expect.poll(async () => (await (await page.request.get('/api/settings')).json()).settings.sessionIdleMinutes, { timeout: 10_000 }).toBe(60);
     await page.context().close();
   });
 });

@@ -70,7 +70,7 @@ export function UsersPanel() {
         align: 'right',
         cell: (u) =>
           u.id === me?.id ? (
-            <span className="text-xs text-graphite-400">you</span>
+            <span className="text-xs text-graphite-500">you</span>
           ) : u.active ? (
             <Button size="sm" variant="danger" onClick={() => change(u, { active: false }, `${u.name} is deactivated and signed out.`)}>
               Deactivate
