@@ -33,6 +33,16 @@ describe('progressive delay per account [CP: OWASP authentication guidance: dela
     expect(slept).toEqual([500, 1000]);
   });
 
+  it('a stranger cannot queue the owner out: however many attempts wait, none waits longer than the ceiling', async () => {
+    // A queue without a bound would let many guesses sent at once (from many addresses) keep the
+    // owner, with the right password, waiting for hours: a lock-out by other means.
+    const { throttle, slept } = clocked();
+    for (let i = 0; i < 20; i++) throttle.failed('a');
+    const waits = await Promise.all(Array.from({ length: 200 }, () => throttle.wait('a')));
+    expect(Math.max(...waits)).toBe(4000);
+    expect(Math.max(...slept)).toBe(4000);
+  });
+
   it('another account is not slowed, a success clears the count, and old failures are forgotten', async () => {
     const { throttle, slept, advance } = clocked();
     for (let i = 0; i < 6; i++) throttle.failed('a');

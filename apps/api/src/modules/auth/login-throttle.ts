@@ -1,7 +1,8 @@
 // Progressive delay per account: no lock-out that a stranger could trigger. After a few failed
 // sign-ins on one account, every further attempt on it waits a little longer (doubling up to a
 // ceiling) before it is checked; the right password still signs in, only later. Attempts queue, so
-// parallel guesses gain nothing. Refusals (429) come from the per-address limit only.
+// parallel guesses gain little, yet none waits longer than the ceiling, so a flood of guesses cannot
+// keep the owner out either. Refusals (429) come from the per-address limit only.
 
 export interface ThrottleOptions {
   /** Failed attempts on an account before the delay starts. */
@@ -55,9 +56,10 @@ export class LoginThrottle {
     const e = this.entry(key);
     if (!e) return 0;
     const start = this.now();
-    const wait = Math.max(0, e.nextAt - start);
-    // The next attempt queues behind this one.
-    e.nextAt = Math.max(e.nextAt, start) + this.delayAfter(e.failures);
+    const wait = Math.min(this.opts.maxDelayMs, Math.max(0, e.nextAt - start));
+    // The next attempt queues behind this one, but no attempt waits longer than the ceiling: an
+    // unbounded queue would let a flood of guesses keep the owner out.
+    e.nextAt = Math.min(start + this.opts.maxDelayMs, Math.max(e.nextAt, start) + this.delayAfter(e.failures));
     if (wait > 0) await this.sleep(wait);
     return wait;
   }
