@@ -121,6 +121,38 @@ describe('session lifetime', () => {
     expect(await me(fresh)).toBe(200);
   });
 
+  it('the limits set by an admin are the ones applied, and use keeps a session alive', async () => {
+    const admin = await t.as('admin');
+    const engineer = await t.as('engineer');
+    const id = (await engineer.get('/api/auth/me').expect(200)).body.user.id;
+    const minutesAgo = (m: number) => Date.now() - m * 60_000;
+    const setSeen = (minutes: number) =>
+      sessionsDb(t, "update sessions set sess = json_set(sess, '$.lastSeenAt', ?) where json_extract(sess, '$.userId') = ?", [minutesAgo(minutes), id]);
+    const seenAt = async () =>
+      (await sessionsDb<{ seen: number }>(t, "select max(json_extract(sess, '$.lastSeenAt')) as seen from sessions where json_extract(sess, '$.userId') = ?", [id]))[0]!.seen;
+    try {
+      // Idle 50 min of 60: the request goes through and counts as use.
+      await setSeen(50);
+      expect(await me(engineer)).toBe(200);
+      expect(Date.now() - (await seenAt())).toBeLessThan(60_000);
+      // With the idle limit lowered to 30 min, 31 min unused ends the session (it was within 60).
+      await admin.patch('/api/settings', { sessionIdleMinutes: 30 }).expect(200);
+      await setSeen(31);
+      expect(await me(engineer)).toBe(401);
+      // With the absolute limit lowered to 2 h, a session signed in 3 h ago ends though just used.
+      await admin.patch('/api/settings', { sessionIdleMinutes: 60, sessionMaxHours: 2 }).expect(200);
+      const again = await t.as('engineer');
+      await sessionsDb(t, "update sessions set sess = json_set(sess, '$.signedInAt', ?, '$.lastSeenAt', ?) where json_extract(sess, '$.userId') = ?", [
+        minutesAgo(180),
+        minutesAgo(1),
+        id,
+      ]);
+      expect(await me(again)).toBe(401);
+    } finally {
+      await admin.patch('/api/settings', { sessionIdleMinutes: 60, sessionMaxHours: 12 }).expect(200);
+    }
+  });
+
   it('cookies are Secure by default when the public URL is https', () => {
     expect(readEnv({ SPLITCASE_PUBLIC_URL: 'https://splitcase.example.test' }).secureCookies).toBe(true);
     expect(readEnv({ SPLITCASE_PUBLIC_URL: 'http://localhost:3000' }).secureCookies).toBe(false);
@@ -170,6 +202,31 @@ describe('passwords', () => {
       expect(res.body.error.fields.password, password).toMatch(message);
     }
     await invitee.post('/api/auth/invitations/accept', { token, name: 'Rosa Ulrike Lester', password: 'tidal-basalt-orchard-5' }).expect(201);
+  });
+
+  it('a refused new password names the New password field, and nothing changes: same password, no session ended', async () => {
+    await newUser('refused-change@splitcase.test', 'Refused Change', 'copper-lantern-fjord-61');
+    const signIn = async () => {
+      const s = await t.anonymous();
+      await s.post('/api/auth/login', { email: 'refused-change@splitcase.test', password: 'copper-lantern-fjord-61' }).expect(200);
+      s.csrf = (await s.get('/api/auth/csrf')).body.token;
+      return s;
+    };
+    const other = await signIn();
+    const self = await signIn();
+    for (const [newPassword, message] of [
+      ['short-one', /At least 12 characters/],
+      ['refused-change@splitcase.test', /e-mail address or your name/],
+      ['Refused Change', /e-mail address or your name/],
+      ['password1234', /too easy to guess/],
+    ] as const) {
+      const res = await self.post('/api/auth/password', { currentPassword: 'copper-lantern-fjord-61', newPassword });
+      expect(res.status, newPassword).toBe(400);
+      expect(Object.keys(res.body.error.fields), newPassword).toEqual(['newPassword']);
+      expect(res.body.error.fields.newPassword, newPassword).toMatch(message);
+    }
+    expect([await me(other), await me(self)]).toEqual([200, 200]);
+    await (await t.anonymous()).post('/api/auth/login', { email: 'refused-change@splitcase.test', password: 'copper-lantern-fjord-61' }).expect(200);
   });
 
   it('a reset with a common password is refused and the link still works', async () => {
