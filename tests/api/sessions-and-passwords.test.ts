@@ -229,6 +229,18 @@ describe('passwords', () => {
     await (await t.anonymous()).post('/api/auth/login', { email: 'refused-change@splitcase.test', password: 'copper-lantern-fjord-61' }).expect(200);
   });
 
+  it('a fresh workspace seeds with the documented default demo password (README), and it signs in', async () => {
+    const demoPassword = readEnv({}).demoPassword;
+    expect(demoPassword).toBe('splitcase-demo');
+    const app = await makeTestApp({ env: { demoPassword } });
+    try {
+      const a = await app.anonymous();
+      await a.post('/api/auth/login', { email: 'admin@splitcase.test', password: demoPassword }).expect(200);
+    } finally {
+      await app.close();
+    }
+  });
+
   it('a reset with a common password is refused and the link still works', async () => {
     const anon = await t.anonymous();
     await anon.post('/api/auth/password-reset/request', { email: 'engineer2@splitcase.test' }).expect(202);

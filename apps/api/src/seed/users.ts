@@ -1,5 +1,5 @@
 import type { Role } from '@splitcase/contracts';
-import { hashPassword, passwordProblem } from '../modules/auth/passwords';
+import { hashPassword } from '../modules/auth/passwords';
 import { UserSchema, type User } from '../modules/users/user.entity';
 import type { SeedContext } from './context';
 
@@ -16,11 +16,9 @@ export const DEMO_DOMAIN = 'splitcase.test';
 export const demoEmail = (role: Role) => `${role}@${DEMO_DOMAIN}`;
 
 export async function seedUsers(ctx: SeedContext): Promise<void> {
-  // The demo password follows the rule every user's password follows.
-  for (const u of DEMO_USERS) {
-    const problem = passwordProblem(ctx.env.demoPassword, { email: demoEmail(u.role), name: u.name });
-    if (problem) throw new Error(`SPLITCASE_DEMO_PASSWORD is refused for ${demoEmail(u.role)}: ${problem}`);
-  }
+  // The demo password is shared and published (README, `npm start` prints it), so no guessing check
+  // would make it secret; it only needs 12 characters (config/env.ts). The password rule applies to
+  // every password a person sets: accepting an invitation, a reset, a change.
   const passwordHash = await hashPassword(ctx.env.demoPassword);
   const users = {} as Record<Role, User>;
   for (const u of DEMO_USERS) {
