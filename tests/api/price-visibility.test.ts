@@ -71,6 +71,14 @@ describe('cost JSON', () => {
     expect(viewer.warnings.some((w) => /price break/.test(w))).toBe(false);
   });
 
+  it('a viewer gets no subtotal per category: a category of one line would be that line\'s price', async () => {
+    const full = await costOf('lead');
+    const single = full.byCategory.find((c) => c.lines === 1 && c.total > 0);
+    expect(single, 'the demo teardown has a category of one priced line').toBeDefined();
+    expect(full.lines.find((l) => l.category === single!.category)!.extended).toBeCloseTo(single!.total, 9);
+    expect((await costOf('viewer')).byCategory).toEqual([]);
+  });
+
   it('admin, engineer, sourcing and lead see the breaks, sources and line prices', async () => {
     for (const role of PRICE_READERS) {
       const c = await costOf(role);

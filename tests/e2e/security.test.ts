@@ -75,6 +75,9 @@ describe('price detail in the browser', () => {
     const headers = await table.locator('th').allTextContents();
     for (const hidden of ['Break used', 'Confidence', 'Source']) expect(headers.join('|')).not.toContain(hidden);
     expect(headers.some((h) => /^Unit /.test(h))).toBe(false);
+    // No subtotal per category either (one line's category would be its price); the waterfall stays.
+    await page.getByTestId('chart-waterfall').waitFor();
+    expect(await page.getByRole('table', { name: 'Parts by category, data' }).count()).toBe(0);
     expect(await axeProblems(page)).toEqual([]);
     await page.goto(`/teardowns/${id}/report`);
     await expect.poll(() => page.getByTestId('bom-total').textContent(), { timeout: 10_000 }).toBeTruthy();
@@ -90,6 +93,7 @@ describe('price detail in the browser', () => {
     const table = page.getByRole('table', { name: 'Costed bill of materials' });
     await table.waitFor();
     await expect.poll(async () => (await table.locator('th').allTextContents()).join('|'), { timeout: 10_000 }).toContain('Break used');
+    await page.getByRole('table', { name: 'Parts by category, data' }).waitFor();
     expect(await page.getByTestId('price-view-note').count()).toBe(0);
     await page.context().close();
   });

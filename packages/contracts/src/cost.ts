@@ -280,6 +280,7 @@ export const costResponse = z.object({
   model: z.object({ source: z.enum(['workspace', 'teardown']), currency: safeString(), volumes: z.array(z.number().int()) }),
   lines: z.array(costLineSchema),
   partsTotal: z.number(),
+  /** Subtotals per part category; empty in the 'totals' view (a category of one line is that line's price). */
   byCategory: z.array(z.object({ category: PART_CATEGORY.schema, total: z.number(), share: z.number().nullable(), lines: z.number().int() })),
   placements: z.number(),
   joints: z.number(),

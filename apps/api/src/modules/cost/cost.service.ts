@@ -16,7 +16,7 @@ import { getSettings } from '../settings/settings.service';
 import type { Teardown } from '../teardowns/teardown.entity';
 import { getTeardownModel } from './cost-model.service';
 import { PartPriceSchema, type PartPrice } from './part-price.entity';
-import { totalsOnlyLine } from './price-visibility';
+import { categoriesFor, totalsOnlyLine } from './price-visibility';
 import { currentRateTable, hasRate } from './rates.service';
 import type { RateTable } from './rate-table.entity';
 
@@ -189,7 +189,7 @@ export async function teardownCost(
     model: { source: modelInfo.source, currency: model.currency, volumes },
     lines: view === 'detail' ? costLines : costLines.map(totalsOnlyLine),
     partsTotal: r.partsTotal,
-    byCategory: categories,
+    byCategory: categoriesFor(view, categories),
     placements: r.placements,
     joints: r.joints,
     assembly: r.assembly,

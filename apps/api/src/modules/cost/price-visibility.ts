@@ -1,6 +1,7 @@
 // Who sees supplier price detail. Supplier quotes are confidential: price breaks, quote sources and
-// confidence, a line's unit and extended price, and the price entries of a history are for the roles
-// below. Everyone else (viewers) sees the should-cost totals of what they may read, nothing per line.
+// confidence, a line's unit and extended price, subtotals per part category (a category of one line
+// is that line's price), and the price entries of a history are for the roles below. Everyone else
+// (viewers) sees the should-cost totals of what they may read, nothing per line or per category.
 // This file is the one place the rule lives; routes that answer with price detail say so in the route
 // table (`prices: 'by-role'`) and get the caller's view as `ctx.priceView`.
 import type { CostLine, PriceView, Role } from '@splitcase/contracts';
@@ -14,6 +15,9 @@ export const priceViewFor = (user: Pick<AuthUser, 'role'> | null): PriceView => 
 export function totalsOnlyLine(line: CostLine): CostLine {
   return { ...line, unitPrice: null, extended: null, breakMinQty: null, belowMinimumOrder: false, price: null };
 }
+
+/** Subtotals per part category, as the view may see them: none for 'totals'. */
+export const categoriesFor = <T>(view: PriceView, categories: T[]): T[] => (view === 'detail' ? categories : []);
 
 /** History entries about prices (set, changed, imported, removed) have actions `price.…`. */
 const PRICE_ACTIONS = 'price.';
