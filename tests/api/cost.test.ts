@@ -182,7 +182,8 @@ describe('GET /api/teardowns/:id/cost — a small BOM worked by hand [C]', () =>
   });
 
   it('prices each line at the break for the purchased quantity, converted to USD before attrition', async () => {
-    const c = await cost(as.viewer!, ids.published);
+    // Line prices are for the roles that see prices (a viewer gets the totals: price-visibility.test.ts).
+    const c = await cost(as.lead!, ids.published);
     expect(c).toMatchObject({ volume: 1000, currency: 'USD', rateDate: '2026-11-27', model: { source: 'teardown', currency: 'CNY', volumes: [100, 1000, 5000] } });
     const line = Object.fromEntries(c.lines.map((l) => [l.partId, l]));
     // Rates per 1 EUR (fixture): USD 1.08, GBP 0.85, CNY 7.80. 1 CNY = 1.08 / 7.80 = 0.138461538 USD; 1 GBP = 1.08 / 0.85 = 1.270588235 USD.
@@ -388,7 +389,7 @@ describe('costed-BOM CSV export and price CSV import', () => {
     a.upload(`/api/teardowns/${ids.published}/prices/import?mode=${mode}`).attach('file', Buffer.from(csv), { filename: 'prices.csv', contentType: 'text/csv' });
 
   it('exports one row per line with its price, the volume, the currency and the rate date', async () => {
-    const rows = parse(await exportCsv(as.viewer!));
+    const rows = parse(await exportCsv(as.lead!));
     expect(rows).toHaveLength(5);
     expect(rows[1]).toMatchObject({
       designators: 'U1',

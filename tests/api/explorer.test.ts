@@ -270,7 +270,13 @@ describe('search', () => {
 
   it('marks hits only: marker characters in stored text are removed, so text can never fake a highlight', async () => {
     const { teardownId } = await scratchTeardown();
-    await addFinding(teardownId, `Fake ${SNIPPET_HIT_START}highlight${SNIPPET_HIT_END} next to a zymurgic seam <b>bold</b>.`);
+    const fake = `Fake ${SNIPPET_HIT_START}highlight${SNIPPET_HIT_END} next to a zymurgic seam <b>bold</b>.`;
+    // The API refuses the marker characters (control characters) in text now; text stored before that
+    // rule, written here straight into the table (the search triggers index it), is still safe.
+    const refused = await (await as('engineer')).post(`/api/teardowns/${teardownId}/findings`, { kind: 'reliability', severity: 'minor', text: fake, tags: [] });
+    expect(refused.status).toBe(400);
+    const { id } = await addFinding(teardownId, 'Placeholder zymurgic text');
+    await t.orm.em.fork().getConnection().execute('update findings set text = ? where id = ?', [fake, id]);
     const [item] = (await search('lead', 'q=zymurgic')).items;
     expect(snippetParts(item!.snippet).filter((p) => p.hit).map((p) => p.text)).toEqual(['zymurgic']);
     expect(item!.snippet).toContain('<b>bold</b>');

@@ -96,7 +96,8 @@ describe('the cost section of a demo teardown', () => {
     const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Export CSV' }).click()]);
     expect(download.suggestedFilename()).toMatch(/^costed-bom-.*\.csv$/);
     const csv = readFileSync((await download.path())!, 'utf8');
-    expect(csv.split(/\r?\n/)[0]).toMatch(/^\uFEFF?designators,maker_part_number,description,category,mount,quantity,currency,breaks,source,confidence/);
+    // Every export follows the one CSV rule (lib/csv.ts): text cells, the header too, are quoted.
+    expect(csv.split(/\r?\n/)[0]).toMatch(/^\uFEFF?"designators","maker_part_number","description","category","mount","quantity","currency","breaks","source","confidence"/);
     expect(csv).toContain('1@97.5');
 
     // Put the demo price back for the other tests.

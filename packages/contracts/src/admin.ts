@@ -1,15 +1,15 @@
 import { z } from 'zod';
-import { email } from './common';
+import { email, safeString } from './common';
 import { roleSchema } from './roles';
 
 export const adminUserSchema = z.object({
   id: z.number().int(),
-  email: z.string(),
-  name: z.string(),
+  email: safeString(),
+  name: safeString(),
   role: roleSchema,
   active: z.boolean(),
-  createdAt: z.string(),
-  lastSignInAt: z.string().nullable(),
+  createdAt: safeString(),
+  lastSignInAt: safeString().nullable(),
 });
 export type AdminUser = z.infer<typeof adminUserSchema>;
 export const usersResponse = z.object({ users: z.array(adminUserSchema) });
@@ -21,12 +21,12 @@ export const adminUserResponse = z.object({ user: adminUserSchema });
 
 export const invitationSchema = z.object({
   id: z.number().int(),
-  email: z.string(),
+  email: safeString(),
   role: roleSchema,
   status: z.enum(['pending', 'accepted', 'expired', 'revoked']),
-  invitedBy: z.string().nullable(),
-  createdAt: z.string(),
-  expiresAt: z.string(),
+  invitedBy: safeString().nullable(),
+  createdAt: safeString(),
+  expiresAt: safeString(),
 });
 export type Invitation = z.infer<typeof invitationSchema>;
 export const invitationsResponse = z.object({ invitations: z.array(invitationSchema) });
@@ -36,30 +36,30 @@ export const invitationResponse = z.object({ invitation: invitationSchema });
 
 export const outboxMessageSchema = z.object({
   id: z.number().int(),
-  receivedAt: z.string(),
-  from: z.string(),
-  to: z.string(),
-  subject: z.string(),
-  text: z.string(),
-  html: z.string().nullable(),
+  receivedAt: safeString(),
+  from: safeString(),
+  to: safeString(),
+  subject: safeString(),
+  text: safeString(),
+  html: safeString().nullable(),
 });
 export type OutboxMessage = z.infer<typeof outboxMessageSchema>;
 export const outboxResponse = z.object({ enabled: z.boolean(), messages: z.array(outboxMessageSchema) });
 
 export const auditEntrySchema = z.object({
   id: z.number().int(),
-  at: z.string(),
-  actor: z.string().nullable(),
-  action: z.string(),
-  entityType: z.string(),
-  entityId: z.string(),
-  summary: z.string(),
-  changes: z.record(z.string(), z.object({ from: z.unknown(), to: z.unknown() })).nullable(),
+  at: safeString(),
+  actor: safeString().nullable(),
+  action: safeString(),
+  entityType: safeString(),
+  entityId: safeString(),
+  summary: safeString(),
+  changes: z.record(safeString(), z.object({ from: z.unknown(), to: z.unknown() })).nullable(),
 });
 export type AuditEntry = z.infer<typeof auditEntrySchema>;
 export const auditQuery = z.object({
-  entityType: z.string().max(60).optional(),
-  entityId: z.string().max(60).optional(),
+  entityType: safeString().max(60).optional(),
+  entityId: safeString().max(60).optional(),
   limit: z.coerce.number().int().min(1).max(500).default(100),
   before: z.coerce.number().int().positive().optional(),
 });
@@ -70,9 +70,9 @@ export const backupStatusResponse = z.object({
   lastBackup: z
     .object({
       /** When the snapshot was taken (ISO 8601). */
-      at: z.string(),
+      at: safeString(),
       /** The dated folder name, as `npm run restore` takes it. */
-      folder: z.string(),
+      folder: safeString(),
       bytes: z.number().int(),
       files: z.number().int(),
     })

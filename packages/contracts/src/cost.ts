@@ -1,8 +1,8 @@
 // Should-cost: part prices, currency rate tables, cost models and the roll-up of a teardown.
 // Shares are fractions (0.03 = 3 %); money is in the currency named beside it.
 import { z } from 'zod';
-import { optionalText } from './common';
 import { percentInput } from './inputs';
+import { optionalText, safeString } from './common';
 import { PART_CATEGORY, MOUNT_TYPE } from './domain';
 import { currencyCode } from './settings';
 
@@ -41,8 +41,7 @@ export const RATE_TABLE_KIND = labelled(['import', 'manual', 'demo'] as const, {
 export type RateTableKind = (typeof RATE_TABLE_KIND.values)[number];
 
 /** A calendar date YYYY-MM-DD that exists. */
-export const isoDate = z
-  .string()
+export const isoDate = safeString()
   .trim()
   .regex(/^\d{4}-\d{2}-\d{2}$/, 'Use the form YYYY-MM-DD')
   .refine((s) => {
@@ -50,12 +49,15 @@ export const isoDate = z
     return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === s;
   }, 'Not a calendar date');
 
-const money = (what: string) => z.number({ error: `${what} must be a number` }).min(0, `${what} must not be negative`);
+/** Largest amount of money, quantity or rate accepted anywhere in costing (1e9): sane bounds for any currency. */
+export const COST_MAX = 1_000_000_000;
+const AT_MOST = 'At most 1 000 000 000';
+const money = (what: string) => z.number({ error: `${what} must be a number` }).min(0, `${what} must not be negative`).max(COST_MAX, AT_MOST);
 const fraction = (what: string) =>
   z.number({ error: `${what} must be a number` }).min(0, `${what} must not be below 0 %`).max(1, `${what} must not be above 100 %`);
 
 export const priceBreakSchema = z.object({
-  minQty: z.number({ error: 'Minimum quantity must be a number' }).gt(0, 'Minimum quantity must be greater than zero'),
+  minQty: z.number({ error: 'Minimum quantity must be a number' }).gt(0, 'Minimum quantity must be greater than zero').max(COST_MAX, AT_MOST),
   unitPrice: money('Unit price'),
 });
 export type PriceBreakDto = z.infer<typeof priceBreakSchema>;
@@ -92,14 +94,14 @@ export type PartPriceBody = z.input<typeof partPriceBody>;
 
 export const partPriceSchema = z.object({
   partId: z.number().int(),
-  currency: z.string(),
+  currency: safeString(),
   breaks: z.array(priceBreakSchema),
   source: PRICE_SOURCE.schema,
   confidence: PRICE_CONFIDENCE.schema,
-  priceDate: z.string(),
-  note: z.string().nullable(),
-  updatedBy: z.string().nullable(),
-  updatedAt: z.string(),
+  priceDate: safeString(),
+  note: safeString().nullable(),
+  updatedBy: safeString().nullable(),
+  updatedAt: safeString(),
 });
 export type PartPriceDto = z.infer<typeof partPriceSchema>;
 export const partPriceResponse = z.object({ price: partPriceSchema });
@@ -108,16 +110,16 @@ export const partPriceResponse = z.object({ price: partPriceSchema });
 
 export const rateTableSchema = z.object({
   id: z.number().int(),
-  base: z.string(),
+  base: safeString(),
   /** The day the rates are for. */
-  date: z.string(),
-  source: z.string(),
+  date: safeString(),
+  source: safeString(),
   kind: RATE_TABLE_KIND.schema,
   /** Units of each currency per 1 unit of base (the base itself is 1 and not listed). */
-  rates: z.record(z.string(), z.number()),
-  note: z.string().nullable(),
-  createdBy: z.string().nullable(),
-  createdAt: z.string(),
+  rates: z.record(safeString(), z.number()),
+  note: safeString().nullable(),
+  createdBy: safeString().nullable(),
+  createdAt: safeString(),
   /** The latest saved table is the current one. */
   current: z.boolean(),
 });
@@ -127,7 +129,7 @@ export type RatesList = z.infer<typeof ratesListResponse>;
 export const rateTableResponse = z.object({
   rates: rateTableSchema,
   /** Things to know about the new table, e.g. a currency in use that it has no rate for. */
-  warnings: z.array(z.string()),
+  warnings: z.array(safeString()),
 });
 export type RateTableResponse = z.infer<typeof rateTableResponse>;
 
@@ -136,10 +138,10 @@ export const manualRatesBody = z
   .object({
     base: currencyCode,
     date: isoDate,
-    source: z.string().trim().min(1, 'Say where the rates come from').max(200, 'At most 200 characters'),
+    source: safeString().trim().min(1, 'Say where the rates come from').max(200, 'At most 200 characters'),
     rates: z.record(
-      z.string().trim().toUpperCase().regex(/^[A-Z]{3}$/, 'Currency codes have three letters'),
-      z.number({ error: 'A rate must be a number' }).gt(0, 'A rate must be greater than zero'),
+      safeString().trim().toUpperCase().regex(/^[A-Z]{3}$/, 'Currency codes have three letters'),
+      z.number({ error: 'A rate must be a number' }).gt(0, 'A rate must be greater than zero').max(COST_MAX, AT_MOST),
     ),
     note: optionalText(300),
   })
@@ -153,7 +155,7 @@ export type ManualRatesBody = z.input<typeof manualRatesBody>;
 // ---- Cost models ----
 
 export const manualOperationSchema = z.object({
-  label: z.string().trim().min(1, 'Name the operation').max(120, 'At most 120 characters'),
+  label: safeString().trim().min(1, 'Name the operation').max(120, 'At most 120 characters'),
   minutes: z.number({ error: 'Minutes must be a number' }).min(0, 'Minutes must not be negative').max(600, 'At most 600 minutes'),
 });
 
@@ -197,14 +199,14 @@ export const costModelSchema = z.object({
 export type CostModelDto = z.output<typeof costModelSchema>;
 export type CostModelBody = z.input<typeof costModelSchema>;
 
-export const costModelResponse = z.object({ model: costModelSchema, updatedAt: z.string().nullable(), updatedBy: z.string().nullable() });
+export const costModelResponse = z.object({ model: costModelSchema, updatedAt: safeString().nullable(), updatedBy: safeString().nullable() });
 export const teardownCostModelResponse = z.object({
   /** The model the teardown is costed with. */
   model: costModelSchema,
   source: z.enum(['workspace', 'teardown']),
   defaults: costModelSchema,
-  updatedAt: z.string().nullable(),
-  updatedBy: z.string().nullable(),
+  updatedAt: safeString().nullable(),
+  updatedBy: safeString().nullable(),
 });
 export type TeardownCostModel = z.infer<typeof teardownCostModelResponse>;
 
@@ -221,15 +223,15 @@ export const costQuery = z.object({
 });
 export type CostQuery = z.infer<typeof costQuery>;
 
-const figureInput = z.object({ label: z.string(), value: z.union([z.number(), z.string(), z.boolean(), z.null()]), unit: z.string().optional() });
+const figureInput = z.object({ label: safeString(), value: z.union([z.number(), safeString(), z.boolean(), z.null()]), unit: safeString().optional() });
 
 export const costLineSchema = z.object({
   partId: z.number().int(),
   position: z.number().int(),
-  designators: z.string().nullable(),
-  description: z.string(),
+  designators: safeString().nullable(),
+  description: safeString(),
   category: PART_CATEGORY.schema,
-  makerPartNumber: z.string().nullable(),
+  makerPartNumber: safeString().nullable(),
   mount: MOUNT_TYPE.schema,
   quantity: z.number(),
   /** The quantity bought, attrition included: ceil(quantity × volume × (1 + attrition)); it picks the price break. */
@@ -246,12 +248,12 @@ export const costLineSchema = z.object({
 });
 export type CostLine = z.infer<typeof costLineSchema>;
 
-export const costStepSchema = z.object({ key: z.string(), label: z.string(), value: z.number(), formula: z.string(), inputs: z.array(figureInput) });
+export const costStepSchema = z.object({ key: safeString(), label: safeString(), value: z.number(), formula: safeString(), inputs: z.array(figureInput) });
 export type CostStepDto = z.infer<typeof costStepSchema>;
 
 export const waterfallBarSchema = z.object({
-  key: z.string(),
-  label: z.string(),
+  key: safeString(),
+  label: safeString(),
   kind: z.enum(['step', 'subtotal', 'total']),
   value: z.number(),
   start: z.number(),
@@ -267,7 +269,7 @@ export const salesTaxSchema = z.object({
   amount: z.number(),
   source: SALES_TAX_SOURCE.schema,
   /** The price's currency: the workspace default is set per currency. */
-  currency: z.string(),
+  currency: safeString(),
 });
 export type SalesTaxDto = z.infer<typeof salesTaxSchema>;
 
@@ -304,7 +306,7 @@ const impliedMargin = z
     amount: z.number().nullable(),
     fraction: z.number().nullable(),
     complete: z.boolean(),
-    reason: z.string().nullable(),
+    reason: safeString().nullable(),
     pricedLines: z.number().int(),
     totalLines: z.number().int(),
     /** The sales tax taken out of the retail price first; null when its rate is not known. */
@@ -324,18 +326,30 @@ export const volumeRowSchema = z.object({
 });
 export type VolumeRow = z.infer<typeof volumeRowSchema>;
 
+/**
+ * What the caller sees of prices: 'detail' (admin, engineer, sourcing, lead) or 'totals' (the others:
+ * should-cost totals only; each line's unitPrice, extended, breakMinQty and price are null).
+ */
+export const PRICE_VIEW = ['detail', 'totals'] as const;
+export const priceViewSchema = z.enum(PRICE_VIEW);
+export type PriceView = z.infer<typeof priceViewSchema>;
+/** Said where a 'totals' view leaves the line prices out. */
+export const PRICE_VIEW_NOTE = 'Line prices, price breaks and quote sources are shown to engineers, sourcing, leads and admins; you see the should-cost totals.';
+
 export const costResponse = z.object({
   teardownId: z.number().int(),
+  priceView: priceViewSchema,
   volume: z.number().int(),
-  currency: z.string(),
+  currency: safeString(),
   /** Date of the rate table every converted figure used; null when nothing needed converting and no table exists. */
-  rateDate: z.string().nullable(),
-  rateTable: z.object({ id: z.number().int(), base: z.string(), date: z.string(), source: z.string() }).nullable(),
+  rateDate: safeString().nullable(),
+  rateTable: z.object({ id: z.number().int(), base: safeString(), date: safeString(), source: safeString() }).nullable(),
   /** Rates of the currencies this teardown uses: per 1 base, and the cross rate into the reporting currency. */
-  ratesUsed: z.array(z.object({ currency: z.string(), perBase: z.number(), toReporting: z.number() })),
-  model: z.object({ source: z.enum(['workspace', 'teardown']), currency: z.string(), volumes: z.array(z.number().int()) }),
+  ratesUsed: z.array(z.object({ currency: safeString(), perBase: z.number(), toReporting: z.number() })),
+  model: z.object({ source: z.enum(['workspace', 'teardown']), currency: safeString(), volumes: z.array(z.number().int()) }),
   lines: z.array(costLineSchema),
   partsTotal: z.number(),
+  /** Subtotals per part category; empty in the 'totals' view (a category of one line is that line's price). */
   byCategory: z.array(z.object({ category: PART_CATEGORY.schema, total: z.number(), share: z.number().nullable(), lines: z.number().int() })),
   placements: z.number(),
   joints: z.number(),
@@ -362,7 +376,7 @@ export const costResponse = z.object({
       retailerShare: z.number(),
       platformShare: z.number(),
       netToMaker: z.number(),
-      seen: z.object({ amount: z.number(), currency: z.string(), on: z.string().nullable() }),
+      seen: z.object({ amount: z.number(), currency: safeString(), on: safeString().nullable() }),
     })
     .nullable(),
   impliedMargin,
@@ -370,7 +384,7 @@ export const costResponse = z.object({
   waterfall: z.array(waterfallBarSchema),
   volumes: z.array(volumeRowSchema),
   unpricedPartIds: z.array(z.number().int()),
-  warnings: z.array(z.string()),
+  warnings: z.array(safeString()),
 });
 export type CostRollUpDto = z.infer<typeof costResponse>;
 
@@ -385,8 +399,8 @@ export const priceImportRowSchema = z.object({
   /** Line number in the file (the header is line 1). */
   line: z.number().int(),
   partId: z.number().int(),
-  description: z.string(),
-  designators: z.string().nullable(),
+  description: safeString(),
+  designators: safeString().nullable(),
   matchedBy: z.enum(['designators', 'makerPartNumber', 'description']),
   before: partPriceSchema.omit({ partId: true, updatedBy: true, updatedAt: true }).nullable(),
   after: partPriceSchema.omit({ partId: true, updatedBy: true, updatedAt: true }),
@@ -397,7 +411,7 @@ export const priceImportResponse = z.object({
   mode: z.enum(['preview', 'apply']),
   rows: z.array(priceImportRowSchema),
   /** Lines left alone because they carry no price (e.g. unpriced lines of an export). */
-  skipped: z.array(z.object({ line: z.number().int(), reason: z.string() })),
+  skipped: z.array(z.object({ line: z.number().int(), reason: safeString() })),
   saved: z.number().int(),
 });
 export type PriceImportResult = z.infer<typeof priceImportResponse>;

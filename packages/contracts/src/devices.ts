@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { text, patchOf } from './common';
+import { text, patchOf, safeString } from './common';
 import { DEVICE_CATEGORY, TEARDOWN_STATUS } from './domain';
 import { clearableDay, clearableNumber, clearableText, percentInput, quantityInput } from './inputs';
 import { currencyCode } from './settings';
@@ -59,41 +59,41 @@ export type UpdateDeviceBody = z.infer<typeof updateDeviceBody>;
 
 export const deviceListQuery = z.object({
   category: DEVICE_CATEGORY.schema.optional(),
-  maker: z.string().trim().max(120).optional(),
+  maker: safeString().trim().max(120).optional(),
   /** Free text over maker and model. */
-  q: z.string().trim().max(120).optional(),
+  q: safeString().trim().max(120).optional(),
 });
 export type DeviceListQuery = z.infer<typeof deviceListQuery>;
 
 export const teardownBriefSchema = z.object({
   id: z.number().int(),
-  date: z.string(),
-  unitLabel: z.string().nullable(),
+  date: safeString(),
+  unitLabel: safeString().nullable(),
   status: TEARDOWN_STATUS.schema,
 });
 
 export const deviceSchema = z.object({
   id: z.number().int(),
-  maker: z.string(),
-  model: z.string(),
+  maker: safeString(),
+  model: safeString(),
   category: DEVICE_CATEGORY.schema,
   retailPrice: z.number().nullable(),
-  currency: z.string().nullable(),
+  currency: safeString().nullable(),
   /** Share of sales tax in the retail price (0.2 = 20 %); null: the workspace default for the currency applies. */
   salesTaxRate: z.number().nullable(),
-  priceSeenOn: z.string().nullable(),
-  whereBought: z.string().nullable(),
+  priceSeenOn: safeString().nullable(),
+  whereBought: safeString().nullable(),
   claimCapacityAh: z.number().nullable(),
   claimCapacityWh: z.number().nullable(),
   claimOutputWatts: z.number().nullable(),
   claimRuntimeH: z.number().nullable(),
   claimPowerW: z.number().nullable(),
-  claimOutputText: z.string().nullable(),
+  claimOutputText: safeString().nullable(),
   /** The text typed for each claim, by field name (e.g. claimCapacityAh → "5000 mAh"). */
-  entered: z.record(z.string(), z.string()),
-  notes: z.string().nullable(),
-  createdAt: z.string(),
-  updatedAt: z.string(),
+  entered: z.record(safeString(), safeString()),
+  notes: safeString().nullable(),
+  createdAt: safeString(),
+  updatedAt: safeString(),
   /** The latest teardown the caller may see (viewers: published only). */
   latestTeardown: teardownBriefSchema.nullable(),
   teardownCount: z.number().int(),
@@ -101,10 +101,10 @@ export const deviceSchema = z.object({
 export type DeviceDto = z.infer<typeof deviceSchema>;
 
 export const deviceTeardownSchema = teardownBriefSchema.extend({
-  engineer: z.object({ id: z.number().int(), name: z.string() }),
-  summary: z.string().nullable(),
+  engineer: z.object({ id: z.number().int(), name: safeString() }),
+  summary: safeString().nullable(),
   findingCount: z.number().int(),
-  updatedAt: z.string(),
+  updatedAt: safeString(),
 });
 export type DeviceTeardown = z.infer<typeof deviceTeardownSchema>;
 

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { safeString } from './common';
 
 /** Every error the API sends has this one shape. */
 export const ERROR_CODES = [
@@ -26,9 +27,9 @@ export type ErrorCode = (typeof ERROR_CODES)[number];
 export const errorBodySchema = z.object({
   error: z.object({
     code: z.enum(ERROR_CODES),
-    message: z.string(),
+    message: safeString(),
     /** field path (dot-separated) → message, for form fields and CSV rows/columns */
-    fields: z.record(z.string(), z.string()).optional(),
+    fields: z.record(safeString(), safeString()).optional(),
     /** extra data for the client, e.g. the current record on a 409 */
     details: z.unknown().optional(),
   }),

@@ -1,10 +1,9 @@
 import { z } from 'zod';
-import { text, patchOf } from './common';
+import { text, patchOf, safeString } from './common';
 import { FINDING_KIND, PART_CATEGORY, SEVERITY } from './domain';
 
 /** A tag: lower-case words, digits and '-', e.g. "thermal", "cost-down", "usb-c". */
-export const findingTag = z
-  .string()
+export const findingTag = safeString()
   .trim()
   .toLowerCase()
   .min(1, 'A tag cannot be empty')
@@ -42,12 +41,12 @@ export const findingParams = z.object({
 
 export const linkablePartSchema = z.object({
   id: z.number().int(),
-  designators: z.string().nullable(),
-  description: z.string(),
+  designators: safeString().nullable(),
+  description: safeString(),
   category: PART_CATEGORY.schema,
 });
 export type LinkablePart = z.infer<typeof linkablePartSchema>;
-export const linkablePhotoSchema = z.object({ id: z.number().int(), caption: z.string().nullable(), layer: z.number().int() });
+export const linkablePhotoSchema = z.object({ id: z.number().int(), caption: safeString().nullable(), layer: z.number().int() });
 export type LinkablePhoto = z.infer<typeof linkablePhotoSchema>;
 
 export const findingSchema = z.object({
@@ -55,15 +54,15 @@ export const findingSchema = z.object({
   teardownId: z.number().int(),
   kind: FINDING_KIND.schema,
   severity: SEVERITY.schema,
-  text: z.string(),
-  tags: z.array(z.string()),
+  text: safeString(),
+  tags: z.array(safeString()),
   /** The suggested-finding rule this finding was accepted from, if any. */
-  suggestionKey: z.string().nullable(),
+  suggestionKey: safeString().nullable(),
   parts: z.array(linkablePartSchema),
   photos: z.array(linkablePhotoSchema),
-  createdBy: z.object({ id: z.number().int(), name: z.string() }).nullable(),
-  createdAt: z.string(),
-  updatedAt: z.string(),
+  createdBy: z.object({ id: z.number().int(), name: safeString() }).nullable(),
+  createdAt: safeString(),
+  updatedAt: safeString(),
 });
 export type FindingDto = z.infer<typeof findingSchema>;
 export const findingResponse = z.object({ finding: findingSchema });

@@ -1,6 +1,7 @@
 // GET /api/home: what the caller's role needs first, computed on the server. Every list is
 // already limited to what the caller may read (viewers: published teardowns only).
 import { z } from 'zod';
+import { safeString } from './common';
 import { roleSchema } from './roles';
 import { DEVICE_CATEGORY, FINDING_KIND, SEVERITY, TEARDOWN_STATUS } from './domain';
 
@@ -13,43 +14,43 @@ export const RATES_STALE_AFTER_DAYS = 30;
 /** How many rows each home list shows at most. */
 export const HOME_LIST_LIMIT = 8;
 
-const person = z.object({ id: z.number().int(), name: z.string() });
+const person = z.object({ id: z.number().int(), name: safeString() });
 
 export const homeTeardownSchema = z.object({
   id: z.number().int(),
-  device: z.object({ id: z.number().int(), maker: z.string(), model: z.string(), category: DEVICE_CATEGORY.schema }),
-  unitLabel: z.string().nullable(),
-  date: z.string(),
+  device: z.object({ id: z.number().int(), maker: safeString(), model: safeString(), category: DEVICE_CATEGORY.schema }),
+  unitLabel: safeString().nullable(),
+  date: safeString(),
   status: TEARDOWN_STATUS.schema,
   engineer: person,
-  updatedAt: z.string(),
-  submittedAt: z.string().nullable(),
-  publishedAt: z.string().nullable(),
+  updatedAt: safeString(),
+  submittedAt: safeString().nullable(),
+  publishedAt: safeString().nullable(),
 });
 export type HomeTeardown = z.infer<typeof homeTeardownSchema>;
 
 export const homeFindingSchema = z.object({
   id: z.number().int(),
   teardownId: z.number().int(),
-  device: z.object({ id: z.number().int(), maker: z.string(), model: z.string() }),
+  device: z.object({ id: z.number().int(), maker: safeString(), model: safeString() }),
   kind: FINDING_KIND.schema,
   severity: SEVERITY.schema,
-  text: z.string(),
-  createdAt: z.string(),
+  text: safeString(),
+  createdAt: safeString(),
 });
 export type HomeFinding = z.infer<typeof homeFindingSchema>;
 
 /** One line of "what needs me": a count and what it is about; `block` names the home block it opens. */
 export const NEED_KEYS = ['sent-back', 'drafts', 'reviews', 'unpriced', 'rates', 'invitations'] as const;
 export type NeedKey = (typeof NEED_KEYS)[number];
-export const homeNeedSchema = z.object({ key: z.enum(NEED_KEYS), count: z.number().int(), label: z.string() });
+export const homeNeedSchema = z.object({ key: z.enum(NEED_KEYS), count: z.number().int(), label: safeString() });
 export type HomeNeed = z.infer<typeof homeNeedSchema>;
 
 export const engineerHomeSchema = z.object({
   /** My drafts that were not sent back (most recently changed first). */
   drafts: z.array(homeTeardownSchema),
   /** My drafts whose last review step was a send-back, with the reviewer's note. */
-  sentBack: z.array(homeTeardownSchema.extend({ note: z.string(), by: z.string().nullable(), at: z.string() })),
+  sentBack: z.array(homeTeardownSchema.extend({ note: safeString(), by: safeString().nullable(), at: safeString() })),
   /** My teardowns waiting for a lead. */
   inReview: z.array(homeTeardownSchema),
 });
@@ -57,7 +58,7 @@ export type EngineerHome = z.infer<typeof engineerHomeSchema>;
 
 export const leadHomeSchema = z.object({
   /** Teardowns in review, oldest submission first, with who submitted and when. */
-  waiting: z.array(homeTeardownSchema.extend({ submittedBy: person.nullable(), submittedAt: z.string().nullable() })),
+  waiting: z.array(homeTeardownSchema.extend({ submittedBy: person.nullable(), submittedAt: safeString().nullable() })),
   /** Newest findings of major or critical severity across teardowns. */
   severeFindings: z.array(homeFindingSchema),
 });
@@ -65,9 +66,9 @@ export type LeadHome = z.infer<typeof leadHomeSchema>;
 
 export const ratesAgeSchema = z.object({
   id: z.number().int(),
-  base: z.string(),
-  date: z.string(),
-  source: z.string(),
+  base: safeString(),
+  date: safeString(),
+  source: safeString(),
   /** Whole days from the rate date to today (UTC). */
   ageDays: z.number().int(),
   stale: z.boolean(),
@@ -89,14 +90,14 @@ export const adminHomeSchema = z.object({
   /** Active users by role; deactivated ones are counted apart. */
   usersByRole: z.record(roleSchema, z.number().int()),
   inactiveUsers: z.number().int(),
-  recentlyActive: z.array(person.extend({ role: roleSchema, lastSignInAt: z.string() })),
+  recentlyActive: z.array(person.extend({ role: roleSchema, lastSignInAt: safeString() })),
   pendingInvitations: z.array(
-    z.object({ id: z.number().int(), email: z.string(), role: roleSchema, invitedBy: z.string().nullable(), createdAt: z.string(), expiresAt: z.string() }),
+    z.object({ id: z.number().int(), email: safeString(), role: roleSchema, invitedBy: safeString().nullable(), createdAt: safeString(), expiresAt: safeString() }),
   ),
   /** The capture server's latest messages; `enabled` false when mail goes out through a real server. */
   outbox: z.object({
     enabled: z.boolean(),
-    messages: z.array(z.object({ id: z.number().int(), receivedAt: z.string(), to: z.string(), subject: z.string() })),
+    messages: z.array(z.object({ id: z.number().int(), receivedAt: safeString(), to: safeString(), subject: safeString() })),
   }),
 });
 export type AdminHome = z.infer<typeof adminHomeSchema>;

@@ -1,10 +1,10 @@
 // Input helpers shared by the workspace payloads (devices, teardowns, findings). Forms send strings;
 // the server accepts strings or numbers. In a PATCH, an absent field is left alone and '' or null clears it.
 import { z } from 'zod';
+import { safeString } from './common';
 
 /** A calendar day as YYYY-MM-DD that exists on the calendar. */
-export const calendarDay = z
-  .string()
+export const calendarDay = safeString()
   .trim()
   .regex(/^\d{4}-\d{2}-\d{2}$/, 'Use a date such as 2026-10-12')
   .refine((s) => {
@@ -15,7 +15,7 @@ export const calendarDay = z
 /** Text that may be cleared: '' and null become null. */
 export const clearableText = (max: number) =>
   z
-    .union([z.string().trim().max(max, `At most ${max} characters`), z.null()])
+    .union([safeString().trim().max(max, `At most ${max} characters`), z.null()])
     .optional()
     .transform((v) => (v === '' ? null : v));
 
@@ -30,14 +30,14 @@ export const clearableDay = z
  * parses it with its units library, stores SI and keeps the text typed; '' or null clears it.
  */
 export const quantityInput = z
-  .union([z.number(), z.string().trim().max(60, 'At most 60 characters'), z.null()])
+  .union([z.number(), safeString().trim().max(60, 'At most 60 characters'), z.null()])
   .optional()
   .transform((v) => (v === '' ? null : v));
 
 /** A plain number typed in a form ('' → null), with bounds and a message naming what is expected. */
 export const clearableNumber = (opts: { min: number; max: number; integer?: boolean; what: string }) =>
   z
-    .union([z.number(), z.string().trim(), z.null()])
+    .union([z.number(), safeString().trim(), z.null()])
     .optional()
     .transform((v, ctx) => {
       if (v === undefined || v === null || v === '') return v === undefined ? undefined : null;
@@ -67,7 +67,7 @@ export const clearableNumber = (opts: { min: number; max: number; integer?: bool
  */
 export const percentInput = (what: string) =>
   z
-    .union([z.number(), z.string().trim().max(20, 'At most 20 characters'), z.null()])
+    .union([z.number(), safeString().trim().max(20, 'At most 20 characters'), z.null()])
     .optional()
     .transform((v, ctx) => {
       if (v === undefined || v === null || v === '') return v === undefined ? undefined : null;
@@ -126,7 +126,7 @@ export function readDurationSeconds(typed: string): number {
 /** A duration typed in a form ("10 min"), read into whole seconds within bounds; '' or null clears it. */
 export const durationInput = (opts: { min: number; max: number }) =>
   z
-    .union([z.string().trim().max(40, 'At most 40 characters'), z.null()])
+    .union([safeString().trim().max(40, 'At most 40 characters'), z.null()])
     .optional()
     .transform((v, ctx) => {
       if (v === undefined || v === null || v === '') return v === undefined ? undefined : null;

@@ -1,7 +1,7 @@
 // Lineups: a named set of devices compared side by side in one reporting currency, with metric
 // weights for a ranking. Every figure of the comparison is computed on the server.
 import { z } from 'zod';
-import { optionalText, text } from './common';
+import { optionalText, text, safeString } from './common';
 import { DEVICE_CATEGORY, TEARDOWN_STATUS } from './domain';
 import { clearableText } from './inputs';
 import { currencyCode } from './settings';
@@ -63,7 +63,7 @@ const KEYS = new Set<string>(LINEUP_METRIC_KEYS);
 /** Metric → weight 0..10; a metric left out weighs 0; at least one weight above 0. */
 export const lineupWeights = z
   .record(
-    z.string(),
+    safeString(),
     z.number({ error: 'Enter a number from 0 to 10' }).min(0, 'At least 0').max(LINEUP_WEIGHT_MAX, `At most ${LINEUP_WEIGHT_MAX}`),
   )
   .superRefine((w, ctx) => {
@@ -101,7 +101,7 @@ export const LINEUP_MODE_RULE = {
 export const lineupModeChoice = z
   .object({
     rule: z.enum(LINEUP_MODE_RULE.values, { error: `Choose one of: ${LINEUP_MODE_RULE.values.join(', ')}` }),
-    name: z.string().trim().max(80, 'At most 80 characters').optional(),
+    name: safeString().trim().max(80, 'At most 80 characters').optional(),
   })
   .refine((m) => m.rule !== 'named' || (m.name ?? '') !== '', { path: ['name'], message: 'Give the mode name to compare' });
 export type LineupModeChoice = z.infer<typeof lineupModeChoice>;
@@ -137,6 +137,8 @@ export type UpdateLineupBody = z.infer<typeof updateLineupBody>;
 export type UpdateLineupInput = z.input<typeof updateLineupBody>;
 
 export const lineupListQuery = z.object({ status: lineupStatus.optional() });
+/** GET /api/lineups/metrics: the catalogue with money metrics in this currency (default: the reporting currency). */
+export const lineupMetricsQuery = z.object({ currency: currencyCode.optional() });
 
 /** Axes of the scatter chart. Defaults: retail price against pack energy. */
 export const comparisonQuery = z
@@ -152,8 +154,8 @@ export type ComparisonPreviewBody = z.infer<typeof comparisonPreviewBody>;
 
 export const lineupDeviceSchema = z.object({
   id: z.number().int(),
-  maker: z.string(),
-  model: z.string(),
+  maker: safeString(),
+  model: safeString(),
   category: DEVICE_CATEGORY.schema,
   position: z.number().int(),
 });
@@ -161,20 +163,20 @@ export type LineupDeviceDto = z.infer<typeof lineupDeviceSchema>;
 
 export const lineupSchema = z.object({
   id: z.number().int(),
-  name: z.string(),
-  description: z.string().nullable(),
-  currency: z.string(),
-  weights: z.record(z.string(), z.number()),
+  name: safeString(),
+  description: safeString().nullable(),
+  currency: safeString(),
+  weights: z.record(safeString(), z.number()),
   mode: lineupModeChoice,
   status: lineupStatus,
   devices: z.array(lineupDeviceSchema),
   /** Devices of the lineup the caller cannot see (a viewer: devices without a published teardown). */
   hiddenDevices: z.number().int(),
-  createdBy: z.object({ id: z.number().int(), name: z.string() }).nullable(),
-  createdAt: z.string(),
-  updatedAt: z.string(),
-  publishedAt: z.string().nullable(),
-  publishedBy: z.string().nullable(),
+  createdBy: z.object({ id: z.number().int(), name: safeString() }).nullable(),
+  createdAt: safeString(),
+  updatedAt: safeString(),
+  publishedAt: safeString().nullable(),
+  publishedBy: safeString().nullable(),
   version: z.number().int(),
   permissions: z.object({ edit: z.boolean(), publish: z.boolean(), delete: z.boolean() }),
 });
@@ -187,51 +189,51 @@ export const METRIC_FORMAT = ['money', 'percent', 'quantity', 'count'] as const;
 
 export const comparisonMetricSchema = z.object({
   key: lineupMetricKey,
-  label: z.string(),
+  label: safeString(),
   /** A short label for narrow places (table headers, axis pickers). */
-  short: z.string(),
+  short: safeString(),
   /** Unit as shown (the lineup currency for money, '%' for fractions shown as percentages, 'Wh/USD'…). */
-  unit: z.string(),
+  unit: safeString(),
   better: z.enum(['high', 'low']),
   format: z.enum(METRIC_FORMAT),
-  description: z.string(),
+  description: safeString(),
   /** Formula and the label of its source (REFERENCES.md labels). */
-  formula: z.string(),
-  source: z.string(),
+  formula: safeString(),
+  source: safeString(),
   /** False when the metric applies to no device of the lineup (heater power density in a lineup without heaters). */
   applies: z.boolean(),
 });
 export type ComparisonMetricDto = z.infer<typeof comparisonMetricSchema>;
-export const lineupMetricsResponse = z.object({ metrics: z.array(comparisonMetricSchema), defaults: z.record(z.string(), z.number()), weightMax: z.number() });
+export const lineupMetricsResponse = z.object({ metrics: z.array(comparisonMetricSchema), defaults: z.record(safeString(), z.number()), weightMax: z.number() });
 
-const metricValues = z.record(z.string(), z.number().nullable());
+const metricValues = z.record(safeString(), z.number().nullable());
 
 export const comparisonRowSchema = z.object({
   deviceId: z.number().int(),
-  device: z.object({ maker: z.string(), model: z.string(), category: DEVICE_CATEGORY.schema, label: z.string() }),
+  device: z.object({ maker: safeString(), model: safeString(), category: DEVICE_CATEGORY.schema, label: safeString() }),
   /** The teardown whose figures the row uses: the device's latest the caller can see. */
-  teardown: z.object({ id: z.number().int(), date: z.string(), unitLabel: z.string().nullable(), status: TEARDOWN_STATUS.schema }).nullable(),
+  teardown: z.object({ id: z.number().int(), date: safeString(), unitLabel: safeString().nullable(), status: TEARDOWN_STATUS.schema }).nullable(),
   metrics: metricValues,
   /** Why a metric is missing (null), per metric key. */
-  missing: z.record(z.string(), z.string()),
+  missing: z.record(safeString(), safeString()),
   /** Where each present value comes from, per metric key. */
-  sources: z.record(z.string(), z.string()),
+  sources: z.record(safeString(), safeString()),
   /** Weighted score 0..100 (null: none of the weighted metrics is known). */
   score: z.number().nullable(),
   rank: z.number().int(),
   /** How much of the ranking the score rests on: weighted metrics known for this device, of those weighted, and their share of the total weight. */
   coverage: z.object({ known: z.number().int(), weighted: z.number().int(), weightShare: z.number() }),
   /** Min-max normalised value 0..1 (1 = best in the lineup) of each weighted metric the row has. */
-  normalised: z.record(z.string(), z.number()),
+  normalised: z.record(safeString(), z.number()),
   /** Retail price as seen, before conversion. */
-  retail: z.object({ amount: z.number(), currency: z.string(), seenOn: z.string().nullable(), rate: z.number().nullable() }).nullable(),
+  retail: z.object({ amount: z.number(), currency: safeString(), seenOn: safeString().nullable(), rate: z.number().nullable() }).nullable(),
   /** The operating mode the row's runtime comes from; null when the teardown records no modes (main load at its own duty). */
-  mode: z.object({ id: z.number().int(), name: z.string(), reason: z.string() }).nullable(),
+  mode: z.object({ id: z.number().int(), name: safeString(), reason: safeString() }).nullable(),
   /** False when the row lacks a weighted metric: it ranks after the rows that have them all. */
   complete: z.boolean(),
   /** Weighted metrics the row lacks. */
   incompleteMetrics: z.array(lineupMetricKey),
-  notes: z.array(z.string()),
+  notes: z.array(safeString()),
 });
 export type ComparisonRowDto = z.infer<typeof comparisonRowSchema>;
 
@@ -242,17 +244,17 @@ export const paretoSchema = z.object({
   deviceIds: z.array(z.number().int()),
   points: z.array(z.object({ deviceId: z.number().int(), x: z.number(), y: z.number(), onFrontier: z.boolean() })),
   /** Devices left off the chart, and why (a value is missing). */
-  leftOut: z.array(z.object({ deviceId: z.number().int(), reason: z.string() })),
+  leftOut: z.array(z.object({ deviceId: z.number().int(), reason: safeString() })),
 });
 export type ParetoDto = z.infer<typeof paretoSchema>;
 
 export const comparisonResponse = z.object({
   lineupId: z.number().int(),
-  currency: z.string(),
-  rateTable: z.object({ id: z.number().int(), date: z.string(), source: z.string(), base: z.string() }).nullable(),
+  currency: safeString(),
+  rateTable: z.object({ id: z.number().int(), date: safeString(), source: safeString(), base: safeString() }).nullable(),
   /** Date of the rates used to convert money (null: no rate table). */
-  rateDate: z.string().nullable(),
-  weights: z.record(z.string(), z.number()),
+  rateDate: safeString().nullable(),
+  weights: z.record(safeString(), z.number()),
   /** 'saved': the lineup's weights; 'preview': the weights sent, not saved. */
   weightsFrom: z.enum(['saved', 'preview']),
   /** The operating mode compared for every device. */
@@ -263,7 +265,7 @@ export const comparisonResponse = z.object({
   /** Devices of the lineup the caller cannot see, left out of the comparison. */
   hiddenDevices: z.number().int(),
   /** Cautions and the nature of the figures. */
-  notes: z.array(z.string()),
-  computedAt: z.string(),
+  notes: z.array(safeString()),
+  computedAt: safeString(),
 });
 export type ComparisonDto = z.infer<typeof comparisonResponse>;

@@ -1,11 +1,10 @@
 // Raw readings at the bench: a quantity, the value typed with its unit, what was measured and how.
 import { z } from 'zod';
-import { patchOf } from './common';
+import { patchOf, safeString } from './common';
 import { MEASURED_QUANTITY } from './domain';
 
 const text = (max: number) =>
-  z
-    .string()
+  safeString()
     .trim()
     .max(max, `At most ${max} characters`)
     .nullable()
@@ -15,11 +14,11 @@ const text = (max: number) =>
 const fields = {
   quantity: z.enum(MEASURED_QUANTITY.values, { error: `Choose a quantity: ${MEASURED_QUANTITY.values.join(', ')}` }),
   /** "3.02 Ω", "350 mA", "4R7"; a plain number is read in the quantity's stored unit. */
-  value: z.union([z.number(), z.string().trim().min(1, 'Required').max(60, 'At most 60 characters')], {
+  value: z.union([z.number(), safeString().trim().min(1, 'Required').max(60, 'At most 60 characters')], {
     error: (issue) => (issue.input === undefined ? 'Required' : 'Enter the value with its unit'),
   }),
   /** What was measured ("Heater element, front"). */
-  subject: z.string({ error: 'Required' }).trim().min(1, 'Say what was measured').max(300, 'At most 300 characters'),
+  subject: safeString({ error: 'Required' }).trim().min(1, 'Say what was measured').max(300, 'At most 300 characters'),
   conditions: text(300),
   instrument: text(160),
   /** As the instrument states it, e.g. "±(0.8 % + 3 digits)". */
@@ -37,15 +36,15 @@ export const measurementSchema = z.object({
   quantity: z.enum(MEASURED_QUANTITY.values),
   /** In the stored unit (SI; Wh, Ah and °C for energy, charge and temperature). */
   value: z.number(),
-  unit: z.string(),
+  unit: safeString(),
   /** The text typed. */
-  entered: z.string(),
-  subject: z.string(),
-  conditions: z.string().nullable(),
-  instrument: z.string().nullable(),
-  uncertainty: z.string().nullable(),
-  takenBy: z.object({ id: z.number().int(), name: z.string() }).nullable(),
-  takenAt: z.string(),
+  entered: safeString(),
+  subject: safeString(),
+  conditions: safeString().nullable(),
+  instrument: safeString().nullable(),
+  uncertainty: safeString().nullable(),
+  takenBy: z.object({ id: z.number().int(), name: safeString() }).nullable(),
+  takenAt: safeString(),
 });
 export type MeasurementDto = z.infer<typeof measurementSchema>;
 export const measurementResponse = z.object({ measurement: measurementSchema });

@@ -1,6 +1,6 @@
 // Bill of materials: one line per part of a teardown, CSV import/export.
 import { z } from 'zod';
-import { patchOf } from './common';
+import { patchOf, safeString } from './common';
 import { MOUNT_TYPE, PART_CATEGORY, type MountType, type PartCategory } from './domain';
 import { toleranceReading } from './tools';
 
@@ -10,8 +10,7 @@ const MANUAL_CATEGORIES: readonly PartCategory[] = ['cell', 'pcb', 'enclosure', 
 export const defaultMountFor = (category: PartCategory): MountType => (MANUAL_CATEGORIES.includes(category) ? 'manual' : 'smt');
 
 const trimmed = (max: number) =>
-  z
-    .string()
+  safeString()
     .trim()
     .max(max, `At most ${max} characters`)
     .optional()
@@ -27,7 +26,7 @@ const partFields = {
   /** The singular form is accepted too (same meaning). */
   designator: trimmed(300),
   category: partCategorySchema,
-  description: z.string({ error: 'Required' }).trim().min(1, 'Required').max(500, 'At most 500 characters'),
+  description: safeString({ error: 'Required' }).trim().min(1, 'Required').max(500, 'At most 500 characters'),
   quantity: z
     .number({ error: 'Enter a whole number of at least 1' })
     .int('Enter a whole number')
@@ -60,13 +59,13 @@ export const decodedReadingSchema = z.object({
   value: z.number(),
   unit: z.enum(['Ω', 'F']),
   /** The rule (code form) that gives it: "letter-and-digit", "eia-96", "three-digit", … */
-  scheme: z.string(),
-  schemeLabel: z.string(),
-  schemeShortLabel: z.string(),
+  scheme: safeString(),
+  schemeLabel: safeString(),
+  schemeShortLabel: safeString(),
   /** What the tolerance letter of the code means, when it has one ("102K" read as 1 kΩ: ±10 %). */
   tolerance: toleranceReading.nullable(),
   /** The rule that ranks the readings when there is more than one. */
-  rankReason: z.string().nullable(),
+  rankReason: safeString().nullable(),
 });
 export type DecodedReadingDto = z.infer<typeof decodedReadingSchema>;
 
@@ -74,26 +73,26 @@ export const partSchema = z.object({
   id: z.number().int(),
   teardownId: z.number().int(),
   position: z.number().int(),
-  designators: z.string().nullable(),
+  designators: safeString().nullable(),
   category: partCategorySchema,
-  description: z.string(),
-  marking: z.string().nullable(),
+  description: safeString(),
+  marking: safeString().nullable(),
   /** Decoded from the marking (SI: Ω or F) when it reads as a resistor or capacitor code. */
   decodedValue: z.number().nullable(),
   decodedUnit: z.enum(['Ω', 'F']).nullable(),
   /** Why a resistor/capacitor marking gave no value (null when decoded or not applicable). */
-  decodeNote: z.string().nullable(),
+  decodeNote: safeString().nullable(),
   /**
    * Every valid reading of the marking, most likely first; the first is decodedValue/decodedUnit. More
    * than one when the code reads two ways ("10R": 10 Ω, or 1.24 Ω as EIA-96). Empty when not decoded.
    */
   decodedReadings: z.array(decodedReadingSchema),
-  makerPartNumber: z.string().nullable(),
-  package: z.string().nullable(),
+  makerPartNumber: safeString().nullable(),
+  package: safeString().nullable(),
   quantity: z.number().int(),
   mount: mountTypeSchema,
-  notes: z.string().nullable(),
-  updatedAt: z.string(),
+  notes: safeString().nullable(),
+  updatedAt: safeString(),
 });
 export type PartDto = z.infer<typeof partSchema>;
 export const partResponse = z.object({ part: partSchema });
@@ -124,7 +123,7 @@ export const PART_CSV_COMPUTED: readonly PartCsvKey[] = ['decodedValue', 'decode
 
 export const importPartsBody = z.object({
   /** The CSV text (UTF-8; a BOM is fine). Comma, semicolon or tab separated; quoted fields allowed. */
-  csv: z.string({ error: 'Paste or upload a CSV file' }).min(1, 'The CSV is empty').max(900_000, 'The CSV is larger than 900 kB; split it'),
+  csv: safeString({ error: 'Paste or upload a CSV file' }).min(1, 'The CSV is empty').max(900_000, 'The CSV is larger than 900 kB; split it'),
   /** append (default) keeps the current parts; replace swaps the whole list in one transaction. */
   mode: z.enum(['append', 'replace'], { error: 'Choose append or replace' }).default('append'),
 });
@@ -140,26 +139,26 @@ export const csvRowErrorSchema = z.object({
   /** Row number as a spreadsheet shows it: the header is row 1, the first part row 2. */
   row: z.number().int(),
   /** The column as headed in the file (or the expected header when it is missing). */
-  column: z.string(),
-  message: z.string(),
+  column: safeString(),
+  message: safeString(),
 });
 export type CsvRowError = z.infer<typeof csvRowErrorSchema>;
 
 export const importPreviewRowSchema = z.object({
   row: z.number().int(),
   part: z.object({
-    designators: z.string().nullable(),
-    category: z.string(),
-    description: z.string(),
-    marking: z.string().nullable(),
+    designators: safeString().nullable(),
+    category: safeString(),
+    description: safeString(),
+    marking: safeString().nullable(),
     decodedValue: z.number().nullable(),
     decodedUnit: z.enum(['Ω', 'F']).nullable(),
     decodedReadings: z.array(decodedReadingSchema),
-    makerPartNumber: z.string().nullable(),
-    package: z.string().nullable(),
+    makerPartNumber: safeString().nullable(),
+    package: safeString().nullable(),
     quantity: z.number().nullable(),
-    mount: z.string(),
-    notes: z.string().nullable(),
+    mount: safeString(),
+    notes: safeString().nullable(),
   }),
   errors: z.array(csvRowErrorSchema),
 });
@@ -169,11 +168,11 @@ export const importPartsResponse = z.object({
   dryRun: z.boolean(),
   /** Nothing is saved unless every row is valid. */
   valid: z.boolean(),
-  delimiter: z.string(),
-  columns: z.object({ recognised: z.array(z.string()), ignored: z.array(z.string()) }),
+  delimiter: safeString(),
+  columns: z.object({ recognised: z.array(safeString()), ignored: z.array(safeString()) }),
   rows: z.array(importPreviewRowSchema),
   errors: z.array(csvRowErrorSchema),
-  warnings: z.array(z.string()),
+  warnings: z.array(safeString()),
   /** Parts saved (0 on a dry run). */
   imported: z.number().int(),
   parts: z.array(partSchema).optional(),

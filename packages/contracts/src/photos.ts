@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { safeString } from './common';
 
 /** The image variants the server keeps for every photo. */
 export const PHOTO_VARIANTS = ['thumb', 'display', 'original'] as const;
@@ -17,7 +18,7 @@ const whole = (field: string, max: number) =>
 
 export const photoLayer = whole('Layer', 99);
 export const photoStep = whole('Step', 999);
-const caption = z.string().trim().max(500, 'At most 500 characters');
+const caption = safeString().trim().max(500, 'At most 500 characters');
 
 /** Text fields sent with the file in `POST /api/teardowns/:id/photos` (multipart). */
 export const uploadPhotoFields = z.object({
@@ -43,7 +44,7 @@ const relative = (axis: 'x' | 'y') =>
     .min(0, `${axis} must be between 0 and 1`)
     .max(1, `${axis} must be between 0 and 1`);
 const linkId = (what: string) => z.number().int(`${what} must be a whole number`).positive(`${what} must be a positive id`);
-const label = z.string().trim().min(1, 'Give the pin a label').max(200, 'At most 200 characters');
+const label = safeString().trim().min(1, 'Give the pin a label').max(200, 'At most 200 characters');
 
 export const createCalloutBody = z
   .object({
@@ -77,7 +78,7 @@ const optionalId = z.preprocess((v) => (v === '' ? undefined : v), z.coerce.numb
 export const teardownCalloutsQuery = z.object({ partId: optionalId, findingId: optionalId });
 export type TeardownCalloutsQuery = z.infer<typeof teardownCalloutsQuery>;
 
-export const calloutLinkSchema = z.object({ id: z.number().int(), label: z.string() });
+export const calloutLinkSchema = z.object({ id: z.number().int(), label: safeString() });
 
 export const calloutSchema = z.object({
   id: z.number().int(),
@@ -85,28 +86,28 @@ export const calloutSchema = z.object({
   number: z.number().int(),
   x: z.number(),
   y: z.number(),
-  label: z.string(),
+  label: safeString(),
   part: calloutLinkSchema.nullable(),
   finding: calloutLinkSchema.nullable(),
 });
 export type CalloutDto = z.infer<typeof calloutSchema>;
 
-export const photoUrlsSchema = z.object({ thumb: z.string(), display: z.string(), original: z.string() });
+export const photoUrlsSchema = z.object({ thumb: safeString(), display: safeString(), original: safeString() });
 
 export const photoSchema = z.object({
   id: z.number().int(),
   teardownId: z.number().int(),
   /** The client's file name after sanitising; for display only (files are stored under random names). */
-  name: z.string(),
-  mime: z.string(),
+  name: safeString(),
+  mime: safeString(),
   width: z.number().int(),
   height: z.number().int(),
   bytes: z.number().int(),
-  caption: z.string().nullable(),
+  caption: safeString().nullable(),
   layer: z.number().int(),
   step: z.number().int(),
-  uploadedBy: z.object({ id: z.number().int(), name: z.string() }).nullable(),
-  createdAt: z.string(),
+  uploadedBy: z.object({ id: z.number().int(), name: safeString() }).nullable(),
+  createdAt: safeString(),
   urls: photoUrlsSchema,
   callouts: z.array(calloutSchema),
 });
@@ -116,7 +117,7 @@ export type PhotoDto = z.infer<typeof photoSchema>;
 export const uploadLimitsSchema = z.object({
   maxBytes: z.number().int(),
   maxPixels: z.number().int(),
-  types: z.array(z.object({ mime: z.string(), extensions: z.array(z.string()) })),
+  types: z.array(z.object({ mime: safeString(), extensions: z.array(safeString()) })),
 });
 export type UploadLimits = z.infer<typeof uploadLimitsSchema>;
 
@@ -131,7 +132,7 @@ export const calloutsResponse = z.object({ callouts: z.array(calloutSchema) });
 
 /** A pin together with the photo it sits on (pins of one part or finding across the teardown). */
 export const placedCalloutSchema = calloutSchema.extend({
-  photo: z.object({ id: z.number().int(), caption: z.string().nullable(), width: z.number().int(), height: z.number().int(), layer: z.number().int(), step: z.number().int(), urls: photoUrlsSchema }),
+  photo: z.object({ id: z.number().int(), caption: safeString().nullable(), width: z.number().int(), height: z.number().int(), layer: z.number().int(), step: z.number().int(), urls: photoUrlsSchema }),
 });
 export type PlacedCalloutDto = z.infer<typeof placedCalloutSchema>;
 export const placedCalloutsResponse = z.object({ callouts: z.array(placedCalloutSchema) });

@@ -2,12 +2,12 @@
 // Numeric inputs take a number in SI or text with a unit ("2700 mAh", "3.65V", "3R0", "60 %"); the
 // server stores SI and keeps the typed text in `entered`, keyed by the field name.
 import { z } from 'zod';
-import { patchOf } from './common';
+import { patchOf, safeString } from './common';
 import { CHEMISTRY, CONNECTION, CONVERTER_ROLE, CONVERTER_TOPOLOGY, ELEMENT_MATERIAL, JOINING, LOAD_KIND, SURFACE_MATERIAL } from './domain';
 
 /** A number (SI) or text with a unit. Blank or null clears an optional value. */
 /** A number in SI or a value with its unit ("2700 mAh"), parsed by the server. */
-const powerQuantity = z.union([z.number(), z.string().trim().max(40, 'At most 40 characters')], {
+const powerQuantity = z.union([z.number(), safeString().trim().max(40, 'At most 40 characters')], {
   error: (issue) => (issue.input === undefined ? 'Required' : 'Enter a number or a value with its unit'),
 });
 const required = powerQuantity;
@@ -16,8 +16,7 @@ const optional = powerQuantity.nullable().optional();
 const choice = <T extends readonly [string, ...string[]]>(values: T) => z.enum(values, { error: `Choose one of: ${values.join(', ')}` });
 
 const label = (max: number) =>
-  z
-    .string()
+  safeString()
     .trim()
     .max(max, `At most ${max} characters`)
     .nullable()
@@ -61,7 +60,7 @@ export const packSchema = z.object({
   id: z.number().int(),
   teardownId: z.number().int(),
   chemistry: choice(CHEMISTRY.values),
-  cellFormat: z.string().nullable(),
+  cellFormat: safeString().nullable(),
   nominalVolts: z.number(),
   maxVolts: z.number().nullable(),
   capacityAh: z.number(),
@@ -76,10 +75,10 @@ export const packSchema = z.object({
   /** The two readings it was worked out from, when it was (SI). */
   internalResistanceReadings: z.object({ lowAmps: z.number(), lowVolts: z.number(), highAmps: z.number(), highVolts: z.number() }).nullable(),
   /** What the user typed, by field ("capacityAh": "2700 mAh"). */
-  entered: z.record(z.string(), z.string()),
+  entered: z.record(safeString(), safeString()),
   /** A lithium chemistry: the section shows the lithium cautions. */
   lithium: z.boolean(),
-  updatedAt: z.string(),
+  updatedAt: safeString(),
 });
 export type PackDto = z.infer<typeof packSchema>;
 export const packResponse = z.object({ pack: packSchema.nullable() });
@@ -113,7 +112,7 @@ export type UpdateConverterBody = z.input<typeof updateConverterBody>;
 export const converterSchema = z.object({
   id: z.number().int(),
   teardownId: z.number().int(),
-  label: z.string(),
+  label: safeString(),
   topology: choice(CONVERTER_TOPOLOGY.values),
   role: choice(CONVERTER_ROLE.values),
   inputVolts: z.number(),
@@ -122,8 +121,8 @@ export const converterSchema = z.object({
   chargeCurrentAmps: z.number().nullable(),
   efficiency: z.number().nullable(),
   efficiencySource: z.enum(['measured', 'assumed']),
-  entered: z.record(z.string(), z.string()),
-  createdAt: z.string(),
+  entered: z.record(safeString(), safeString()),
+  createdAt: safeString(),
 });
 export type ConverterDto = z.infer<typeof converterSchema>;
 export const converterResponse = z.object({ converter: converterSchema });
@@ -170,7 +169,7 @@ export const loadSchema = z.object({
   id: z.number().int(),
   teardownId: z.number().int(),
   kind: choice(LOAD_KIND.values),
-  label: z.string(),
+  label: safeString(),
   resistanceOhms: z.number().nullable(),
   currentAmps: z.number().nullable(),
   powerWatts: z.number().nullable(),
@@ -183,8 +182,8 @@ export const loadSchema = z.object({
   surfaceMaterial: choice(SURFACE_MATERIAL.values).nullable(),
   elementMaterial: choice(ELEMENT_MATERIAL.values).nullable(),
   heatedMassKg: z.number().nullable(),
-  entered: z.record(z.string(), z.string()),
-  createdAt: z.string(),
+  entered: z.record(safeString(), safeString()),
+  createdAt: safeString(),
 });
 export type LoadDto = z.infer<typeof loadSchema>;
 export const loadResponse = z.object({ load: loadSchema });
@@ -193,7 +192,7 @@ export const loadsResponse = z.object({ loads: z.array(loadSchema) });
 // ---- operating modes ----
 
 const modeFields = {
-  name: z.string({ error: 'Required' }).trim().min(1, 'Give the mode a name').max(80, 'At most 80 characters'),
+  name: safeString({ error: 'Required' }).trim().min(1, 'Give the mode a name').max(80, 'At most 80 characters'),
   note: label(300),
   /** The loads active in the mode, each at its PWM duty in it (0..1 or "60 %"). */
   loads: z
@@ -216,13 +215,13 @@ export type UpdateModeBody = z.input<typeof updateModeBody>;
 export const modeSchema = z.object({
   id: z.number().int(),
   teardownId: z.number().int(),
-  name: z.string(),
-  note: z.string().nullable(),
+  name: safeString(),
+  note: safeString().nullable(),
   position: z.number().int(),
   loads: z.array(z.object({ loadId: z.number().int(), duty: z.number() })),
   quiescentAmps: z.number().nullable(),
-  entered: z.record(z.string(), z.string()),
-  createdAt: z.string(),
+  entered: z.record(safeString(), safeString()),
+  createdAt: safeString(),
 });
 export type ModeDto = z.infer<typeof modeSchema>;
 export const modeResponse = z.object({ mode: modeSchema });
@@ -230,7 +229,7 @@ export const modesResponse = z.object({ modes: z.array(modeSchema) });
 
 export const dutyForTargetQuery = z.object({
   /** Target surface temperature ("45 °C" or 45). */
-  target: z.string().trim().min(1, 'Required').max(40, 'At most 40 characters').default('45 °C'),
+  target: safeString().trim().min(1, 'Required').max(40, 'At most 40 characters').default('45 °C'),
 });
 
 export const powerSystemResponse = z.object({

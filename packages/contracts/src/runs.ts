@@ -1,6 +1,7 @@
 // Bench runs: logs from an electronic load, a USB meter or a thermocouple logger, uploaded to a
 // teardown with a column mapping, analysed on the server and plotted from downsampled series.
 import { z } from 'zod';
+import { safeString } from './common';
 import { SURFACE_MATERIAL } from './domain';
 
 const labelled = <const T extends readonly string[]>(values: T, labels: Record<T[number], string>) => ({ values, labels, schema: z.enum(values) });
@@ -51,7 +52,7 @@ export const RUN_QUANTITY_LABELS: Record<RunQuantityName, string> = {
   temperature: 'Temperature',
 };
 
-const columnName = z.string().trim().min(1, 'Choose a column').max(200, 'At most 200 characters');
+const columnName = safeString().trim().min(1, 'Choose a column').max(200, 'At most 200 characters');
 const mapped = <U extends z.ZodType>(unit: U) => z.object({ column: columnName, unit });
 
 /** Which column holds which quantity, in which unit; plus how the file is laid out. */
@@ -118,7 +119,7 @@ export const runOptionsSchema = z.object({
 });
 export type RunOptions = z.infer<typeof runOptionsSchema>;
 
-export const runLabel = z.string().trim().min(1, 'Required').max(160, 'At most 160 characters');
+export const runLabel = safeString().trim().min(1, 'Required').max(160, 'At most 160 characters');
 
 export const updateRunBody = z
   .object({ label: runLabel.optional(), options: runOptionsSchema.optional() })
@@ -180,7 +181,7 @@ export const runAnalysisSchema = z.object({
       terminationFraction: z.number(),
       /** What the fraction multiplied, in words and numbers. Absent on runs analysed before it existed. */
       termination: z
-        .object({ basis: z.enum(['rated-capacity', 'cc-current']), ratedAh: z.number().nullable(), description: z.string() })
+        .object({ basis: z.enum(['rated-capacity', 'cc-current']), ratedAh: z.number().nullable(), description: safeString() })
         .optional(),
       terminated: z.boolean(),
       chargeTimeS: z.number(),
@@ -199,9 +200,9 @@ export const runAnalysisSchema = z.object({
         temperatureC: z.number().nullable(),
         fromS: z.number().nullable(),
         toS: z.number().nullable(),
-        criterion: z.string(),
+        criterion: safeString(),
       }),
-      burnThreshold: z.object({ temperatureC: z.number(), material: SURFACE_MATERIAL.schema, contactSeconds: z.number(), listedSeconds: z.number(), source: z.string() }),
+      burnThreshold: z.object({ temperatureC: z.number(), material: SURFACE_MATERIAL.schema, contactSeconds: z.number(), listedSeconds: z.number(), source: safeString() }),
       /** Burn threshold − peak surface temperature, °C; below zero the surface got hot enough to burn for that contact. */
       marginC: z.number(),
       timeToBurnThresholdS: z.number().nullable(),
@@ -211,13 +212,13 @@ export const runAnalysisSchema = z.object({
     .object({
       ampHoursAt5V: z.number(),
       cellEnergyWh: z.number(),
-      cellEnergySource: z.string(),
+      cellEnergySource: safeString(),
       efficiency: z.number(),
     })
     .optional(),
   /** Assumptions the analysis made, in words. */
-  notes: z.array(z.string()),
-  warnings: z.array(z.string()),
+  notes: z.array(safeString()),
+  warnings: z.array(safeString()),
 });
 export type RunAnalysis = z.infer<typeof runAnalysisSchema>;
 
@@ -237,13 +238,13 @@ export const runComparisonSchema = z.object({
       labelBasis: z.enum(['label-wh', 'label-ah-at-cell-volts']),
       measuredBasis: z.enum(['measured-wh', 'measured-ah-at-pack-volts']),
       /** The comparison's basis in words. */
-      basis: z.string(),
+      basis: safeString(),
       percent: z.number(),
       warning: z.boolean(),
     })
     .nullable(),
-  rated: z.object({ ratedAh: z.number(), measuredAh: z.number(), percent: z.number(), warning: z.boolean(), basis: z.string() }).nullable(),
-  labelEnergy: z.object({ claimedWh: z.number(), measuredWh: z.number(), percent: z.number(), warning: z.boolean(), basis: z.string() }).nullable(),
+  rated: z.object({ ratedAh: z.number(), measuredAh: z.number(), percent: z.number(), warning: z.boolean(), basis: safeString() }).nullable(),
+  labelEnergy: z.object({ claimedWh: z.number(), measuredWh: z.number(), percent: z.number(), warning: z.boolean(), basis: safeString() }).nullable(),
 });
 export type RunComparison = z.infer<typeof runComparisonSchema>;
 
@@ -252,23 +253,23 @@ export const runColumnsSchema = z.object({ v: z.boolean(), i: z.boolean(), p: z.
 export const runSchema = z.object({
   id: z.number().int(),
   teardownId: z.number().int(),
-  device: z.object({ id: z.number().int(), maker: z.string(), model: z.string() }),
-  unitLabel: z.string().nullable(),
-  teardownStatus: z.string(),
+  device: z.object({ id: z.number().int(), maker: safeString(), model: safeString() }),
+  unitLabel: safeString().nullable(),
+  teardownStatus: safeString(),
   kind: RUN_KIND.schema,
-  label: z.string(),
-  fileName: z.string(),
+  label: safeString(),
+  fileName: safeString(),
   fileBytes: z.number().int(),
-  mapping: z.record(z.string(), z.unknown()),
+  mapping: z.record(safeString(), z.unknown()),
   samples: z.number().int(),
   durationS: z.number(),
   columns: runColumnsSchema,
   options: runOptionsSchema,
   analysis: runAnalysisSchema,
   comparison: runComparisonSchema,
-  createdBy: z.object({ id: z.number().int(), name: z.string() }).nullable(),
-  createdAt: z.string(),
-  updatedAt: z.string(),
+  createdBy: z.object({ id: z.number().int(), name: safeString() }).nullable(),
+  createdAt: safeString(),
+  updatedAt: safeString(),
 });
 export type RunDto = z.infer<typeof runSchema>;
 export const runResponse = z.object({ run: runSchema });
@@ -277,7 +278,7 @@ export const runListResponse = z.object({ runs: z.array(runSchema) });
 export const runListQuery = z.object({
   kind: RUN_KIND.schema.optional(),
   /** Words to find in the device, unit or run label. */
-  q: z.string().trim().max(100, 'At most 100 characters').optional(),
+  q: safeString().trim().max(100, 'At most 100 characters').optional(),
 });
 
 export const MAX_SERIES_POINTS = 5000;
@@ -317,9 +318,9 @@ export const runPreviewResponse = z.object({
   delimiter: RUN_DELIMITER.schema,
   decimalComma: z.boolean(),
   headerRow: z.number().int(),
-  columns: z.array(z.string()),
+  columns: z.array(safeString()),
   /** The first data rows (at most 20), as text. */
-  rows: z.array(z.array(z.string())),
+  rows: z.array(z.array(safeString())),
   /** A first guess at the mapping, for the user to check. */
   guess: z.object({
     kind: RUN_KIND.schema,

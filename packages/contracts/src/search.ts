@@ -1,6 +1,7 @@
 // Findings explorer: full-text search with facets across teardowns, the URL that holds a search,
 // and pattern counts across devices.
 import { z } from 'zod';
+import { safeString } from './common';
 import { DEVICE_CATEGORY, FINDING_KIND, SEVERITY, TEARDOWN_STATUS, type DeviceCategory, type FindingKind, type Severity, type TeardownStatus } from './domain';
 
 const labelled = <const T extends readonly string[]>(values: T, labels: Record<T[number], string>) => ({ values, labels, schema: z.enum(values) });
@@ -96,8 +97,7 @@ const many = <T extends z.ZodType>(item: T, name: string, max = 50) =>
 
 const isoDate = z.preprocess(
   (v) => (v === '' ? undefined : v),
-  z
-    .string({ error: 'Use a date as YYYY-MM-DD' })
+  safeString({ error: 'Use a date as YYYY-MM-DD' })
     .trim()
     .regex(/^\d{4}-\d{2}-\d{2}$/, 'Use a date as YYYY-MM-DD')
     .refine((s) => !Number.isNaN(Date.parse(`${s}T00:00:00Z`)) && new Date(`${s}T00:00:00Z`).toISOString().startsWith(s), 'Not a calendar date')
@@ -115,13 +115,13 @@ const wholeNumber = (min: number, max: number, fallback: number) =>
  */
 export const searchQuery = z
   .object({
-    q: z.string().trim().max(200, 'At most 200 characters').optional(),
+    q: safeString().trim().max(200, 'At most 200 characters').optional(),
     type: many(SEARCH_TYPE.schema, 'type'),
     kind: many(FINDING_KIND.schema, 'kind'),
     severity: many(SEVERITY.schema, 'severity'),
     category: many(DEVICE_CATEGORY.schema, 'category'),
-    maker: many(z.string().trim().min(1, 'A maker cannot be empty').max(120, 'At most 120 characters'), 'maker'),
-    tag: many(z.string().trim().toLowerCase().min(1, 'A tag cannot be empty').max(40, 'A tag has at most 40 characters'), 'tag'),
+    maker: many(safeString().trim().min(1, 'A maker cannot be empty').max(120, 'At most 120 characters'), 'maker'),
+    tag: many(safeString().trim().toLowerCase().min(1, 'A tag cannot be empty').max(40, 'A tag has at most 40 characters'), 'tag'),
     status: many(TEARDOWN_STATUS.schema, 'status'),
     device: many(z.coerce.number({ error: 'Give device ids as numbers' }).int('Give device ids as whole numbers').positive('Give device ids as positive numbers'), 'device', 200),
     from: isoDate,
@@ -142,21 +142,21 @@ export const searchItemSchema = z.object({
   id: z.number().int(),
   teardownId: z.number().int(),
   deviceId: z.number().int(),
-  title: z.string(),
+  title: safeString(),
   /** Plain text; hits between SNIPPET_HIT_START and SNIPPET_HIT_END (render with snippetParts). */
-  snippet: z.string(),
+  snippet: safeString(),
   section: z.enum(['findings', 'parts', 'overview', 'comments']),
-  device: z.object({ maker: z.string(), model: z.string(), category: DEVICE_CATEGORY.schema }),
-  teardown: z.object({ status: TEARDOWN_STATUS.schema, date: z.string(), unitLabel: z.string().nullable() }),
+  device: z.object({ maker: safeString(), model: safeString(), category: DEVICE_CATEGORY.schema }),
+  teardown: z.object({ status: TEARDOWN_STATUS.schema, date: safeString(), unitLabel: safeString().nullable() }),
   /** Finding fields (null/empty for other types). */
   kind: FINDING_KIND.schema.nullable(),
   severity: SEVERITY.schema.nullable(),
-  tags: z.array(z.string()),
-  createdAt: z.string(),
+  tags: z.array(safeString()),
+  createdAt: safeString(),
 });
 export type SearchItem = z.infer<typeof searchItemSchema>;
 
-const counts = z.record(z.string(), z.number().int());
+const counts = z.record(safeString(), z.number().int());
 export const searchFacetsSchema = z.object({
   type: counts,
   kind: counts,
@@ -180,7 +180,7 @@ export const searchResponse = z.object({
   facets: searchFacetsSchema,
   /** 'search' with words to match, 'browse' without (findings by default). */
   mode: z.enum(['search', 'browse']),
-  terms: z.array(z.string()),
+  terms: z.array(safeString()),
   /** The types listed (browse mode without a type filter: findings). */
   types: z.array(SEARCH_TYPE.schema),
   sort: SEARCH_SORT.schema,
@@ -303,8 +303,8 @@ export function searchStateFromParams(p: QueryParamsLike): SearchState {
 // ── GET /api/patterns ──────────────────────────────────────────────────────────────────────────
 export const patternDeviceSchema = z.object({
   id: z.number().int(),
-  maker: z.string(),
-  model: z.string(),
+  maker: safeString(),
+  model: safeString(),
   category: DEVICE_CATEGORY.schema,
   /** The teardown the device was judged on (its latest one the caller may read). */
   teardownId: z.number().int(),
@@ -312,11 +312,11 @@ export const patternDeviceSchema = z.object({
 export type PatternDevice = z.infer<typeof patternDeviceSchema>;
 
 export const patternSchema = z.object({
-  key: z.string(),
+  key: safeString(),
   /** The sentence with its numbers, e.g. "1 of 3 pocket heaters has no temperature sensor". */
-  label: z.string(),
+  label: safeString(),
   /** A short heading without numbers. */
-  title: z.string(),
+  title: safeString(),
   /** Devices that show the pattern. */
   count: z.number().int(),
   /** Devices of the group that have the data to judge it. */
@@ -325,11 +325,11 @@ export const patternSchema = z.object({
   /** The devices behind `count`. */
   devices: z.array(patternDeviceSchema),
   /** How it is judged, in one sentence. */
-  basis: z.string(),
+  basis: safeString(),
   /** A safety pattern (its card shows the caution tone). */
   safety: z.boolean(),
 });
 export type Pattern = z.infer<typeof patternSchema>;
 
-export const patternsResponse = z.object({ patterns: z.array(patternSchema), note: z.string() });
+export const patternsResponse = z.object({ patterns: z.array(patternSchema), note: safeString() });
 export type PatternsResponse = z.infer<typeof patternsResponse>;

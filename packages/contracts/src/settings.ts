@@ -1,9 +1,9 @@
 import { z } from 'zod';
 import { DEVICE_CATEGORY, type DeviceCategory } from './domain';
 import { durationInput, percentInput } from './inputs';
+import { patchOf, safeString } from './common';
 
-export const currencyCode = z
-  .string()
+export const currencyCode = safeString()
   .trim()
   .toUpperCase()
   .regex(/^[A-Z]{3}$/, 'Use a three-letter ISO 4217 code such as USD');
@@ -31,7 +31,7 @@ export const DEFAULT_SALES_TAX_BY_CURRENCY: Readonly<Record<string, number>> = {
 
 /** Sales tax in retail prices by currency: currency code → fraction 0..1. */
 export const salesTaxByCurrencySchema = z.record(
-  z.string().trim().toUpperCase().regex(/^[A-Z]{3}$/, 'Use a three-letter ISO 4217 code such as EUR'),
+  safeString().trim().toUpperCase().regex(/^[A-Z]{3}$/, 'Use a three-letter ISO 4217 code such as EUR'),
   z
     .number({ error: 'The sales tax must be a number' })
     .min(0, 'The sales tax must not be below 0 %')
@@ -59,7 +59,23 @@ export const workspaceSettingsSchema = z.object({
   cutoffDebounceSeconds: z.number({ error: 'A number of seconds' }).min(0, 'At least 0 s').max(600, 'At most 600 s').default(5),
   /** Share of sales tax in retail prices by currency, for devices that do not set their own (0.2 = 20 %). */
   salesTaxByCurrency: salesTaxByCurrencySchema.default(() => ({ ...DEFAULT_SALES_TAX_BY_CURRENCY })),
+  /** A sign-in lasts at most this long, however active (h). */
+  sessionMaxHours: z.number().int('Whole hours').min(1, 'At least 1 h').max(168, 'At most 168 h (7 days)').default(12),
+  /** A session unused this long ends (min). */
+  sessionIdleMinutes: z.number().int('Whole minutes').min(5, 'At least 5 min').max(1440, 'At most 1440 min (24 h)').default(60),
 });
+/** Labels of the settings as the screens show them. */
+export const SETTING_LABELS: Record<keyof z.infer<typeof workspaceSettingsSchema>, string> = {
+  reportingCurrency: 'Reporting currency',
+  capacityWarnFraction: 'Capacity warning level',
+  defaultContactSeconds: 'Workspace default contact time',
+  contactSecondsByCategory: 'Contact time by device category',
+  usableFraction: 'Usable share of the rated energy',
+  cutoffDebounceSeconds: 'Cut-off debounce',
+  salesTaxByCurrency: 'Sales tax by currency',
+  sessionMaxHours: 'Longest sign-in',
+  sessionIdleMinutes: 'Sign out after inactivity',
+};
 export type WorkspaceSettings = z.infer<typeof workspaceSettingsSchema>;
 /** The cut-off debounce on its own, for the bench-runs page's setting form. */
 export const cutoffDebounceSettingBody = workspaceSettingsSchema.pick({ cutoffDebounceSeconds: true });
@@ -89,5 +105,6 @@ export const figureSettingsFormSchema = z
 export type FigureSettingsFormValues = z.input<typeof figureSettingsFormSchema>;
 export type FigureSettingsForm = z.output<typeof figureSettingsFormSchema>;
 export const settingsResponse = z.object({ settings: workspaceSettingsSchema });
-export const updateSettingsBody = workspaceSettingsSchema.partial().refine((b) => Object.keys(b).length > 0, { message: 'Change at least one setting' });
+/** PATCH /api/settings: the settings sent change, the others stay as they are. */
+export const updateSettingsBody = patchOf(workspaceSettingsSchema.shape, 'Change at least one setting');
 export type UpdateSettingsBody = z.infer<typeof updateSettingsBody>;

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { auditEntrySchema } from './admin';
-import { text } from './common';
+import { text, safeString } from './common';
 import { CHEMISTRY, DEVICE_CATEGORY, TEARDOWN_STATUS } from './domain';
 import { calendarDay, clearableNumber, clearableText } from './inputs';
 
@@ -15,19 +15,19 @@ export type TeardownPermissions = z.infer<typeof teardownPermissionsSchema>;
 
 export const teardownSchema = z.object({
   id: z.number().int(),
-  device: z.object({ id: z.number().int(), maker: z.string(), model: z.string(), category: DEVICE_CATEGORY.schema }),
-  engineer: z.object({ id: z.number().int(), name: z.string() }),
-  unitLabel: z.string().nullable(),
-  date: z.string(),
+  device: z.object({ id: z.number().int(), maker: safeString(), model: safeString(), category: DEVICE_CATEGORY.schema }),
+  engineer: z.object({ id: z.number().int(), name: safeString() }),
+  unitLabel: safeString().nullable(),
+  date: safeString(),
   status: TEARDOWN_STATUS.schema,
-  summary: z.string().nullable(),
-  safetyNotes: z.string().nullable(),
+  summary: safeString().nullable(),
+  safetyNotes: safeString().nullable(),
   contactSeconds: z.number().int().nullable(),
   version: z.number().int(),
-  submittedAt: z.string().nullable(),
-  publishedAt: z.string().nullable(),
-  lastReviewNote: z.string().nullable(),
-  updatedAt: z.string(),
+  submittedAt: safeString().nullable(),
+  publishedAt: safeString().nullable(),
+  lastReviewNote: safeString().nullable(),
+  updatedAt: safeString(),
   permissions: teardownPermissionsSchema,
   /** The recorded cells, if any: lets the pages place the lithium cautions where they matter. */
   cell: z.object({ chemistry: CHEMISTRY.schema, lithium: z.boolean() }).nullable().default(null),
@@ -96,9 +96,9 @@ export type CommentKind = (typeof COMMENT_KIND)[number];
 export const commentSchema = z.object({
   id: z.number().int(),
   kind: z.enum(COMMENT_KIND),
-  body: z.string(),
-  author: z.object({ id: z.number().int(), name: z.string() }).nullable(),
-  createdAt: z.string(),
+  body: safeString(),
+  author: z.object({ id: z.number().int(), name: safeString() }).nullable(),
+  createdAt: safeString(),
 });
 export type CommentDto = z.infer<typeof commentSchema>;
 export const commentsResponse = z.object({ comments: z.array(commentSchema) });

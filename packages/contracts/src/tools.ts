@@ -2,10 +2,11 @@
 // quantities ("2700 mAh", "3R0", "35 µm", "1 oz") or plain SI numbers; the server parses them and
 // answers with explained figures (value, unit, formula, source, inputs, assumptions, warnings).
 import { z } from 'zod';
+import { safeString } from './common';
 import { CHEMISTRY } from './domain';
 
 /** A quantity as typed (with or without its unit) or a plain number in the stored unit. */
-export const toolQuantity = z.union([z.string().trim().min(1, 'Required').max(40, 'At most 40 characters'), z.number().finite()], {
+export const toolQuantity = z.union([safeString().trim().min(1, 'Required').max(40, 'At most 40 characters'), z.number().finite()], {
   error: (issue) => (issue.input === undefined ? 'Required' : 'Enter a number or a quantity with its unit'),
 });
 /** An optional quantity: absent, null or '' all mean "not given". */
@@ -19,15 +20,14 @@ export const MARKING_KIND_LABELS: Record<MarkingKindInput, string> = { auto: 'Ei
 export const BAND_COLOURS = ['black', 'brown', 'red', 'orange', 'yellow', 'green', 'blue', 'violet', 'grey', 'white', 'gold', 'silver', 'pink'] as const;
 export type BandColour = (typeof BAND_COLOURS)[number];
 
-const bandColour = z
-  .string()
+const bandColour = safeString()
   .trim()
   .toLowerCase()
   .refine((v) => v === 'gray' || (BAND_COLOURS as readonly string[]).includes(v), { message: `Use a colour name: ${BAND_COLOURS.join(', ')}` });
 
 export const markingToolBody = z
   .object({
-    code: z.string().trim().min(1, 'Enter a marking such as 472, 4R7 or 68X').max(12, 'At most 12 characters').optional(),
+    code: safeString().trim().min(1, 'Enter a marking such as 472, 4R7 or 68X').max(12, 'At most 12 characters').optional(),
     kind: z.enum(MARKING_KINDS, { error: 'Choose resistor, capacitor or auto' }).default('auto'),
     bands: z.array(bandColour).optional(),
   })
@@ -78,40 +78,40 @@ export const runtimeToolBody = z.object({
 export type RuntimeToolBody = z.input<typeof runtimeToolBody>;
 
 /** What the server read from one typed field: the text, and the value in the stored unit. */
-export const parsedToolInput = z.object({ entered: z.string(), value: z.number(), unit: z.string() });
+export const parsedToolInput = z.object({ entered: safeString(), value: z.number(), unit: safeString() });
 export type ParsedToolInput = z.infer<typeof parsedToolInput>;
-const parsedInputs = z.record(z.string(), parsedToolInput);
+const parsedInputs = z.record(safeString(), parsedToolInput);
 
-export const figureInput = z.object({ label: z.string(), value: z.union([z.number(), z.string(), z.boolean(), z.null()]), unit: z.string().optional() });
+export const figureInput = z.object({ label: safeString(), value: z.union([z.number(), safeString(), z.boolean(), z.null()]), unit: safeString().optional() });
 
 /** A figure with what it takes to show how it was computed. */
 export const explainedFigure = z.object({
-  key: z.string(),
-  label: z.string(),
-  value: z.union([z.number(), z.string()]),
-  unit: z.string(),
-  formula: z.string(),
-  source: z.string(),
+  key: safeString(),
+  label: safeString(),
+  value: z.union([z.number(), safeString()]),
+  unit: safeString(),
+  formula: safeString(),
+  source: safeString(),
   inputs: z.array(figureInput),
-  assumptions: z.array(z.string()),
-  warnings: z.array(z.string()),
+  assumptions: z.array(safeString()),
+  warnings: z.array(safeString()),
 });
 export type ExplainedFigure = z.infer<typeof explainedFigure>;
 
 export const figuresToolResponse = z.object({
   parsed: parsedInputs,
   figures: z.array(explainedFigure),
-  warnings: z.array(z.string()),
+  warnings: z.array(safeString()),
 });
 export type FiguresToolResponse = z.infer<typeof figuresToolResponse>;
 
 export const toleranceReading = z.object({
-  letter: z.string().nullable(),
+  letter: safeString().nullable(),
   plus: z.number(),
   minus: z.number(),
   kind: z.enum(['percent', 'absolute']),
-  text: z.string(),
-  source: z.string(),
+  text: safeString(),
+  source: safeString(),
 });
 
 export const preferredValueReading = z.object({
@@ -126,22 +126,22 @@ export type PreferredValueReading = z.infer<typeof preferredValueReading>;
 export const markingReading = z.object({
   component: z.enum(['resistor', 'capacitor']),
   /** The rule (code form) that gives this reading: "letter-and-digit", "eia-96", "three-digit", … */
-  scheme: z.string(),
-  schemeLabel: z.string(),
+  scheme: safeString(),
+  schemeLabel: safeString(),
   /** The rule in a word or two, for a table cell ("EIA-96"). */
-  schemeShortLabel: z.string(),
+  schemeShortLabel: safeString(),
   /** 1 for the most likely reading of the code on this kind of part, 2 for the next. */
   rank: z.number().int(),
   /** The rule that ranks the readings when the code has more than one on this kind of part. */
-  rankReason: z.string().nullable(),
+  rankReason: safeString().nullable(),
   value: z.number(),
-  unit: z.string(),
-  formula: z.string(),
-  source: z.string(),
+  unit: safeString(),
+  formula: safeString(),
+  source: safeString(),
   inputs: z.array(figureInput),
-  assumptions: z.array(z.string()),
-  warnings: z.array(z.string()),
-  meaning: z.array(z.string()),
+  assumptions: z.array(safeString()),
+  warnings: z.array(safeString()),
+  meaning: z.array(safeString()),
   tolerance: toleranceReading.nullable(),
   range: z.object({ low: z.number(), high: z.number() }).nullable(),
   temperatureCoefficientPpmPerK: z.number().nullable(),
@@ -154,6 +154,6 @@ export const markingToolResponse = z.object({
   readings: z.array(markingReading),
   /** More than one reading: on a resistor and on a capacitor, or two ways on one kind of part. */
   ambiguous: z.boolean(),
-  note: z.string().nullable(),
+  note: safeString().nullable(),
 });
 export type MarkingToolResponse = z.infer<typeof markingToolResponse>;

@@ -11,7 +11,7 @@ const schema = z.object({
   SPLITCASE_DATA_DIR: z.string().default('./data'),
   SPLITCASE_UPLOADS_DIR: z.string().default('./uploads'),
   SPLITCASE_BACKUPS_DIR: z.string().default('./backups'),
-  SPLITCASE_DEMO_PASSWORD: z.string().min(10, 'SPLITCASE_DEMO_PASSWORD must be at least 10 characters').default('splitcase-demo'),
+  SPLITCASE_DEMO_PASSWORD: z.string().min(12, 'SPLITCASE_DEMO_PASSWORD must be at least 12 characters').default('splitcase-demo'),
   SPLITCASE_PUBLIC_URL: z.string().optional(),
   SPLITCASE_SESSION_SECRET: z.string().optional(),
   SPLITCASE_SMTP_URL: z.string().optional(),
@@ -21,7 +21,10 @@ const schema = z.object({
   SPLITCASE_RUN_UPLOAD_MAX_MB: z.coerce.number().positive().default(200),
   SPLITCASE_LOGIN_LIMIT_IP: z.coerce.number().int().positive().default(30),
   SPLITCASE_LOGIN_LIMIT_ACCOUNT: z.coerce.number().int().positive().default(8),
+  SPLITCASE_LOGIN_DELAY_MAX_MS: z.coerce.number().int().min(0).max(60_000).default(8000),
   SPLITCASE_SECURE_COOKIES: z.enum(['true', 'false']).optional(),
+  /** Express's `trust proxy`: unset (no proxy: X-Forwarded-* ignored), or e.g. `loopback`, `1`, `10.0.0.2`. */
+  SPLITCASE_TRUST_PROXY: z.string().trim().min(1).optional(),
 });
 
 export interface Env {
@@ -42,9 +45,16 @@ export interface Env {
   uploadMaxBytes: number;
   /** Largest bench-run log accepted (a 1,000,000-row log with five columns is about 40 MB). */
   runUploadMaxBytes: number;
+  /** Failed sign-ins from one address in 15 minutes before it gets 429. */
   loginLimitPerIp: number;
+  /** Failed sign-ins on one account before each further attempt on it is delayed (never refused). */
   loginLimitPerAccount: number;
+  /** Longest delay of a sign-in attempt on an account under attack. */
+  loginDelayMaxMs: number;
+  /** Session cookies only over HTTPS; default: true when the public URL is https. */
   secureCookies: boolean;
+  /** Express's `trust proxy` setting; false when no reverse proxy is configured. */
+  trustProxy: boolean | number | string;
 }
 
 export function readEnv(source: NodeJS.ProcessEnv = process.env): Env {
@@ -55,6 +65,7 @@ export function readEnv(source: NodeJS.ProcessEnv = process.env): Env {
   }
   const e = parsed.data;
   const dataDir = resolve(e.SPLITCASE_DATA_DIR);
+  const publicUrl = (e.SPLITCASE_PUBLIC_URL ?? `http://localhost:${e.PORT}`).replace(/\/$/, '');
   return {
     nodeEnv: e.NODE_ENV,
     port: e.PORT,
@@ -64,7 +75,7 @@ export function readEnv(source: NodeJS.ProcessEnv = process.env): Env {
     backupsDir: resolve(e.SPLITCASE_BACKUPS_DIR),
     dbPath: resolve(dataDir, 'splitcase.sqlite'),
     demoPassword: e.SPLITCASE_DEMO_PASSWORD,
-    publicUrl: (e.SPLITCASE_PUBLIC_URL ?? `http://localhost:${e.PORT}`).replace(/\/$/, ''),
+    publicUrl,
     sessionSecret: e.SPLITCASE_SESSION_SECRET,
     smtpUrl: e.SPLITCASE_SMTP_URL,
     mailFrom: e.SPLITCASE_MAIL_FROM,
@@ -73,8 +84,17 @@ export function readEnv(source: NodeJS.ProcessEnv = process.env): Env {
     runUploadMaxBytes: Math.round(e.SPLITCASE_RUN_UPLOAD_MAX_MB * 1024 * 1024),
     loginLimitPerIp: e.SPLITCASE_LOGIN_LIMIT_IP,
     loginLimitPerAccount: e.SPLITCASE_LOGIN_LIMIT_ACCOUNT,
-    secureCookies: e.SPLITCASE_SECURE_COOKIES === 'true',
+    loginDelayMaxMs: e.SPLITCASE_LOGIN_DELAY_MAX_MS,
+    secureCookies: e.SPLITCASE_SECURE_COOKIES ? e.SPLITCASE_SECURE_COOKIES === 'true' : publicUrl.startsWith('https:'),
+    trustProxy: trustProxySetting(e.SPLITCASE_TRUST_PROXY),
   };
+}
+
+/** `true`/`false`, a hop count, or addresses and names (loopback, 10.0.0.0/8…) as Express reads them. */
+function trustProxySetting(value: string | undefined): boolean | number | string {
+  if (value === undefined || value === 'false') return false;
+  if (value === 'true') return true;
+  return /^\d+$/.test(value) ? Number(value) : value;
 }
 
 /** An Env for tests and scripts: defaults plus overrides, no process.env. */

@@ -36,7 +36,8 @@ export function createApp(deps: AppDeps, options: CreateAppOptions = {}): Expres
   mkdirSync(deps.env.dataDir, { recursive: true });
   const app = express();
   app.disable('x-powered-by');
-  app.set('trust proxy', 'loopback');
+  // Behind a reverse proxy set SPLITCASE_TRUST_PROXY (e.g. `loopback`); without one, X-Forwarded-* are ignored.
+  app.set('trust proxy', deps.env.trustProxy);
 
   app.use(
     helmet({
@@ -69,7 +70,8 @@ export function createApp(deps: AppDeps, options: CreateAppOptions = {}): Expres
       resave: false,
       saveUninitialized: false,
       rolling: true,
-      cookie: { httpOnly: true, sameSite: 'lax', secure: deps.env.secureCookies, maxAge: 7 * 24 * 3600 * 1000 },
+      // maxAge is set per session from the workspace's session limits (modules/auth/sessions.ts).
+      cookie: { httpOnly: true, sameSite: 'lax', secure: deps.env.secureCookies, maxAge: 12 * 3600 * 1000 },
     }),
   );
   const { csrfSynchronisedProtection } = csrfSync({

@@ -1,6 +1,6 @@
-import type { ErrorCode } from '@splitcase/contracts';
+import { CONTROL_CHARACTERS_MESSAGE, type ErrorCode } from '@splitcase/contracts';
 import type { ErrorRequestHandler, RequestHandler } from 'express';
-import { OptimisticLockError } from '@mikro-orm/core';
+import { OptimisticLockError, UniqueConstraintViolationException } from '@mikro-orm/core';
 import { ZodError } from 'zod';
 
 const STATUS: Record<ErrorCode, number> = {
@@ -42,12 +42,20 @@ export class AppError extends Error {
 export const notFound = (what: string) => new AppError('not_found', `${what} was not found.`);
 export const forbidden = (message = 'Your role does not allow this.') => new AppError('forbidden', message);
 
+type Issue = ZodError['issues'][number];
+
+/** A field that takes text or something else (a number, null) says "Invalid input" for any refused text: say why when it held control characters. */
+function issueMessage(issue: Issue): string {
+  if (issue.code === 'invalid_union' && issue.errors.some((branch) => branch.some((i) => i.message === CONTROL_CHARACTERS_MESSAGE))) return CONTROL_CHARACTERS_MESSAGE;
+  return issue.message;
+}
+
 /** Turn a ZodError into field → message pairs (the first message per field). */
 export function zodFields(err: ZodError, prefix?: string): Record<string, string> {
   const fields: Record<string, string> = {};
   for (const issue of err.issues) {
     const key = [prefix, ...issue.path.map(String)].filter(Boolean).join('.') || '_';
-    fields[key] ??= issue.message;
+    fields[key] ??= issueMessage(issue);
   }
   return fields;
 }
@@ -91,6 +99,10 @@ function toAppError(err: unknown): AppError {
   if (err instanceof ZodError) return validationError(zodFields(err));
   if (err instanceof OptimisticLockError) {
     return new AppError('stale_version', 'Someone else changed this record since you opened it.');
+  }
+  // Two requests creating the same record at once (e.g. two first prices of a part): the second loses.
+  if (err instanceof UniqueConstraintViolationException) {
+    return new AppError('conflict', 'Someone else saved the same record at the same moment, so this change was not saved. Reload and try again.');
   }
   if (err instanceof RangeError) return new AppError('unprocessable', err.message);
   const e = err as { type?: string; status?: number; code?: string; message?: string; field?: string };

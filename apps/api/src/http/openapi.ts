@@ -1,6 +1,7 @@
 import { OpenAPIRegistry, OpenApiGeneratorV31 } from '@asteasolutions/zod-to-openapi';
 import { errorBodySchema } from '@splitcase/contracts';
 import { z } from 'zod';
+import { PRICE_READERS } from '../modules/cost/price-visibility';
 import type { RouteDef } from './route';
 
 const ERROR_RESPONSES: Record<string, string> = {
@@ -41,7 +42,7 @@ export function buildOpenApi(defs: RouteDef[], version: string) {
       path,
       tags: [spec.tag],
       summary: spec.summary,
-      description: `Access: ${access}.${stateChanging ? ' Needs the X-CSRF-Token header.' : ''}`,
+      description: `Access: ${access}.${spec.prices ? ` Price detail (breaks, quote sources and confidence, line prices, price history) only for ${PRICE_READERS.join(', ')}; others get the totals.` : ''}${stateChanging ? ' Needs the X-CSRF-Token header.' : ''}`,
       security: spec.access === 'public' ? [] : [{ session: [], ...(stateChanging ? { csrf: [] } : {}) }],
       request: {
         ...(spec.params ? { params: spec.params as never } : {}),

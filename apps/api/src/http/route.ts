@@ -1,9 +1,10 @@
 import type { EntityManager } from '@mikro-orm/sqlite';
 import type { Request, RequestHandler, Response, Router } from 'express';
-import type { Role } from '@splitcase/contracts';
+import type { PriceView, Role } from '@splitcase/contracts';
 import { z, type ZodType } from 'zod';
 import { AppError, forbidden, validationError, zodFields } from './errors';
 import type { AppDeps } from './deps';
+import { priceViewFor } from '../modules/cost/price-visibility';
 
 /** Who may call a route. There is no default: every route says it (deny by default). */
 export type Access = 'public' | 'signed-in' | readonly Role[];
@@ -37,6 +38,12 @@ export interface RouteSpec<B extends ZodType, Q extends ZodType, P extends ZodTy
   before?: RequestHandler[];
   /** Responses other than JSON (files, CSV): documented content type. */
   produces?: string;
+  /**
+   * The answer can carry supplier price detail (breaks, quote sources and confidence, line prices,
+   * price history): the handler gets the caller's `priceView` from the one rule
+   * (modules/cost/price-visibility.ts) and leaves the detail out of a 'totals' view.
+   */
+  prices?: 'by-role';
 }
 
 export interface RouteContext<B, Q, P> {
@@ -50,6 +57,8 @@ export interface RouteContext<B, Q, P> {
   /** The signed-in user; throws on public routes without one. */
   user: AuthUser;
   maybeUser: AuthUser | null;
+  /** 'detail' or 'totals' for this caller; only on routes that declare `prices` in the route table. */
+  priceView: PriceView;
 }
 
 export interface RouteDef {
@@ -115,6 +124,10 @@ export function mountRoutes(router: Router, defs: RouteDef[], deps: AppDeps, get
         get user() {
           if (!maybeUser) throw new AppError('unauthenticated', 'Sign in to continue.');
           return maybeUser;
+        },
+        get priceView() {
+          if (!spec.prices) throw new Error(`Route ${key} reads price detail but does not declare prices in the route table`);
+          return priceViewFor(maybeUser);
         },
       };
       const result = await def.handler(ctx);

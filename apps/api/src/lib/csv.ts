@@ -1,16 +1,24 @@
 // CSV in and out, for files that round-trip through spreadsheets (papaparse).
 import Papa from 'papaparse';
 
-/** Cells a spreadsheet would run as a formula (CSV injection): prefixed with a single quote on export. */
-const FORMULA_START = /^[=+\-@\t\r]/;
+/**
+ * The one rule for text cells of every CSV export (CSV injection): a cell whose first character
+ * that is not blank could start a formula (= + - @, their full-width forms, or a tab or line break
+ * before one) gets a single quote in front, so a spreadsheet shows it as text. Only numbers written
+ * as numbers (a JavaScript number, see toCsv) are exempt — never text that merely starts like one,
+ * such as `-2+3+cmd|' /C calc'!A0`. A cell that already starts with a quote before such a character
+ * gets one more, so that unguardCell gives back exactly what was stored.
+ */
+const FORMULA_START = /^[\s\u00A0\u3000]*[=+\-@\uFF1D\uFF0B\uFF0D\uFF20]/u;
+const startsFormula = (value: string) => FORMULA_START.test(value);
 
 export function guardCell(value: string): string {
-  return FORMULA_START.test(value) ? `'${value}` : value;
+  return startsFormula(value) || (value.startsWith("'") && startsFormula(value.slice(1))) ? `'${value}` : value;
 }
 
-/** Undo guardCell on import: a quote before a formula-start character is dropped. */
+/** Undo guardCell on import: the quote it added is dropped. */
 export function unguardCell(value: string): string {
-  return /^'[=+\-@\t\r]/.test(value) ? value.slice(1) : value;
+  return value.startsWith("'") && (startsFormula(value.slice(1)) || (value[1] === "'" && startsFormula(value.slice(2)))) ? value.slice(1) : value;
 }
 
 /**

@@ -16,6 +16,9 @@ export const DEMO_DOMAIN = 'splitcase.test';
 export const demoEmail = (role: Role) => `${role}@${DEMO_DOMAIN}`;
 
 export async function seedUsers(ctx: SeedContext): Promise<void> {
+  // The demo password is shared and published (README, `npm start` prints it), so no guessing check
+  // would make it secret; it only needs 12 characters (config/env.ts). The password rule applies to
+  // every password a person sets: accepting an invitation, a reset, a change.
   const passwordHash = await hashPassword(ctx.env.demoPassword);
   const users = {} as Record<Role, User>;
   for (const u of DEMO_USERS) {

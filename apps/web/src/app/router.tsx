@@ -43,6 +43,7 @@ export const router = createBrowserRouter([
         children: [
           { index: true, lazy: () => import('./routes/home') },
           { path: '/teardowns/:id/:section?', lazy: () => import('./routes/teardown') },
+          { path: '/account', lazy: () => import('./routes/account') },
           { path: '/admin/users', lazy: () => import('./routes/admin-users') },
           { path: '/admin/invitations', lazy: () => import('./routes/admin-invitations') },
           { path: '/admin/outbox', lazy: () => import('./routes/admin-outbox') },

@@ -7,12 +7,12 @@ import { Spinner } from '@/components/page';
 import { WidgetBoundary } from '@/components/error-boundary';
 import { navFor } from '@/config/nav';
 import { paths } from '@/config/paths';
-import { useMe } from '@/lib/session';
+import { useSignedInUser } from '@/lib/session';
 import { useLogout } from '@/features/auth/api/logout';
 
 /** Left rail navigation; the content area is the workspace. */
 export function Shell() {
-  const me = useMe().data!;
+  const me = useSignedInUser();
   const logout = useLogout();
   const navigate = useNavigate();
   const location = useLocation();
@@ -43,14 +43,14 @@ export function Shell() {
           <a href={paths.api.docs()} className="flex items-center gap-2 text-xs text-graphite-400 hover:text-white">
             <BookOpen className="size-3.5" aria-hidden /> API reference
           </a>
-          <div>
+          <NavLink to={paths.account()} className="block rounded-sm hover:text-white" title="Your account and password">
             <div className="truncate font-medium text-white" data-testid="current-user">
               {me.name}
             </div>
             <div className="truncate text-xs text-graphite-400">
               {ROLE_LABELS[me.role]} · {me.email}
             </div>
-          </div>
+          </NavLink>
           <button
             type="button"
             onClick={() => logout.mutate(undefined, { onSettled: () => navigate(paths.signIn(), { replace: true }) })}

@@ -11,6 +11,7 @@ export const paths = {
   forgotPassword: () => '/forgot-password',
   resetPassword: () => '/reset-password',
   acceptInvitation: () => '/accept-invitation',
+  account: () => '/account',
   devices: () => '/devices',
   device: (id: number) => `/devices/${id}`,
   newDevice: () => '/devices/new',

@@ -1,3 +1,4 @@
+import { useRef } from 'react';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { User } from '@splitcase/contracts';
 import { api, ApiError } from '@/lib/api-client';
@@ -16,3 +17,16 @@ export async function getMe(): Promise<User | null> {
 
 export const meQuery = () => queryOptions({ queryKey: meKey, queryFn: getMe, staleTime: 60_000 });
 export const useMe = () => useQuery(meQuery());
+
+/**
+ * The signed-in user, for what renders under RequireAuth. Signing out clears the cache before the
+ * router has left the page, so the page's last renders see no user: they keep the one they had
+ * instead of failing on null (RequireAuth then sends the browser to sign-in).
+ */
+export function useSignedInUser(): User {
+  const me = useMe().data;
+  const last = useRef<User | null>(null);
+  if (me) last.current = me;
+  if (!last.current) throw new Error('useSignedInUser is for pages under RequireAuth.');
+  return last.current;
+}

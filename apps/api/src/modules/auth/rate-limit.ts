@@ -10,28 +10,24 @@ function limited(req: Request): AppError {
 
 const WINDOW_MS = 15 * 60 * 1000;
 
-/** Sign-in limits: per client address, and per account (failed attempts only). */
-export function loginLimiters(perIp: number, perAccount: number): RequestHandler[] {
-  const byIp = rateLimit({
+/**
+ * Sign-in limit per client address: failed attempts only, 429 past the limit. The address is the
+ * socket's unless `trust proxy` is configured (env SPLITCASE_TRUST_PROXY), so a forged
+ * X-Forwarded-For cannot spread guesses over made-up addresses. Accounts are never locked: they get a
+ * progressive delay instead (login-throttle.ts).
+ */
+export function loginIpLimiter(perIp: number): RequestHandler {
+  return rateLimit({
     windowMs: WINDOW_MS,
     limit: perIp,
     standardHeaders: 'draft-7',
     legacyHeaders: false,
-    handler: (req, _res, next) => next(limited(req)),
-  });
-  const byAccount = rateLimit({
-    windowMs: WINDOW_MS,
-    limit: perAccount,
-    standardHeaders: false,
-    legacyHeaders: false,
     skipSuccessfulRequests: true,
-    keyGenerator: (req) => {
-      const email = typeof req.body?.email === 'string' ? req.body.email.trim().toLowerCase() : '';
-      return email ? `account:${email}` : `ip:${ipKeyGenerator(req.ip ?? '')}`;
-    },
+    keyGenerator: (req) => ipKeyGenerator(req.ip ?? ''),
+    // Without a configured proxy the header is ignored on purpose; no warning for it.
+    validate: { xForwardedForHeader: false },
     handler: (req, _res, next) => next(limited(req)),
   });
-  return [byIp, byAccount];
 }
 
 /** A general limit for e-mail-sending public endpoints (reset requests). */
@@ -41,6 +37,7 @@ export function mailLimiter(limit: number): RequestHandler {
     limit,
     standardHeaders: 'draft-7',
     legacyHeaders: false,
+    validate: { xForwardedForHeader: false },
     handler: (req, _res, next) => next(limited(req)),
   });
 }

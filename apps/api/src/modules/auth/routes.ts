@@ -1,5 +1,6 @@
 import {
   acceptInvitationBody,
+  changePasswordBody,
   acceptedResponse,
   csrfResponse,
   invitationPreview,
@@ -18,18 +19,26 @@ import { recordAudit } from '../audit/audit.service';
 import { linkMail } from '../mail/templates';
 import { UserSchema, type User } from '../users/user.entity';
 import { InvitationSchema, type Invitation } from './invitation.entity';
-import { dummyHash, hashPassword, verifyPassword } from './passwords';
-import { loginLimiters, mailLimiter } from './rate-limit';
+import { getSettings } from '../settings/settings.service';
+import { LoginThrottle } from './login-throttle';
+import { dummyHash, hashPassword, passwordProblem, verifyPassword } from './passwords';
+import { loginIpLimiter, mailLimiter } from './rate-limit';
+import { deleteStoredSessions, raiseSessionEpoch, startSession } from './sessions';
 import { ResetTokenSchema } from './reset-token.entity';
 import { hashToken, newToken, RESET_TTL_MS } from './tokens';
 
 export const toUserDto = (u: User) => ({ id: u.id, email: u.email, name: u.name, role: u.role });
 
-/** Start a fresh session for the user (new id, so a session id known before sign-in is worthless). */
-async function signIn(req: Request, user: User): Promise<void> {
-  await new Promise<void>((resolve, reject) => req.session.regenerate((err) => (err ? reject(err) : resolve())));
-  req.session.userId = user.id;
-  await new Promise<void>((resolve, reject) => req.session.save((err) => (err ? reject(err) : resolve())));
+/** Start a fresh session for the user with the workspace's session limits. */
+async function signIn(req: Request, em: EntityManager, user: User): Promise<void> {
+  const settings = await getSettings(em);
+  await startSession(req, user, { maxHours: settings.sessionMaxHours, idleMinutes: settings.sessionIdleMinutes });
+}
+
+/** A refused new password names the field it was typed in. */
+function checkNewPassword(field: string, password: string, who: { email: string; name?: string | null }): void {
+  const problem = passwordProblem(password, who);
+  if (problem) throw new AppError('validation_failed', problem, { [field]: problem });
 }
 
 export async function findUsableInvitation(em: EntityManager, token: string): Promise<Invitation> {
@@ -42,6 +51,7 @@ export async function findUsableInvitation(em: EntityManager, token: string): Pr
 
 export function authRoutes(deps: AppDeps): RouteDef[] {
   const { env } = deps;
+  const throttle = new LoginThrottle({ freeFailures: env.loginLimitPerAccount, baseDelayMs: 250, maxDelayMs: env.loginDelayMaxMs, windowMs: 15 * 60_000 });
   return [
     route(
       {
@@ -59,15 +69,20 @@ export function authRoutes(deps: AppDeps): RouteDef[] {
         method: 'post',
         path: '/api/auth/login',
         tag: 'Auth',
-        summary: 'Sign in with e-mail and password (rate-limited per address and per account)',
+        summary:
+          'Sign in with e-mail and password. Failed attempts are limited per client address (429); an account under attack is slowed down (each attempt waits longer), never locked',
         access: 'public',
         body: loginBody,
         response: userResponse,
-        before: loginLimiters(env.loginLimitPerIp, env.loginLimitPerAccount),
+        before: [loginIpLimiter(env.loginLimitPerIp)],
       },
       async ({ req, em, body }) => {
+        const key = `account:${body.email}`;
+        await throttle.wait(key);
         const user = await em.findOne(UserSchema, { email: body.email });
         const ok = user ? await verifyPassword(user.passwordHash, body.password) : (await verifyPassword(await dummyHash(), body.password), false);
+        if (ok) throttle.succeeded(key);
+        else throttle.failed(key);
         if (!user || !ok) {
           throw new AppError('invalid_credentials', 'The e-mail address or the password is wrong.', {
             password: 'E-mail or password is wrong',
@@ -76,7 +91,7 @@ export function authRoutes(deps: AppDeps): RouteDef[] {
         if (!user.active) throw new AppError('account_inactive', 'This account has been deactivated. Ask an admin to reactivate it.');
         user.lastSignInAt = new Date();
         await em.flush();
-        await signIn(req, user);
+        await signIn(req, em, user);
         return { user: toUserDto(user) };
       },
     ),
@@ -121,6 +136,7 @@ export function authRoutes(deps: AppDeps): RouteDef[] {
       async ({ req, em, body }) => {
         const user = await em.transactional(async (tx) => {
           const inv = await findUsableInvitation(tx, body.token);
+          checkNewPassword('password', body.password, { email: inv.email, name: body.name });
           if (await tx.count(UserSchema, { email: inv.email })) {
             throw new AppError('conflict', 'An account with this e-mail address already exists. Sign in instead.');
           }
@@ -142,8 +158,37 @@ export function authRoutes(deps: AppDeps): RouteDef[] {
           });
           return created;
         });
-        await signIn(req, user);
+        await signIn(req, em, user);
         return { user: toUserDto(user) };
+      },
+    ),
+    route(
+      {
+        method: 'post',
+        path: '/api/auth/password',
+        tag: 'Auth',
+        summary: 'Change your own password (the current one is needed); your other sessions end, this one goes on',
+        access: 'signed-in',
+        body: changePasswordBody,
+        before: [loginIpLimiter(env.loginLimitPerIp)],
+      },
+      async ({ req, em, body, user: me }) => {
+        const key = `account:${me.email}`;
+        await throttle.wait(key);
+        const user = await em.findOneOrFail(UserSchema, { id: me.id });
+        if (!(await verifyPassword(user.passwordHash, body.currentPassword))) {
+          throttle.failed(key);
+          throw new AppError('invalid_credentials', 'The current password is wrong.', { currentPassword: 'The current password is wrong' });
+        }
+        checkNewPassword('newPassword', body.newPassword, user);
+        user.passwordHash = await hashPassword(body.newPassword);
+        raiseSessionEpoch(user);
+        recordAudit(em, me, { action: 'password.changed', entityType: 'user', entityId: user.id, summary: `${user.email} changed their password; their other sessions were ended` });
+        await em.flush();
+        await deleteStoredSessions(req, user.id, req.sessionID);
+        // This session goes on under the new epoch, with a new id.
+        await signIn(req, em, user);
+        return undefined;
       },
     ),
     route(
@@ -195,19 +240,23 @@ export function authRoutes(deps: AppDeps): RouteDef[] {
         access: 'public',
         body: resetConfirmBody,
       },
-      async ({ em, body }) => {
-        await em.transactional(async (tx) => {
+      async ({ em, body, req }) => {
+        const userId = await em.transactional(async (tx) => {
           const rt = await tx.findOne(ResetTokenSchema, { tokenHash: hashToken(body.token) }, { populate: ['user'] });
           if (!rt) throw new AppError('token_invalid', 'This reset link is not valid. Ask for a new one.', { token: 'Unknown link' });
           if (rt.usedAt) throw new AppError('token_used', 'This reset link has already been used. Ask for a new one.', { token: 'Already used' });
           if (rt.expiresAt.getTime() < Date.now()) throw new AppError('token_expired', 'This reset link has expired. Ask for a new one.', { token: 'Expired' });
           const user = rt.user;
           if (!user.active) throw new AppError('account_inactive', 'This account has been deactivated. Ask an admin to reactivate it.');
+          checkNewPassword('password', body.password, user);
           user.passwordHash = await hashPassword(body.password);
+          raiseSessionEpoch(user);
           rt.usedAt = new Date();
-          recordAudit(tx, null, { action: 'password.reset', entityType: 'user', entityId: user.id, summary: `${user.email} reset their password by e-mail link` });
+          recordAudit(tx, null, { action: 'password.reset', entityType: 'user', entityId: user.id, summary: `${user.email} reset their password by e-mail link; every session was ended` });
           await tx.flush();
+          return user.id;
         });
+        await deleteStoredSessions(req, userId);
         return undefined;
       },
     ),

@@ -9,7 +9,7 @@ import {
   type CostModel,
   type RateTable as CalcRateTable,
 } from '@splitcase/calc';
-import { SALES_TAX_SOURCE, type CostModelDto, type CostRollUpDto, type ImpliedMarginDto, type PartCategory, type PartPriceDto, type SalesTaxSource, type WorkspaceSettings } from '@splitcase/contracts';
+import { SALES_TAX_SOURCE, type CostModelDto, type CostRollUpDto, type ImpliedMarginDto, type PartCategory, type PartPriceDto, type PriceView, type SalesTaxSource, type WorkspaceSettings } from '@splitcase/contracts';
 import { AppError, validationError } from '../../http/errors';
 import { PartSchema, type Part } from '../parts/part.entity';
 import { getSettings } from '../settings/settings.service';
@@ -17,6 +17,7 @@ import type { Device } from '../devices/device.entity';
 import type { Teardown } from '../teardowns/teardown.entity';
 import { getTeardownModel } from './cost-model.service';
 import { PartPriceSchema, type PartPrice } from './part-price.entity';
+import { categoriesFor, totalsOnlyLine } from './price-visibility';
 import { currentRateTable, hasRate } from './rates.service';
 import type { RateTable } from './rate-table.entity';
 
@@ -90,9 +91,15 @@ export async function pricedParts(em: EntityManager, teardownId: number): Promis
 /**
  * The should-cost of a teardown at a volume in a currency: the calc roll-up of its parts and
  * prices with its cost model and the current rate table, plus the volume table and waterfall.
- * Every currency it needs must have a rate: otherwise an error names each one.
+ * Every currency it needs must have a rate: otherwise an error names each one. A 'totals' view
+ * (price-visibility.ts) leaves out each line's price detail and the warnings about single lines.
  */
-export async function teardownCost(em: EntityManager, teardown: Teardown, query: { volume?: number | undefined; currency?: string | undefined }): Promise<CostRollUpDto> {
+export async function teardownCost(
+  em: EntityManager,
+  teardown: Teardown,
+  query: { volume?: number | undefined; currency?: string | undefined },
+  view: PriceView,
+): Promise<CostRollUpDto> {
   const items = await pricedParts(em, teardown.id);
   const modelInfo = await getTeardownModel(em, teardown);
   const table = await currentRateTable(em);
@@ -152,7 +159,7 @@ export async function teardownCost(em: EntityManager, teardown: Teardown, query:
     return item ? partName(item.part) : id;
   };
   // calc names lines by id; say which part a warning is about in words.
-  warnings.unshift(...r.warnings.map((w) => w.replace(/^(\d+):/, (_m, id: string) => `${partLabel(id)}:`)));
+  if (view === 'detail') warnings.unshift(...r.warnings.map((w) => w.replace(/^(\d+):/, (_m, id: string) => `${partLabel(id)}:`)));
   if (r.unpricedPartIds.length) {
     const n = r.unpricedPartIds.length;
     warnings.push(
@@ -185,37 +192,40 @@ export async function teardownCost(em: EntityManager, teardown: Teardown, query:
     }))
     .sort((a, b) => b.total - a.total || a.category.localeCompare(b.category));
 
+  const costLines = r.lines.map((l) => {
+    const item = byPart.get(l.partId)!;
+    return {
+      partId: item.part.id,
+      position: item.part.position,
+      designators: item.part.designators ?? null,
+      description: item.part.description,
+      category: item.part.category,
+      makerPartNumber: item.part.makerPartNumber ?? null,
+      mount: item.part.mount,
+      quantity: l.quantity,
+      buyQuantity: l.buyQuantity,
+      unitPrice: l.unitPrice,
+      extended: l.extended,
+      attrition: l.attrition,
+      priced: l.priced,
+      breakMinQty: l.breakMinQty,
+      belowMinimumOrder: l.belowMinimumOrder,
+      price: item.price ? toPartPriceDto(item.price) : null,
+    };
+  });
+
   return {
     teardownId: teardown.id,
+    priceView: view,
     volume: r.volume,
     currency: r.currency,
     rateDate: table?.date ?? null,
     rateTable: table ? { id: table.id, base: table.base, date: table.date, source: table.source } : null,
     ratesUsed,
     model: { source: modelInfo.source, currency: model.currency, volumes },
-    lines: r.lines.map((l) => {
-      const item = byPart.get(l.partId)!;
-      return {
-        partId: item.part.id,
-        position: item.part.position,
-        designators: item.part.designators ?? null,
-        description: item.part.description,
-        category: item.part.category,
-        makerPartNumber: item.part.makerPartNumber ?? null,
-        mount: item.part.mount,
-        quantity: l.quantity,
-        buyQuantity: l.buyQuantity,
-        unitPrice: l.unitPrice,
-        extended: l.extended,
-        attrition: l.attrition,
-        priced: l.priced,
-        breakMinQty: l.breakMinQty,
-        belowMinimumOrder: l.belowMinimumOrder,
-        price: item.price ? toPartPriceDto(item.price) : null,
-      };
-    }),
+    lines: view === 'detail' ? costLines : costLines.map(totalsOnlyLine),
     partsTotal: r.partsTotal,
-    byCategory: categories,
+    byCategory: categoriesFor(view, categories),
     placements: r.placements,
     joints: r.joints,
     assembly: r.assembly,

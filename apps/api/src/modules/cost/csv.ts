@@ -10,6 +10,7 @@ import {
   type PriceConfidence,
   type PriceSource,
 } from '@splitcase/contracts';
+import { toCsv, unguardCell } from '../../lib/csv';
 import type { Part } from '../parts/part.entity';
 
 /** Six significant digits, no exponent for everyday sizes, no trailing zeros. */
@@ -18,35 +19,33 @@ const num = (x: number | null | undefined) => (x === null || x === undefined ? '
 /** Breaks as `minQty@unitPrice` pairs separated by `;` (a spreadsheet keeps it as text). */
 export const formatBreaks = (breaks: PriceBreakDto[]) => breaks.map((b) => `${num(b.minQty)}@${num(b.unitPrice)}`).join(';');
 
+/** The costed BOM with the shared CSV rule (lib/csv toCsv: BOM, CRLF, quoted, formula-safe); numbers go out as numbers. */
 export function costedBomCsv(cost: CostRollUpDto): string {
+  const n = (x: number | null | undefined) => (x === null || x === undefined ? null : Number(x.toPrecision(6)));
   const data = cost.lines.map((l) => {
-    const row: Record<(typeof COSTED_BOM_COLUMNS)[number], string> = {
-      designators: l.designators ?? '',
-      maker_part_number: l.makerPartNumber ?? '',
+    const row: Record<(typeof COSTED_BOM_COLUMNS)[number], string | number | null> = {
+      designators: l.designators,
+      maker_part_number: l.makerPartNumber,
       description: l.description,
       category: l.category,
       mount: l.mount,
-      quantity: num(l.quantity),
-      currency: l.price?.currency ?? '',
-      breaks: l.price ? formatBreaks(l.price.breaks) : '',
-      source: l.price?.source ?? '',
-      confidence: l.price?.confidence ?? '',
-      price_date: l.price?.priceDate ?? '',
-      note: l.price?.note ?? '',
-      volume: String(cost.volume),
+      quantity: n(l.quantity),
+      currency: l.price?.currency ?? null,
+      breaks: l.price ? formatBreaks(l.price.breaks) : null,
+      source: l.price?.source ?? null,
+      confidence: l.price?.confidence ?? null,
+      price_date: l.price?.priceDate ?? null,
+      note: l.price?.note ?? null,
+      volume: cost.volume,
       report_currency: cost.currency,
-      rate_date: cost.rateDate ?? '',
-      unit_price: num(l.unitPrice),
-      attrition_pct: num(l.attrition * 100),
-      extended: num(l.extended),
+      rate_date: cost.rateDate,
+      unit_price: n(l.unitPrice),
+      attrition_pct: n(l.attrition * 100),
+      extended: n(l.extended),
     };
-    return row;
+    return COSTED_BOM_COLUMNS.map((c) => row[c]);
   });
-  // Neutralise cells a spreadsheet would run as formulas (text typed by users: descriptions, designators).
-  const safe = data.map((row) =>
-    Object.fromEntries(Object.entries(row).map(([k, v]) => [k, /^[=+\-@\t\r]/.test(v) && !/^-?\d/.test(v) ? `'${v}` : v])),
-  );
-  return Papa.unparse({ fields: [...COSTED_BOM_COLUMNS], data: safe.map((r) => COSTED_BOM_COLUMNS.map((c) => r[c])) }, { newline: '\r\n' });
+  return toCsv([...COSTED_BOM_COLUMNS], data);
 }
 
 export interface PriceRow {
@@ -129,7 +128,7 @@ export function readPriceCsv(text: string, parts: Part[], opts: { hasRate: (code
     if (cells.every((c) => c.trim() === '')) continue;
     const cell = (name: string) => {
       const i = col(name);
-      return i === -1 ? '' : (cells[i] ?? '').trim();
+      return i === -1 ? '' : unguardCell((cells[i] ?? '').trim());
     };
     const at = (column: string) => `lines.${line}.${column}`;
     const say = (column: string, message: string) => fail(at(column), `Line ${line}, column ${column}: ${message}`);

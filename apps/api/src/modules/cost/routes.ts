@@ -249,8 +249,9 @@ export const costRoutes: RouteDef[] = [
       params: idParam,
       query: costQuery,
       response: costResponse,
+      prices: 'by-role',
     },
-    async ({ em, user, params, query }) => teardownCost(em, await readableTeardown(em, user, params.id), query),
+    async ({ em, user, params, query, priceView }) => teardownCost(em, await readableTeardown(em, user, params.id), query, priceView),
   ),
   route(
     {
@@ -262,14 +263,15 @@ export const costRoutes: RouteDef[] = [
       params: idParam,
       query: costQuery,
       produces: 'text/csv',
+      prices: 'by-role',
     },
-    async ({ em, user, params, query, res }) => {
+    async ({ em, user, params, query, res, priceView }) => {
       const teardown = await readableTeardown(em, user, params.id);
-      const cost = await teardownCost(em, teardown, query);
+      const cost = await teardownCost(em, teardown, query, priceView);
       const slug = `${teardown.device.maker}-${teardown.device.model}`.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '');
       res.setHeader('Content-Type', 'text/csv; charset=utf-8');
       res.setHeader('Content-Disposition', `attachment; filename="costed-bom-${slug}-${cost.volume}-${cost.currency}.csv"`);
-      res.send(`\uFEFF${costedBomCsv(cost)}\r\n`);
+      res.send(costedBomCsv(cost));
       return undefined;
     },
   ),

@@ -331,9 +331,10 @@ async function deviceRow(
     }
   }
 
-  // Should-cost and implied margin from the cost service, at the cost model's middle volume.
+  // Should-cost and implied margin from the cost service, at the cost model's middle volume (totals
+  // only: a comparison never carries line prices, whoever reads it).
   try {
-    const cost = await teardownCost(em, teardown, { currency });
+    const cost = await teardownCost(em, teardown, { currency }, 'totals');
     if (cost.lines.length === 0) {
       missing.shouldCost = 'No parts list on the teardown yet.';
       missing.impliedMargin = missing.shouldCost;

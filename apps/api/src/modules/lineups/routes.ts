@@ -1,4 +1,5 @@
 import {
+  lineupMetricsQuery,
   comparisonPreviewBody,
   comparisonQuery,
   comparisonResponse,
@@ -15,7 +16,6 @@ import {
   updateLineupBody,
   type LineupStatus,
 } from '@splitcase/contracts';
-import { z } from 'zod';
 import { AppError, forbidden } from '../../http/errors';
 import { route, type RouteDef } from '../../http/route';
 import { diffChanges, recordAudit } from '../audit/audit.service';
@@ -51,7 +51,7 @@ export const lineupRoutes: RouteDef[] = [
       tag: TAG,
       summary: 'The metrics a lineup compares (label, unit, better direction, formula, source) and the default weights',
       access: 'signed-in',
-      query: z.object({ currency: z.string().trim().toUpperCase().regex(/^[A-Z]{3}$/, 'Use a three-letter ISO 4217 code such as USD').optional() }),
+      query: lineupMetricsQuery,
       response: lineupMetricsResponse,
     },
     async ({ em, query }) => ({

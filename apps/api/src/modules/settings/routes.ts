@@ -22,7 +22,7 @@ export const settingsRoutes: RouteDef[] = [
       response: settingsResponse,
     },
     async ({ em, user, body }) => {
-      if (user.role === 'sourcing' && Object.keys(body).some((k) => !SOURCING_SETTINGS.includes(k))) throw forbidden('Sourcing may change only the reporting currency and the sales tax by currency.');
+      if (user.role === 'sourcing' && Object.entries(body).some(([k, v]) => v !== undefined && !SOURCING_SETTINGS.includes(k))) throw forbidden('Sourcing may change only the reporting currency and the sales tax by currency.');
       return { settings: await updateSettings(em, user, body) };
     },
   ),

@@ -2,6 +2,7 @@ import { commentResponse, commentsResponse, createCommentBody, idParam, teardown
 import { route, type RouteDef } from '../../http/route';
 import { AuditEntrySchema } from '../audit/audit-entry.entity';
 import { recordAudit } from '../audit/audit.service';
+import { historyCondition } from '../cost/price-visibility';
 import { toAuditDto } from '../audit/routes';
 import { UserSchema } from '../users/user.entity';
 import { COMMENTERS, readableTeardown } from './access';
@@ -67,14 +68,16 @@ export const commentRoutes: RouteDef[] = [
       method: 'get',
       path: '/api/teardowns/:id/history',
       tag: 'Teardowns',
-      summary: 'Every change to a teardown and its records (who, when, what), newest first',
+      summary: 'Every change to a teardown and its records (who, when, what), newest first; price entries only for the roles that see prices',
       access: 'signed-in',
       params: idParam,
       response: teardownHistoryResponse,
+      prices: 'by-role',
     },
-    async ({ em, user, params }) => {
+    async ({ em, user, params, priceView }) => {
       const t = await readableTeardown(em, user, params.id);
-      const rows = await em.find(AuditEntrySchema, { scopeType: 'teardown', scopeId: String(t.id) }, { orderBy: { at: 'desc', id: 'desc' }, limit: 1000, populate: ['actor'] });
+      const where = { scopeType: 'teardown', scopeId: String(t.id), ...historyCondition(priceView) };
+      const rows = await em.find(AuditEntrySchema, where, { orderBy: { at: 'desc', id: 'desc' }, limit: 1000, populate: ['actor'] });
       return { entries: rows.map(toAuditDto) };
     },
   ),

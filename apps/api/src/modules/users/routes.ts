@@ -12,6 +12,7 @@ import { AppError, notFound } from '../../http/errors';
 import { route, type RouteDef } from '../../http/route';
 import { diffChanges, recordAudit } from '../audit/audit.service';
 import { InvitationSchema, type Invitation } from '../auth/invitation.entity';
+import { deleteStoredSessions, raiseSessionEpoch } from '../auth/sessions';
 import { INVITATION_TTL_MS, newToken } from '../auth/tokens';
 import { linkMail } from '../mail/templates';
 import { UserSchema, type User } from './user.entity';
@@ -59,7 +60,7 @@ export const userRoutes: RouteDef[] = [
       body: updateUserBody,
       response: adminUserResponse,
     },
-    async ({ em, params, body, user: me }) => {
+    async ({ em, params, body, user: me, req }) => {
       const user = await em.findOne(UserSchema, { id: params.id });
       if (!user) throw notFound('The user');
       if (user.id === me.id && (body.active === false || (body.role && body.role !== 'admin'))) {
@@ -71,7 +72,10 @@ export const userRoutes: RouteDef[] = [
       }
       const changes = diffChanges({ role: user.role, active: user.active }, body);
       if (body.role) user.role = body.role;
+      const deactivated = user.active && body.active === false;
       if (body.active !== undefined) user.active = body.active;
+      // A deactivated user's sessions end now (not at their next request), and reactivation does not revive them.
+      if (deactivated) raiseSessionEpoch(user);
       if (Object.keys(changes).length) {
         recordAudit(em, me, {
           action: 'user.updated',
@@ -87,6 +91,7 @@ export const userRoutes: RouteDef[] = [
         });
       }
       await em.flush();
+      if (deactivated) await deleteStoredSessions(req, user.id);
       return { user: toAdminUserDto(user) };
     },
   ),

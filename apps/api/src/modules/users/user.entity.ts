@@ -14,6 +14,8 @@ export const UserSchema = defineEntity({
     createdAt: p.datetime().onCreate(() => new Date()),
     updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
     lastSignInAt: p.datetime().nullable(),
+    /** Raised to end every session of the user at once (password reset or change, deactivation). */
+    sessionEpoch: p.integer().default(0),
   },
 });
 export type User = InferEntity<typeof UserSchema>;

@@ -9,7 +9,7 @@ import { ErrorPanel } from '@/components/error-boundary';
 import { PageHeader, Spinner } from '@/components/page';
 import { paths } from '@/config/paths';
 import { confirmDialog } from '@/lib/confirm';
-import { useMe } from '@/lib/session';
+import { useSignedInUser } from '@/lib/session';
 import { useDeleteDevice } from '@/features/devices/api/delete-device';
 import { useDevice } from '@/features/devices/api/get-device';
 import { DeviceFacts } from '@/features/devices/components/device-facts';
@@ -19,7 +19,7 @@ import { StartTeardownForm } from '@/features/teardowns/components/start-teardow
 /** A device: what it is and claims, and its teardowns, with "Start a teardown". */
 export function Component() {
   const id = Number(useParams().id);
-  const me = useMe().data!;
+  const me = useSignedInUser();
   const navigate = useNavigate();
   const device = useDevice(id);
   const remove = useDeleteDevice();

@@ -4,12 +4,12 @@ import { Button } from '@/components/button';
 import { ErrorPanel } from '@/components/error-boundary';
 import { PageHeader, Spinner } from '@/components/page';
 import { paths } from '@/config/paths';
-import { useMe } from '@/lib/session';
+import { useSignedInUser } from '@/lib/session';
 import { useDevices } from '@/features/devices/api/list-devices';
 import { DevicesTable } from '@/features/devices/components/devices-table';
 
 export function Component() {
-  const me = useMe().data!;
+  const me = useSignedInUser();
   const devices = useDevices();
   const canAdd = me.role === 'engineer' || me.role === 'admin';
   return (

@@ -6,7 +6,7 @@ import { ErrorPanel, WidgetBoundary } from '@/components/error-boundary';
 import { EmptyState, PageHeader, Spinner } from '@/components/page';
 import { EstimatesNote } from '@/components/safety';
 import { changeSearch } from '@/lib/search-url';
-import { useMe } from '@/lib/session';
+import { useSignedInUser } from '@/lib/session';
 import { searchCsvUrl } from '@/features/explorer/api/export-search-csv';
 import { usePatterns } from '@/features/explorer/api/patterns';
 import { useSearch } from '@/features/explorer/api/search';
@@ -20,7 +20,7 @@ import { useSearchState } from '@/features/explorer/components/use-search-state'
 
 /** The findings explorer: search and facets across every teardown the user may read, and patterns across devices. */
 export function Component() {
-  const me = useMe().data!;
+  const me = useSignedInUser();
   const [state, setState] = useSearchState();
   const invertedDates = Boolean(state.from && state.to && state.from > state.to);
   const results = useSearch(state, !invertedDates);

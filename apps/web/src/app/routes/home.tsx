@@ -2,7 +2,7 @@ import { ROLE_LABELS } from '@splitcase/contracts';
 import { ErrorPanel } from '@/components/error-boundary';
 import { Spinner } from '@/components/page';
 import { formatDate } from '@/lib/format';
-import { useMe } from '@/lib/session';
+import { useSignedInUser } from '@/lib/session';
 import { useHome } from '@/features/home/api/get-home';
 import { AdminMain, AdminSide } from '@/features/home/components/admin-blocks';
 import { EngineerMain } from '@/features/home/components/engineer-blocks';
@@ -16,7 +16,7 @@ import { SourcingMain, SourcingSide } from '@/features/home/components/sourcing-
  * right), then what is new across the workspace.
  */
 export function Component() {
-  const me = useMe().data!;
+  const me = useSignedInUser();
   const home = useHome();
   return (
     <div className="max-w-6xl">

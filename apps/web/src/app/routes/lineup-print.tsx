@@ -6,7 +6,7 @@ import { Button } from '@/components/button';
 import { ErrorPanel } from '@/components/error-boundary';
 import { Spinner } from '@/components/page';
 import { paths } from '@/config/paths';
-import { useMe } from '@/lib/session';
+import { useSignedInUser } from '@/lib/session';
 import { useComparison } from '@/features/lineups/api/comparison';
 import { useLineup } from '@/features/lineups/api/get-lineup';
 import { LineupReport } from '@/features/lineups/components/lineup-report';
@@ -17,7 +17,7 @@ const metricParam = (v: string | null): LineupMetricKey | undefined => (v && (LI
 export function Component() {
   const id = Number(useParams().id);
   const [search] = useSearchParams();
-  const me = useMe().data!;
+  const me = useSignedInUser();
   const axes = { x: metricParam(search.get('x')), y: metricParam(search.get('y')) };
   const lineup = useLineup(id);
   const comparison = useComparison(id, axes, Number.isInteger(id) && id > 0);

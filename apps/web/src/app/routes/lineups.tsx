@@ -4,13 +4,13 @@ import { Button } from '@/components/button';
 import { ErrorPanel } from '@/components/error-boundary';
 import { PageHeader, Spinner } from '@/components/page';
 import { paths } from '@/config/paths';
-import { useMe } from '@/lib/session';
+import { useSignedInUser } from '@/lib/session';
 import { useLineups } from '@/features/lineups/api/list-lineups';
 import { LineupsTable } from '@/features/lineups/components/lineups-table';
 
 /** Lineups: named sets of devices compared side by side (viewers: published lineups only). */
 export function Component() {
-  const me = useMe().data!;
+  const me = useSignedInUser();
   const lineups = useLineups();
   const canCreate = lineups.data?.canCreate ?? false;
   return (

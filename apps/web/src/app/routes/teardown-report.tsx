@@ -12,7 +12,7 @@ import { ApiError } from '@/lib/api-client';
 import { Spinner } from '@/components/page';
 import { paths } from '@/config/paths';
 import { formatDate } from '@/lib/format';
-import { useMe } from '@/lib/session';
+import { useSignedInUser } from '@/lib/session';
 import { useCost } from '@/features/cost/api/get-cost';
 import { useFigures } from '@/features/figures/api/get-figures';
 import { useFindings } from '@/features/findings/api/list-findings';
@@ -50,7 +50,7 @@ export function Component() {
   const params = useParams();
   const id = Number(params.id);
   const valid = Number.isInteger(id) && id > 0;
-  const me = useMe().data!;
+  const me = useSignedInUser();
   const teardown = useTeardown(id);
   const photos = usePhotos(id);
   const parts = useParts(id);

@@ -4,13 +4,13 @@ import { api } from '@/lib/api-client';
 import { settingsKey } from '@/lib/query-keys';
 
 export const getSettings = () => api.get<{ settings: WorkspaceSettings }>('/api/settings').then((r) => r.settings);
-export const settingsQuery = () => queryOptions({ queryKey: settingsKey, queryFn: getSettings });
+export const settingsQuery = () => queryOptions({ queryKey: settingsKey, queryFn: getSettings, staleTime: 60_000 });
 export const useSettings = () => useQuery(settingsQuery());
 
 export const updateSettings = (body: UpdateSettingsBody) => api.patch<{ settings: WorkspaceSettings }>('/api/settings', body).then((r) => r.settings);
 
-/** Contact times and the usable share change touch margins and runtimes everywhere: teardowns, lineups and runs are read again. */
-export function useUpdateFigureSettings() {
+/** Settings change figures everywhere (contact times, usable share, cut-off, warnings): teardowns, lineups and runs are read again. */
+export function useUpdateSettings() {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: updateSettings,

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useNavigate } from 'react-router';
-import { acceptInvitationBody, ROLE_DESCRIPTIONS, ROLE_LABELS, type AcceptInvitationBody } from '@splitcase/contracts';
+import { acceptInvitationBody, PASSWORD_RULE, ROLE_DESCRIPTIONS, ROLE_LABELS, type AcceptInvitationBody } from '@splitcase/contracts';
 import { Button } from '@/components/button';
 import { Field, Input, FormError } from '@/components/field';
 import { Spinner } from '@/components/page';
@@ -52,7 +52,7 @@ export function AcceptInvitationForm({ token }: { token: string }) {
       <Field label="Your name" error={formState.errors.name?.message}>
         {(p) => <Input {...p} autoComplete="name" autoFocus {...register('name')} />}
       </Field>
-      <Field label="Choose a password" error={formState.errors.password?.message} hint="At least 10 characters.">
+      <Field label="Choose a password" error={formState.errors.password?.message} hint={PASSWORD_RULE}>
         {(p) => <Input {...p} type="password" autoComplete="new-password" {...register('password')} />}
       </Field>
       <Button type="submit" variant="primary" size="lg" className="w-full" busy={accept.isPending}>

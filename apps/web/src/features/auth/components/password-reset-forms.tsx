@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Link } from 'react-router';
-import { resetConfirmBody, resetRequestBody, type ResetConfirmBody, type ResetRequestBody } from '@splitcase/contracts';
+import { PASSWORD_RULE, resetConfirmBody, resetRequestBody, type ResetConfirmBody, type ResetRequestBody } from '@splitcase/contracts';
 import { Button } from '@/components/button';
 import { Field, Input, FormError } from '@/components/field';
 import { paths } from '@/config/paths';
@@ -74,7 +74,7 @@ export function ConfirmResetForm({ token }: { token: string }) {
     <form onSubmit={onSubmit} className="space-y-4" noValidate>
       <FormError message={formError ?? (formState.errors.token ? 'This page needs the link from the reset e-mail.' : null)} />
       <input type="hidden" {...register('token')} />
-      <Field label="New password" error={formState.errors.password?.message} hint="At least 10 characters.">
+      <Field label="New password" error={formState.errors.password?.message} hint={PASSWORD_RULE}>
         {(p) => <Input {...p} type="password" autoComplete="new-password" autoFocus {...register('password')} />}
       </Field>
       <Button type="submit" variant="primary" size="lg" className="w-full" busy={confirm.isPending}>

@@ -1,6 +1,6 @@
 import { useMemo } from 'react';
 import { CircleAlert, CircleCheck, CircleDot, Pencil } from 'lucide-react';
-import { MOUNT_TYPE, PART_CATEGORY, PRICE_CONFIDENCE, PRICE_SOURCE, type CostLine, type CostRollUpDto, type PriceConfidence } from '@splitcase/contracts';
+import { MOUNT_TYPE, PART_CATEGORY, PRICE_CONFIDENCE, PRICE_SOURCE, PRICE_VIEW_NOTE, type CostLine, type CostRollUpDto, type PriceConfidence } from '@splitcase/contracts';
 import { Badge } from '@/components/badges';
 import { Button } from '@/components/button';
 import { DataTable, type Column } from '@/components/data-table';
@@ -16,6 +16,8 @@ const CONFIDENCE_BADGE: Record<PriceConfidence, { tone: 'cell' | 'amber' | 'bric
 /** The BOM at the chosen volume: prices converted to the reporting currency, sortable and filterable. */
 export function CostBomTable({ cost, canEdit, editingId, onEdit }: { cost: CostRollUpDto; canEdit: boolean; editingId: number | null; onEdit: (line: CostLine) => void }) {
   const cur = cost.currency;
+  // A 'totals' view (viewers) has no line prices: the table lists the lines and whether each is priced.
+  const totalsOnly = cost.priceView === 'totals';
   const columns = useMemo<Column<CostLine>[]>(() => {
     const cols: Column<CostLine>[] = [
       { id: 'pos', header: '#', value: (l) => l.position, align: 'right', className: 'w-8 text-graphite-500' },
@@ -110,6 +112,18 @@ export function CostBomTable({ cost, canEdit, editingId, onEdit }: { cost: CostR
           ),
       },
     ];
+    if (totalsOnly) {
+      return [
+        ...cols.slice(0, 4),
+        {
+          id: 'priced',
+          header: 'Priced',
+          value: (l) => (l.priced ? 'priced' : 'not priced'),
+          filter: 'select',
+          cell: (l) => <span className={`text-xs ${l.priced ? '' : 'text-graphite-500'}`}>{l.priced ? 'priced' : 'not priced'}</span>,
+        },
+      ];
+    }
     if (canEdit) {
       cols.push({
         id: 'edit',
@@ -135,14 +149,20 @@ export function CostBomTable({ cost, canEdit, editingId, onEdit }: { cost: CostR
       });
     }
     return cols;
-  }, [cur, canEdit, editingId, onEdit]);
+  }, [cur, canEdit, editingId, onEdit, totalsOnly]);
 
   return (
     <div>
-      <p className="mb-1.5 text-xs text-graphite-500">
-        Unit price: the break for the pieces bought, quantity × {cost.volume.toLocaleString('en-GB')} units × (1 + attrition) rounded up, converted to {cur} at the {ratesOf(cost.rateDate)}, before
-        attrition. Extended = quantity × unit price × (1 + attrition).
-      </p>
+      {totalsOnly ? (
+        <p className="mb-1.5 text-xs text-graphite-500" data-testid="price-view-note">
+          {PRICE_VIEW_NOTE}
+        </p>
+      ) : (
+        <p className="mb-1.5 text-xs text-graphite-500">
+          Unit price: the break for the pieces bought, quantity × {cost.volume.toLocaleString('en-GB')} units × (1 + attrition) rounded up, converted to {cur} at the {ratesOf(cost.rateDate)}, before
+          attrition. Extended = quantity × unit price × (1 + attrition).
+        </p>
+      )}
       <DataTable caption="Costed bill of materials" rows={cost.lines} columns={columns} rowId={(l) => String(l.partId)} initialSort={{ id: 'pos' }} maxHeight="32rem" />
     </div>
   );

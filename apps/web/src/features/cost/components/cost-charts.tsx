@@ -38,48 +38,51 @@ export default function CostCharts({ cost }: { cost: CostRollUpDto }) {
 
   return (
     <div className={`grid gap-4 2xl:grid-cols-2 ${CHART_COLOURS}`}>
-      <figure className="rounded-lg border border-graphite-150 bg-white p-4 shadow-card" aria-labelledby="cost-by-category">
-        <figcaption id="cost-by-category" className="mb-2 text-sm font-semibold text-graphite-900">
-          Parts by category <span className="font-normal text-graphite-500">· {cur} per unit at {cost.volume.toLocaleString('en-GB')} units, {ratesOf(cost.rateDate)}</span>
-        </figcaption>
-        {categoryData.length === 0 ? (
-          <p className="py-8 text-center text-sm text-graphite-500">No priced parts yet: the chart fills in as lines get prices.</p>
-        ) : (
-          <div style={{ height: `${Math.max(8, categoryData.length * 1.9 + 2)}rem` }} data-testid="chart-by-category">
-            <ResponsiveContainer width="100%" height="100%">
-              <BarChart data={categoryData} layout="vertical" margin={{ left: 8, right: 16, top: 4, bottom: 4 }}>
-                <CartesianGrid horizontal={false} stroke="var(--chart-grid)" />
-                <XAxis type="number" tick={axisTick} tickFormatter={(v: number) => money(v, cur)} />
-                <YAxis type="category" dataKey="label" width={150} interval={0} tick={axisTick} />
-                <Tooltip formatter={(v) => [tooltipMoney(v), 'Extended cost']} />
-                <Bar dataKey="total" fill={seriesVar('blue')} isAnimationActive={false} />
-              </BarChart>
-            </ResponsiveContainer>
-          </div>
-        )}
-        <table className="mt-3 w-full text-sm" aria-label="Parts by category, data">
-          <thead>
-            <tr className="border-b border-graphite-150 text-left text-xs uppercase tracking-wide text-graphite-500">
-              <th className="py-1 font-semibold">Category</th>
-              <th className="py-1 text-right font-semibold">Lines</th>
-              <th className="py-1 text-right font-semibold">Extended ({cur})</th>
-              <th className="py-1 text-right font-semibold">Share</th>
-            </tr>
-          </thead>
-          <tbody>
-            {cost.byCategory.map((c) => {
-              return (
-                <tr key={c.category} className="border-b border-graphite-100 last:border-0">
-                  <td className="py-1">{PART_CATEGORY.labels[c.category]}</td>
-                  <td className="num py-1 text-right">{c.lines}</td>
-                  <td className="num py-1 text-right">{money(c.total, cur)}</td>
-                  <td className="num py-1 text-right">{formatPercent(c.share)}</td>
-                </tr>
-              );
-            })}
-          </tbody>
-        </table>
-      </figure>
+      {/* Subtotals per category are price detail (a category of one line is its price): not in the totals view. */}
+      {cost.priceView === 'detail' && (
+        <figure className="rounded-lg border border-graphite-150 bg-white p-4 shadow-card" aria-labelledby="cost-by-category">
+          <figcaption id="cost-by-category" className="mb-2 text-sm font-semibold text-graphite-900">
+            Parts by category <span className="font-normal text-graphite-500">· {cur} per unit at {cost.volume.toLocaleString('en-GB')} units, {ratesOf(cost.rateDate)}</span>
+          </figcaption>
+          {categoryData.length === 0 ? (
+            <p className="py-8 text-center text-sm text-graphite-500">No priced parts yet: the chart fills in as lines get prices.</p>
+          ) : (
+            <div style={{ height: `${Math.max(8, categoryData.length * 1.9 + 2)}rem` }} data-testid="chart-by-category">
+              <ResponsiveContainer width="100%" height="100%">
+                <BarChart data={categoryData} layout="vertical" margin={{ left: 8, right: 16, top: 4, bottom: 4 }}>
+                  <CartesianGrid horizontal={false} stroke="var(--chart-grid)" />
+                  <XAxis type="number" tick={axisTick} tickFormatter={(v: number) => money(v, cur)} />
+                  <YAxis type="category" dataKey="label" width={150} interval={0} tick={axisTick} />
+                  <Tooltip formatter={(v) => [tooltipMoney(v), 'Extended cost']} />
+                  <Bar dataKey="total" fill={seriesVar('blue')} isAnimationActive={false} />
+                </BarChart>
+              </ResponsiveContainer>
+            </div>
+          )}
+          <table className="mt-3 w-full text-sm" aria-label="Parts by category, data">
+            <thead>
+              <tr className="border-b border-graphite-150 text-left text-xs uppercase tracking-wide text-graphite-500">
+                <th className="py-1 font-semibold">Category</th>
+                <th className="py-1 text-right font-semibold">Lines</th>
+                <th className="py-1 text-right font-semibold">Extended ({cur})</th>
+                <th className="py-1 text-right font-semibold">Share</th>
+              </tr>
+            </thead>
+            <tbody>
+              {cost.byCategory.map((c) => {
+                return (
+                  <tr key={c.category} className="border-b border-graphite-100 last:border-0">
+                    <td className="py-1">{PART_CATEGORY.labels[c.category]}</td>
+                    <td className="num py-1 text-right">{c.lines}</td>
+                    <td className="num py-1 text-right">{money(c.total, cur)}</td>
+                    <td className="num py-1 text-right">{formatPercent(c.share)}</td>
+                  </tr>
+                );
+              })}
+            </tbody>
+          </table>
+        </figure>
+      )}
 
       <figure className="rounded-lg border border-graphite-150 bg-white p-4 shadow-card" aria-labelledby="cost-waterfall">
         <figcaption id="cost-waterfall" className="mb-2 text-sm font-semibold text-graphite-900">

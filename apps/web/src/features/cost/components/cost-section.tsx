@@ -235,7 +235,7 @@ export function CostSection({ teardown }: { teardown: TeardownDto }) {
           {importing && <PriceImport teardownId={id} onClose={() => setImporting(false)} />}
           {editing && <PriceEditor key={editing.partId} teardownId={id} line={editing} currencies={currencies} onClose={() => setEditing(null)} />}
           <CostBomTable cost={data} canEdit={canEdit} editingId={editing?.partId ?? null} onEdit={onEdit} />
-          {!canEdit && <p className="text-xs text-graphite-500">Prices are set by sourcing; you see them read-only.</p>}
+          {!canEdit && data.priceView === 'detail' && <p className="text-xs text-graphite-500">Prices are set by sourcing; you see them read-only.</p>}
           <WidgetBoundary name="cost-charts">
             <Suspense fallback={<Spinner label="Drawing the charts…" />}>
               <CostCharts cost={data} />

@@ -1,4 +1,4 @@
-import { MOUNT_TYPE, PART_CATEGORY, type CostRollUpDto, type PartDto, type PhotoDto } from '@splitcase/contracts';
+import { MOUNT_TYPE, PART_CATEGORY, PRICE_VIEW_NOTE, type CostRollUpDto, type PartDto, type PhotoDto } from '@splitcase/contracts';
 import { DecodedMarking } from '@/components/decoded-marking';
 import { formatDate, formatPercent } from '@/lib/format';
 import { salesTaxText } from '@/lib/sales-tax';
@@ -23,7 +23,9 @@ export function ReportBom({ parts, photos, cost, costProblem }: { parts: PartDto
       ? '—'
       : v.toLocaleString('en-GB', { minimumFractionDigits: Math.abs(v) < 1 ? 4 : 2, maximumFractionDigits: Math.abs(v) < 1 ? 4 : 2 });
   const unpriced = cost ? cost.unpricedPartIds.length : 0;
-  const head = ['#', 'Designators', 'Description', 'Marking', 'Value', 'Qty', 'Mount', ...(cost ? [`Unit price, ${cost.currency}`, `Extended, ${cost.currency}`] : [])];
+  // Line prices only in a 'detail' view; a 'totals' view (viewers) keeps the parts total.
+  const linePrices = cost?.priceView === 'detail';
+  const head = ['#', 'Designators', 'Description', 'Marking', 'Value', 'Qty', 'Mount', ...(cost ? (linePrices ? [`Unit price, ${cost.currency}`, `Extended, ${cost.currency}`] : [`Cost, ${cost.currency}`]) : [])];
   return (
     <div>
       <ReportTable label="Parts" head={head}>
@@ -46,12 +48,13 @@ export function ReportBom({ parts, photos, cost, costProblem }: { parts: PartDto
               <td className="num whitespace-nowrap">{p.decodedReadings.length > 0 ? <DecodedMarking readings={p.decodedReadings} /> : '—'}</td>
               <td className="num text-right">{p.quantity}</td>
               <td className="whitespace-nowrap">{MOUNT_TYPE.labels[p.mount]}</td>
-              {cost && (
+              {cost && linePrices && (
                 <>
                   <td className="num whitespace-nowrap text-right">{line?.priced ? money(line.unitPrice) : <span className="text-graphite-500">no price</span>}</td>
                   <td className="num whitespace-nowrap text-right">{line?.priced ? money(line.extended) : '—'}</td>
                 </>
               )}
+              {cost && !linePrices && <td className="text-2xs text-graphite-500">{line?.priced ? 'priced' : 'no price'}</td>}
             </tr>
           );
         })}
@@ -61,7 +64,7 @@ export function ReportBom({ parts, photos, cost, costProblem }: { parts: PartDto
             <td colSpan={6} className="text-right text-graphite-700">
               Parts at {cost.volume.toLocaleString('en-GB')} units (attrition included)
             </td>
-            <td />
+            {linePrices && <td />}
             <td className="num whitespace-nowrap text-right text-graphite-950">{money(cost.partsTotal)}</td>
           </tr>
         )}
@@ -70,7 +73,7 @@ export function ReportBom({ parts, photos, cost, costProblem }: { parts: PartDto
         {cost
           ? `Prices in ${cost.currency} at ${cost.volume.toLocaleString('en-GB')} units, the cost model's default volume${cost.rateDate ? `; converted with the rates of ${formatDate(cost.rateDate)}` : ''}.${
               unpriced ? ` ${unpriced} of ${parts.length} lines have no price and add nothing to the total.` : ''
-            } Should-cost figures are estimates.`
+            } Should-cost figures are estimates.${linePrices ? '' : ` ${PRICE_VIEW_NOTE}`}`
           : `Prices are not shown: ${costProblem ?? 'the should-cost could not be worked out.'}`}
       </p>
       {cost && <ReportCostSummary cost={cost} money={money} />}
