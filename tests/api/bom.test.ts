@@ -446,7 +446,8 @@ describe('power system: units stored in SI with the typed text kept', () => {
 
     const changed = await eng.patch(`/api/teardowns/${id}/loads/${heater.id}`, { resistanceOhms: '2.9 Ω', duty: 1 }).expect(200);
     expect(changed.body.load).toMatchObject({ resistanceOhms: 2.9, duty: 1, entered: { resistanceOhms: '2.9 Ω', supplyVolts: '3.65 V', heatedAreaM2: '27 cm²' } });
-    const conv2 = await eng.patch(`/api/teardowns/${id}/converters/${conv.id}`, { efficiency: '0.9' }).expect(200);
+    // A bare number typed as text is read in the unit of the field's example (88 %): "90" is 90 %.
+    const conv2 = await eng.patch(`/api/teardowns/${id}/converters/${conv.id}`, { efficiency: '90' }).expect(200);
     expect(conv2.body.converter.efficiency).toBeCloseTo(0.9, 12);
 
     const power = (await eng.get(`/api/teardowns/${id}/power`).expect(200)).body;

@@ -1,10 +1,13 @@
-// Read typed quantities for the power system: units through lib/units, then the range each field
-// allows. Every bad field is reported at once, named; nothing is applied unless all are good.
+// Read typed quantities for the power system: each field through the one reader (lib/units, by its
+// declaration in contracts), then the range it allows. Every bad field is reported at once, named;
+// nothing is applied unless all are good.
+import type { QuantityField, QuantityKind } from '@splitcase/contracts';
 import { validationError } from '../../http/errors';
-import { parseQuantity, type QuantityKind } from '../../lib/units';
+import { readQuantity } from '../../lib/units';
 
 export interface FieldRule {
-  kind: QuantityKind;
+  /** The field's declaration: label, kind, example and how a bare number is read. */
+  field: QuantityField;
   /** Smallest allowed value; `above` makes it exclusive. */
   min?: number;
   above?: boolean;
@@ -48,12 +51,12 @@ export function readQuantities<K extends string>(body: Partial<Record<K, Raw>>, 
     }
     let value: number;
     try {
-      value = parseQuantity(raw, rule.kind).value;
+      value = readQuantity(raw, rule.field).value;
     } catch (err) {
       errors[key] = (err as Error).message;
       continue;
     }
-    const unit = UNIT_WORD[rule.kind] ?? '';
+    const unit = UNIT_WORD[rule.field.kind] ?? '';
     if (rule.min !== undefined && (rule.above ? value <= rule.min : value < rule.min)) {
       errors[key] = rule.above ? `Must be more than ${rule.min}${unit ? ` ${unit}` : ''}` : `Must be at least ${rule.min}${unit ? ` ${unit}` : ''}`;
       continue;
