@@ -10,6 +10,7 @@ import {
   PACK_FIELDS,
   PRICE_FIELDS,
   RUNTIME_TOOL_FIELDS,
+  storedQuantityText,
   type QuantityField,
 } from '@splitcase/contracts';
 import { QuantityError, readNumber, readPrice, readQuantitiesOrThrow, readQuantity, readQuantityFields } from './units';
@@ -213,6 +214,17 @@ describe('every declared field reads its own example', () => {
     const number = field.example.replace(exampleUnit(field), '').trim();
     if (field.bare === 'example') expect(readQuantity(number, field).value).toBeCloseTo(withUnit.value, 12);
     else expect(() => readQuantity(number, field)).toThrow(`${field.label}: add a unit, e.g. ${field.example}`);
+  });
+});
+
+describe('storedQuantityText: a stored value shown in a form reads back unchanged', () => {
+  const all: QuantityField[] = [...Object.values(PACK_FIELDS), ...Object.values(LOAD_FIELDS), ...Object.values(CONVERTER_FIELDS), ...Object.values(MEASUREMENT_FIELDS), MIN_QTY_FIELD];
+  it.each(all.map((f) => [f.label, f.kind, f] as const))('%s (%s)', (_label, kind, field) => {
+    const samples = kind === 'count' || kind === 'pieces' ? [1, 2, 5000] : kind === 'fraction' ? [0.6, 1, 0.885] : [0.046, 2.7, 3.65, 1234.5];
+    for (const v of samples) expect(readQuantity(storedQuantityText(v, kind), field).value).toBeCloseTo(v, 12);
+    expect(storedQuantityText(0.046, 'mass')).toBe('0.046 kg');
+    expect(storedQuantityText(1, 'fraction')).toBe('100 %');
+    expect(storedQuantityText(null, 'mass')).toBe('');
   });
 });
 

@@ -1,7 +1,7 @@
 import { useState, type KeyboardEvent } from 'react';
 import { toast } from 'sonner';
 import { Plus, Trash2, X } from 'lucide-react';
-import { PRICE_CONFIDENCE, PRICE_SOURCE, type CostLine, type PriceConfidence, type PriceSource } from '@splitcase/contracts';
+import { MIN_QTY_FIELD, PRICE_CONFIDENCE, PRICE_FIELDS, PRICE_SOURCE, type CostLine, type PriceConfidence, type PriceSource } from '@splitcase/contracts';
 import { Button } from '@/components/button';
 import { Field, Input, Select, inputClass, FormError } from '@/components/field';
 import { ApiError } from '@/lib/api-client';
@@ -48,7 +48,6 @@ export function PriceEditor({ teardownId, line, currencies, onClose }: { teardow
       addRow();
     }
   };
-  const num = (s: string) => (s.trim() === '' ? Number.NaN : Number(s.replace(',', '.')));
 
   const submit = async () => {
     setErrors({});
@@ -61,8 +60,8 @@ export function PriceEditor({ teardownId, line, currencies, onClose }: { teardow
         confidence,
         priceDate,
         note: note.trim() || undefined,
-        // NaN travels as null: the server names the break and field that is not a number.
-        breaks: rows.map((r) => ({ minQty: num(r.minQty), unitPrice: num(r.unitPrice) })),
+        // Sent as typed ("5k", "$0.12", "0,12 €"): the server reads them against the currency and names the break and field it refuses.
+        breaks: rows.map((r) => ({ minQty: r.minQty, unitPrice: r.unitPrice })),
       });
       toast.success(`Price of ${name} saved; totals updated.`);
       onClose();
@@ -141,7 +140,12 @@ export function PriceEditor({ teardownId, line, currencies, onClose }: { teardow
         </div>
         <div>
           <table className="w-full text-sm">
-            <caption className="mb-1 text-left text-sm font-medium text-graphite-800">Price breaks ({currency})</caption>
+            <caption className="mb-1 text-left text-sm font-medium text-graphite-800">
+              Price breaks ({currency})
+              <span className="block text-xs font-normal text-graphite-500">
+                Amounts in {currency}, e.g. {PRICE_FIELDS.unitPrice.example}, or with their currency; quantities such as {MIN_QTY_FIELD.example} or 5k.
+              </span>
+            </caption>
             <thead>
               <tr className="text-left text-xs uppercase tracking-wide text-graphite-500">
                 <th className="pb-1 font-semibold">Min. quantity</th>
@@ -160,7 +164,8 @@ export function PriceEditor({ teardownId, line, currencies, onClose }: { teardow
                         id={`break-qty-${k}`}
                         aria-label={`Break ${k + 1} minimum quantity`}
                         aria-invalid={Boolean(qtyErr)}
-                        inputMode="decimal"
+                        placeholder={MIN_QTY_FIELD.example}
+                        autoComplete="off"
                         value={r.minQty}
                         onChange={(e) => update(k, { minQty: e.target.value })}
                         className={`${inputClass} num h-8`}
@@ -171,7 +176,8 @@ export function PriceEditor({ teardownId, line, currencies, onClose }: { teardow
                       <input
                         aria-label={`Break ${k + 1} unit price`}
                         aria-invalid={Boolean(priceErr)}
-                        inputMode="decimal"
+                        placeholder={PRICE_FIELDS.unitPrice.example}
+                        autoComplete="off"
                         value={r.unitPrice}
                         onKeyDown={onPriceKey(k)}
                         onChange={(e) => update(k, { unitPrice: e.target.value })}
