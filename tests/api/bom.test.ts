@@ -468,7 +468,7 @@ describe('power system: units stored in SI with the typed text kept', () => {
   it.each([
     ['no resistance, current or power', { kind: 'heater' }, 'resistanceOhms', /resistance, the current or the power/],
     ['a voltage typed as a resistance', { kind: 'heater', resistanceOhms: '3 V' }, 'resistanceOhms', /resistance/],
-    ['a duty above 100 %', { kind: 'motor', currentAmps: '0.3 A', duty: '120 %' }, 'duty', /At most 1/],
+    ['a duty above 100 %', { kind: 'motor', currentAmps: '0.3 A', duty: '120 %' }, 'duty', /^Duty: at most 100 %$/],
     ['a negative count', { kind: 'led', currentAmps: '20 mA', count: -1 }, 'count', /at least 1/],
     ['an unknown kind', { kind: 'toaster', powerWatts: 5 }, 'kind', /Choose one of/],
     ['a series/parallel typo', { kind: 'heater', resistanceOhms: 3, connection: 'paralel' }, 'connection', /Choose one of/],
@@ -489,7 +489,7 @@ describe('power system: units stored in SI with the typed text kept', () => {
   });
 
   it.each([
-    ['an efficiency above 100 %', { efficiency: '105 %' }, 'efficiency', /At most 1/],
+    ['an efficiency above 100 %', { efficiency: '105 %' }, 'efficiency', /^Efficiency: at most 100 %$/],
     ['a current typed as input voltage', { inputVolts: '5 A' }, 'inputVolts', /voltage/],
     ['a missing output voltage', { outputVolts: undefined }, 'outputVolts', /Required/],
     ['an unknown topology', { topology: 'flyback' }, 'topology', /Choose one of/],

@@ -90,6 +90,26 @@ describe('the forgiving reader on the power system', () => {
   });
 });
 
+describe('every 400 about a quantity names the field as the screen labels it', () => {
+  it('range refusals on the power system start with the label and say the limit in its unit', async () => {
+    const id = await newTeardown();
+    const pack = await eng.put(`/api/teardowns/${id}/pack`, { ...PACK, massKg: '-4 g', maxVolts: '12 V' }).expect(400);
+    expect(pack.body.error.fields).toEqual({
+      massKg: 'Pack mass: must be more than 0 kg',
+      maxVolts: "Charge voltage (per cell): at most 10 V: give one cell's charge voltage",
+    });
+    const load = await eng.post(`/api/teardowns/${id}/loads`, { kind: 'heater', resistanceOhms: '3 ohm', duty: '150 %', count: '0' }).expect(400);
+    expect(load.body.error.fields).toEqual({ duty: 'Duty: at most 100 %', count: 'Count: must be at least 1' });
+    const conv = await eng.post(`/api/teardowns/${id}/converters`, { topology: 'boost', inputVolts: '3.7 V', outputVolts: '5 V', efficiency: 0 }).expect(400);
+    expect(conv.body.error.fields).toEqual({ efficiency: 'Efficiency: must be more than 0 %' });
+  });
+
+  it('a label claim of zero names the claim', async () => {
+    const res = await eng.post('/api/devices', { maker: 'Unitwright (invented)', model: `Zero ${Math.random().toString(36).slice(2, 7)}`, category: 'power-bank', claimCapacityAh: '0 mAh' }).expect(400);
+    expect(res.body.error.fields).toEqual({ claimCapacityAh: 'Capacity on the label: must be more than zero' });
+  });
+});
+
 describe('measurements', () => {
   it('reads "9.99wh", "10 min" and a bare "46" mass; refuses a bare time', async () => {
     const id = await newTeardown();

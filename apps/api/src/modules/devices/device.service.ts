@@ -37,7 +37,7 @@ export function parseClaims(body: ClaimInput): { values: Partial<Record<DeviceCl
     }
   }
   for (const [key, v] of Object.entries(values)) {
-    if (typeof v === 'number' && !(v > 0)) errors[key] ??= 'Must be more than zero';
+    if (typeof v === 'number' && !(v > 0)) errors[key] ??= `${DEVICE_CLAIM_QUANTITY_FIELDS[key as DeviceClaimField].label}: must be more than zero`;
   }
   if (Object.keys(errors).length) throw validationError(errors);
   return { values, entered };

@@ -86,13 +86,13 @@ export function toConverterDto(c: Converter): ConverterDto {
 // A JSON number is in SI (the API contract); text is read by the field's declaration, where a bare
 // number is in the unit of the field's example ("46" pack mass = 46 g).
 export const PACK_RULES = {
-  nominalVolts: { field: PACK_FIELDS.nominalVolts, min: 0, above: true, max: 10, maxMessage: "At most 10 V: give one cell's voltage and the series count", required: true },
-  maxVolts: { field: PACK_FIELDS.maxVolts, min: 0, above: true, max: 10, maxMessage: "At most 10 V: give one cell's charge voltage" },
-  capacityAh: { field: PACK_FIELDS.capacityAh, min: 0, above: true, max: 1000, maxMessage: 'At most 1000 Ah for one cell — a number sent without a unit is in Ah; type "2700 mAh" for milliamp-hours', required: true },
-  measuredCapacityAh: { field: PACK_FIELDS.measuredCapacityAh, min: 0, above: true, max: 1000, maxMessage: 'At most 1000 Ah for one cell — a number sent without a unit is in Ah; type "2620 mAh" for milliamp-hours' },
+  nominalVolts: { field: PACK_FIELDS.nominalVolts, min: 0, above: true, max: 10, maxMessage: "at most 10 V: give one cell's voltage and the series count", required: true },
+  maxVolts: { field: PACK_FIELDS.maxVolts, min: 0, above: true, max: 10, maxMessage: "at most 10 V: give one cell's charge voltage" },
+  capacityAh: { field: PACK_FIELDS.capacityAh, min: 0, above: true, max: 1000, maxMessage: 'at most 1000 Ah for one cell — a number sent without a unit is in Ah; type "2700 mAh" for milliamp-hours', required: true },
+  measuredCapacityAh: { field: PACK_FIELDS.measuredCapacityAh, min: 0, above: true, max: 1000, maxMessage: 'at most 1000 Ah for one cell — a number sent without a unit is in Ah; type "2620 mAh" for milliamp-hours' },
   series: { field: PACK_FIELDS.series, min: 1, max: 1000 },
   parallel: { field: PACK_FIELDS.parallel, min: 1, max: 1000 },
-  massKg: { field: PACK_FIELDS.massKg, min: 0, above: true, max: 100, maxMessage: 'At most 100 kg — type the mass with its unit, e.g. "46 g"' },
+  massKg: { field: PACK_FIELDS.massKg, min: 0, above: true, max: 100, maxMessage: 'at most 100 kg — type the mass with its unit, e.g. "46 g"' },
 } satisfies Record<string, FieldRule>;
 
 export const LOAD_RULES = {
@@ -101,8 +101,8 @@ export const LOAD_RULES = {
   powerWatts: { field: LOAD_FIELDS.powerWatts, min: 0, above: true, max: 100_000 },
   supplyVolts: { field: LOAD_FIELDS.supplyVolts, min: 0, above: true, max: 1000 },
   count: { field: LOAD_FIELDS.count, min: 1, max: 1000 },
-  duty: { field: LOAD_FIELDS.duty, min: 0, above: true, max: 1, maxMessage: 'At most 1 (100 %)' },
-  heatedAreaM2: { field: LOAD_FIELDS.heatedAreaM2, min: 0, above: true, max: 10, maxMessage: 'At most 10 m² — type the area with its unit, e.g. "27 cm²"' },
+  duty: { field: LOAD_FIELDS.duty, min: 0, above: true, max: 1 },
+  heatedAreaM2: { field: LOAD_FIELDS.heatedAreaM2, min: 0, above: true, max: 10, maxMessage: 'at most 10 m² — type the area with its unit, e.g. "27 cm²"' },
 } satisfies Record<string, FieldRule>;
 
 export const CONVERTER_RULES = {
@@ -110,7 +110,7 @@ export const CONVERTER_RULES = {
   outputVolts: { field: CONVERTER_FIELDS.outputVolts, min: 0, above: true, max: 1000, required: true },
   ratedCurrentAmps: { field: CONVERTER_FIELDS.ratedCurrentAmps, min: 0, above: true, max: 1000 },
   chargeCurrentAmps: { field: CONVERTER_FIELDS.chargeCurrentAmps, min: 0, above: true, max: 1000 },
-  efficiency: { field: CONVERTER_FIELDS.efficiency, min: 0, above: true, max: 1, maxMessage: 'At most 1 (100 %)' },
+  efficiency: { field: CONVERTER_FIELDS.efficiency, min: 0, above: true, max: 1 },
 } satisfies Record<string, FieldRule>;
 
 export const defaultLoadLabel = (kind: Load['kind']) => LOAD_KIND.labels[kind];

@@ -45,10 +45,10 @@ describe('bench-tool inputs', () => {
     expect(r.parsed.a).toEqual({ entered: '2700 mAh', value: 2.7, unit: 'Ah' });
     expect(r.parsed.b).toEqual({ entered: '-3 V', value: -3, unit: 'V' });
     expect(r.errors).toEqual({
-      b: 'Must be greater than zero',
+      b: 'Cell nominal voltage: must be greater than zero',
       c: expect.stringMatching(/voltage/),
       d: 'Required',
-      e: expect.stringMatching(/fraction above 0 and at most 1/),
+      e: 'Converter efficiency: enter a fraction above 0 % and at most 100 %, such as 90 %',
       f: 'Cells in series: enter a whole number',
       g: 'PWM duty: add a unit, e.g. 60 % (a plain 0.9 would be read as 0.9 %)',
     });

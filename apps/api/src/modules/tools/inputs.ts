@@ -29,26 +29,38 @@ export function readToolField(raw: string | number, field: QuantityField, kind: 
   const entered = String(raw).trim();
   if (kind === 'copper-thickness') {
     const oz = typeof raw === 'string' ? COPPER_WEIGHT.exec(entered) : null;
-    if (oz) return { entered, value: ozToMetres(readNumber(oz[1]!)), unit: 'm' };
+    if (oz) {
+      try {
+        return { entered, value: ozToMetres(readNumber(oz[1]!)), unit: 'm' };
+      } catch (err) {
+        throw new Error(`${field.label}: ${(err as Error).message}`);
+      }
+    }
     try {
       return readQuantity(raw, field);
     } catch (err) {
       if (typeof raw === 'string' && /^[-+]?[\d.,\s]+$/.test(entered)) throw err;
-      throw new Error(`Enter a copper thickness such as "35 µm" or a copper weight such as "1 oz" ("${entered}" is neither)`);
+      throw new Error(`${field.label}: enter a copper thickness such as "35 µm" or a copper weight such as "1 oz" ("${entered}" is neither)`);
     }
   }
   if (kind === 'temperature-rise') {
     const m = typeof raw === 'number' ? [entered, entered] : RISE.exec(entered);
-    if (!m) throw new Error(`Enter a temperature rise such as "10 °C" or "10 K" ("${entered}" is not one)`);
-    return { entered, value: readNumber(m[1]!), unit: '°C' };
+    if (!m) throw new Error(`${field.label}: enter a temperature rise such as "10 °C" or "10 K" ("${entered}" is not one)`);
+    try {
+      return { entered, value: readNumber(m[1]!), unit: '°C' };
+    } catch (err) {
+      throw new Error(`${field.label}: ${(err as Error).message}`);
+    }
   }
   return readQuantity(raw, field);
 }
 
-const CHECK_MESSAGE: Record<Exclude<ToolCheck, 'finite'>, string> = {
-  positive: 'Must be greater than zero',
-  fraction: 'Enter a fraction above 0 and at most 1 (100 %), such as 90 %',
-  'at-least-one': 'Enter a whole number of at least 1',
+/** What a value that reads but fails its check is told; like the reader's messages, it starts with the field's label. */
+const CHECK_MESSAGE: Record<ToolCheck, (field: QuantityField) => string> = {
+  positive: (f) => `${f.label}: must be greater than zero`,
+  fraction: (f) => `${f.label}: enter a fraction above 0 % and at most 100 %, such as ${f.example}`,
+  'at-least-one': (f) => `${f.label}: enter a whole number of at least 1`,
+  finite: (f) => `${f.label}: enter a finite number`,
 };
 
 function passes(value: number, check: ToolCheck): boolean {
@@ -87,7 +99,7 @@ export function readToolFields<K extends string>(body: NoInfer<Partial<Record<K,
     const unit = kind === 'copper-thickness' ? 'm' : kind === 'temperature-rise' ? '°C' : STORED_UNIT[field.kind];
     parsed[key] = { entered: String(raw).trim(), value: q.value, unit };
     if (!passes(q.value, check)) {
-      errors[key] = check === 'finite' ? 'Enter a finite number' : CHECK_MESSAGE[check];
+      errors[key] = CHECK_MESSAGE[check](field);
       continue;
     }
     values[key] = q.value;
