@@ -48,6 +48,10 @@ describe('readQuantity: a value with its unit', () => {
     ['1M', L.resistanceOhms, 1e6, 'Ω'], // mega is plausible for a resistance
     ['2M2', L.resistanceOhms, 2.2e6, 'Ω'],
     ['R010', L.resistanceOhms, 0.01, 'Ω'],
+    ['4k7 Ω', L.resistanceOhms, 4700, 'Ω'], // the code with its unit after it
+    ['4K7ohm', L.resistanceOhms, 4700, 'Ω'],
+    ['47R', L.resistanceOhms, 47, 'Ω'],
+    ['4n7F', M.capacitance, 4.7e-9, 'F'],
     ['50 mΩ', M.resistance, 0.05, 'Ω'],
     ['4.7 kΩ', M.resistance, 4700, 'Ω'],
     ['2 KOHM', M.resistance, 2000, 'Ω'],
@@ -155,6 +159,7 @@ describe('readQuantity: refusals', () => {
     ['10MF', M.capacitance, /"MF" is read only as typed/], // "MF" meant microfarads on older parts
     ['1 MW', M.resistance, /resistance/],
     ['10 m', M.time, /time/], // m is not minutes
+    ['47R', M.capacitance, /capacitance/], // R marks ohms, never farads
     ['2.5', P.series, /^Cells in series: enter a whole number$/],
     ['2 pcs', P.series, /whole number/],
     ['3 7 V', M.voltage, /"3 7" is not a number/],

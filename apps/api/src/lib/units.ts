@@ -205,14 +205,23 @@ const KIND_WORDS: Record<QuantityKind, string> = {
 };
 export const kindWords = (kind: QuantityKind) => KIND_WORDS[kind];
 
-/** "3R0", "R010", "4K7", "2M2" (resistance), "4n7", "2p2" (capacitance), "2u2" (inductance): the letter is the decimal point [S: IEC 60062]. */
+/**
+ * "3R0", "R010", "4K7", "2M2" (resistance), "4n7", "2p2" (capacitance), "2u2" (inductance): the letter is
+ * the decimal point [S: IEC 60062]. The unit may follow ("4k7 Ω", "4n7F"); "47R" is 47 Ω (resistance only).
+ */
 function rkm(text: string, kind: QuantityKind): number | null {
   const mult: Record<string, number> = { p: 1e-12, n: 1e-9, u: 1e-6, µ: 1e-6, m: 1e-3, r: 1, R: 1, k: 1e3, K: 1e3, M: 1e6, G: 1e9 };
-  const letters = kind === 'resistance' ? 'rRkKMG' : kind === 'capacitance' ? 'pnuµ' : kind === 'inductance' ? 'nuµm' : '';
-  if (!letters) return null;
-  const m = new RegExp(`^(\\d*)([${letters}])(\\d+)$|^(\\d+)([rR])$`).exec(text);
+  const CODES: Partial<Record<QuantityKind, { letters: string; unit: string }>> = {
+    resistance: { letters: 'rRkKMG', unit: '\u03a9|\u2126|[oO][hH][mM][sS]?' },
+    capacitance: { letters: 'pnuµ', unit: '[fF]' },
+    inductance: { letters: 'nuµm', unit: '[hH]' },
+  };
+  const code = CODES[kind];
+  if (!code) return null;
+  const unit = `(?:${code.unit})?`;
+  const m = new RegExp(`^(\\d*)([${code.letters}])(\\d+)${unit}$`).exec(text) ?? (kind === 'resistance' ? new RegExp(`^(\\d+)([rR])()${unit}$`).exec(text) : null);
   if (!m) return null;
-  const [lead, letter, tail] = m[2] ? [m[1]!, m[2], m[3]!] : [m[4]!, m[5]!, ''];
+  const [, lead, letter, tail] = m as unknown as [string, string, string, string];
   if (!lead && !tail) return null;
   return Number((Number(`${lead || '0'}.${tail || '0'}`) * mult[letter]!).toPrecision(12));
 }
