@@ -16,6 +16,15 @@ interface Row {
 
 const today = () => new Date().toISOString().slice(0, 10);
 
+const FIELD_LABELS: Record<string, string> = { currency: 'Currency', priceDate: 'Price date', source: 'Source', confidence: 'Confidence', note: 'Note', breaks: 'Price breaks' };
+
+/** The label a field key of the price body has in this editor, or null when the editor shows no such field. */
+function fieldLabel(key: string, rowCount: number): string | null {
+  const b = /^breaks\.(\d+)\.(minQty|unitPrice)$/.exec(key);
+  if (b) return Number(b[1]) < rowCount ? `Break ${Number(b[1]) + 1} ${b[2] === 'minQty' ? 'minimum quantity' : 'unit price'}` : null;
+  return FIELD_LABELS[key] ?? null;
+}
+
 /**
  * Price breaks, currency, source, confidence and date of one BOM line. The server checks
  * everything (order of breaks, negative prices, a currency without a rate) and names the field;
@@ -68,7 +77,9 @@ export function PriceEditor({ teardownId, line, currencies, onClose }: { teardow
     } catch (err) {
       if (err instanceof ApiError && Object.keys(err.fields).length) {
         setErrors(err.fields);
-        setFormError(err.message);
+        // Name the fields as this editor labels them ("Break 1 unit price"), never by their keys.
+        const labels = Object.keys(err.fields).map((key) => fieldLabel(key, rows.length));
+        setFormError(labels.every(Boolean) ? `Not saved: check ${labels.join(', ')}.` : err.message);
       } else setFormError(err instanceof Error ? err.message : 'The price could not be saved.');
     }
   };
@@ -139,7 +150,7 @@ export function PriceEditor({ teardownId, line, currencies, onClose }: { teardow
           </Field>
         </div>
         <div>
-          <table className="w-full text-sm">
+          <table className="w-full table-fixed text-sm">
             <caption className="mb-1 text-left text-sm font-medium text-graphite-800">
               Price breaks ({currency})
               <span className="block text-xs font-normal text-graphite-500">
