@@ -101,7 +101,7 @@ export function PriceEditor({ teardownId, line, currencies, onClose }: { teardow
           <h3 className="text-sm font-semibold text-graphite-900">
             Price of <span className="font-mono">{line.designators ?? '—'}</span> · {line.description}
           </h3>
-          <p className="text-xs text-graphite-500">
+          <p className="text-xs text-graphite-600">
             {line.quantity} per unit; breaks are by pieces bought (quantity × volume). List them by increasing minimum quantity.
           </p>
         </div>
@@ -153,12 +153,12 @@ export function PriceEditor({ teardownId, line, currencies, onClose }: { teardow
           <table className="w-full table-fixed text-sm">
             <caption className="mb-1 text-left text-sm font-medium text-graphite-800">
               Price breaks ({currency})
-              <span className="block text-xs font-normal text-graphite-500">
+              <span className="block text-xs font-normal text-graphite-600">
                 Amounts in {currency}, e.g. {PRICE_FIELDS.unitPrice.example}, or with their currency; quantities such as {MIN_QTY_FIELD.example} or 5k.
               </span>
             </caption>
             <thead>
-              <tr className="text-left text-xs uppercase tracking-wide text-graphite-500">
+              <tr className="text-left text-xs uppercase tracking-wide text-graphite-600">
                 <th className="pb-1 font-semibold">Min. quantity</th>
                 <th className="pb-1 font-semibold">Unit price</th>
                 <th className="w-10" />
