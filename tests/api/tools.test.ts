@@ -197,10 +197,10 @@ describe('POST /api/tools/heater-trace', () => {
     expect(res.body.error.code).toBe('validation_failed');
     expect(res.body.error.fields).toEqual({
       length: expect.stringMatching(/length/),
-      width: 'Must be greater than zero',
-      thickness: expect.stringMatching(/copper weight such as "1 oz"/),
-      temperatureRise: expect.stringMatching(/temperature rise/),
-      area: 'Must be greater than zero',
+      width: 'Trace width: must be greater than zero',
+      thickness: expect.stringMatching(/^Copper thickness: enter a copper thickness such as "35 µm" or a copper weight such as "1 oz"/),
+      temperatureRise: expect.stringMatching(/^Allowed rise \(IPC-2221\): enter a temperature rise/),
+      area: 'Heated area: must be greater than zero',
     });
     expect(res.body.error.details.parsed.width).toEqual({ entered: '-1 mm', value: -0.001, unit: 'm' });
   });
@@ -275,10 +275,10 @@ describe('POST /api/tools/runtime', () => {
       .expect(400);
     expect(res.body.error.fields).toEqual({
       cellNominalVoltage: expect.stringMatching(/voltage/),
-      series: 'Enter a whole number of at least 1',
-      efficiency: expect.stringMatching(/fraction above 0 and at most 1/),
-      duty: expect.stringMatching(/fraction/),
-      cellMass: 'Must be greater than zero',
+      series: 'Cells in series: enter a whole number of at least 1',
+      efficiency: 'Converter efficiency: enter a fraction above 0 % and at most 100 %, such as 90 %',
+      duty: expect.stringMatching(/^PWM duty: enter a fraction/),
+      cellMass: 'Mass of one cell: must be greater than zero',
     });
     expect(res.body.error.details.parsed.cellCapacity).toEqual({ entered: '2700 mAh', value: 2.7, unit: 'Ah' });
   });

@@ -134,6 +134,27 @@ describe('the cost section of a demo teardown', () => {
     }
     await page.reload();
     await expect.poll(() => page.getByTestId('cost-margin').textContent(), { timeout: 10_000 }).not.toBe('Incomplete');
+  });
+
+  it.runIf(partsRouteExists)('sourcing types a price in another currency: the break and the form name the field as the editor labels it; nothing is saved', async () => {
+    const page = await signedInPage(browser, 'sourcing');
+    await page.goto('/teardowns/1/cost');
+    const before = await costOf(page);
+    const line = before.lines.find((l) => l.priced && l.designators) ?? before.lines.find((l) => l.priced)!;
+    const name = line.designators ?? line.description;
+    await page.getByRole('button', { name: `Edit the price of ${name}`, exact: true }).click();
+    const editor = page.getByRole('region', { name: `Price of ${name}`, exact: true });
+    await editor.waitFor();
+    // A currency mark that is not the line's: "€" on a non-euro line, "£" on a euro line [CP].
+    const [typed, mark, code] = line.price!.currency === 'EUR' ? ['£0.12', '£', 'GBP'] : ['0,12 €', '€', 'EUR'];
+    await editor.getByLabel('Break 1 unit price').fill(typed);
+    await editor.getByRole('button', { name: 'Save price' }).click();
+    await editor.getByText(`Unit price: "${mark}" is ${code}, but this price is in ${line.price!.currency}`).waitFor();
+    await editor.getByText('Not saved: check Break 1 unit price.').waitFor();
+    await expect(editor.getByText(/breaks\.0/).count()).resolves.toBe(0);
+    await editor.getByRole('button', { name: 'Cancel' }).click();
+    const after = await costOf(page);
+    expect(after.lines.find((l) => l.partId === line.partId)!.price!.breaks).toEqual(line.price!.breaks);
     await page.context().close();
   });
 });

@@ -58,7 +58,7 @@ describe('teardown workspace', () => {
     await page.getByLabel('Capacity on the label').fill('4000 bananas');
     await page.getByRole('button', { name: 'Add device' }).click();
     // The server names the field; the form shows it there.
-    await expect.poll(() => page.getByText(/Enter a capacity such as "2700 mAh"/).textContent(), { timeout: 10_000 }).toContain('bananas');
+    await expect.poll(() => page.getByText(/^Capacity on the label: enter a capacity such as "2700 mAh"/).textContent(), { timeout: 10_000 }).toContain('bananas');
     await page.getByLabel('Capacity on the label').fill('4000 mAh');
     await page.getByRole('button', { name: 'Add device' }).click();
     await page.getByRole('heading', { name: 'Testwright Pocketwarm E2E' }).waitFor();
@@ -129,7 +129,8 @@ describe('teardown workspace', () => {
     await page.getByLabel('Chemistry').selectOption('li-ion');
     await page.getByLabel('Nominal voltage (per cell)').fill('3.7 V');
     await page.getByLabel('Rated capacity (per cell)').fill('2700 mAh');
-    await page.getByLabel('Pack mass').fill('46 g');
+    // A bare number is read in the unit of the field's example (46 g), never as 46 kg.
+    await page.getByLabel('Pack mass').fill('46');
     await page.getByRole('button', { name: 'Record pack' }).click();
     await page.getByText('Pack saved.').waitFor();
     await page.getByRole('button', { name: 'Add load' }).click();
@@ -157,6 +158,8 @@ describe('teardown workspace', () => {
     await expect.poll(() => figure(page, 'Current from the pack').textContent(), { timeout: 10_000 }).toBe('2.43 A');
     await expect.poll(() => figure(page, 'Pack energy').textContent(), { timeout: 10_000 }).toBe('9.99 Wh');
     await expect.poll(() => figure(page, 'Air-transport class').textContent(), { timeout: 10_000 }).toBe('Up to 100 Wh');
+    // [C] 9.99 Wh / 0.046 kg = 217.17 Wh/kg (a bare "46" misread as kg would give 0.217 Wh/kg).
+    await expect.poll(() => figure(page, 'Pack specific energy').textContent(), { timeout: 10_000 }).toBe('217 Wh/kg');
     await page.getByRole('button', { name: /^Pack energy/ }).click();
     await expect.poll(() => panel.getByText('Formula').first().isVisible(), { timeout: 10_000 }).toBe(true);
 

@@ -92,6 +92,20 @@ export const partPriceBody = z.object({
 });
 export type PartPriceBody = z.input<typeof partPriceBody>;
 
+/**
+ * PUT /api/parts/:id/price as forms send it: each break's minimum quantity and unit price typed as
+ * text ("5k", "$0.12", "0,12 €") or given as numbers (pieces; an amount in `currency`). The server reads
+ * the text with the one unit reader, then checks the breaks as `partPriceBody` does.
+ */
+const typedAmount = z.union([z.number(), z.string().trim().max(40, 'At most 40 characters')], { error: 'Enter a number' });
+export const setPartPriceBody = partPriceBody.extend({
+  breaks: z
+    .array(z.object({ minQty: typedAmount, unitPrice: typedAmount }))
+    .min(1, 'Give at least one price break')
+    .max(20, 'At most 20 price breaks'),
+});
+export type SetPartPriceBody = z.input<typeof setPartPriceBody>;
+
 export const partPriceSchema = z.object({
   partId: z.number().int(),
   currency: safeString(),

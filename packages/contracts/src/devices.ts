@@ -1,20 +1,19 @@
 import { z } from 'zod';
 import { text, patchOf, safeString } from './common';
 import { DEVICE_CATEGORY, TEARDOWN_STATUS } from './domain';
-import { clearableDay, clearableNumber, clearableText, percentInput, quantityInput } from './inputs';
+import { clearableDay, clearableText, percentInput, priceInput, quantityInput } from './inputs';
+import { DEVICE_CLAIM_QUANTITY_FIELDS, type QuantityField } from './quantity-fields';
 import { currencyCode } from './settings';
 
 /**
- * Label claims a device carries, typed with units. Each maps to the stored SI value (Ah, Wh, W, h)
- * and the text typed is kept in `entered` under the same name.
+ * Label claims a device carries, typed with units. Each maps to the stored value (Ah, Wh, W, h) and
+ * the text typed is kept in `entered` under the same name. Label, kind and example come from the
+ * field declarations (quantity-fields.ts); `unit` is the stored unit.
  */
-export const DEVICE_CLAIM_FIELDS = {
-  claimCapacityAh: { label: 'Capacity on the label', unit: 'Ah', example: '5000 mAh' },
-  claimCapacityWh: { label: 'Energy on the label', unit: 'Wh', example: '18.5 Wh' },
-  claimOutputWatts: { label: 'Output power', unit: 'W', example: '10 W' },
-  claimRuntimeH: { label: 'Runtime claimed', unit: 'h', example: '6 h' },
-  claimPowerW: { label: 'Power claimed', unit: 'W', example: '9 W' },
-} as const;
+const STORED_CLAIM_UNIT = { claimCapacityAh: 'Ah', claimCapacityWh: 'Wh', claimOutputWatts: 'W', claimRuntimeH: 'h', claimPowerW: 'W' } as const;
+export const DEVICE_CLAIM_FIELDS = Object.fromEntries(
+  (Object.keys(STORED_CLAIM_UNIT) as (keyof typeof STORED_CLAIM_UNIT)[]).map((k) => [k, { ...DEVICE_CLAIM_QUANTITY_FIELDS[k], unit: STORED_CLAIM_UNIT[k] }]),
+) as { [K in keyof typeof STORED_CLAIM_UNIT]: QuantityField & { unit: (typeof STORED_CLAIM_UNIT)[K] } };
 export type DeviceClaimField = keyof typeof DEVICE_CLAIM_FIELDS;
 
 const currencyInput = z
@@ -26,7 +25,8 @@ const deviceFields = z.object({
   maker: text(120),
   model: text(160),
   category: DEVICE_CATEGORY.schema,
-  retailPrice: clearableNumber({ min: 0, max: 10_000_000, what: 'a price such as 24.99' }),
+  /** "24.99", "$24.99", "24,99 €": the server reads it with the currency (or takes the currency from it). */
+  retailPrice: priceInput,
   currency: currencyInput,
   /**
    * Share of sales tax (VAT) in the retail price, as a fraction (0.2 = 20 %) or typed as a percentage
@@ -44,9 +44,9 @@ const deviceFields = z.object({
   notes: clearableText(5000),
 });
 
-/** POST /api/devices. A price needs its currency. */
+/** POST /api/devices. A price needs its currency: a number needs the currency field; text may carry it (the server checks). */
 export const createDeviceBody = deviceFields.superRefine((b, ctx) => {
-  if (b.retailPrice !== undefined && b.retailPrice !== null && !b.currency) {
+  if (typeof b.retailPrice === 'number' && !b.currency) {
     ctx.addIssue({ code: 'custom', path: ['currency'], message: 'Give the currency of the price, such as USD' });
   }
 });

@@ -15,6 +15,7 @@ export * from './measurements';
 export * from './cost';
 export * from './runs';
 export * from './inputs';
+export * from './quantity-fields';
 export * from './devices';
 export * from './findings';
 export * from './figures';

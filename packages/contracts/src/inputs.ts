@@ -34,6 +34,15 @@ export const quantityInput = z
   .optional()
   .transform((v) => (v === '' ? null : v));
 
+/**
+ * A money amount as typed ("24.99", "$24.99", "24,99 €", "USD 24.99"), or a number in the currency
+ * beside it. The server reads it with the currency; '' or null clears it.
+ */
+export const priceInput = z
+  .union([z.number(), z.string().trim().max(40, 'At most 40 characters').regex(/^$|\d/, 'Enter an amount such as 24.99'), z.null()])
+  .optional()
+  .transform((v) => (v === '' ? null : v));
+
 /** A plain number typed in a form ('' → null), with bounds and a message naming what is expected. */
 export const clearableNumber = (opts: { min: number; max: number; integer?: boolean; what: string }) =>
   z

@@ -13,7 +13,10 @@ const text = (max: number) =>
 
 const fields = {
   quantity: z.enum(MEASURED_QUANTITY.values, { error: `Choose a quantity: ${MEASURED_QUANTITY.values.join(', ')}` }),
-  /** "3.02 Ω", "350 mA", "4R7"; a plain number is read in the quantity's stored unit. */
+  /**
+   * "3.02 Ω", "350 mA", "4R7". A JSON number is in the quantity's stored unit; a bare number typed as
+   * text follows the quantity's field in MEASUREMENT_FIELDS (read in its example's unit, or refused).
+   */
   value: z.union([z.number(), safeString().trim().min(1, 'Required').max(60, 'At most 60 characters')], {
     error: (issue) => (issue.input === undefined ? 'Required' : 'Enter the value with its unit'),
   }),

@@ -3,6 +3,7 @@
 // number here is invented for the demo (part numbers follow no real maker's scheme).
 import type { MeasuredQuantity, MountType, PartCategory } from '@splitcase/contracts';
 import { MeasurementSchema } from '../modules/measurements/measurement.entity';
+import { readMeasuredValue } from '../modules/measurements/service';
 import { PartSchema, type Part } from '../modules/parts/part.entity';
 import { applyPartValues, defaultMount } from '../modules/parts/service';
 import { ConverterSchema, type Converter } from '../modules/power/converter.entity';
@@ -10,7 +11,6 @@ import { LoadSchema, type Load } from '../modules/power/load.entity';
 import { PackSchema } from '../modules/power/pack.entity';
 import { TeardownSchema } from '../modules/teardowns/teardown.entity';
 import { UserSchema } from '../modules/users/user.entity';
-import { parseQuantity, type QuantityKind } from '../lib/units';
 import type { SeedContext } from './context';
 import { seedModes } from './modes';
 import { DEMO_DEVICES, teardownRef, type DemoDevice } from './scenario';
@@ -284,7 +284,7 @@ async function seedTeardownBom(ctx: SeedContext, d: DemoDevice, teardownId: numb
 
   const takenBy = await em.findOneOrFail(UserSchema, { id: teardown.engineer.id });
   demoReadings(d).forEach((r, i) => {
-    const parsed = parseQuantity(r.text, r.quantity as QuantityKind);
+    const parsed = readMeasuredValue(r.quantity, r.text);
     em.create(MeasurementSchema, {
       teardown,
       quantity: r.quantity,

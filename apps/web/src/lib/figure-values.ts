@@ -1,7 +1,7 @@
 // How a derived figure and its inputs read on screen and in print (the API computes them; this only
 // formats): SI prefixes through lib/format, words for the class strings the server sends.
 import type { FigureDto, FigureInputDto } from '@splitcase/contracts';
-import { formatQuantity, sig } from './format';
+import { formatQuantity, formatStored, sig } from './format';
 
 /** Words for the class strings the server sends (air-transport classes). */
 export const FIGURE_VALUE_WORDS: Record<string, string> = {
@@ -20,7 +20,8 @@ export function figureInputValue(i: FigureInputDto): string {
   if (i.value === null) return '—';
   if (typeof i.value === 'boolean') return i.value ? 'yes' : 'no';
   if (typeof i.value === 'string') return FIGURE_VALUE_WORDS[i.value] ?? i.value;
-  if (i.unit) return formatQuantity(i.value, i.unit);
+  // Inputs are values in their stored unit: shown as the forms and the report show them (46.0 g, 27.0 cm²).
+  if (i.unit) return formatStored(i.value, i.unit);
   return Number.isInteger(i.value) ? String(i.value) : sig(i.value);
 }
 

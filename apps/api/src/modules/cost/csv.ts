@@ -12,6 +12,7 @@ import {
 } from '@splitcase/contracts';
 import { toCsv, unguardCell } from '../../lib/csv';
 import type { Part } from '../parts/part.entity';
+import { readBreaks, type TypedBreak } from './price-input';
 
 /** Six significant digits, no exponent for everyday sizes, no trailing zeros. */
 const num = (x: number | null | undefined) => (x === null || x === undefined ? '' : String(Number(x.toPrecision(6))));
@@ -179,21 +180,27 @@ export function readPriceCsv(text: string, parts: Part[], opts: { hasRate: (code
     claimed.set(part.id, line);
 
     // The price itself.
-    const breaksText = cell('breaks');
-    const breaks: PriceBreakDto[] = [];
+    // Each pair through the one reader, against the line's currency ("5k@$0.12", "1000@0,12 €").
+    const typed: TypedBreak[] = [];
     let breaksOk = true;
-    for (const [j, pair] of breaksText.split(/[;|]/).map((s) => s.trim()).filter(Boolean).entries()) {
+    for (const [j, pair] of cell('breaks').split(/[;|]/).map((s) => s.trim()).filter(Boolean).entries()) {
       const m = pair.match(/^([^@]+)@([^@]+)$/);
-      const minQty = m ? Number(m[1]!.trim()) : Number.NaN;
-      const unitPrice = m ? Number(m[2]!.trim()) : Number.NaN;
-      if (!m || Number.isNaN(minQty) || Number.isNaN(unitPrice)) {
+      if (!m) {
         say('breaks', `break ${j + 1} "${pair}" is not minQty@unitPrice (e.g. 1000@0.12; 5000@0.10).`);
         breaksOk = false;
         break;
       }
-      breaks.push({ minQty, unitPrice });
+      typed.push({ minQty: m[1]!.trim(), unitPrice: m[2]!.trim() });
     }
     if (!breaksOk) continue;
+    const read = readBreaks(typed, cell('currency').toUpperCase());
+    const breaks: PriceBreakDto[] = read.breaks;
+    const breakError = Object.entries(read.errors).find(([key]) => /^breaks\.\d+\./.test(key));
+    if (breakError) {
+      const [, index, sub] = breakError[0].split('.');
+      say('breaks', `break ${Number(index) + 1} (${sub}): ${breakError[1]}`);
+      continue;
+    }
     const source = choice(cell('source'), PRICE_SOURCE.values, PRICE_SOURCE.labels);
     const confidence = choice(cell('confidence'), PRICE_CONFIDENCE.values, PRICE_CONFIDENCE.labels);
     if (!source) say('source', `"${cell('source')}" is not a price source; use ${PRICE_SOURCE.values.join(', ')}.`);

@@ -7,12 +7,12 @@ import {
   costResponse,
   idParam,
   manualRatesBody,
-  partPriceBody,
   partPriceResponse,
   priceImportQuery,
   priceImportResponse,
   rateTableResponse,
   ratesListResponse,
+  setPartPriceBody,
   teardownCostModelResponse,
   type PartPriceDto,
 } from '@splitcase/contracts';
@@ -26,6 +26,7 @@ import { UserSchema } from '../users/user.entity';
 import { clearTeardownModel, getTeardownModel, getWorkspaceModel, saveTeardownModel, saveWorkspaceModel } from './cost-model.service';
 import { partName, pricedParts, teardownCost, toPartPriceDto } from './cost.service';
 import { costedBomCsv, formatBreaks, readPriceCsv } from './csv';
+import { readBreaksOrThrow } from './price-input';
 import { parseReferenceRateXml } from './ecb';
 import { PartPriceSchema, type PartPrice } from './part-price.entity';
 import { RateTableSchema } from './rate-table.entity';
@@ -77,7 +78,7 @@ export const costRoutes: RouteDef[] = [
       summary: 'Set the price of a part: breaks (minQty → unit price) in one currency, source and confidence; the price date defaults to today',
       access: PRICE_EDITORS,
       params: idParam,
-      body: partPriceBody,
+      body: setPartPriceBody,
       response: partPriceResponse,
     },
     async ({ em, user, params, body }) => {
@@ -90,13 +91,14 @@ export const costRoutes: RouteDef[] = [
             : `There is no rate table yet, so ${body.currency} cannot be converted. Import the reference-rate file or enter rates first.`,
         });
       }
+      const breaks = readBreaksOrThrow(body.breaks, body.currency);
       const existing = await em.findOne(PartPriceSchema, { part: part.id });
       const price = writePrice(
         em,
         user,
         part,
         existing,
-        { currency: body.currency, breaks: body.breaks, source: body.source, confidence: body.confidence, priceDate: body.priceDate ?? today(), note: body.note ?? null },
+        { currency: body.currency, breaks, source: body.source, confidence: body.confidence, priceDate: body.priceDate ?? today(), note: body.note ?? null },
         existing ? 'Changed' : 'Set',
       );
       await em.flush();

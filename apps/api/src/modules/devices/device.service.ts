@@ -1,8 +1,8 @@
 import type { EntityManager } from '@mikro-orm/sqlite';
-import type { DeviceClaimField, DeviceDto, DeviceTeardown } from '@splitcase/contracts';
+import { DEVICE_CLAIM_QUANTITY_FIELDS, PRICE_FIELDS, type DeviceClaimField, type DeviceDto, type DeviceTeardown } from '@splitcase/contracts';
 import { validationError } from '../../http/errors';
 import type { AuthUser } from '../../http/route';
-import { parseQuantities, parseQuantity, QuantityError } from '../../lib/units';
+import { QuantityError, readPrice, readQuantity, readQuantityFields } from '../../lib/units';
 import { FindingSchema } from '../findings/finding.entity';
 import { visibleTeardowns } from '../teardowns/access';
 import { TeardownSchema, type Teardown } from '../teardowns/teardown.entity';
@@ -11,43 +11,58 @@ import type { Device } from './device.entity';
 type ClaimInput = Partial<Record<DeviceClaimField, string | number | null | undefined>>;
 
 /**
- * Label claims typed with units → SI values and the text typed. Every bad field is named; none is
- * half-applied. A runtime typed as a bare number is in hours ("6" = 6 h), as on a box.
+ * Label claims typed with units → stored values (Ah, Wh, W, h) and the text typed, each field read by
+ * its declaration (a bare "5000" capacity is 5000 mAh, a bare "6" runtime is 6 h, as on a box). Every
+ * bad field is named; none is half-applied. A JSON number is in the stored unit (the runtime in h).
  */
 export function parseClaims(body: ClaimInput): { values: Partial<Record<DeviceClaimField, number | null>>; entered: Partial<Record<DeviceClaimField, string>> } {
   const { claimRuntimeH, ...rest } = body;
-  const errors: Record<string, string> = {};
-  let values: Partial<Record<DeviceClaimField, number | null>> = {};
-  let entered: Partial<Record<DeviceClaimField, string>> = {};
-  try {
-    const parsed = parseQuantities(rest, { claimCapacityAh: 'capacity', claimCapacityWh: 'energy', claimOutputWatts: 'power', claimPowerW: 'power' });
-    values = parsed.values;
-    entered = parsed.entered;
-  } catch (err) {
-    const fields = (err as { fields?: Record<string, string> }).fields;
-    if (!fields) throw err;
-    Object.assign(errors, fields);
-  }
+  const read = readQuantityFields(rest, DEVICE_CLAIM_QUANTITY_FIELDS);
+  const values: Partial<Record<DeviceClaimField, number | null>> = read.values;
+  const entered: Partial<Record<DeviceClaimField, string>> = read.entered;
+  const errors: Record<string, string> = { ...(read.errors as Record<string, string>) };
   if ('claimRuntimeH' in body) {
     const raw = claimRuntimeH;
     if (raw === null || raw === undefined || (typeof raw === 'string' && raw.trim() === '')) values.claimRuntimeH = null;
-    else if (typeof raw === 'number' || /^\s*\d*\.?\d+\s*$/.test(raw)) values.claimRuntimeH = Number(raw);
+    else if (typeof raw === 'number') values.claimRuntimeH = raw;
     else {
       try {
-        const q = parseQuantity(raw, 'time');
+        const q = readQuantity(raw, DEVICE_CLAIM_QUANTITY_FIELDS.claimRuntimeH);
         values.claimRuntimeH = Number((q.value / 3600).toPrecision(12));
         entered.claimRuntimeH = q.entered;
       } catch (err) {
         if (!(err instanceof QuantityError)) throw err;
-        errors.claimRuntimeH = 'Enter a time such as "6 h" or "90 min"';
+        errors.claimRuntimeH = err.message;
       }
     }
   }
   for (const [key, v] of Object.entries(values)) {
-    if (typeof v === 'number' && !(v > 0)) errors[key] ??= 'Must be more than zero';
+    if (typeof v === 'number' && !(v > 0)) errors[key] ??= `${DEVICE_CLAIM_QUANTITY_FIELDS[key as DeviceClaimField].label}: must be more than zero`;
   }
   if (Object.keys(errors).length) throw validationError(errors);
   return { values, entered };
+}
+
+const MAX_RETAIL_PRICE = 10_000_000;
+
+/**
+ * The retail price as typed ("24.99", "$24.99", "24,99 €", "EUR 24.99") with the device's currency:
+ * a currency typed must match the one chosen, or gives it when none is chosen; "$" alone does not
+ * choose one. A price without any currency is refused, naming the currency field.
+ */
+export function readRetailPrice(raw: string | number | null, currency: string | null): { amount: number | null; currency: string | null } {
+  if (raw === null || (typeof raw === 'string' && raw.trim() === '')) return { amount: null, currency };
+  let read;
+  try {
+    read = readPrice(raw, PRICE_FIELDS.retailPrice, currency);
+  } catch (err) {
+    if (!(err instanceof QuantityError)) throw err;
+    throw validationError({ retailPrice: err.message });
+  }
+  if (read.amount < 0) throw validationError({ retailPrice: `${PRICE_FIELDS.retailPrice.label}: must not be negative` });
+  if (read.amount > MAX_RETAIL_PRICE) throw validationError({ retailPrice: `${PRICE_FIELDS.retailPrice.label}: at most ${MAX_RETAIL_PRICE}` });
+  if (!read.currency) throw validationError({ currency: 'Give the currency of the price, such as USD' });
+  return { amount: read.amount, currency: read.currency };
 }
 
 /** A stored double as a number (null stays null). */

@@ -17,7 +17,7 @@ import { CONTENT_EDITORS, DRAFT_READERS } from '../teardowns/access';
 import { TeardownSchema } from '../teardowns/teardown.entity';
 import { UserSchema } from '../users/user.entity';
 import { DeviceSchema, type Device } from './device.entity';
-import { deviceTeardowns, parseClaims, toDeviceDto, visibleTeardownsByDevice } from './device.service';
+import { deviceTeardowns, parseClaims, readRetailPrice, toDeviceDto, visibleTeardownsByDevice } from './device.service';
 
 const CLAIMS: DeviceClaimField[] = ['claimCapacityAh', 'claimCapacityWh', 'claimOutputWatts', 'claimRuntimeH', 'claimPowerW'];
 
@@ -84,13 +84,14 @@ export const deviceRoutes: RouteDef[] = [
     },
     async ({ em, user, body }) => {
       const claims = parseClaims(body);
+      const price = readRetailPrice(body.retailPrice ?? null, body.currency ?? null);
       const device = await em.transactional(async (tx) => {
         const d = tx.create(DeviceSchema, {
           maker: body.maker,
           model: body.model,
           category: body.category,
-          retailPrice: body.retailPrice ?? null,
-          retailCurrency: body.currency ?? null,
+          retailPrice: price.amount,
+          retailCurrency: price.currency,
           salesTaxRate: body.salesTaxRate ?? null,
           priceSeenOn: body.priceSeenOn ?? null,
           whereBought: body.whereBought ?? null,
@@ -145,15 +146,19 @@ export const deviceRoutes: RouteDef[] = [
       if (!device) throw notFound('The device');
       const claimKeys = CLAIMS.filter((k) => k in body && body[k] !== undefined);
       const claims = parseClaims(Object.fromEntries(claimKeys.map((k) => [k, body[k]])));
-      const price = body.retailPrice !== undefined ? body.retailPrice : (device.retailPrice ?? null);
-      const currency = body.currency !== undefined ? body.currency : (device.retailCurrency ?? null);
-      if (price !== null && !currency) throw validationError({ currency: 'Give the currency of the price, such as USD' });
+      const currencyGiven = body.currency !== undefined ? body.currency : (device.retailCurrency ?? null);
+      // A price typed again is read against the currency (given now, or kept); a kept price needs one too.
+      const price =
+        body.retailPrice !== undefined
+          ? readRetailPrice(body.retailPrice, currencyGiven)
+          : { amount: device.retailPrice === null || device.retailPrice === undefined ? null : Number(device.retailPrice), currency: currencyGiven };
+      if (price.amount !== null && !price.currency) throw validationError({ currency: 'Give the currency of the price, such as USD' });
       const before = snapshot(device);
       if (body.maker !== undefined) device.maker = body.maker;
       if (body.model !== undefined) device.model = body.model;
       if (body.category !== undefined) device.category = body.category;
-      if (body.retailPrice !== undefined) device.retailPrice = body.retailPrice;
-      if (body.currency !== undefined) device.retailCurrency = body.currency;
+      if (body.retailPrice !== undefined) device.retailPrice = price.amount;
+      if (body.currency !== undefined || price.currency !== (device.retailCurrency ?? null)) device.retailCurrency = price.currency;
       if (body.salesTaxRate !== undefined) device.salesTaxRate = body.salesTaxRate;
       if (body.priceSeenOn !== undefined) device.priceSeenOn = body.priceSeenOn;
       if (body.whereBought !== undefined) device.whereBought = body.whereBought;

@@ -1,7 +1,7 @@
-import { MEASURED_QUANTITY, SI_UNIT, type MeasuredQuantity, type MeasurementDto } from '@splitcase/contracts';
+import { MEASURED_QUANTITY, MEASUREMENT_FIELDS, SI_UNIT, type MeasuredQuantity, type MeasurementDto } from '@splitcase/contracts';
 import { validationError } from '../../http/errors';
 import { toCsv } from '../../lib/csv';
-import { parseQuantity, QuantityError } from '../../lib/units';
+import { readNumber, readQuantity, QuantityError } from '../../lib/units';
 import type { Measurement } from './measurement.entity';
 
 export function toMeasurementDto(m: Measurement): MeasurementDto {
@@ -23,18 +23,25 @@ export function toMeasurementDto(m: Measurement): MeasurementDto {
 
 /**
  * A reading typed with its unit, read as the chosen quantity ("3.02 Ω" as a resistance). A unit of
- * another quantity is refused, naming the field. "Other" keeps the number and the unit as typed.
+ * another quantity is refused, naming the field. A bare number typed as text follows the quantity's
+ * example (a voltage in V, a mass in g; a current needs its unit); a JSON number is in the stored
+ * unit. "Other" keeps the number and the unit as typed.
  */
 export function readMeasuredValue(quantity: MeasuredQuantity, value: string | number): { value: number; unit: string; entered: string } {
   const entered = String(value).trim();
   if (quantity === 'other') {
-    const m = entered.match(/^([-+]?\d*[.,]?\d+(?:e[-+]?\d+)?)\s*(.{0,12})$/i);
-    if (!m) throw validationError({ value: 'Enter a number, then its unit if it has one (e.g. "1200 rpm")' });
-    return { value: Number(m[1]!.replace(',', '.')), unit: m[2]!.trim(), entered };
+    const m = entered.match(/^([-+\u2212]?[\d.,\s]*\d)\s*(\D.{0,11})?$/);
+    let n: number | null = null;
+    try {
+      n = m ? readNumber(m[1]!) : null;
+    } catch {
+      n = null;
+    }
+    if (n === null) throw validationError({ value: 'Enter a number, then its unit if it has one (e.g. "1200 rpm")' });
+    return { value: n, unit: (m![2] ?? '').trim(), entered };
   }
   try {
-    // A surface temperature is a temperature reading of the surface a hand touches.
-    const q = parseQuantity(value, quantity === 'surface-temperature' ? 'temperature' : quantity);
+    const q = readQuantity(value, MEASUREMENT_FIELDS[quantity]);
     return { value: q.value, unit: SI_UNIT[quantity], entered };
   } catch (err) {
     if (err instanceof QuantityError) throw validationError({ value: `${err.message} — the quantity is ${MEASURED_QUANTITY.labels[quantity].toLowerCase()}` });

@@ -1,12 +1,12 @@
 // Operating modes of a teardown: which loads run in each mode, at what duty, and the standby draw.
 // The figures are worked out per mode by packages/calc (modeAndLoadFigures); these routes keep the records.
 import type { EntityManager } from '@mikro-orm/sqlite';
-import { createModeBody, dutyForTargetQuery, figureSchema, idParam, modeResponse, modesResponse, updateModeBody } from '@splitcase/contracts';
+import { MODE_FIELDS, createModeBody, dutyForTargetQuery, figureSchema, idParam, modeResponse, modesResponse, updateModeBody } from '@splitcase/contracts';
 import { teardownFigures } from '@splitcase/calc';
 import { z } from 'zod';
 import { AppError, notFound, validationError } from '../../http/errors';
 import { route, type RouteDef } from '../../http/route';
-import { parseQuantity } from '../../lib/units';
+import { readQuantity } from '../../lib/units';
 import { diffChanges, recordAudit } from '../audit/audit.service';
 import { figureInput, toFigureDto } from '../figures/figures.service';
 import { CONTENT_EDITORS, readableTeardown } from '../teardowns/access';
@@ -168,7 +168,7 @@ export const modeRoutes: RouteDef[] = [
       if (load.kind !== 'heater' || load.heatedAreaM2 == null) throw validationError({ loadId: 'A heater load with a heated area is needed for a target temperature' });
       let targetC: number;
       try {
-        targetC = parseQuantity(query.target, 'temperature').value;
+        targetC = readQuantity(query.target, MODE_FIELDS.targetSurfaceC).value;
       } catch (err) {
         throw validationError({ target: (err as Error).message });
       }

@@ -1,15 +1,18 @@
-// Read typed quantities for the power system: units through lib/units, then the range each field
-// allows. Every bad field is reported at once, named; nothing is applied unless all are good.
+// Read typed quantities for the power system: each field through the one reader (lib/units, by its
+// declaration in contracts), then the range it allows. Every bad field is reported at once, named;
+// nothing is applied unless all are good.
+import { STORED_UNIT, type QuantityField, type QuantityKind } from '@splitcase/contracts';
 import { validationError } from '../../http/errors';
-import { parseQuantity, type QuantityKind } from '../../lib/units';
+import { readQuantity } from '../../lib/units';
 
 export interface FieldRule {
-  kind: QuantityKind;
+  /** The field's declaration: label, kind, example and how a bare number is read. */
+  field: QuantityField;
   /** Smallest allowed value; `above` makes it exclusive. */
   min?: number;
   above?: boolean;
   max?: number;
-  /** Message when the value is above max. */
+  /** What follows "<label>: " when the value is above max (default "at most <max> <unit>"). */
   maxMessage?: string;
   /** Says what the field is, for messages ("A cell's voltage"). */
   required?: boolean;
@@ -26,7 +29,12 @@ export interface ReadResult<K extends string> {
   present: K[];
 }
 
-const UNIT_WORD: Partial<Record<QuantityKind, string>> = { voltage: 'V', current: 'A', resistance: 'Ω', power: 'W', capacity: 'Ah', mass: 'kg', area: 'm²' };
+/** A limit in the stored unit as the messages say it ("0 V", "100 %", "1"). */
+function limit(value: number, kind: QuantityKind): string {
+  if (kind === 'fraction') return `${Number((value * 100).toPrecision(12))} %`;
+  const unit = STORED_UNIT[kind];
+  return unit ? `${value} ${unit}` : String(value);
+}
 
 export function readQuantities<K extends string>(body: Partial<Record<K, Raw>>, rules: Record<K, FieldRule>, extraErrors: Record<string, string> = {}): ReadResult<K> {
   const values: Partial<Record<K, number | null>> = {};
@@ -48,18 +56,19 @@ export function readQuantities<K extends string>(body: Partial<Record<K, Raw>>, 
     }
     let value: number;
     try {
-      value = parseQuantity(raw, rule.kind).value;
+      value = readQuantity(raw, rule.field).value;
     } catch (err) {
       errors[key] = (err as Error).message;
       continue;
     }
-    const unit = UNIT_WORD[rule.kind] ?? '';
+    // Range messages, like the reader's, start with the field's label as the screen shows it.
+    const { label, kind } = rule.field;
     if (rule.min !== undefined && (rule.above ? value <= rule.min : value < rule.min)) {
-      errors[key] = rule.above ? `Must be more than ${rule.min}${unit ? ` ${unit}` : ''}` : `Must be at least ${rule.min}${unit ? ` ${unit}` : ''}`;
+      errors[key] = `${label}: ${rule.above ? 'must be more than' : 'must be at least'} ${limit(rule.min, kind)}`;
       continue;
     }
     if (rule.max !== undefined && value > rule.max) {
-      errors[key] = rule.maxMessage ?? `At most ${rule.max}${unit ? ` ${unit}` : ''}`;
+      errors[key] = `${label}: ${rule.maxMessage ?? `at most ${limit(rule.max, kind)}`}`;
       continue;
     }
     values[key] = value;

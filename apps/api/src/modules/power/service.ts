@@ -1,9 +1,14 @@
 import type { EntityManager } from '@mikro-orm/sqlite';
 import {
+  CONVERTER_FIELDS,
+  INTERNAL_RESISTANCE_READING_FIELDS,
+  MODE_FIELDS,
   CONVERTER_ROLE,
   CONVERTER_TOPOLOGY,
   LITHIUM_CHEMISTRIES,
+  LOAD_FIELDS,
   LOAD_KIND,
+  PACK_FIELDS,
   type ConverterDto,
   type LoadDto,
   type ModeDto,
@@ -114,47 +119,49 @@ export function toConverterDto(c: Converter): ConverterDto {
 
 // ---- field rules (SI; typed text accepted) ----
 
+// A JSON number is in SI (the API contract); text is read by the field's declaration, where a bare
+// number is in the unit of the field's example ("46" pack mass = 46 g).
 export const PACK_RULES = {
-  nominalVolts: { kind: 'voltage', min: 0, above: true, max: 10, maxMessage: "At most 10 V: give one cell's voltage and the series count", required: true },
-  maxVolts: { kind: 'voltage', min: 0, above: true, max: 10, maxMessage: "At most 10 V: give one cell's charge voltage" },
-  capacityAh: { kind: 'capacity', min: 0, above: true, max: 1000, maxMessage: 'At most 1000 Ah for one cell — a plain number is read in Ah; type "2700 mAh" for milliamp-hours', required: true },
-  measuredCapacityAh: { kind: 'capacity', min: 0, above: true, max: 1000, maxMessage: 'At most 1000 Ah for one cell — a plain number is read in Ah; type "2700 mAh" for milliamp-hours' },
-  series: { kind: 'count', min: 1, max: 1000 },
-  parallel: { kind: 'count', min: 1, max: 1000 },
-  massKg: { kind: 'mass', min: 0, above: true, max: 100, maxMessage: 'At most 100 kg — a plain number is read in kg; type "46 g" for grams' },
-  internalResistanceOhms: { kind: 'resistance', min: 0, above: true, max: 10, maxMessage: 'At most 10 Ω for one cell: type "50 mΩ" for milliohms' },
+  nominalVolts: { field: PACK_FIELDS.nominalVolts, min: 0, above: true, max: 10, maxMessage: "at most 10 V: give one cell's voltage and the series count", required: true },
+  maxVolts: { field: PACK_FIELDS.maxVolts, min: 0, above: true, max: 10, maxMessage: "at most 10 V: give one cell's charge voltage" },
+  capacityAh: { field: PACK_FIELDS.capacityAh, min: 0, above: true, max: 1000, maxMessage: 'at most 1000 Ah for one cell — a number sent without a unit is in Ah; type "2700 mAh" for milliamp-hours', required: true },
+  measuredCapacityAh: { field: PACK_FIELDS.measuredCapacityAh, min: 0, above: true, max: 1000, maxMessage: 'at most 1000 Ah for one cell — a number sent without a unit is in Ah; type "2620 mAh" for milliamp-hours' },
+  series: { field: PACK_FIELDS.series, min: 1, max: 1000 },
+  parallel: { field: PACK_FIELDS.parallel, min: 1, max: 1000 },
+  massKg: { field: PACK_FIELDS.massKg, min: 0, above: true, max: 100, maxMessage: 'at most 100 kg — type the mass with its unit, e.g. "46 g"' },
+  internalResistanceOhms: { field: PACK_FIELDS.internalResistanceOhms, min: 0, above: true, max: 10, maxMessage: 'at most 10 Ω for one cell — type "50 mΩ" for milliohms' },
 } satisfies Record<string, FieldRule>;
 
 /** The two readings of the DC method (IEC 61960-3): cell voltage at a low and at a high current. */
 export const INTERNAL_RESISTANCE_READING_RULES = {
-  lowAmps: { kind: 'current', min: 0, max: 1000, required: true },
-  lowVolts: { kind: 'voltage', min: 0, above: true, max: 10, required: true },
-  highAmps: { kind: 'current', min: 0, above: true, max: 1000, required: true },
-  highVolts: { kind: 'voltage', min: 0, above: true, max: 10, required: true },
+  lowAmps: { field: INTERNAL_RESISTANCE_READING_FIELDS.lowAmps, min: 0, max: 1000, required: true },
+  lowVolts: { field: INTERNAL_RESISTANCE_READING_FIELDS.lowVolts, min: 0, above: true, max: 10, required: true },
+  highAmps: { field: INTERNAL_RESISTANCE_READING_FIELDS.highAmps, min: 0, above: true, max: 1000, required: true },
+  highVolts: { field: INTERNAL_RESISTANCE_READING_FIELDS.highVolts, min: 0, above: true, max: 10, required: true },
 } satisfies Record<string, FieldRule>;
 
 export const MODE_RULES = {
-  quiescentAmps: { kind: 'current', min: 0, max: 10, maxMessage: 'At most 10 A: type "20 µA" for microamps' },
+  quiescentAmps: { field: MODE_FIELDS.quiescentAmps, min: 0, max: 10, maxMessage: 'at most 10 A — type "20 µA" for microamps' },
 } satisfies Record<string, FieldRule>;
-export const MODE_DUTY_RULE = { kind: 'fraction', min: 0, above: true, max: 1, maxMessage: 'At most 1 (100 %)' } satisfies FieldRule;
+export const MODE_DUTY_RULE = { field: MODE_FIELDS.duty, min: 0, above: true, max: 1 } satisfies FieldRule;
 
 export const LOAD_RULES = {
-  resistanceOhms: { kind: 'resistance', min: 0, above: true },
-  currentAmps: { kind: 'current', min: 0, above: true, max: 1000 },
-  powerWatts: { kind: 'power', min: 0, above: true, max: 100_000 },
-  supplyVolts: { kind: 'voltage', min: 0, above: true, max: 1000 },
-  count: { kind: 'count', min: 1, max: 1000 },
-  duty: { kind: 'fraction', min: 0, above: true, max: 1, maxMessage: 'At most 1 (100 %)' },
-  heatedAreaM2: { kind: 'area', min: 0, above: true, max: 10, maxMessage: 'At most 10 m² — a plain number is read in m²; type "27 cm²"' },
-  heatedMassKg: { kind: 'mass', min: 0, above: true, max: 100, maxMessage: 'At most 100 kg — type "40 g" for grams' },
+  resistanceOhms: { field: LOAD_FIELDS.resistanceOhms, min: 0, above: true },
+  currentAmps: { field: LOAD_FIELDS.currentAmps, min: 0, above: true, max: 1000 },
+  powerWatts: { field: LOAD_FIELDS.powerWatts, min: 0, above: true, max: 100_000 },
+  supplyVolts: { field: LOAD_FIELDS.supplyVolts, min: 0, above: true, max: 1000 },
+  count: { field: LOAD_FIELDS.count, min: 1, max: 1000 },
+  duty: { field: LOAD_FIELDS.duty, min: 0, above: true, max: 1 },
+  heatedAreaM2: { field: LOAD_FIELDS.heatedAreaM2, min: 0, above: true, max: 10, maxMessage: 'at most 10 m² — type the area with its unit, e.g. "27 cm²"' },
+  heatedMassKg: { field: LOAD_FIELDS.heatedMassKg, min: 0, above: true, max: 100, maxMessage: 'at most 100 kg — type the mass with its unit, e.g. "40 g"' },
 } satisfies Record<string, FieldRule>;
 
 export const CONVERTER_RULES = {
-  inputVolts: { kind: 'voltage', min: 0, above: true, max: 1000, required: true },
-  outputVolts: { kind: 'voltage', min: 0, above: true, max: 1000, required: true },
-  ratedCurrentAmps: { kind: 'current', min: 0, above: true, max: 1000 },
-  chargeCurrentAmps: { kind: 'current', min: 0, above: true, max: 1000 },
-  efficiency: { kind: 'fraction', min: 0, above: true, max: 1, maxMessage: 'At most 1 (100 %)' },
+  inputVolts: { field: CONVERTER_FIELDS.inputVolts, min: 0, above: true, max: 1000, required: true },
+  outputVolts: { field: CONVERTER_FIELDS.outputVolts, min: 0, above: true, max: 1000, required: true },
+  ratedCurrentAmps: { field: CONVERTER_FIELDS.ratedCurrentAmps, min: 0, above: true, max: 1000 },
+  chargeCurrentAmps: { field: CONVERTER_FIELDS.chargeCurrentAmps, min: 0, above: true, max: 1000 },
+  efficiency: { field: CONVERTER_FIELDS.efficiency, min: 0, above: true, max: 1 },
 } satisfies Record<string, FieldRule>;
 
 export const defaultLoadLabel = (kind: Load['kind']) => LOAD_KIND.labels[kind];

@@ -1,50 +1,66 @@
 // Typed inputs of the bench tools → SI numbers, with what was read from each field. Every bad field
 // is reported at once (400, fields named); the fields that did parse come back in details.parsed so
 // the page can still show their SI values.
-import type { ParsedToolInput } from '@splitcase/contracts';
+import type { ParsedToolInput, QuantityField } from '@splitcase/contracts';
 import { ozToMetres } from '@splitcase/calc';
 import { AppError, validationError } from '../../http/errors';
-import { parseQuantity, STORED_UNIT, type QuantityKind } from '../../lib/units';
+import { readNumber, readQuantity, STORED_UNIT } from '../../lib/units';
 
-/** How to read one field: a quantity kind, a copper thickness (also "1 oz"), or a temperature difference. */
-export type ToolFieldKind = QuantityKind | 'copper-thickness' | 'temperature-rise';
+/** How to read one field beyond its declaration: a copper thickness (also "1 oz"), or a temperature difference. */
+export type ToolFieldKind = 'quantity' | 'copper-thickness' | 'temperature-rise';
 export type ToolCheck = 'positive' | 'fraction' | 'at-least-one' | 'finite';
 
 export interface ToolFieldSpec {
-  kind: ToolFieldKind;
+  /** The field's declaration in contracts: label, kind, example, how a bare number is read. */
+  field: QuantityField;
+  /** Special readings on top of the declaration; 'quantity' (the default) is the declaration alone. */
+  kind?: ToolFieldKind;
   check: ToolCheck;
   required?: boolean;
 }
 
 type Raw = string | number | null | undefined;
 
-const COPPER_WEIGHT = /^(\d*\.?\d+)\s*oz(?:\s*\/\s*ft(?:²|2|\^2))?$/i;
-const RISE = /^([-+]?\d*\.?\d+)\s*(?:°\s*C|deg\s*C|C|K)?$/i;
+const COPPER_WEIGHT = /^(\d*[.,]?\d+)\s*oz(?:\s*\/\s*ft(?:²|2|\^2))?$/i;
+const RISE = /^([-+\u2212]?\d*[.,]?\d+)\s*(?:°\s*C|deg\s*C|C|K)?$/i;
 
-/** One field as SI: a copper weight in oz/ft² becomes metres (1 oz = 35 µm); a rise in °C or K stays a difference. */
-export function readToolField(raw: string | number, kind: ToolFieldKind): ParsedToolInput {
+/** One field in its stored unit: a copper weight in oz/ft² becomes metres (1 oz = 35 µm); a rise in °C or K stays a difference. */
+export function readToolField(raw: string | number, field: QuantityField, kind: ToolFieldKind = 'quantity'): ParsedToolInput {
   const entered = String(raw).trim();
   if (kind === 'copper-thickness') {
     const oz = typeof raw === 'string' ? COPPER_WEIGHT.exec(entered) : null;
-    if (oz) return { entered, value: ozToMetres(Number(oz[1])), unit: 'm' };
+    if (oz) {
+      try {
+        return { entered, value: ozToMetres(readNumber(oz[1]!)), unit: 'm' };
+      } catch (err) {
+        throw new Error(`${field.label}: ${(err as Error).message}`);
+      }
+    }
     try {
-      return parseQuantity(raw, 'length');
-    } catch {
-      throw new Error(`Enter a copper thickness such as "35 µm" or a copper weight such as "1 oz" ("${entered}" is neither)`);
+      return readQuantity(raw, field);
+    } catch (err) {
+      if (typeof raw === 'string' && /^[-+]?[\d.,\s]+$/.test(entered)) throw err;
+      throw new Error(`${field.label}: enter a copper thickness such as "35 µm" or a copper weight such as "1 oz" ("${entered}" is neither)`);
     }
   }
   if (kind === 'temperature-rise') {
-    const m = RISE.exec(entered);
-    if (!m) throw new Error(`Enter a temperature rise such as "10 °C" or "10 K" ("${entered}" is not one)`);
-    return { entered, value: Number(m[1]), unit: '°C' };
+    const m = typeof raw === 'number' ? [entered, entered] : RISE.exec(entered);
+    if (!m) throw new Error(`${field.label}: enter a temperature rise such as "10 °C" or "10 K" ("${entered}" is not one)`);
+    try {
+      return { entered, value: readNumber(m[1]!), unit: '°C' };
+    } catch (err) {
+      throw new Error(`${field.label}: ${(err as Error).message}`);
+    }
   }
-  return parseQuantity(raw, kind);
+  return readQuantity(raw, field);
 }
 
-const CHECK_MESSAGE: Record<Exclude<ToolCheck, 'finite'>, string> = {
-  positive: 'Must be greater than zero',
-  fraction: 'Enter a fraction above 0 and at most 1, such as 0.9 or 90 %',
-  'at-least-one': 'Enter a whole number of at least 1',
+/** What a value that reads but fails its check is told; like the reader's messages, it starts with the field's label. */
+const CHECK_MESSAGE: Record<ToolCheck, (field: QuantityField) => string> = {
+  positive: (f) => `${f.label}: must be greater than zero`,
+  fraction: (f) => `${f.label}: enter a fraction above 0 % and at most 100 %, such as ${f.example}`,
+  'at-least-one': (f) => `${f.label}: enter a whole number of at least 1`,
+  finite: (f) => `${f.label}: enter a finite number`,
 };
 
 function passes(value: number, check: ToolCheck): boolean {
@@ -68,22 +84,22 @@ export function readToolFields<K extends string>(body: NoInfer<Partial<Record<K,
   const errors: Record<string, string> = {};
   for (const key of Object.keys(spec) as K[]) {
     const raw = body[key];
-    const { kind, check, required } = spec[key];
+    const { field, kind = 'quantity', check, required } = spec[key];
     if (raw === undefined || raw === null || (typeof raw === 'string' && raw.trim() === '')) {
       if (required) errors[key] = 'Required';
       continue;
     }
     let q: ParsedToolInput;
     try {
-      q = readToolField(raw, kind);
+      q = readToolField(raw, field, kind);
     } catch (err) {
       errors[key] = (err as Error).message;
       continue;
     }
-    const unit = kind === 'copper-thickness' ? 'm' : kind === 'temperature-rise' ? '°C' : STORED_UNIT[kind];
+    const unit = kind === 'copper-thickness' ? 'm' : kind === 'temperature-rise' ? '°C' : STORED_UNIT[field.kind];
     parsed[key] = { entered: String(raw).trim(), value: q.value, unit };
     if (!passes(q.value, check)) {
-      errors[key] = check === 'finite' ? 'Enter a finite number' : CHECK_MESSAGE[check];
+      errors[key] = CHECK_MESSAGE[check](field);
       continue;
     }
     values[key] = q.value;

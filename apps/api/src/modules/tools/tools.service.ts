@@ -1,6 +1,6 @@
 // Bench tools: typed inputs in, explained figures out. Nothing is read from or written to the
 // workspace; every figure comes from packages/calc (its RangeErrors become 422).
-import type { FiguresToolResponse, HeaterTraceToolBody, MarkingToolResponse, RuntimeToolBody } from '@splitcase/contracts';
+import { HEATER_TOOL_FIELDS, RUNTIME_TOOL_FIELDS, type FiguresToolResponse, type HeaterTraceToolBody, type MarkingToolResponse, type RuntimeToolBody } from '@splitcase/contracts';
 import { explainMarking, heaterTraceReport, runtimeReport, type CellChemistry, type MarkingKind, type RuntimeLoad } from '@splitcase/calc';
 import { readToolFields, toolValidationError, type ToolFieldSpec } from './inputs';
 
@@ -9,15 +9,16 @@ export function decodeMarking(body: { code?: string | undefined; kind: MarkingKi
   return body.bands !== undefined ? explainMarking({ bands: body.bands }) : explainMarking({ code: body.code as string, kind: body.kind });
 }
 
+const H = HEATER_TOOL_FIELDS;
 const HEATER_FIELDS = {
-  length: { kind: 'length', check: 'positive', required: true },
-  width: { kind: 'length', check: 'positive', required: true },
-  thickness: { kind: 'copper-thickness', check: 'positive', required: true },
-  temperature: { kind: 'temperature', check: 'finite' },
-  supplyVoltage: { kind: 'voltage', check: 'positive' },
-  current: { kind: 'current', check: 'positive' },
-  temperatureRise: { kind: 'temperature-rise', check: 'positive' },
-  area: { kind: 'area', check: 'positive' },
+  length: { field: H.length, check: 'positive', required: true },
+  width: { field: H.width, check: 'positive', required: true },
+  thickness: { field: H.thickness, kind: 'copper-thickness', check: 'positive', required: true },
+  temperature: { field: H.temperature, check: 'finite' },
+  supplyVoltage: { field: H.supplyVoltage, check: 'positive' },
+  current: { field: H.current, check: 'positive' },
+  temperatureRise: { field: H.temperatureRise, kind: 'temperature-rise', check: 'positive' },
+  area: { field: H.area, check: 'positive' },
 } as const satisfies Record<string, ToolFieldSpec>;
 
 /** Resistance, power, IPC-2221 capacity and width, power density and surface rise of a heater trace. */
@@ -38,19 +39,20 @@ export function heaterTrace(body: HeaterTraceToolBody): FiguresToolResponse {
   return { parsed, ...report };
 }
 
+const R = RUNTIME_TOOL_FIELDS;
 const RUNTIME_FIELDS = {
-  cellNominalVoltage: { kind: 'voltage', check: 'positive', required: true },
-  cellCapacity: { kind: 'capacity', check: 'positive', required: true },
-  series: { kind: 'count', check: 'at-least-one' },
-  parallel: { kind: 'count', check: 'at-least-one' },
-  loadPower: { kind: 'power', check: 'positive' },
-  loadResistance: { kind: 'resistance', check: 'positive' },
-  supplyVoltage: { kind: 'voltage', check: 'positive' },
-  loadCurrent: { kind: 'current', check: 'positive' },
-  efficiency: { kind: 'fraction', check: 'fraction' },
-  usableFraction: { kind: 'fraction', check: 'fraction' },
-  duty: { kind: 'fraction', check: 'fraction' },
-  cellMass: { kind: 'mass', check: 'positive' },
+  cellNominalVoltage: { field: R.cellNominalVoltage, check: 'positive', required: true },
+  cellCapacity: { field: R.cellCapacity, check: 'positive', required: true },
+  series: { field: R.series, check: 'at-least-one' },
+  parallel: { field: R.parallel, check: 'at-least-one' },
+  loadPower: { field: R.loadPower, check: 'positive' },
+  loadResistance: { field: R.loadResistance, check: 'positive' },
+  supplyVoltage: { field: R.supplyVoltage, check: 'positive' },
+  loadCurrent: { field: R.loadCurrent, check: 'positive' },
+  efficiency: { field: R.efficiency, check: 'fraction' },
+  usableFraction: { field: R.usableFraction, check: 'fraction' },
+  duty: { field: R.duty, check: 'fraction' },
+  cellMass: { field: R.cellMass, check: 'positive' },
 } as const satisfies Record<string, ToolFieldSpec>;
 
 const LOAD_FIELDS = ['loadPower', 'loadResistance', 'loadCurrent'] as const;

@@ -1,7 +1,7 @@
 import { useState, type KeyboardEvent } from 'react';
 import { toast } from 'sonner';
 import { Plus, Trash2, X } from 'lucide-react';
-import { PRICE_CONFIDENCE, PRICE_SOURCE, type CostLine, type PriceConfidence, type PriceSource } from '@splitcase/contracts';
+import { MIN_QTY_FIELD, PRICE_CONFIDENCE, PRICE_FIELDS, PRICE_SOURCE, type CostLine, type PriceConfidence, type PriceSource } from '@splitcase/contracts';
 import { Button } from '@/components/button';
 import { Field, Input, Select, inputClass, FormError } from '@/components/field';
 import { ApiError } from '@/lib/api-client';
@@ -15,6 +15,15 @@ interface Row {
 }
 
 const today = () => new Date().toISOString().slice(0, 10);
+
+const FIELD_LABELS: Record<string, string> = { currency: 'Currency', priceDate: 'Price date', source: 'Source', confidence: 'Confidence', note: 'Note', breaks: 'Price breaks' };
+
+/** The label a field key of the price body has in this editor, or null when the editor shows no such field. */
+function fieldLabel(key: string, rowCount: number): string | null {
+  const b = /^breaks\.(\d+)\.(minQty|unitPrice)$/.exec(key);
+  if (b) return Number(b[1]) < rowCount ? `Break ${Number(b[1]) + 1} ${b[2] === 'minQty' ? 'minimum quantity' : 'unit price'}` : null;
+  return FIELD_LABELS[key] ?? null;
+}
 
 /**
  * Price breaks, currency, source, confidence and date of one BOM line. The server checks
@@ -48,7 +57,6 @@ export function PriceEditor({ teardownId, line, currencies, onClose }: { teardow
       addRow();
     }
   };
-  const num = (s: string) => (s.trim() === '' ? Number.NaN : Number(s.replace(',', '.')));
 
   const submit = async () => {
     setErrors({});
@@ -61,15 +69,17 @@ export function PriceEditor({ teardownId, line, currencies, onClose }: { teardow
         confidence,
         priceDate,
         note: note.trim() || undefined,
-        // NaN travels as null: the server names the break and field that is not a number.
-        breaks: rows.map((r) => ({ minQty: num(r.minQty), unitPrice: num(r.unitPrice) })),
+        // Sent as typed ("5k", "$0.12", "0,12 €"): the server reads them against the currency and names the break and field it refuses.
+        breaks: rows.map((r) => ({ minQty: r.minQty, unitPrice: r.unitPrice })),
       });
       toast.success(`Price of ${name} saved; totals updated.`);
       onClose();
     } catch (err) {
       if (err instanceof ApiError && Object.keys(err.fields).length) {
         setErrors(err.fields);
-        setFormError(err.message);
+        // Name the fields as this editor labels them ("Break 1 unit price"), never by their keys.
+        const labels = Object.keys(err.fields).map((key) => fieldLabel(key, rows.length));
+        setFormError(labels.every(Boolean) ? `Not saved: check ${labels.join(', ')}.` : err.message);
       } else setFormError(err instanceof Error ? err.message : 'The price could not be saved.');
     }
   };
@@ -91,7 +101,7 @@ export function PriceEditor({ teardownId, line, currencies, onClose }: { teardow
           <h3 className="text-sm font-semibold text-graphite-900">
             Price of <span className="font-mono">{line.designators ?? '—'}</span> · {line.description}
           </h3>
-          <p className="text-xs text-graphite-500">
+          <p className="text-xs text-graphite-600">
             {line.quantity} per unit; breaks are by pieces bought (quantity × volume). List them by increasing minimum quantity.
           </p>
         </div>
@@ -140,10 +150,15 @@ export function PriceEditor({ teardownId, line, currencies, onClose }: { teardow
           </Field>
         </div>
         <div>
-          <table className="w-full text-sm">
-            <caption className="mb-1 text-left text-sm font-medium text-graphite-800">Price breaks ({currency})</caption>
+          <table className="w-full table-fixed text-sm">
+            <caption className="mb-1 text-left text-sm font-medium text-graphite-800">
+              Price breaks ({currency})
+              <span className="block text-xs font-normal text-graphite-600">
+                Amounts in {currency}, e.g. {PRICE_FIELDS.unitPrice.example}, or with their currency; quantities such as {MIN_QTY_FIELD.example} or 5k.
+              </span>
+            </caption>
             <thead>
-              <tr className="text-left text-xs uppercase tracking-wide text-graphite-500">
+              <tr className="text-left text-xs uppercase tracking-wide text-graphite-600">
                 <th className="pb-1 font-semibold">Min. quantity</th>
                 <th className="pb-1 font-semibold">Unit price</th>
                 <th className="w-10" />
@@ -160,7 +175,8 @@ export function PriceEditor({ teardownId, line, currencies, onClose }: { teardow
                         id={`break-qty-${k}`}
                         aria-label={`Break ${k + 1} minimum quantity`}
                         aria-invalid={Boolean(qtyErr)}
-                        inputMode="decimal"
+                        placeholder={MIN_QTY_FIELD.example}
+                        autoComplete="off"
                         value={r.minQty}
                         onChange={(e) => update(k, { minQty: e.target.value })}
                         className={`${inputClass} num h-8`}
@@ -171,7 +187,8 @@ export function PriceEditor({ teardownId, line, currencies, onClose }: { teardow
                       <input
                         aria-label={`Break ${k + 1} unit price`}
                         aria-invalid={Boolean(priceErr)}
-                        inputMode="decimal"
+                        placeholder={PRICE_FIELDS.unitPrice.example}
+                        autoComplete="off"
                         value={r.unitPrice}
                         onKeyDown={onPriceKey(k)}
                         onChange={(e) => update(k, { unitPrice: e.target.value })}

@@ -1,17 +1,16 @@
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { createDeviceBody, DEVICE_CATEGORY, DEVICE_CLAIM_FIELDS, type CreateDeviceBody, type DeviceClaimField, type DeviceDto, type DeviceFormValues } from '@splitcase/contracts';
+import { bareHint, createDeviceBody, DEVICE_CATEGORY, DEVICE_CLAIM_FIELDS, PRICE_FIELDS, type CreateDeviceBody, type DeviceClaimField, type DeviceDto, type DeviceFormValues } from '@splitcase/contracts';
 import { Button } from '@/components/button';
 import { Field, Input, Select, Textarea, FormError } from '@/components/field';
 import { Card } from '@/components/page';
 import { applyServerErrors } from '@/lib/form-errors';
-import { claimText } from './claims';
 
 const CLAIMS = Object.keys(DEVICE_CLAIM_FIELDS) as DeviceClaimField[];
 const KNOWN = ['maker', 'model', 'category', 'retailPrice', 'currency', 'salesTaxRate', 'priceSeenOn', 'whereBought', 'claimOutputText', 'notes', ...CLAIMS] as const;
 
-/** Form values for an existing device: each claim as typed (or its stored value with the unit). */
+/** Form values for an existing device: each claim as typed (or its stored value with its unit). */
 export function deviceFormValues(d?: DeviceDto): DeviceFormValues {
   if (!d) {
     return { maker: '', model: '', category: 'pocket-heater', retailPrice: '', currency: '', salesTaxRate: '', priceSeenOn: '', whereBought: '', claimCapacityAh: '', claimCapacityWh: '', claimOutputWatts: '', claimRuntimeH: '', claimPowerW: '', claimOutputText: '', notes: '' };
@@ -26,7 +25,8 @@ export function deviceFormValues(d?: DeviceDto): DeviceFormValues {
     salesTaxRate: d.salesTaxRate === null ? '' : String(Number((d.salesTaxRate * 100).toPrecision(10))),
     priceSeenOn: d.priceSeenOn ?? '',
     whereBought: d.whereBought ?? '',
-    ...Object.fromEntries(CLAIMS.map((k) => [k, claimText(d, k) ?? ''])),
+    // As typed, else the exact stored value with its unit ("5.2 Ah"): never a bare number read in another unit.
+    ...Object.fromEntries(CLAIMS.map((k) => [k, d.entered[k] ?? (d[k] === null ? '' : `${d[k]} ${DEVICE_CLAIM_FIELDS[k].unit}`)])),
     claimOutputText: d.claimOutputText ?? '',
     notes: d.notes ?? '',
   };
@@ -72,10 +72,10 @@ export function DeviceForm({ initial, submitLabel, onSubmit, onCancel }: { initi
       </Card>
       <Card title="Where and for how much">
         <div className="grid gap-4 p-4 sm:grid-cols-3">
-          <Field label="Retail price" error={errors.retailPrice?.message} hint="e.g. 24.99, as on the shelf or listing">
-            {(p) => <Input {...p} {...register('retailPrice')} inputMode="decimal" className="num" />}
+          <Field label={PRICE_FIELDS.retailPrice.label} error={errors.retailPrice?.message} hint={`e.g. ${PRICE_FIELDS.retailPrice.example} or €${PRICE_FIELDS.retailPrice.example}`}>
+            {(p) => <Input {...p} {...register('retailPrice')} placeholder={PRICE_FIELDS.retailPrice.example} className="num" autoComplete="off" />}
           </Field>
-          <Field label="Currency" error={errors.currency?.message} hint="ISO code, e.g. USD">
+          <Field label="Currency" error={errors.currency?.message} hint="ISO code, e.g. USD; blank: from the price">
             {(p) => <Input {...p} {...register('currency')} maxLength={3} className="font-mono uppercase" />}
           </Field>
           <Field label="Sales tax in the price" error={errors.salesTaxRate?.message} hint="Blank: the workspace default for the currency; 0 if quoted before tax">
@@ -97,8 +97,8 @@ export function DeviceForm({ initial, submitLabel, onSubmit, onCancel }: { initi
       <Card title="On the label">
         <div className="grid gap-4 p-4 sm:grid-cols-3">
           {CLAIMS.map((k) => (
-            <Field key={k} label={DEVICE_CLAIM_FIELDS[k].label} error={errors[k]?.message} hint={`With its unit, e.g. "${DEVICE_CLAIM_FIELDS[k].example}"`}>
-              {(p) => <Input {...p} {...register(k)} className="num" autoComplete="off" />}
+            <Field key={k} label={DEVICE_CLAIM_FIELDS[k].label} error={errors[k]?.message} hint={`e.g. ${DEVICE_CLAIM_FIELDS[k].example} · ${bareHint(DEVICE_CLAIM_FIELDS[k])}`}>
+              {(p) => <Input {...p} {...register(k)} placeholder={DEVICE_CLAIM_FIELDS[k].placeholder} className="num" autoComplete="off" />}
             </Field>
           ))}
           <Field label="Outputs as printed" error={errors.claimOutputText?.message} hint='e.g. "USB-A 5 V 1 A"'>

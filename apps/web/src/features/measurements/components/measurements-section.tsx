@@ -1,7 +1,7 @@
 import { useMemo, useRef, useState, type KeyboardEvent } from 'react';
 import { toast } from 'sonner';
 import { Download } from 'lucide-react';
-import { MEASURED_QUANTITY, SI_UNIT, type MeasuredQuantity, type MeasurementDto, type TeardownDto } from '@splitcase/contracts';
+import { bareHint, MEASURED_QUANTITY, MEASUREMENT_FIELDS, measurementExample, SI_UNIT, type MeasuredQuantity, type MeasurementDto, type TeardownDto } from '@splitcase/contracts';
 import { Button } from '@/components/button';
 import { rowActionsColumn } from '@/components/row-actions';
 import { DataTable, type Column } from '@/components/data-table';
@@ -16,23 +16,9 @@ import { useDeleteMeasurement } from '../api/delete-measurement';
 import { measurementsCsvUrl, useMeasurements } from '../api/measurements';
 import { useUpdateMeasurement } from '../api/update-measurement';
 
-const EXAMPLE: Record<MeasuredQuantity, string> = {
-  voltage: '3.92 V',
-  current: '350 mA',
-  resistance: '3.02 Ω or 3R0',
-  capacitance: '100 nF',
-  inductance: '2.2 µH',
-  power: '4.4 W',
-  energy: '9.8 Wh',
-  capacity: '2620 mAh',
-  temperature: '45 °C',
-  'surface-temperature': '47.5 °C',
-  mass: '46 g',
-  length: '0.25 mm',
-  time: '10 min',
-  frequency: '20 kHz',
-  other: '1200 rpm',
-};
+/** The example each quantity's value field shows, and how a bare number is read: contracts' MEASUREMENT_FIELDS. */
+const example = (q: MeasuredQuantity) => measurementExample(q);
+const bareRule = (q: MeasuredQuantity) => (q === 'other' ? 'the number, then its unit' : bareHint(MEASUREMENT_FIELDS[q]));
 
 interface Draft {
   quantity: MeasuredQuantity;
@@ -169,7 +155,7 @@ function QuickEntry({ teardownId, gate, editing, onDoneEditing }: { teardownId: 
     setErrors({});
     setSaved(null);
     const local: Record<string, string> = {};
-    if (!draft.value.trim()) local.value = `Required: type the reading with its unit, e.g. ${EXAMPLE[draft.quantity]}`;
+    if (!draft.value.trim()) local.value = `Required: type the reading with its unit, e.g. ${example(draft.quantity)}`;
     if (!draft.subject.trim()) local.subject = 'Say what was measured';
     if (Object.keys(local).length) return setErrors(local);
     const body = {
@@ -242,7 +228,7 @@ function QuickEntry({ teardownId, gate, editing, onDoneEditing }: { teardownId: 
               ))}
             </select>
           </label>
-          {field('value', 'Value with unit', EXAMPLE[draft.quantity], { mono: true, ref: valueInput })}
+          {field('value', 'Value with unit', example(draft.quantity), { mono: true, ref: valueInput })}
           {field('subject', 'What was measured', 'Heater element, front')}
         </div>
         <div className="grid gap-3 sm:grid-cols-[minmax(0,1fr)_minmax(0,1fr)_8rem_auto]">
@@ -262,7 +248,9 @@ function QuickEntry({ teardownId, gate, editing, onDoneEditing }: { teardownId: 
         </div>
         {Object.entries(errors).map(([k, message]) => (
           <p key={k} id={`reading-${k}-error`} role="alert" className="text-sm text-brick-700">
-            <span className="font-medium">{k === 'value' ? 'Value' : k === 'subject' ? 'What was measured' : k === '_' ? 'Not saved' : k}:</span> {message}
+            {/* The server's messages about the value already start with the field's label. */}
+            {!(k === 'value' && message.startsWith('Value with unit')) && <span className="font-medium">{k === 'value' ? 'Value with unit' : k === 'subject' ? 'What was measured' : k === '_' ? 'Not saved' : k}: </span>}
+            {message}
           </p>
         ))}
         {saved && !Object.keys(errors).length && (
@@ -270,7 +258,11 @@ function QuickEntry({ teardownId, gate, editing, onDoneEditing }: { teardownId: 
             {saved}
           </p>
         )}
-        {!saved && !Object.keys(errors).length && <p className="text-xs text-graphite-500">Enter saves the reading and keeps the row ready for the next one; Esc {editing ? 'cancels the correction' : 'clears the value'}.</p>}
+        {!saved && !Object.keys(errors).length && (
+          <p className="text-xs text-graphite-500">
+            {MEASURED_QUANTITY.labels[draft.quantity]}: e.g. {example(draft.quantity)} · {bareRule(draft.quantity)}. Enter saves the reading and keeps the row ready for the next one; Esc {editing ? 'cancels the correction' : 'clears the value'}.
+          </p>
+        )}
       </div>
     </Card>
   );

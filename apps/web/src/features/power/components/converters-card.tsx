@@ -1,7 +1,7 @@
 import { useMemo, useState, type FormEvent } from 'react';
 import { toast } from 'sonner';
 import { Plus } from 'lucide-react';
-import { CONVERTER_ROLE, CONVERTER_TOPOLOGY, type ConverterDto, type ConverterRole, type ConverterTopology, type CreateConverterBody } from '@splitcase/contracts';
+import { CONVERTER_FIELDS, CONVERTER_ROLE, CONVERTER_TOPOLOGY, type ConverterDto, type ConverterRole, type ConverterTopology, type CreateConverterBody } from '@splitcase/contracts';
 import { Badge } from '@/components/badges';
 import { Button } from '@/components/button';
 import { rowActionsColumn } from '@/components/row-actions';
@@ -16,12 +16,13 @@ import { useDeleteConverter } from '../api/delete-converter';
 import { useUpdateConverter } from '../api/update-converter';
 import { QuantityField, TypedQuantity, typedOr } from './quantity-field';
 
+// Labels, placeholders and the bare-number rule of each field: contracts' CONVERTER_FIELDS.
 const QUANTITIES = [
-  { key: 'inputVolts', label: 'Input voltage', unit: 'V', placeholder: '5 V' },
-  { key: 'outputVolts', label: 'Output voltage', unit: 'V', placeholder: '4.2 V' },
-  { key: 'ratedCurrentAmps', label: 'Rated output current', unit: 'A', placeholder: '2 A' },
-  { key: 'chargeCurrentAmps', label: 'Charge current (charger)', unit: 'A', placeholder: '1 A' },
-  { key: 'efficiency', label: 'Efficiency', unit: '', placeholder: '88 %' },
+  { key: 'inputVolts', unit: 'V' },
+  { key: 'outputVolts', unit: 'V' },
+  { key: 'ratedCurrentAmps', unit: 'A' },
+  { key: 'chargeCurrentAmps', unit: 'A' },
+  { key: 'efficiency', unit: '' },
 ] as const;
 type QKey = (typeof QUANTITIES)[number]['key'];
 
@@ -38,7 +39,7 @@ const draftOf = (c: ConverterDto | null): Draft => ({
   topology: c?.topology ?? 'buck',
   role: c?.role ?? 'charge',
   efficiencySource: c?.efficiencySource ?? 'assumed',
-  q: Object.fromEntries(QUANTITIES.map((f) => [f.key, c ? typedOr(c.entered, f.key, c[f.key]) : ''])) as Record<QKey, string>,
+  q: Object.fromEntries(QUANTITIES.map((f) => [f.key, c ? typedOr(c.entered, f.key, c[f.key], CONVERTER_FIELDS[f.key]) : ''])) as Record<QKey, string>,
 });
 
 const shown = (c: ConverterDto, key: QKey, unit: string) => {
@@ -178,12 +179,11 @@ function ConverterForm({ teardownId, converter, gate, onDone }: { teardownId: nu
           <QuantityField
             key={f.key}
             name={f.key}
-            label={f.label}
+            field={CONVERTER_FIELDS[f.key]}
             unit={f.unit}
-            placeholder={f.placeholder}
             value={draft.q[f.key]}
             error={errors[f.key]}
-            saved={converter ? { value: converter[f.key], text: typedOr(converter.entered, f.key, converter[f.key]) } : undefined}
+            saved={converter ? { value: converter[f.key], text: typedOr(converter.entered, f.key, converter[f.key], CONVERTER_FIELDS[f.key]) } : undefined}
             onChange={(v) => setDraft({ ...draft, q: { ...draft.q, [f.key]: v } })}
           />
         ))}

@@ -1,7 +1,7 @@
 import { useMemo, useState, type FormEvent } from 'react';
 import { toast } from 'sonner';
 import { Plus } from 'lucide-react';
-import { CONNECTION, ELEMENT_MATERIAL, LOAD_KIND, SURFACE_MATERIAL, type Connection, type ConverterDto, type CreateLoadBody, type ElementMaterial, type LoadDto, type LoadKind, type SurfaceMaterial } from '@splitcase/contracts';
+import { CONNECTION, ELEMENT_MATERIAL, LOAD_FIELDS, LOAD_KIND, SURFACE_MATERIAL, type Connection, type ConverterDto, type CreateLoadBody, type ElementMaterial, type LoadDto, type LoadKind, type SurfaceMaterial } from '@splitcase/contracts';
 import { Button } from '@/components/button';
 import { rowActionsColumn } from '@/components/row-actions';
 import { DataTable, type Column } from '@/components/data-table';
@@ -15,15 +15,16 @@ import { useDeleteLoad } from '../api/delete-load';
 import { useUpdateLoad } from '../api/update-load';
 import { QuantityField, TypedQuantity, typedOr } from './quantity-field';
 
+// Labels, placeholders and the bare-number rule of each field: contracts' LOAD_FIELDS.
 const QUANTITIES = [
-  { key: 'resistanceOhms', label: 'Resistance (per element)', unit: 'Ω', placeholder: '3R0 or 3.0 Ω' },
-  { key: 'currentAmps', label: 'Current (per element)', unit: 'A', placeholder: '350 mA' },
-  { key: 'powerWatts', label: 'Power (per element)', unit: 'W', placeholder: '4.4 W' },
-  { key: 'supplyVolts', label: 'Supply voltage', unit: 'V', placeholder: '3.65 V' },
-  { key: 'count', label: 'Count', unit: '', placeholder: '2' },
-  { key: 'duty', label: 'Duty', unit: '', placeholder: '60 %' },
-  { key: 'heatedAreaM2', label: 'Heated area', unit: 'm²', placeholder: '27 cm²' },
-  { key: 'heatedMassKg', label: 'Heated mass', unit: 'kg', placeholder: '40 g' },
+  { key: 'resistanceOhms', unit: 'Ω' },
+  { key: 'currentAmps', unit: 'A' },
+  { key: 'powerWatts', unit: 'W' },
+  { key: 'supplyVolts', unit: 'V' },
+  { key: 'count', unit: '' },
+  { key: 'duty', unit: '' },
+  { key: 'heatedAreaM2', unit: 'm²' },
+  { key: 'heatedMassKg', unit: 'kg' },
 ] as const;
 type QKey = (typeof QUANTITIES)[number]['key'];
 
@@ -44,7 +45,7 @@ const draftOf = (l: LoadDto | null): Draft => ({
   converterId: l?.converterId ? String(l.converterId) : '',
   surfaceMaterial: l?.surfaceMaterial ?? '',
   elementMaterial: l?.elementMaterial ?? '',
-  q: Object.fromEntries(QUANTITIES.map((f) => [f.key, l ? typedOr(l.entered, f.key, l[f.key]) : f.key === 'count' || f.key === 'duty' ? '1' : ''])) as Record<QKey, string>,
+  q: Object.fromEntries(QUANTITIES.map((f) => [f.key, l ? typedOr(l.entered, f.key, l[f.key], LOAD_FIELDS[f.key]) : f.key === 'count' ? '1' : f.key === 'duty' ? '100 %' : ''])) as Record<QKey, string>,
 });
 
 const shown = (l: LoadDto, key: QKey, unit: string) => {
@@ -158,7 +159,7 @@ function LoadForm({ teardownId, load, converters, gate, onDone }: { teardownId: 
       elementMaterial: draft.elementMaterial || null,
       ...(Object.fromEntries(QUANTITIES.map((f) => [f.key, draft.q[f.key].trim() === '' ? null : draft.q[f.key]])) as Record<QKey, string | null>),
       count: draft.q.count.trim() || '1',
-      duty: draft.q.duty.trim() || '1',
+      duty: draft.q.duty.trim() || '100 %',
     };
     try {
       if (load) await update.mutateAsync({ teardownId, id: load.id, body, headers: gate.headers });
@@ -190,16 +191,15 @@ function LoadForm({ teardownId, load, converters, gate, onDone }: { teardownId: 
           <QuantityField
             key={f.key}
             name={f.key}
-            label={f.label}
+            field={LOAD_FIELDS[f.key]}
             unit={f.unit}
-            placeholder={f.placeholder}
             value={draft.q[f.key]}
             error={errors[f.key]}
-            saved={load ? { value: load[f.key], text: typedOr(load.entered, f.key, load[f.key]) } : undefined}
+            saved={load ? { value: load[f.key], text: typedOr(load.entered, f.key, load[f.key], LOAD_FIELDS[f.key]) } : undefined}
             onChange={(v) => setDraft({ ...draft, q: { ...draft.q, [f.key]: v } })}
           />
         ))}
-        <QuantityField name="count" label="Count" unit="" value={draft.q.count} error={errors.count} placeholder="2" onChange={(v) => setDraft({ ...draft, q: { ...draft.q, count: v } })} />
+        <QuantityField name="count" field={LOAD_FIELDS.count} unit="" value={draft.q.count} error={errors.count} onChange={(v) => setDraft({ ...draft, q: { ...draft.q, count: v } })} />
         <Field label="Connection" error={errors.connection}>
           {(p) => (
             <Select {...p} value={draft.connection} onChange={(e) => setDraft({ ...draft, connection: e.target.value as Connection })}>
@@ -207,7 +207,7 @@ function LoadForm({ teardownId, load, converters, gate, onDone }: { teardownId: 
             </Select>
           )}
         </Field>
-        <QuantityField name="duty" label="Duty" unit="" value={draft.q.duty} error={errors.duty} placeholder="60 %" onChange={(v) => setDraft({ ...draft, q: { ...draft.q, duty: v } })} />
+        <QuantityField name="duty" field={LOAD_FIELDS.duty} unit="" value={draft.q.duty} error={errors.duty} onChange={(v) => setDraft({ ...draft, q: { ...draft.q, duty: v } })} />
         <Field label="Fed through" error={errors.converterId}>
           {(p) => (
             <Select {...p} value={draft.converterId} onChange={(e) => setDraft({ ...draft, converterId: e.target.value })}>
@@ -222,12 +222,11 @@ function LoadForm({ teardownId, load, converters, gate, onDone }: { teardownId: 
         </Field>
         <QuantityField
           name="heatedAreaM2"
-          label="Heated area"
+          field={LOAD_FIELDS.heatedAreaM2}
           unit="m²"
           value={draft.q.heatedAreaM2}
           error={errors.heatedAreaM2}
-          placeholder="27 cm²"
-          saved={load ? { value: load.heatedAreaM2, text: typedOr(load.entered, 'heatedAreaM2', load.heatedAreaM2) } : undefined}
+          saved={load ? { value: load.heatedAreaM2, text: typedOr(load.entered, 'heatedAreaM2', load.heatedAreaM2, LOAD_FIELDS.heatedAreaM2) } : undefined}
           onChange={(v) => setDraft({ ...draft, q: { ...draft.q, heatedAreaM2: v } })}
         />
         <Field label="Surface material" error={errors.surfaceMaterial} hint="Sets the touch-temperature limit">
@@ -250,12 +249,11 @@ function LoadForm({ teardownId, load, converters, gate, onDone }: { teardownId: 
             </Field>
             <QuantityField
               name="heatedMassKg"
-              label="Heated mass"
+              field={LOAD_FIELDS.heatedMassKg}
               unit="kg"
               value={draft.q.heatedMassKg}
               error={errors.heatedMassKg}
-              placeholder="40 g"
-              saved={load ? { value: load.heatedMassKg, text: typedOr(load.entered, 'heatedMassKg', load.heatedMassKg) } : undefined}
+              saved={load ? { value: load.heatedMassKg, text: typedOr(load.entered, 'heatedMassKg', load.heatedMassKg, LOAD_FIELDS.heatedMassKg) } : undefined}
               onChange={(v) => setDraft({ ...draft, q: { ...draft.q, heatedMassKg: v } })}
             />
           </>

@@ -1,7 +1,7 @@
 import { useState, type FormEvent, type ReactNode } from 'react';
 import { toast } from 'sonner';
 import { Battery } from 'lucide-react';
-import { CHEMISTRY, JOINING, type Chemistry, type Joining, type PackDto } from '@splitcase/contracts';
+import { CHEMISTRY, INTERNAL_RESISTANCE_READING_FIELDS, JOINING, PACK_FIELDS, type Chemistry, type Joining, type PackDto } from '@splitcase/contracts';
 import { Button } from '@/components/button';
 import { Field, Input, Select, LabelledOptions, FormError } from '@/components/field';
 import { Card } from '@/components/page';
@@ -12,23 +12,24 @@ import { useDeletePack } from '../api/delete-pack';
 import { useSavePack } from '../api/save-pack';
 import { QuantityField, TypedQuantity, typedOr } from './quantity-field';
 
+// Labels, placeholders and the bare-number rule of each field: contracts' PACK_FIELDS.
 const QUANTITIES = [
-  { key: 'nominalVolts', label: 'Nominal voltage (per cell)', unit: 'V', placeholder: '3.7 V', pick: (p: PackDto) => p.nominalVolts },
-  { key: 'maxVolts', label: 'Charge voltage (per cell)', unit: 'V', placeholder: '4.2 V', pick: (p: PackDto) => p.maxVolts },
-  { key: 'capacityAh', label: 'Rated capacity (per cell)', unit: 'Ah', placeholder: '2700 mAh', pick: (p: PackDto) => p.capacityAh },
-  { key: 'measuredCapacityAh', label: 'Measured capacity (per cell)', unit: 'Ah', placeholder: '2620 mAh', pick: (p: PackDto) => p.measuredCapacityAh },
-  { key: 'series', label: 'Cells in series', unit: '', placeholder: '1', pick: (p: PackDto) => p.series },
-  { key: 'parallel', label: 'Cells in parallel', unit: '', placeholder: '1', pick: (p: PackDto) => p.parallel },
-  { key: 'massKg', label: 'Pack mass', unit: 'kg', placeholder: '46 g', pick: (p: PackDto) => p.massKg },
-  { key: 'internalResistanceOhms', label: 'Internal resistance (per cell, DC)', unit: 'Ω', placeholder: '50 mΩ', pick: (p: PackDto) => p.internalResistanceOhms },
+  { key: 'nominalVolts', unit: 'V', pick: (p: PackDto) => p.nominalVolts },
+  { key: 'maxVolts', unit: 'V', pick: (p: PackDto) => p.maxVolts },
+  { key: 'capacityAh', unit: 'Ah', pick: (p: PackDto) => p.capacityAh },
+  { key: 'measuredCapacityAh', unit: 'Ah', pick: (p: PackDto) => p.measuredCapacityAh },
+  { key: 'series', unit: '', pick: (p: PackDto) => p.series },
+  { key: 'parallel', unit: '', pick: (p: PackDto) => p.parallel },
+  { key: 'massKg', unit: 'kg', pick: (p: PackDto) => p.massKg },
+  { key: 'internalResistanceOhms', unit: 'Ω', pick: (p: PackDto) => p.internalResistanceOhms },
 ] as const;
 
 /** The two readings of the DC method (IEC 61960-3): the cell voltage at a low and at a high current. */
 const READINGS = [
-  { key: 'lowAmps', label: 'Low current I₁', placeholder: '0.6 A' },
-  { key: 'lowVolts', label: 'Voltage at I₁', placeholder: '3.912 V' },
-  { key: 'highAmps', label: 'High current I₂', placeholder: '3 A' },
-  { key: 'highVolts', label: 'Voltage at I₂ (after 1 s)', placeholder: '3.792 V' },
+  { key: 'lowAmps' },
+  { key: 'lowVolts' },
+  { key: 'highAmps' },
+  { key: 'highVolts' },
 ] as const;
 type RKey = (typeof READINGS)[number]['key'];
 type QKey = (typeof QUANTITIES)[number]['key'];
@@ -47,7 +48,7 @@ const draftOf = (p: PackDto | null): Draft => ({
   cellFormat: p?.cellFormat ?? '',
   protection: p?.protection ?? false,
   joining: p?.joining ?? '',
-  q: Object.fromEntries(QUANTITIES.map((f) => [f.key, p ? typedOr(p.entered, f.key, f.pick(p)) : f.key === 'series' || f.key === 'parallel' ? '1' : ''])) as Record<QKey, string>,
+  q: Object.fromEntries(QUANTITIES.map((f) => [f.key, p ? typedOr(p.entered, f.key, f.pick(p), PACK_FIELDS[f.key]) : f.key === 'series' || f.key === 'parallel' ? '1' : ''])) as Record<QKey, string>,
   readings: Object.fromEntries(READINGS.map((r) => [r.key, p?.internalResistanceReadings ? String(p.internalResistanceReadings[r.key]) : ''])) as Record<RKey, string>,
 });
 
@@ -154,12 +155,11 @@ export function PackCard({ teardownId, pack, gate }: { teardownId: number; pack:
             <QuantityField
               key={f.key}
               name={f.key}
-              label={f.label}
+              field={PACK_FIELDS[f.key]}
               unit={f.unit}
-              placeholder={f.placeholder}
               value={draft.q[f.key]}
               error={errors[f.key]}
-              saved={pack ? { value: f.pick(pack), text: typedOr(pack.entered, f.key, f.pick(pack)) } : undefined}
+              saved={pack ? { value: f.pick(pack), text: typedOr(pack.entered, f.key, f.pick(pack), PACK_FIELDS[f.key]) } : undefined}
               onChange={(v) => setDraft({ ...draft, q: { ...draft.q, [f.key]: v } })}
             />
           ))}
@@ -173,9 +173,8 @@ export function PackCard({ teardownId, pack, gate }: { teardownId: number; pack:
                 <QuantityField
                   key={r.key}
                   name={`internalResistanceReadings.${r.key}`}
-                  label={r.label}
+                  field={INTERNAL_RESISTANCE_READING_FIELDS[r.key]}
                   unit=""
-                  placeholder={r.placeholder}
                   value={draft.readings[r.key]}
                   error={errors[`internalResistanceReadings.${r.key}`]}
                   onChange={(v) => setDraft({ ...draft, readings: { ...draft.readings, [r.key]: v } })}
@@ -192,7 +191,7 @@ export function PackCard({ teardownId, pack, gate }: { teardownId: number; pack:
           <Button type="submit" variant="primary" busy={save.isPending}>
             {pack ? 'Save pack' : 'Record pack'}
           </Button>
-          <p className="text-xs text-graphite-500">Type values with their units; plain numbers are read in V, Ah and kg.</p>
+          <p className="text-xs text-graphite-500">Type values with their units; a plain number is read in the unit of the field’s example (46 is 46 g).</p>
         </div>
       </form>
     </Card>
@@ -205,7 +204,7 @@ function PackSummary({ pack }: { pack: PackDto }) {
     ['Cell format', pack.cellFormat ?? '—'],
     ['Arrangement', `${pack.series}S${pack.parallel}P (${pack.series * pack.parallel} cell${pack.series * pack.parallel === 1 ? '' : 's'})`],
     ...QUANTITIES.filter((f) => f.key !== 'series' && f.key !== 'parallel').map((f): [string, ReactNode] => [
-      f.label,
+      PACK_FIELDS[f.key].label,
       <TypedQuantity key={f.key} typed={pack.entered[f.key]} si={formatStored(f.pick(pack), f.unit)} />,
     ]),
     ...(pack.internalResistanceReadings

@@ -2,13 +2,13 @@ import { CHEMISTRY, CONNECTION, CONVERTER_ROLE, CONVERTER_TOPOLOGY, JOINING, LOA
 import { formatPercent, formatStored } from '@/lib/format';
 import { Facts, NoneRecorded, ReportSubheading, ReportTable } from './report-layout';
 
-/** What the engineer typed ("2700 mAh") when there is one, else the stored SI value formatted. */
-const shown = (entered: Record<string, string>, key: string, value: number | null | undefined, unit: string) => entered[key] ?? formatStored(value, unit);
-
 /** A duty in a mode as a percentage ("50 %", "33.3 %"). */
 const dutyText = (duty: number) => formatPercent(duty, Number.isInteger(Math.round(duty * 1000) / 10) ? 0 : 1);
 
-/** The pack, the loads, the operating modes and the converters as recorded. */
+/**
+ * The pack, the loads, the operating modes and the converters as recorded, each value normalised from
+ * its stored SI value with a sensible prefix ("2.70 Ah", "46.0 g", "60 %"), not the text typed ("2700mah", "46").
+ */
 export function ReportPower({ power }: { power: PowerSystemDto }) {
   const { pack, loads, converters, modes } = power;
   if (!pack && !loads.length && !converters.length && !modes.length) return <NoneRecorded>No power system recorded.</NoneRecorded>;
@@ -24,11 +24,11 @@ export function ReportPower({ power }: { power: PowerSystemDto }) {
             { label: 'Cell format', value: pack.cellFormat ?? '—' },
             { label: 'Configuration', value: <span className="num">{`${pack.series}S${pack.parallel}P (${pack.series * pack.parallel} cell${pack.series * pack.parallel === 1 ? '' : 's'})`}</span> },
             { label: 'Protection', value: pack.protection ? 'Protection circuit present' : 'No protection circuit' },
-            { label: 'Cell nominal', value: <span className="num">{shown(pack.entered, 'nominalVolts', pack.nominalVolts, 'V')}</span> },
-            { label: 'Cell maximum', value: <span className="num">{shown(pack.entered, 'maxVolts', pack.maxVolts, 'V')}</span> },
-            { label: 'Cell rated', value: <span className="num">{shown(pack.entered, 'capacityAh', pack.capacityAh, 'Ah')}</span> },
-            { label: 'Cell measured', value: <span className="num">{shown(pack.entered, 'measuredCapacityAh', pack.measuredCapacityAh, 'Ah')}</span> },
-            { label: 'Pack mass', value: <span className="num">{shown(pack.entered, 'massKg', pack.massKg, 'kg')}</span> },
+            { label: 'Cell nominal', value: <span className="num">{formatStored(pack.nominalVolts, 'V')}</span> },
+            { label: 'Cell maximum', value: <span className="num">{formatStored(pack.maxVolts, 'V')}</span> },
+            { label: 'Cell rated', value: <span className="num">{formatStored(pack.capacityAh, 'Ah')}</span> },
+            { label: 'Cell measured', value: <span className="num">{formatStored(pack.measuredCapacityAh, 'Ah')}</span> },
+            { label: 'Pack mass', value: <span className="num">{formatStored(pack.massKg, 'kg')}</span> },
             { label: 'Joining', value: pack.joining ? JOINING.labels[pack.joining] : '—' },
           ]}
         />
@@ -45,9 +45,9 @@ export function ReportPower({ power }: { power: PowerSystemDto }) {
               <td>{LOAD_KIND.labels[l.kind]}</td>
               <td className="num">
                 {[
-                  l.resistanceOhms !== null ? shown(l.entered, 'resistanceOhms', l.resistanceOhms, 'Ω') : null,
-                  l.currentAmps !== null ? shown(l.entered, 'currentAmps', l.currentAmps, 'A') : null,
-                  l.powerWatts !== null ? shown(l.entered, 'powerWatts', l.powerWatts, 'W') : null,
+                  l.resistanceOhms !== null ? formatStored(l.resistanceOhms, 'Ω') : null,
+                  l.currentAmps !== null ? formatStored(l.currentAmps, 'A') : null,
+                  l.powerWatts !== null ? formatStored(l.powerWatts, 'W') : null,
                 ]
                   .filter(Boolean)
                   .join(', ') || '—'}
@@ -56,11 +56,11 @@ export function ReportPower({ power }: { power: PowerSystemDto }) {
                 {l.count}
                 {l.count > 1 ? ` in ${CONNECTION.labels[l.connection].toLowerCase()}` : ''}
               </td>
-              <td className="num">{l.entered.duty ?? formatPercent(l.duty, 0)}</td>
-              <td className="num">{l.supplyVolts !== null ? shown(l.entered, 'supplyVolts', l.supplyVolts, 'V') : 'from its source'}</td>
+              <td className="num">{formatPercent(l.duty, 0)}</td>
+              <td className="num">{l.supplyVolts !== null ? formatStored(l.supplyVolts, 'V') : 'from its source'}</td>
               <td>{l.converterId ? (converterName.get(l.converterId) ?? 'a converter') : 'the pack'}</td>
               <td className="num">
-                {l.heatedAreaM2 !== null ? shown(l.entered, 'heatedAreaM2', l.heatedAreaM2, 'm²') : '—'}
+                {l.heatedAreaM2 !== null ? formatStored(l.heatedAreaM2, 'm²') : '—'}
                 {l.surfaceMaterial ? `, ${SURFACE_MATERIAL.labels[l.surfaceMaterial].toLowerCase()}` : ''}
               </td>
             </tr>
@@ -86,7 +86,7 @@ export function ReportPower({ power }: { power: PowerSystemDto }) {
                     ))
                   : 'No loads'}
               </td>
-              <td className="num">{m.quiescentAmps !== null ? shown(m.entered, 'quiescentAmps', m.quiescentAmps, 'A') : '—'}</td>
+              <td className="num">{m.quiescentAmps !== null ? formatStored(m.quiescentAmps, 'A') : '—'}</td>
             </tr>
           ))}
         </ReportTable>
@@ -103,12 +103,12 @@ export function ReportPower({ power }: { power: PowerSystemDto }) {
               <td>{CONVERTER_TOPOLOGY.labels[c.topology]}</td>
               <td>{CONVERTER_ROLE.labels[c.role]}</td>
               <td className="num whitespace-nowrap">
-                {shown(c.entered, 'inputVolts', c.inputVolts, 'V')} → {shown(c.entered, 'outputVolts', c.outputVolts, 'V')}
+                {formatStored(c.inputVolts, 'V')} → {formatStored(c.outputVolts, 'V')}
               </td>
-              <td className="num">{c.ratedCurrentAmps !== null ? shown(c.entered, 'ratedCurrentAmps', c.ratedCurrentAmps, 'A') : '—'}</td>
-              <td className="num">{c.chargeCurrentAmps !== null ? shown(c.entered, 'chargeCurrentAmps', c.chargeCurrentAmps, 'A') : '—'}</td>
+              <td className="num">{c.ratedCurrentAmps !== null ? formatStored(c.ratedCurrentAmps, 'A') : '—'}</td>
+              <td className="num">{c.chargeCurrentAmps !== null ? formatStored(c.chargeCurrentAmps, 'A') : '—'}</td>
               <td className="num whitespace-nowrap">
-                {c.efficiency !== null ? (c.entered.efficiency ?? formatPercent(c.efficiency, 0)) : '—'} ({c.efficiencySource})
+                {c.efficiency !== null ? formatPercent(c.efficiency, 0) : '—'} ({c.efficiencySource})
               </td>
             </tr>
           ))}

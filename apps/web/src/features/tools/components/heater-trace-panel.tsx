@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { TRACE_LAYERS, TRACE_LAYER_LABELS, type HeaterTraceToolBody } from '@splitcase/contracts';
+import { bareHint, HEATER_TOOL_FIELDS, TRACE_LAYERS, TRACE_LAYER_LABELS, type HeaterTraceToolBody } from '@splitcase/contracts';
 import { Button } from '@/components/button';
 import { Caution } from '@/components/caution';
 import { InlineError } from '@/components/field';
@@ -37,16 +37,21 @@ const EXAMPLE: Record<TextFields, string> = {
   area: '24 cm²',
 };
 
-const FIELDS: { name: TextFields; label: string; placeholder: string; hint: string }[] = [
-  { name: 'length', label: 'Trace length', placeholder: '100 mm', hint: 'Along the trace, end to end.' },
-  { name: 'width', label: 'Trace width', placeholder: '0.254 mm or 10 mil', hint: 'mm, µm or mil.' },
-  { name: 'thickness', label: 'Copper thickness', placeholder: '35 µm or 1 oz', hint: 'A thickness, or a copper weight in oz/ft² (1 oz = 35 µm).' },
-  { name: 'temperature', label: 'Trace temperature', placeholder: '20 °C', hint: 'For the resistance; 20 °C if blank.' },
-  { name: 'supplyVoltage', label: 'Supply voltage', placeholder: '3.65 V', hint: 'Across the trace, for power and current.' },
-  { name: 'current', label: 'Current', placeholder: '1.2 A', hint: 'Optional: the design current, if not the supply’s.' },
-  { name: 'temperatureRise', label: 'Allowed rise (IPC-2221)', placeholder: '10 °C', hint: '10 °C if blank.' },
-  { name: 'area', label: 'Heated area', placeholder: '24 cm²', hint: 'For power density and the surface estimate.' },
-];
+/** What each field is for; label, placeholder and the bare-number rule come from contracts' HEATER_TOOL_FIELDS. */
+const HINT: Record<TextFields, string> = {
+  length: 'Along the trace, end to end',
+  width: 'mm, µm or mil',
+  thickness: 'A thickness, or a copper weight in oz/ft² (1 oz = 35 µm)',
+  temperature: 'For the resistance; 20 °C if blank',
+  supplyVoltage: 'Across the trace, for power and current',
+  current: 'Optional: the design current, if not the supply’s',
+  temperatureRise: '10 °C if blank',
+  area: 'For power density and the surface estimate',
+};
+const FIELDS = (Object.keys(HINT) as TextFields[]).map((name) => {
+  const f = HEATER_TOOL_FIELDS[name];
+  return { name, label: f.label, placeholder: f.placeholder, hint: `${HINT[name]} · ${bareHint(f)}.` };
+});
 
 /** Heater-trace calculator: resistance, power, IPC-2221 rating and width, power density. */
 export function HeaterTracePanel() {

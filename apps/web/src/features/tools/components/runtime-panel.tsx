@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { CHEMISTRY, type Chemistry, type RuntimeToolBody } from '@splitcase/contracts';
+import { bareHint, CHEMISTRY, RUNTIME_TOOL_FIELDS, type Chemistry, type RuntimeToolBody } from '@splitcase/contracts';
 import { Button } from '@/components/button';
 import { Caution } from '@/components/caution';
 import { Field, Select, InlineError } from '@/components/field';
@@ -50,21 +50,27 @@ const LOAD_FIELDS: Record<LoadMode, TextFields[]> = {
   current: ['loadCurrent'],
 };
 
-type FieldInfo = { label: string; placeholder: string; hint: string };
-const INFO: Record<TextFields, FieldInfo> = {
-  cellNominalVoltage: { label: 'Cell nominal voltage', placeholder: '3.7 V', hint: 'As on the cell label.' },
-  cellCapacity: { label: 'Cell capacity', placeholder: '2700 mAh', hint: 'Rated, per cell.' },
-  series: { label: 'Cells in series', placeholder: '1', hint: '1 if blank.' },
-  parallel: { label: 'Cells in parallel', placeholder: '1', hint: '1 if blank.' },
-  loadPower: { label: 'Load power', placeholder: '9 W', hint: 'While the load is on.' },
-  loadResistance: { label: 'Load resistance', placeholder: '3R0', hint: 'Element or load, e.g. 3R0 or 1.5 Ω.' },
-  supplyVoltage: { label: 'Voltage across the load', placeholder: '3.65 V', hint: 'The cell voltage if fed directly.' },
-  loadCurrent: { label: 'Current from the pack', placeholder: '350 mA', hint: 'As measured at the pack.' },
-  efficiency: { label: 'Converter efficiency', placeholder: '90 %', hint: '1 (no converter) if blank.' },
-  usableFraction: { label: 'Usable fraction', placeholder: '95 %', hint: 'Share of the rated capacity used; 1 if blank.' },
-  duty: { label: 'PWM duty', placeholder: '60 %', hint: 'Share of time the load is on; 1 if blank.' },
-  cellMass: { label: 'Mass of one cell', placeholder: '46 g', hint: 'Optional: checks the label against the mass.' },
+/** What each field is for; label, placeholder and the bare-number rule come from contracts' RUNTIME_TOOL_FIELDS. */
+const HINT: Record<TextFields, string> = {
+  cellNominalVoltage: 'As on the cell label',
+  cellCapacity: 'Rated, per cell',
+  series: '1 if blank',
+  parallel: '1 if blank',
+  loadPower: 'While the load is on',
+  loadResistance: 'Element or load, e.g. 3R0 or 1.5 Ω',
+  supplyVoltage: 'The cell voltage if fed directly',
+  loadCurrent: 'As measured at the pack',
+  efficiency: '100 % (no converter) if blank',
+  usableFraction: 'Share of the rated capacity used; 100 % if blank',
+  duty: 'Share of time the load is on; 100 % if blank',
+  cellMass: 'Optional: checks the label against the mass',
 };
+const INFO = Object.fromEntries(
+  (Object.keys(HINT) as TextFields[]).map((k) => {
+    const f = RUNTIME_TOOL_FIELDS[k];
+    return [k, { label: f.label, placeholder: f.placeholder, hint: `${HINT[k]} · ${bareHint(f)}.` }];
+  }),
+) as Record<TextFields, { label: string; placeholder: string; hint: string }>;
 
 const LITHIUM: readonly Chemistry[] = ['li-ion', 'li-po', 'lifepo4', 'lto'];
 
