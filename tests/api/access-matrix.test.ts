@@ -69,6 +69,7 @@ function urlFor(path: string, method: string, rec: TeardownRecords, lineup: numb
     if (name === 'findingId') return String(rec.finding);
     if (name === 'loadId') return String(rec.load);
     if (name === 'converterId') return String(rec.converter);
+    if (name === 'modeId') return String(rec.mode);
     if (path.startsWith('/api/teardowns/')) return String(rec.teardown);
     if (path.startsWith('/api/photos/')) return String(rec.photo);
     if (path.startsWith('/api/runs/')) return String(rec.run);
@@ -127,6 +128,9 @@ describe('authorization matrix (tests/api/access-matrix.txt)', () => {
   });
 });
 
+/** Reads that answer only for a record of one kind (400 otherwise), with that kind. */
+const NEEDS_KIND: Record<string, string> = { 'GET /api/teardowns/:id/loads/:loadId/duty-for-target': 'a heater with a heated area' };
+
 describe('object-level checks', () => {
   const routes = allRoutes({ env: {} } as never, 'test');
 
@@ -136,7 +140,10 @@ describe('object-level checks', () => {
     for (const r of reads) {
       const url = urlFor(r.spec.path, 'get', d.draft, d.lineups.draft);
       expect((await agents.viewer.get(url)).status, `viewer GET ${url} (${keyOf(r)})`).toBe(404);
-      expect((await agents.lead.get(url)).status, `lead GET ${url} (${keyOf(r)})`).toBe(200);
+      const lead = (await agents.lead.get(url)).status;
+      // A read that needs a record of a kind the demo draft lacks answers 400 for it: never 404 for a reader.
+      if (NEEDS_KIND[keyOf(r)]) expect([200, 400], `lead GET ${url} (${keyOf(r)}; needs ${NEEDS_KIND[keyOf(r)]})`).toContain(lead);
+      else expect(lead, `lead GET ${url} (${keyOf(r)})`).toBe(200);
     }
   });
 

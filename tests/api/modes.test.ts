@@ -111,7 +111,7 @@ describe('POST/PATCH/DELETE /api/teardowns/:id/modes (the contract)', () => {
     expect(await bad({ loads: [] })).toHaveProperty('name');
     expect(await bad({ name: 'X', loads: [{ loadId: 999999, duty: 1 }] })).toEqual({ 'loads.0.loadId': 'Choose a load of this teardown' });
     expect(await bad({ name: 'X', loads: [{ loadId: other.heater, duty: 1 }] })).toEqual({ 'loads.0.loadId': 'Choose a load of this teardown' });
-    expect((await bad({ name: 'X', loads: [{ loadId: td.heater, duty: '150 %' }] }))['loads.0.duty']).toMatch(/At most 1/);
+    expect((await bad({ name: 'X', loads: [{ loadId: td.heater, duty: '150 %' }] }))['loads.0.duty']).toMatch(/^Duty: at most 100 %/);
     expect((await bad({ name: 'X', loads: [{ loadId: td.heater, duty: 1 }, { loadId: td.heater, duty: 0.5 }] }))['loads.1.loadId']).toMatch(/already in the mode/);
     expect(await bad({ name: 'X', loads: [], quiescentAmps: '5 V' })).toHaveProperty('quiescentAmps');
     await eng.post(`/api/teardowns/${td.id}/modes`, { name: 'High', loads: [{ loadId: td.heater, duty: 1 }] }).expect(201);

@@ -52,7 +52,17 @@ const cases = (): Record<string, PatchCase> => ({
   'PATCH /api/settings': {
     url: () => '/api/settings',
     read: async (a) => (await get(a, '/api/settings')).settings,
-    values: { capacityWarnFraction: 0.8, reportingCurrency: 'EUR', defaultContactSeconds: 30, sessionMaxHours: 24, sessionIdleMinutes: 90 },
+    values: {
+      capacityWarnFraction: 0.8,
+      reportingCurrency: 'EUR',
+      defaultContactSeconds: 30,
+      contactSecondsByCategory: { 'pocket-heater': 900 },
+      usableFraction: 0.85,
+      cutoffDebounceSeconds: 8,
+      salesTaxByCurrency: { EUR: 0.19 },
+      sessionMaxHours: 24,
+      sessionIdleMinutes: 90,
+    },
   },
   'PATCH /api/users/:id': {
     url: () => `/api/users/${d.users.engineer2}`,
@@ -75,6 +85,7 @@ const cases = (): Record<string, PatchCase> => ({
       category: 'usb-fan',
       currency: 'EUR',
       retailPrice: 12.5,
+      salesTaxRate: '19 %',
       priceSeenOn: '2026-02-03',
       whereBought: 'A walk-in shop',
       claimCapacityAh: '4321 mAh',
@@ -141,7 +152,14 @@ const cases = (): Record<string, PatchCase> => ({
       converterId: null,
       heatedAreaM2: 0.0004,
       surfaceMaterial: 'plastic',
+      elementMaterial: 'copper',
+      heatedMassKg: '35 g',
     },
+  },
+  'PATCH /api/teardowns/:id/modes/:modeId': {
+    url: () => `/api/teardowns/${td()}/modes/${d.draft.mode}`,
+    read: async (a) => found((await get(a, `/api/teardowns/${td()}/modes`)).modes, d.draft.mode),
+    values: { name: 'Mode from the PATCH walk', note: 'Noted by the walk', loads: [{ loadId: d.draft.load, duty: '35 %' }], quiescentAmps: '25 µA' },
   },
   'PATCH /api/teardowns/:id/converters/:converterId': {
     url: () => `/api/teardowns/${td()}/converters/${d.draft.converter}`,
@@ -173,7 +191,7 @@ const cases = (): Record<string, PatchCase> => ({
   'PATCH /api/lineups/:id': {
     url: () => `/api/lineups/${d.lineups.draft}`,
     read: async (a) => (await get(a, `/api/lineups/${d.lineups.draft}`)).lineup,
-    values: { name: 'Lineup from the PATCH walk', description: 'Described by the walk', currency: 'EUR', weights: { packWh: 4 }, deviceIds: [d.draft.device, d.published.device], status: 'published' },
+    values: { name: 'Lineup from the PATCH walk', description: 'Described by the walk', currency: 'EUR', weights: { packWh: 4 }, mode: { rule: 'named', name: 'High' }, deviceIds: [d.draft.device, d.published.device], status: 'published' },
     notSent: ['version'],
     derived: { deviceIds: ['devices', 'hiddenDevices'], status: ['publishedAt', 'publishedBy', 'permissions'] },
   },

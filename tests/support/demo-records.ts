@@ -10,6 +10,7 @@ export interface TeardownRecords {
   part: number | null;
   finding: number | null;
   load: number | null;
+  mode: number | null;
   converter: number | null;
   measurement: number | null;
   run: number | null;
@@ -42,7 +43,9 @@ async function recordsOf(t: TestApp, teardown: number, device: number): Promise<
     callout: await first(t, 'select c.id from callouts c join photos p on p.id = c.photo_id where p.teardown_id = ? order by c.id limit 1', [teardown]),
     part: await by('parts'),
     finding: await by('findings'),
-    load: await by('loads'),
+    // A heater with its heated area first: the routes on a load (duty for a target) need one.
+    load: await first(t, "select id from loads where teardown_id = ? order by (kind = 'heater' and heated_area_m2 is not null) desc, id limit 1", [teardown]),
+    mode: await by('operating_modes'),
     converter: await by('converters'),
     measurement: await by('measurements'),
     run: await by('bench_runs'),

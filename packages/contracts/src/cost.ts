@@ -97,7 +97,7 @@ export type PartPriceBody = z.input<typeof partPriceBody>;
  * text ("5k", "$0.12", "0,12 €") or given as numbers (pieces; an amount in `currency`). The server reads
  * the text with the one unit reader, then checks the breaks as `partPriceBody` does.
  */
-const typedAmount = z.union([z.number(), z.string().trim().max(40, 'At most 40 characters')], { error: 'Enter a number' });
+const typedAmount = z.union([z.number(), safeString().trim().max(40, 'At most 40 characters')], { error: 'Enter a number' });
 export const setPartPriceBody = partPriceBody.extend({
   breaks: z
     .array(z.object({ minQty: typedAmount, unitPrice: typedAmount }))

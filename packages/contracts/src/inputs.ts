@@ -39,7 +39,7 @@ export const quantityInput = z
  * beside it. The server reads it with the currency; '' or null clears it.
  */
 export const priceInput = z
-  .union([z.number(), z.string().trim().max(40, 'At most 40 characters').regex(/^$|\d/, 'Enter an amount such as 24.99'), z.null()])
+  .union([z.number(), safeString().trim().max(40, 'At most 40 characters').regex(/^$|\d/, 'Enter an amount such as 24.99'), z.null()])
   .optional()
   .transform((v) => (v === '' ? null : v));
 
