@@ -3,7 +3,7 @@
 // asks the person first and retries with the header; every feature's teardown mutations use it:
 //
 //   mutationFn: (body) => withUnpublishConfirm((opts) => api.post(`/api/teardowns/${id}/parts`, body, opts))
-import { CONFIRM_UNPUBLISH_HEADER } from '@splitcase/contracts';
+import { CONFIRM_UNPUBLISH_HEADER, type TeardownDto } from '@splitcase/contracts';
 import { ApiError, type RequestOptions } from './api-client';
 import { confirmDialog } from './confirm';
 
@@ -21,6 +21,15 @@ export function isUnpublishRefusal(err: unknown): boolean {
 
 export const isUnpublishCancelled = (err: unknown): err is UnpublishCancelled => err instanceof UnpublishCancelled;
 
+const UNPUBLISH_DIALOG = {
+  title: 'Move this teardown back to draft?',
+  message: 'It is published. Saving this change moves it back to draft, and a lead will need to approve it again before viewers see it.',
+  confirmLabel: 'Save and move to draft',
+  cancelLabel: 'Keep it published',
+  tone: 'danger',
+} as const;
+const CONFIRMED: Pick<RequestOptions, 'headers'> = { headers: { [CONFIRM_UNPUBLISH_HEADER]: 'yes' } };
+
 /**
  * Run a teardown write; if the teardown is published, ask whether to move it back to draft and, on
  * yes, run it again with the confirm header. On no, rejects with UnpublishCancelled.
@@ -30,16 +39,20 @@ export async function withUnpublishConfirm<T>(run: (opts: Pick<RequestOptions, '
     return await run({});
   } catch (err) {
     if (!isUnpublishRefusal(err)) throw err;
-    const ok = await confirmDialog({
-      title: 'Move this teardown back to draft?',
-      message: 'It is published. Saving this change moves it back to draft, and a lead will need to approve it again before viewers see it.',
-      confirmLabel: 'Save and move to draft',
-      cancelLabel: 'Keep it published',
-      tone: 'danger',
-    });
-    if (!ok) throw new UnpublishCancelled();
-    return run({ headers: { [CONFIRM_UNPUBLISH_HEADER]: 'yes' } });
+    if (!(await confirmDialog(UNPUBLISH_DIALOG))) throw new UnpublishCancelled();
+    return run(CONFIRMED);
   }
+}
+
+/**
+ * For a write that cannot simply be tried again (an upload): when the teardown is published, ask
+ * first, with the same dialog. Resolves to the request options to send; on no, rejects with
+ * UnpublishCancelled.
+ */
+export async function confirmUnpublishFirst(teardown: Pick<TeardownDto, 'status'>): Promise<Pick<RequestOptions, 'headers'>> {
+  if (teardown.status !== 'published') return {};
+  if (!(await confirmDialog(UNPUBLISH_DIALOG))) throw new UnpublishCancelled();
+  return CONFIRMED;
 }
 
 /** The message to show for a failed mutation, or null when the person cancelled on purpose. */
