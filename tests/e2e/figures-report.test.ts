@@ -94,7 +94,9 @@ describe('printable report: figures by operating mode', () => {
       if (m.note) expect(text).toContain(m.note);
       for (const l of m.loads) expect(text).toContain(power.loads.find((x) => x.id === l.loadId)!.label);
       if (!m.loads.length) expect(text).toContain('No loads');
-      if (m.quiescentAmps !== null) expect(text).toContain(m.entered.quiescentAmps ?? 'A');
+      // The report shows stored values normalised with a prefix, three significant figures (20 µA → "20.0 µA").
+      if (m.quiescentAmps !== null && m.quiescentAmps < 1e-3) expect(text).toContain(`${(m.quiescentAmps * 1e6).toPrecision(3)} µA`);
+      else if (m.quiescentAmps !== null) expect(text).toMatch(/\d A/);
     }
     expect(await axeProblems(page, '[data-testid="report"]')).toEqual([]);
 

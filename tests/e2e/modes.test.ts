@@ -62,7 +62,12 @@ describe('operating modes', () => {
     // Power bank and standby.
     await card.getByRole('button', { name: 'Add mode' }).click();
     await card.getByLabel('Name of the new mode').fill('Power bank');
+    // A bare "1" could be 1 % or 100 %: refused, naming the field and the unit asked for; nothing saved.
     await card.getByLabel('Duty of USB-A port in the new mode').fill('1');
+    await card.getByLabel('Duty of USB-A port in the new mode').press('Enter');
+    await card.getByText('Duty: add a unit, e.g. 60 %').waitFor();
+    await expect(card.locator('tr[data-mode="Power bank"]').count()).resolves.toBe(0);
+    await card.getByLabel('Duty of USB-A port in the new mode').fill('100 %');
     await card.getByLabel('Duty of USB-A port in the new mode').press('Enter');
     await card.locator('tr[data-mode="Power bank"]').waitFor();
     await card.getByRole('button', { name: 'Add mode' }).click();
@@ -75,7 +80,7 @@ describe('operating modes', () => {
     await card.getByRole('button', { name: 'Edit mode Low' }).click();
     await card.getByLabel('Duty of Heater pads in Low').fill('150 %');
     await card.getByLabel('Duty of Heater pads in Low').press('Enter');
-    await expect.poll(() => card.getByText(/At most 1/).count(), { timeout: 10_000 }).toBe(1);
+    await expect.poll(() => card.getByText('Duty: at most 100 %').count(), { timeout: 10_000 }).toBe(1);
     await card.getByLabel('Duty of Heater pads in Low').press('Escape');
 
     // The figures per mode [C: REFERENCES §3, §11]: high 8.88 W for 9.99 Wh × 0.9 ÷ 8.881667 W = 1.01 h;
