@@ -63,7 +63,7 @@ export default defineConfig({
         test: {
           name: 'web',
           root: here('.'),
-          include: ['apps/web/src/**/*.test.ts'],
+          include: ['apps/web/src/**/*.test.ts', 'tests/lint/**/*.test.ts'],
           environment: 'node',
         },
       },

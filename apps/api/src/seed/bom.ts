@@ -4,8 +4,7 @@
 import type { MeasuredQuantity, MountType, PartCategory } from '@splitcase/contracts';
 import { MeasurementSchema } from '../modules/measurements/measurement.entity';
 import { readMeasuredValue } from '../modules/measurements/service';
-import { PartSchema, type Part } from '../modules/parts/part.entity';
-import { applyPartValues, defaultMount } from '../modules/parts/service';
+import { defaultMount, newPart } from '../modules/parts/service';
 import { ConverterSchema, type Converter } from '../modules/power/converter.entity';
 import { LoadSchema, type Load } from '../modules/power/load.entity';
 import { PackSchema } from '../modules/power/pack.entity';
@@ -199,8 +198,7 @@ async function seedTeardownBom(ctx: SeedContext, d: DemoDevice, teardownId: numb
   const teardown = await em.findOneOrFail(TeardownSchema, { id: teardownId }, { populate: ['engineer'] });
 
   demoParts(d).forEach((line, i) => {
-    const part = em.create(PartSchema, { teardown, position: i + 1 } as never) as Part;
-    applyPartValues(part, {
+    newPart(em, teardown, i + 1, {
       designators: line.designators || null,
       category: line.category,
       description: line.description,

@@ -2,8 +2,9 @@ import { useRef } from 'react';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { User } from '@splitcase/contracts';
 import { api, ApiError } from '@/lib/api-client';
+import { rootKeys } from '@/lib/query-keys';
 
-export const meKey = ['auth', 'me'] as const;
+export const meKey = [...rootKeys.auth, 'me'] as const;
 
 /** The signed-in user, or null when signed out. */
 export async function getMe(): Promise<User | null> {

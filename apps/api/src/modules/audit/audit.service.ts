@@ -44,5 +44,5 @@ export function recordAudit(
     scopeId: entry.scope ? String(entry.scope.id) : null,
     summary: entry.summary.slice(0, 500),
     changes: entry.changes && Object.keys(entry.changes).length ? entry.changes : null,
-  } as never);
+  });
 }

@@ -147,7 +147,7 @@ export function authRoutes(deps: AppDeps): RouteDef[] {
             passwordHash: await hashPassword(body.password),
             active: true,
             lastSignInAt: new Date(),
-          } as never);
+          });
           inv.acceptedAt = new Date();
           await tx.flush();
           recordAudit(tx, { id: created.id, email: created.email, name: created.name, role: created.role }, {
@@ -210,7 +210,7 @@ export function authRoutes(deps: AppDeps): RouteDef[] {
           const created = await em.transactional(async (tx) => {
             // Earlier unused links stop working when a new one is sent.
             await tx.nativeUpdate(ResetTokenSchema, { user: user.id, usedAt: null }, { usedAt: new Date() });
-            return tx.create(ResetTokenSchema, { user, tokenHash: hash, expiresAt: new Date(Date.now() + RESET_TTL_MS) } as never);
+            return tx.create(ResetTokenSchema, { user, tokenHash: hash, expiresAt: new Date(Date.now() + RESET_TTL_MS) });
           });
           try {
             await deps.mailer.send(

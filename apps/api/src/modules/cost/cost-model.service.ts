@@ -52,7 +52,7 @@ export async function saveWorkspaceModel(em: EntityManager, user: AuthUser, mode
   if (row) {
     row.model = model;
     row.updatedBy = em.getReference(UserSchema, user.id);
-  } else em.create(CostModelSchema, { teardown: null, model, updatedBy: em.getReference(UserSchema, user.id) } as never);
+  } else em.create(CostModelSchema, { teardown: null, model, updatedBy: em.getReference(UserSchema, user.id) });
   audit(em, user, before, model, null, 'cost_model.updated', 'Changed the workspace cost model');
   await em.flush();
   return getWorkspaceModel(em);
@@ -64,7 +64,7 @@ export async function saveTeardownModel(em: EntityManager, user: AuthUser, teard
   if (row) {
     row.model = model;
     row.updatedBy = em.getReference(UserSchema, user.id);
-  } else em.create(CostModelSchema, { teardown, model, updatedBy: em.getReference(UserSchema, user.id) } as never);
+  } else em.create(CostModelSchema, { teardown, model, updatedBy: em.getReference(UserSchema, user.id) });
   audit(em, user, current.model, model, teardown, 'cost_model.teardown_set', 'Gave this teardown its own cost model');
   await em.flush();
   return getTeardownModel(em, teardown);

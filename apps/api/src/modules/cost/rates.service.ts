@@ -100,7 +100,7 @@ export async function addRateTable(
       rates,
       note: input.note ?? null,
       createdBy: user ? tx.getReference(UserSchema, user.id) : null,
-    } as never);
+    });
     await tx.flush();
     recordAudit(tx, user, {
       action: input.kind === 'import' ? 'rates.imported' : 'rates.saved',

@@ -49,7 +49,7 @@ function priceChanges(before: PriceFields | null, after: PriceFields | null): Ch
 /** Creates or replaces the price of a part (the caller flushes); `part` is read for its name and teardown. */
 function writePrice(em: EntityManager, user: AuthUser, part: Part, existing: PartPrice | null, fields: PriceFields, how: string): PartPrice {
   const values = { ...fields, updatedBy: em.getReference(UserSchema, user.id) };
-  const price = existing ? Object.assign(existing, values) : em.create(PartPriceSchema, { part: em.getReference(PartSchema, part.id), ...values } as never);
+  const price = existing ? Object.assign(existing, values) : em.create(PartPriceSchema, { part: em.getReference(PartSchema, part.id), ...values });
   recordAudit(em, user, {
     action: 'price.updated',
     entityType: 'part',

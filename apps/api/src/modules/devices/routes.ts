@@ -100,7 +100,7 @@ export const deviceRoutes: RouteDef[] = [
           entered: Object.keys(claims.entered).length ? claims.entered : null,
           notes: body.notes ?? null,
           createdBy: tx.getReference(UserSchema, user.id),
-        } as never);
+        });
         await tx.flush();
         recordAudit(tx, user, {
           action: 'device.created',

@@ -69,7 +69,7 @@ export const figureRoutes: RouteDef[] = [
           decision.decidedBy = tx.getReference(UserSchema, user.id);
           decision.decidedAt = new Date();
         } else {
-          tx.create(SuggestionDecisionSchema, { teardown: t, key: s.key, status: 'accepted', findingId: f.id, decidedBy: tx.getReference(UserSchema, user.id) } as never);
+          tx.create(SuggestionDecisionSchema, { teardown: t, key: s.key, status: 'accepted', findingId: f.id, decidedBy: tx.getReference(UserSchema, user.id) });
         }
         recordAudit(tx, user, {
           action: 'suggestion.accepted',
@@ -98,7 +98,7 @@ export const figureRoutes: RouteDef[] = [
       const { em, user } = ctx;
       const { t, s } = await notAcceptedSuggestion(ctx);
       if (s.status === 'open') {
-        em.create(SuggestionDecisionSchema, { teardown: t, key: s.key, status: 'dismissed', decidedBy: em.getReference(UserSchema, user.id) } as never);
+        em.create(SuggestionDecisionSchema, { teardown: t, key: s.key, status: 'dismissed', decidedBy: em.getReference(UserSchema, user.id) });
         recordAudit(em, user, {
           action: 'suggestion.dismissed',
           entityType: 'suggestion',

@@ -79,7 +79,7 @@ export async function createFinding(
     suggestionKey: data.suggestionKey ?? null,
     createdBy: user ? em.getReference(UserSchema, user.id) : null,
     ...(createdAt ? { createdAt, updatedAt: createdAt } : {}),
-  } as never);
+  });
   if (data.parts) f.parts.set(data.parts);
   if (data.photos) f.photos.set(data.photos);
   await em.flush();

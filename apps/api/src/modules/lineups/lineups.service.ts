@@ -131,5 +131,5 @@ export async function checkLineupCurrency(em: EntityManager, code: string): Prom
 /** Replace the device set of a lineup, keeping the order given (the caller flushes). */
 export async function setLineupDevices(em: EntityManager, lineup: Lineup, devices: Device[]): Promise<void> {
   await em.nativeDelete(LineupDeviceSchema, { lineup: lineup.id });
-  devices.forEach((device, k) => em.create(LineupDeviceSchema, { lineup, device, position: k + 1 } as never));
+  devices.forEach((device, k) => em.create(LineupDeviceSchema, { lineup, device, position: k + 1 }));
 }

@@ -103,7 +103,7 @@ export const lineupRoutes: RouteDef[] = [
           modeChoice: body.mode ?? null,
           status: 'draft',
           createdBy: tx.getReference(UserSchema, user.id),
-        } as never);
+        });
         await tx.flush();
         await setLineupDevices(tx, l, devices);
         recordAudit(tx, user, {

@@ -34,7 +34,7 @@ export async function startCaptureServer(orm: Orm, port = 0, log: (...a: unknown
             subject: (parsed.subject ?? '(no subject)').slice(0, 500),
             text: parsed.text ?? '',
             html: typeof parsed.html === 'string' ? parsed.html : null,
-          } as never);
+          });
           await em.flush();
           callback();
         })

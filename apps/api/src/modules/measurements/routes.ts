@@ -84,7 +84,7 @@ export const measurementRoutes: RouteDef[] = [
           instrument: body.instrument ?? null,
           uncertainty: body.uncertainty ?? null,
           takenBy: tx.getReference(UserSchema, ctx.user.id),
-        } as never) as Measurement;
+        });
         await tx.flush();
         await tx.populate(m, ['takenBy']);
         recordAudit(tx, ctx.user, { action: 'measurement.created', entityType: 'measurement', entityId: m.id, scope: scope(t.id), summary: `Recorded the ${describe(m)}` });

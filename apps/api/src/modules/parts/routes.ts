@@ -15,7 +15,7 @@ import { diffChanges, recordAudit } from '../audit/audit.service';
 import { CONTENT_EDITORS, readableTeardown } from '../teardowns/access';
 import { changeTeardownContent } from '../teardowns/content-change';
 import { PartSchema, type Part } from './part.entity';
-import { applyPartValues, csvFileName, defaultMount, nextPosition, partSummary, partsCsv, planPartsImport, toPartDto, type PartValues } from './service';
+import { applyPartValues, csvFileName, defaultMount, newPart, nextPosition, partSummary, partsCsv, planPartsImport, toPartDto, type PartValues } from './service';
 
 const TAG = 'Parts';
 const scope = (teardownId: number) => ({ type: 'teardown', id: teardownId });
@@ -85,8 +85,7 @@ export const partRoutes: RouteDef[] = [
     (ctx) =>
       changeTeardownContent(ctx, ctx.params.id, async (tx, t) => {
         const { designator, mount, ...rest } = ctx.body;
-        const part = tx.create(PartSchema, { teardown: t, position: await nextPosition(tx, t.id) } as never) as Part;
-        applyPartValues(part, {
+        const part = newPart(tx, t, await nextPosition(tx, t.id), {
           designators: rest.designators ?? designator ?? null,
           category: rest.category,
           description: rest.description,
@@ -236,9 +235,7 @@ export const partRoutes: RouteDef[] = [
         let position = await nextPosition(tx, t.id);
         const created: Part[] = [];
         for (const v of plan.values) {
-          const part = tx.create(PartSchema, { teardown: t, position: position++ } as never) as Part;
-          applyPartValues(part, v);
-          created.push(part);
+          created.push(newPart(tx, t, position++, v));
         }
         await tx.flush();
         recordAudit(tx, ctx.user, {

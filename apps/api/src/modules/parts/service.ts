@@ -14,6 +14,7 @@ import {
 } from '@splitcase/contracts';
 import { parseCsv, toCsv, unguardCell } from '../../lib/csv';
 import { PartSchema, type Part } from './part.entity';
+import type { Teardown } from '../teardowns/teardown.entity';
 import { decodePartMarking } from './decode';
 
 /** A part as the API sends it. The decoded value and readings are worked out from the marking here, by the decoder of today. */
@@ -59,10 +60,17 @@ export interface PartValues {
 /** Apply values to a part and refresh the decoded value from its marking (the stored columns; the DTO and CSV decode again). */
 export function applyPartValues(part: Part, values: Partial<PartValues>): void {
   Object.assign(part, values);
-  const decoded = decodePartMarking(part);
-  part.decodedValue = decoded.value;
-  part.decodedUnit = decoded.unit;
+  Object.assign(part, decodedColumns(part));
 }
+
+/** A new part line at `position` with its values and the decoded columns of its marking. */
+export const newPart = (em: EntityManager, teardown: Teardown, position: number, values: PartValues): Part =>
+  em.create(PartSchema, { teardown, position, ...values, ...decodedColumns(values) });
+
+const decodedColumns = (part: Parameters<typeof decodePartMarking>[0]) => {
+  const decoded = decodePartMarking(part);
+  return { decodedValue: decoded.value, decodedUnit: decoded.unit };
+};
 
 export async function nextPosition(em: EntityManager, teardownId: number): Promise<number> {
   const last = await em.findOne(PartSchema, { teardown: teardownId }, { orderBy: { position: 'desc' }, fields: ['position'] });

@@ -150,7 +150,7 @@ export async function savePhoto(em: EntityManager, uploadsDir: string, input: Sa
         layer,
         step,
         uploadedBy: input.uploadedBy ? tx.getReference(UserSchema, input.uploadedBy) : null,
-      } as never);
+      });
       await tx.flush();
       if (input.actor) {
         recordAudit(tx, input.actor, {

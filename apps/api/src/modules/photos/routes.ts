@@ -249,7 +249,7 @@ export function photoRoutes(deps: AppDeps): RouteDef[] {
             label: body.label,
             part: links.part ?? null,
             finding: links.finding ?? null,
-          } as never);
+          });
           await tx.flush();
           recordAudit(tx, user, {
             action: 'callout.created',

@@ -94,8 +94,7 @@ async function putPack(ctx: Ctx & { body: z.output<typeof packBody>; params: { i
     let pack = await tx.findOne(PackSchema, { teardown: t.id });
     const created = !pack;
     const before = pack ? packSnapshot(pack) : {};
-    pack ??= tx.create(PackSchema, { teardown: t } as never) as Pack;
-    Object.assign(pack, {
+    const values = {
       chemistry: body.chemistry,
       cellFormat: body.cellFormat ?? null,
       cellNominalVolts: v.nominalVolts!,
@@ -110,7 +109,8 @@ async function putPack(ctx: Ctx & { body: z.output<typeof packBody>; params: { i
       internalOhms: v.internalResistanceOhms ?? null,
       internalReadings: ir?.readings ?? null,
       entered: Object.keys(read.entered).length ? read.entered : null,
-    });
+    };
+    pack = pack ? Object.assign(pack, values) : tx.create(PackSchema, { teardown: t, ...values });
     await tx.flush();
     const changes = diffChanges(before, packSnapshot(pack), PACK_AUDIT_KEYS);
     recordAudit(tx, ctx.user, {
@@ -287,7 +287,7 @@ export const powerRoutes: RouteDef[] = [
           elementMaterial: body.elementMaterial ?? null,
           count: 1,
           duty: 1,
-        } as never) as Load;
+        });
         applyLoadValues(load, read);
         checkLoad(load);
         await tx.flush();
@@ -377,7 +377,7 @@ export const powerRoutes: RouteDef[] = [
           efficiency: v.efficiency ?? null,
           efficiencySource: body.efficiencySource,
           entered: Object.keys(read.entered).length ? read.entered : null,
-        } as never) as Converter;
+        });
         await tx.flush();
         recordAudit(tx, ctx.user, { action: 'converter.created', entityType: 'converter', entityId: converter.id, scope: scope(t.id), summary: `Added converter ${converter.label}` });
         return { converter: toConverterDto(converter) };

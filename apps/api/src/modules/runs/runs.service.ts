@@ -113,7 +113,7 @@ export async function ingestRun(em: EntityManager, env: Env, input: IngestInput)
       options,
       analysis,
       createdBy: input.user ? em.getReference(UserSchema, input.user.id) : null,
-    } as never);
+    });
     await em.flush();
     recordAudit(em, input.user, {
       action: 'run.created',

@@ -22,7 +22,7 @@ export async function updateSettings(em: EntityManager, user: AuthUser, patch: P
     if (row) {
       row.value = value;
       row.updatedBy = em.getReference(UserSchema, user.id);
-    } else em.create(SettingSchema, { key, value, updatedBy: em.getReference(UserSchema, user.id) } as never);
+    } else em.create(SettingSchema, { key, value, updatedBy: em.getReference(UserSchema, user.id) });
   }
   const changes = diffChanges(before as Record<string, unknown>, patch);
   if (Object.keys(changes).length) {

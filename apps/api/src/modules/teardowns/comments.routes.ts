@@ -48,7 +48,7 @@ export const commentRoutes: RouteDef[] = [
     async ({ em, user, params, body }) => {
       const t = await readableTeardown(em, user, params.id);
       const comment = await em.transactional(async (tx) => {
-        const c = tx.create(CommentSchema, { teardown: t.id, author: tx.getReference(UserSchema, user.id), kind: 'comment', body: body.body } as never);
+        const c = tx.create(CommentSchema, { teardown: t.id, author: tx.getReference(UserSchema, user.id), kind: 'comment', body: body.body });
         await tx.flush();
         recordAudit(tx, user, {
           action: 'comment.created',

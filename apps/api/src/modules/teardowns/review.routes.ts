@@ -40,7 +40,7 @@ async function sendOrUndo(deps: AppDeps, mail: OutgoingMail, undo: () => Promise
 }
 
 function addReviewComment(em: EntityManager, t: Teardown, user: AuthUser, kind: 'submitted' | 'approved' | 'sent-back', body: string) {
-  return em.create(CommentSchema, { teardown: t, author: em.getReference(UserSchema, user.id), kind, body } as never);
+  return em.create(CommentSchema, { teardown: t, author: em.getReference(UserSchema, user.id), kind, body });
 }
 
 const link = (deps: AppDeps, t: Teardown) => `${deps.env.publicUrl}/teardowns/${t.id}`;

@@ -50,7 +50,7 @@ const crudRoutes: RouteDef[] = [
           safetyNotes: body.safetyNotes ?? null,
           contactSeconds: body.contactSeconds ?? null,
           status: 'draft',
-        } as never);
+        });
         await tx.flush();
         recordAudit(tx, user, {
           action: 'teardown.created',

@@ -126,7 +126,7 @@ export const userRoutes: RouteDef[] = [
           tokenHash: hash,
           invitedBy: tx.getReference(UserSchema, me.id),
           expiresAt: new Date(Date.now() + INVITATION_TTL_MS),
-        } as never);
+        });
         await tx.flush();
         recordAudit(tx, me, { action: 'invitation.created', entityType: 'invitation', entityId: inv.id, summary: `Invited ${body.email} as ${ROLE_LABELS[body.role]}` });
         return inv;

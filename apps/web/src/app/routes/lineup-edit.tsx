@@ -5,13 +5,13 @@ import { ErrorPanel } from '@/components/error-boundary';
 import { PageHeader, Spinner } from '@/components/page';
 import { paths } from '@/config/paths';
 import { useRates } from '@/features/cost/api/rates';
-import { useSettings } from '@/features/cost/api/settings';
 import { useDevices } from '@/features/devices/api/list-devices';
 import { useLineup } from '@/features/lineups/api/get-lineup';
 import { useLineupMetrics } from '@/features/lineups/api/metrics';
 import { useUpdateLineup } from '@/features/lineups/api/update-lineup';
 import { rateCurrencies } from '@/features/lineups/components/display';
 import { LineupForm } from '@/features/lineups/components/lineup-form';
+import { useSettings } from '@/lib/settings';
 
 export function Component() {
   const id = Number(useParams().id);

@@ -16,7 +16,7 @@ import { Field, FormError, Input } from '@/components/field';
 import { Card, Spinner } from '@/components/page';
 import { HotSurfaceNote } from '@/components/safety';
 import { ApiError } from '@/lib/api-client';
-import { useSettings, useUpdateSettings } from '../api/settings';
+import { useSettings, useUpdateSettings } from '@/lib/settings';
 
 /** A fraction as the percentage typed back into the form ("90", "87.5"). */
 const percentText = (fraction: number) => String(Number((fraction * 100).toPrecision(6)));

@@ -7,7 +7,7 @@ import { ErrorPanel } from '@/components/error-boundary';
 import { Field, FormError, Input } from '@/components/field';
 import { Card, Spinner } from '@/components/page';
 import { applyServerErrors } from '@/lib/form-errors';
-import { useSettings, useUpdateSettings } from '../api/settings';
+import { useSettings, useUpdateSettings } from '@/lib/settings';
 
 const sessionLimits = workspaceSettingsSchema.pick({ sessionMaxHours: true, sessionIdleMinutes: true }).required();
 type SessionLimits = { sessionMaxHours: number; sessionIdleMinutes: number };

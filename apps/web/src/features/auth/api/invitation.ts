@@ -2,6 +2,7 @@ import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/r
 import type { AcceptInvitationBody, Role, User } from '@splitcase/contracts';
 import { api, resetCsrfToken } from '@/lib/api-client';
 import { meKey } from '@/lib/session';
+import { rootKeys } from '@/lib/query-keys';
 
 export interface InvitationPreview {
   email: string;
@@ -13,7 +14,7 @@ export const getInvitationPreview = (token: string) =>
   api.get<{ invitation: InvitationPreview }>('/api/auth/invitations/preview', { query: { token } }).then((r) => r.invitation);
 
 export const invitationPreviewQuery = (token: string) =>
-  queryOptions({ queryKey: ['auth', 'invitation', token], queryFn: () => getInvitationPreview(token), retry: false, enabled: token.length > 0 });
+  queryOptions({ queryKey: [...rootKeys.auth, 'invitation', token], queryFn: () => getInvitationPreview(token), retry: false, enabled: token.length > 0 });
 
 export const useInvitationPreview = (token: string) => useQuery(invitationPreviewQuery(token));
 

@@ -1,6 +1,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { CostModelBody, CostModelDto } from '@splitcase/contracts';
 import { api } from '@/lib/api-client';
+import { rootKeys } from '@/lib/query-keys';
 
 export interface WorkspaceCostModel {
   model: CostModelDto;
@@ -8,9 +9,8 @@ export interface WorkspaceCostModel {
   updatedBy: string | null;
 }
 
-export const costModelKey = ['cost-model'] as const;
 export const getCostModel = () => api.get<WorkspaceCostModel>('/api/cost-model');
-export const costModelQuery = () => queryOptions({ queryKey: costModelKey, queryFn: getCostModel });
+export const costModelQuery = () => queryOptions({ queryKey: rootKeys.costModel, queryFn: getCostModel });
 export const useCostModel = () => useQuery(costModelQuery());
 
 export const saveCostModel = (body: CostModelBody) => api.put<WorkspaceCostModel>('/api/cost-model', body);
@@ -21,8 +21,8 @@ export function useSaveCostModel() {
   return useMutation({
     mutationFn: saveCostModel,
     onSuccess: (data) => {
-      qc.setQueryData(costModelKey, data);
-      return qc.invalidateQueries({ queryKey: ['teardowns'] });
+      qc.setQueryData(rootKeys.costModel, data);
+      return qc.invalidateQueries({ queryKey: rootKeys.teardowns });
     },
   });
 }

@@ -2,7 +2,7 @@ import { useQueryClient } from '@tanstack/react-query';
 import { useCallback, useState } from 'react';
 import type { RateTableResponse } from '@splitcase/contracts';
 import { api } from '@/lib/api-client';
-import { ratesKey } from './rates';
+import { rootKeys } from '@/lib/query-keys';
 
 /** Uploads the reference-rate XML file with progress; on success rates and roll-ups are read again. */
 export function useImportRates() {
@@ -15,7 +15,7 @@ export function useImportRates() {
       setProgress(0);
       try {
         const result = await api.upload<RateTableResponse>('/api/rates/import', form, setProgress).promise;
-        await Promise.all([qc.invalidateQueries({ queryKey: ratesKey }), qc.invalidateQueries({ queryKey: ['teardowns'] })]);
+        await Promise.all([qc.invalidateQueries({ queryKey: rootKeys.rates }), qc.invalidateQueries({ queryKey: rootKeys.teardowns })]);
         return result;
       } finally {
         setProgress(null);

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ManualRatesBody, RateTableResponse } from '@splitcase/contracts';
 import { api } from '@/lib/api-client';
-import { ratesKey } from './rates';
+import { rootKeys } from '@/lib/query-keys';
 
 export const saveRates = (body: ManualRatesBody) => api.put<RateTableResponse>('/api/rates', body);
 
@@ -10,6 +10,6 @@ export function useSaveRates() {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: saveRates,
-    onSuccess: () => Promise.all([qc.invalidateQueries({ queryKey: ratesKey }), qc.invalidateQueries({ queryKey: ['teardowns'] })]),
+    onSuccess: () => Promise.all([qc.invalidateQueries({ queryKey: rootKeys.rates }), qc.invalidateQueries({ queryKey: rootKeys.teardowns })]),
   });
 }

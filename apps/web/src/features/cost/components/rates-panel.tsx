@@ -9,10 +9,10 @@ import { Field, Input, FormError, InlineError } from '@/components/field';
 import { Card, EmptyState, Spinner } from '@/components/page';
 import { ApiError } from '@/lib/api-client';
 import { formatDate, formatDateTime } from '@/lib/format';
+import { useSettings, useUpdateSettings } from '@/lib/settings';
 import { useImportRates } from '../api/import-rates';
 import { useRates } from '../api/rates';
 import { useSaveRates } from '../api/save-rates';
-import { useSetReportingCurrency, useSettings } from '../api/settings';
 import { plain } from './display';
 
 function RateList({ table }: { table: RateTableDto }) {
@@ -170,7 +170,7 @@ function ManualRates({ current, onDone }: { current: RateTableDto | null; onDone
 
 function ReportingCurrency({ currencies }: { currencies: string[] }) {
   const settings = useSettings();
-  const set = useSetReportingCurrency();
+  const set = useUpdateSettings();
   if (!settings.data) return null;
   const value = settings.data.reportingCurrency;
   return (
@@ -183,8 +183,8 @@ function ReportingCurrency({ currencies }: { currencies: string[] }) {
         value={value}
         disabled={set.isPending}
         onChange={(e) =>
-          set.mutate(e.target.value, {
-            onSuccess: (d) => toast.success(`Cost figures are now reported in ${d.settings.reportingCurrency}.`),
+          set.mutate({ reportingCurrency: e.target.value }, {
+            onSuccess: (s) => toast.success(`Cost figures are now reported in ${s.reportingCurrency}.`),
             onError: (err) => toast.error(err.message),
           })
         }

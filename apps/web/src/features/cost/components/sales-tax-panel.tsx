@@ -9,7 +9,7 @@ import { ErrorPanel } from '@/components/error-boundary';
 import { FormError, Input } from '@/components/field';
 import { Card, Spinner } from '@/components/page';
 import { ApiError } from '@/lib/api-client';
-import { useSetSalesTaxByCurrency, useSettings } from '../api/settings';
+import { useSettings, useUpdateSettings } from '@/lib/settings';
 import { plain } from './display';
 
 const rowsOf = (map: Record<string, number>): SalesTaxFormValues['rows'] =>
@@ -33,7 +33,7 @@ export function SalesTaxPanel() {
 }
 
 function SalesTaxForm({ initial }: { initial: Record<string, number> }) {
-  const save = useSetSalesTaxByCurrency();
+  const save = useUpdateSettings();
   const [formError, setFormError] = useState<string | null>(null);
   const { register, control, handleSubmit, setError, formState } = useForm<SalesTaxFormValues, unknown, SalesTaxForm>({
     resolver: zodResolver(salesTaxFormSchema),
@@ -46,7 +46,7 @@ function SalesTaxForm({ initial }: { initial: Record<string, number> }) {
     setFormError(null);
     const map = Object.fromEntries(values.rows.map((r) => [r.currency, r.rate as number]));
     try {
-      await save.mutateAsync(map);
+      await save.mutateAsync({ salesTaxByCurrency: map });
       toast.success('Sales-tax defaults saved; implied margins use them now.');
     } catch (err) {
       if (!(err instanceof ApiError)) {

@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { DeviceDto, DeviceFormValues } from '@splitcase/contracts';
 import { api } from '@/lib/api-client';
+import { rootKeys } from '@/lib/query-keys';
 
 export const updateDevice = ({ id, ...body }: Partial<DeviceFormValues> & { id: number }) => api.patch<{ device: DeviceDto }>(`/api/devices/${id}`, body).then((r) => r.device);
 
@@ -9,6 +10,6 @@ export function useUpdateDevice() {
   return useMutation({
     mutationFn: updateDevice,
     // Label claims feed the figures of every teardown of the device.
-    onSuccess: () => Promise.all([qc.invalidateQueries({ queryKey: ['devices'] }), qc.invalidateQueries({ queryKey: ['teardowns'] })]),
+    onSuccess: () => Promise.all([qc.invalidateQueries({ queryKey: rootKeys.devices }), qc.invalidateQueries({ queryKey: rootKeys.teardowns })]),
   });
 }

@@ -1,14 +1,14 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { SEARCH_PAGE_SIZE, searchApiQuery, type SearchResponse, type SearchState } from '@splitcase/contracts';
 import { api } from '@/lib/api-client';
+import { rootKeys } from '@/lib/query-keys';
 
-export const searchKey = ['search'] as const;
 /** GET /api/search for an explorer state (its page as limit/offset). */
 export const getSearch = (state: SearchState, signal?: AbortSignal) => api.get<SearchResponse>(`/api/search?${searchApiQuery(state, SEARCH_PAGE_SIZE)}`, { signal });
 export const searchQueryOptions = (state: SearchState, enabled = true) =>
   queryOptions({
     enabled,
-    queryKey: [...searchKey, searchApiQuery(state, SEARCH_PAGE_SIZE)],
+    queryKey: [...rootKeys.search, searchApiQuery(state, SEARCH_PAGE_SIZE)],
     queryFn: ({ signal }) => getSearch(state, signal),
     // Keep showing the last results while the next query runs (no flashing empty table while typing).
     placeholderData: keepPreviousData,

@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import { lineupScope, lineupsKey } from './keys';
+import { rootKeys } from '@/lib/query-keys';
+import { lineupScope } from './keys';
 
 export const deleteLineup = (id: number) => api.delete<void>(`/api/lineups/${id}`);
 
@@ -10,7 +11,7 @@ export function useDeleteLineup() {
     mutationFn: deleteLineup,
     onSuccess: (_v, id) => {
       qc.removeQueries({ queryKey: lineupScope(id) });
-      return qc.invalidateQueries({ queryKey: lineupsKey });
+      return qc.invalidateQueries({ queryKey: rootKeys.lineups });
     },
   });
 }

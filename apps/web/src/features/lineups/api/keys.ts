@@ -1,3 +1,4 @@
+import { rootKeys } from '@/lib/query-keys';
+
 // Query keys of the lineups feature: everything about one lineup starts with lineupScope(id).
-export const lineupsKey = ['lineups'] as const;
-export const lineupScope = (id: number) => ['lineups', id] as const;
+export const lineupScope = (id: number) => [...rootKeys.lineups, id] as const;

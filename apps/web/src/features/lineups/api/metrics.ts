@@ -1,6 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { ComparisonMetricDto } from '@splitcase/contracts';
 import { api } from '@/lib/api-client';
+import { rootKeys } from '@/lib/query-keys';
 
 export interface LineupMetrics {
   metrics: ComparisonMetricDto[];
@@ -10,5 +11,5 @@ export interface LineupMetrics {
 
 export const getLineupMetrics = (currency?: string) => api.get<LineupMetrics>('/api/lineups/metrics', { query: { currency } });
 export const lineupMetricsQuery = (currency?: string) =>
-  queryOptions({ queryKey: ['lineup-metrics', currency ?? ''] as const, queryFn: () => getLineupMetrics(currency), staleTime: 5 * 60_000 });
+  queryOptions({ queryKey: [...rootKeys.lineupMetrics, currency ?? ''] as const, queryFn: () => getLineupMetrics(currency), staleTime: 5 * 60_000 });
 export const useLineupMetrics = (currency?: string) => useQuery(lineupMetricsQuery(currency));

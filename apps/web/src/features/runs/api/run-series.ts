@@ -1,14 +1,14 @@
 import { keepPreviousData, queryOptions, useQueries } from '@tanstack/react-query';
 import type { RunSeries } from '@splitcase/contracts';
 import { api } from '@/lib/api-client';
-import { runsKey } from './all-runs';
+import { rootKeys } from '@/lib/query-keys';
 
 export interface SeriesWindow {
   from: number;
   to: number;
 }
 
-export const runSeriesKey = (id: number, maxPoints: number, window: SeriesWindow | null) => [...runsKey, id, 'series', maxPoints, window?.from ?? null, window?.to ?? null] as const;
+export const runSeriesKey = (id: number, maxPoints: number, window: SeriesWindow | null) => [...rootKeys.runs, id, 'series', maxPoints, window?.from ?? null, window?.to ?? null] as const;
 export const getRunSeries = (id: number, maxPoints: number, window: SeriesWindow | null) =>
   api.get<RunSeries>(`/api/runs/${id}/series`, { query: { maxPoints, from: window?.from, to: window?.to } });
 export const runSeriesQuery = (id: number, maxPoints: number, window: SeriesWindow | null) =>

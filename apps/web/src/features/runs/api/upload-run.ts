@@ -2,8 +2,7 @@ import { useCallback, useRef, useState } from 'react';
 import { useQueryClient } from '@tanstack/react-query';
 import { CONFIRM_UNPUBLISH_HEADER, type RunDto, type RunMapping, type RunOptions } from '@splitcase/contracts';
 import { api } from '@/lib/api-client';
-import { teardownScope } from '@/lib/query-keys';
-import { runsKey } from './all-runs';
+import { rootKeys, teardownScope } from '@/lib/query-keys';
 
 /** Where an upload is: sending the file (with the fraction sent), then parsing and analysing on the server. */
 export type UploadPhase = { step: 'idle' } | { step: 'uploading'; fraction: number } | { step: 'analysing'; since: number } | { step: 'done'; run: RunDto };
@@ -41,7 +40,7 @@ export function useUploadRun() {
       try {
         const { run } = await promise;
         setPhase({ step: 'done', run });
-        await Promise.all([qc.invalidateQueries({ queryKey: teardownScope(input.teardownId) }), qc.invalidateQueries({ queryKey: runsKey })]);
+        await Promise.all([qc.invalidateQueries({ queryKey: teardownScope(input.teardownId) }), qc.invalidateQueries({ queryKey: rootKeys.runs })]);
         return run;
       } catch (err) {
         setPhase({ step: 'idle' });

@@ -4,7 +4,7 @@ import { Button } from '@/components/button';
 import { Card, Spinner } from '@/components/page';
 import { ErrorPanel } from '@/components/error-boundary';
 import { ApiError } from '@/lib/api-client';
-import { useSettings, useUpdateSettings } from '../api/settings';
+import { useSettings, useUpdateSettings } from '@/lib/settings';
 
 /** The workspace threshold under which a measured capacity is flagged against its label (admins change it). */
 export function CapacityWarningSetting({ canEdit }: { canEdit: boolean }) {

@@ -7,7 +7,7 @@ import { Field, FormError, Input } from '@/components/field';
 import { Card, Spinner } from '@/components/page';
 import { ErrorPanel } from '@/components/error-boundary';
 import { applyServerErrors } from '@/lib/form-errors';
-import { useSettings, useUpdateSettings } from '../api/settings';
+import { useSettings, useUpdateSettings } from '@/lib/settings';
 
 /** How long a discharge must stay at or below its cut-off voltage to end (admins change it). */
 export function CutoffDebounceSetting({ canEdit }: { canEdit: boolean }) {

@@ -4,7 +4,7 @@ import { Button } from '@/components/button';
 import { ErrorPanel } from '@/components/error-boundary';
 import { Field, Input, Select } from '@/components/field';
 import { ApiError } from '@/lib/api-client';
-import { useSettings } from '../api/settings';
+import { useSettings } from '@/lib/settings';
 import { useUpdateRun } from '../api/update-run';
 import { debounceDefaultText, TERMINATION_HINT } from './run-option-text';
 

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { TeardownDto, UpdateTeardownForm } from '@splitcase/contracts';
 import { api } from '@/lib/api-client';
-import { teardownScope } from '@/lib/query-keys';
+import { rootKeys, teardownScope } from '@/lib/query-keys';
 import { withUnpublishConfirm } from '@/lib/unpublish-confirm';
 import { teardownKey } from './get-teardown';
 
@@ -15,7 +15,7 @@ export function useUpdateTeardown(id: number) {
     mutationFn: (body: UpdateTeardownForm) => updateTeardown(id, body),
     onSuccess: (t) => {
       qc.setQueryData(teardownKey(id), t);
-      return Promise.all([qc.invalidateQueries({ queryKey: teardownScope(id) }), qc.invalidateQueries({ queryKey: ['devices'] })]);
+      return Promise.all([qc.invalidateQueries({ queryKey: teardownScope(id) }), qc.invalidateQueries({ queryKey: rootKeys.devices })]);
     },
   });
 }

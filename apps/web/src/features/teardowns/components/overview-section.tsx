@@ -23,10 +23,10 @@ import { conflictFields, VersionConflict } from '@/components/version-conflict';
 import { ApiError } from '@/lib/api-client';
 import { applyServerErrors } from '@/lib/form-errors';
 import { formatDate, formatDateTime } from '@/lib/format';
+import { useSettings } from '@/lib/settings';
 import { mutationErrorMessage } from '@/lib/unpublish-confirm';
 import { useComments } from '../api/comments';
 import { useUpdateTeardown } from '../api/update-teardown';
-import { useWorkspaceSettings } from '../api/workspace-settings';
 
 type FormValues = { date: string; unitLabel: string; contactSeconds: string; summary: string; safetyNotes: string };
 const FIELDS = Object.keys(TEARDOWN_FIELD_LABELS) as TeardownEditableField[];
@@ -89,7 +89,7 @@ function RecordView({ teardown: t }: { teardown: TeardownDto }) {
 
 function RecordForm({ teardown }: { teardown: TeardownDto }) {
   const update = useUpdateTeardown(teardown.id);
-  const settings = useWorkspaceSettings();
+  const settings = useSettings();
   // The record as it was when this person started editing: the base of their changes.
   const [base, setBase] = useState<TeardownDto>(teardown);
   const [conflict, setConflict] = useState<Conflict | null>(null);

@@ -1,8 +1,9 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import type { MarkingToolBody, MarkingToolResponse } from '@splitcase/contracts';
 import { api } from '@/lib/api-client';
+import { rootKeys } from '@/lib/query-keys';
 
-export const markingKey = (body: MarkingToolBody | null) => ['tools', 'marking', body] as const;
+export const markingKey = (body: MarkingToolBody | null) => [...rootKeys.tools, 'marking', body] as const;
 export const decodeMarking = (body: MarkingToolBody, signal?: AbortSignal) => api.post<MarkingToolResponse>('/api/tools/marking', body, { signal });
 export const markingQuery = (body: MarkingToolBody | null) =>
   queryOptions({

@@ -1,8 +1,9 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import type { FiguresToolResponse, HeaterTraceToolBody } from '@splitcase/contracts';
 import { api } from '@/lib/api-client';
+import { rootKeys } from '@/lib/query-keys';
 
-export const heaterTraceKey = (body: HeaterTraceToolBody | null) => ['tools', 'heater-trace', body] as const;
+export const heaterTraceKey = (body: HeaterTraceToolBody | null) => [...rootKeys.tools, 'heater-trace', body] as const;
 export const computeHeaterTrace = (body: HeaterTraceToolBody, signal?: AbortSignal) =>
   api.post<FiguresToolResponse>('/api/tools/heater-trace', body, { signal });
 export const heaterTraceQuery = (body: HeaterTraceToolBody | null) =>

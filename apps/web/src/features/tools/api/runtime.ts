@@ -1,8 +1,9 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import type { FiguresToolResponse, RuntimeToolBody } from '@splitcase/contracts';
 import { api } from '@/lib/api-client';
+import { rootKeys } from '@/lib/query-keys';
 
-export const runtimeKey = (body: RuntimeToolBody | null) => ['tools', 'runtime', body] as const;
+export const runtimeKey = (body: RuntimeToolBody | null) => [...rootKeys.tools, 'runtime', body] as const;
 export const computeRuntime = (body: RuntimeToolBody, signal?: AbortSignal) => api.post<FiguresToolResponse>('/api/tools/runtime', body, { signal });
 export const runtimeQuery = (body: RuntimeToolBody | null) =>
   queryOptions({
