@@ -94,7 +94,7 @@ describe('bench-run lists', () => {
   });
 
   it('finds a word in a run older than the latest 500', async () => {
-    const [{ teardown }] = (await sql('select max(id) as teardown from teardowns')) as { teardown: number }[];
+    const teardown = Number((await sql('select max(id) as id from teardowns'))[0]!.id);
     await cloneRuns(discharge.id, teardown, ['qcneedle oldest'], '(select min(created_at) from bench_runs)');
     await cloneRuns(
       discharge.id,
