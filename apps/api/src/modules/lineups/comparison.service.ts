@@ -1,7 +1,9 @@
 // The normalised comparison of a lineup. Per device it takes the latest teardown the caller may
 // see, reads its figures (figures service), its should-cost (cost service) and its latest
 // discharge run (bench runs), converts money into the lineup currency with the current rates, and
-// lets packages/calc do the rest: comparisonMetrics, weightedScores and paretoFrontierXY.
+// lets packages/calc do the rest: comparisonMetrics, weightedScores and paretoFrontierXY. What
+// the rows need is read for all devices at once (LineupReads), so the query count does not grow
+// with the lineup.
 import type { EntityManager } from '@mikro-orm/sqlite';
 import {
   chooseMode,
