@@ -41,6 +41,8 @@ const server = spawn(process.execPath, ['--expose-gc', '--import', 'tsx', join(r
   env: {
     ...process.env,
     NODE_ENV: 'production',
+    // One log line per request would cost the server time and fill this runner's buffer.
+    LOG_LEVEL: 'warn',
     PORT: '0',
     HOST: '127.0.0.1',
     SPLITCASE_DATA_DIR: join(dataDir, 'data'),

@@ -9,6 +9,7 @@ import type TestAgent from 'supertest/lib/agent';
 import { testEnv, type Env } from '../../apps/api/src/config/env';
 import { migrate, openOrm, type Orm } from '../../apps/api/src/db/orm';
 import { createApp } from '../../apps/api/src/http/create-app';
+import { createLogger, logFunction } from '../../apps/api/src/http/logging';
 import type { AppDeps } from '../../apps/api/src/http/deps';
 import { startCaptureServer } from '../../apps/api/src/modules/mail/capture-server';
 import { createMailer } from '../../apps/api/src/modules/mail/mailer';
@@ -66,7 +67,8 @@ export async function makeTestApp(options: { seed?: 'users' | 'demo'; env?: Part
   await seedIfEmpty(orm, env, () => {}, steps);
   const capture = await startCaptureServer(orm, 0);
   const mailer = createMailer({ capturePort: capture.port, from: env.mailFrom });
-  const deps: AppDeps = { env, orm, mailer, outboxEnabled: true, log: (...a) => console.error(...a) };
+  const logger = createLogger(env.logLevel);
+  const deps: AppDeps = { env, orm, mailer, outboxEnabled: true, logger, log: logFunction(logger) };
   const app = createApp(deps);
   const t: TestApp = {
     app,

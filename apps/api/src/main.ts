@@ -5,8 +5,8 @@ import { startServer } from './server';
 
 const env = readEnv();
 const running = await startServer(env, { seed: true });
-console.log(`Splitcase API on ${running.url} (data: ${env.dataDir})`);
-if (running.seeded) console.log(['Seeded the demo workspace. Sign in with:', ...demoSignIns(env)].join('\n  '));
+running.logger.info({ url: running.url, dataDir: env.dataDir }, `Splitcase API on ${running.url}`);
+if (running.seeded) running.logger.info({ signIns: demoSignIns(env) }, 'Seeded the demo workspace');
 const stop = () => running.close().then(() => process.exit(0));
 process.on('SIGINT', stop);
 process.on('SIGTERM', stop);

@@ -1,6 +1,10 @@
 import { resolve } from 'node:path';
 import { z } from 'zod';
 
+/** Server log levels (pino's, and silent). */
+export const LOG_LEVELS = ['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent'] as const;
+export type LogLevel = (typeof LOG_LEVELS)[number];
+
 /**
  * The only module that reads process.env. Everything else receives an Env.
  */
@@ -25,6 +29,8 @@ const schema = z.object({
   SPLITCASE_SECURE_COOKIES: z.enum(['true', 'false']).optional(),
   /** Express's `trust proxy`: unset (no proxy: X-Forwarded-* ignored), or e.g. `loopback`, `1`, `10.0.0.2`. */
   SPLITCASE_TRUST_PROXY: z.string().trim().min(1).optional(),
+  /** Server log level (pino): fatal, error, warn, info, debug, trace or silent; default info (warn under NODE_ENV=test). */
+  LOG_LEVEL: z.enum(LOG_LEVELS).optional(),
 });
 
 export interface Env {
@@ -55,6 +61,8 @@ export interface Env {
   secureCookies: boolean;
   /** Express's `trust proxy` setting; false when no reverse proxy is configured. */
   trustProxy: boolean | number | string;
+  /** Least level of the server log (LOG_LEVEL); one info line per request. */
+  logLevel: LogLevel;
 }
 
 export function readEnv(source: NodeJS.ProcessEnv = process.env): Env {
@@ -87,6 +95,7 @@ export function readEnv(source: NodeJS.ProcessEnv = process.env): Env {
     loginDelayMaxMs: e.SPLITCASE_LOGIN_DELAY_MAX_MS,
     secureCookies: e.SPLITCASE_SECURE_COOKIES ? e.SPLITCASE_SECURE_COOKIES === 'true' : publicUrl.startsWith('https:'),
     trustProxy: trustProxySetting(e.SPLITCASE_TRUST_PROXY),
+    logLevel: e.LOG_LEVEL ?? (e.NODE_ENV === 'test' ? 'warn' : 'info'),
   };
 }
 

@@ -13,6 +13,7 @@ import { loadSessionUser } from '../modules/auth/session-user';
 import { allRoutes } from '../modules/routes';
 import type { AppDeps } from './deps';
 import { AppError, apiNotFound, errorHandler } from './errors';
+import { requestLogging } from './logging';
 import { buildOpenApi } from './openapi';
 import { mountRoutes } from './route';
 
@@ -38,6 +39,7 @@ export function createApp(deps: AppDeps, options: CreateAppOptions = {}): Expres
   app.disable('x-powered-by');
   // Behind a reverse proxy set SPLITCASE_TRUST_PROXY (e.g. `loopback`); without one, X-Forwarded-* are ignored.
   app.set('trust proxy', deps.env.trustProxy);
+  app.use(requestLogging(deps.logger));
 
   app.use(
     helmet({
@@ -105,6 +107,6 @@ export function createApp(deps: AppDeps, options: CreateAppOptions = {}): Expres
   }
 
   app.use((_req, _res, next) => next(new AppError('not_found', 'Not found.')));
-  app.use(errorHandler((err) => deps.log('Unhandled error', err)));
+  app.use(errorHandler());
   return app;
 }

@@ -1,3 +1,4 @@
+import type { Logger } from 'pino';
 import type { Env } from '../config/env';
 import type { Orm } from '../db/orm';
 import type { Mailer } from '../modules/mail/mailer';
@@ -9,5 +10,8 @@ export interface AppDeps {
   mailer: Mailer;
   /** Whether the built-in capture SMTP server is in use (the Outbox page shows its messages). */
   outboxEnabled: boolean;
+  /** The server log (http/logging.ts): one line per request, errors with their stack. */
+  logger: Logger;
+  /** A problem reported in passing, as an error line of `logger` (`logFunction`). */
   log: (...args: unknown[]) => void;
 }

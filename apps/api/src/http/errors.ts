@@ -73,12 +73,11 @@ export const apiNotFound: RequestHandler = (req, _res, next) => {
   next(new AppError('not_found', `No API route for ${req.method} ${req.path}.`));
 };
 
-type Logger = (err: unknown) => void;
-
-export function errorHandler(log: Logger): ErrorRequestHandler {
+/** The standard error body; a server error goes to the request's log line with its stack (`res.err`, http/logging.ts), never into the body. */
+export function errorHandler(): ErrorRequestHandler {
   return (err, _req, res, _next) => {
     const body = toAppError(err);
-    if (body.status >= 500) log(err);
+    if (body.status >= 500) res.err = err instanceof Error ? err : new Error(String(err));
     if (body.code === 'rate_limited' && body.details && typeof body.details === 'object' && 'retryAfterS' in body.details) {
       res.setHeader('Retry-After', String((body.details as { retryAfterS: number }).retryAfterS));
     }

@@ -7,6 +7,8 @@ import { isLithiumChemistry, labelCapacityPlausibility, type CellChemistry } fro
 import { requireFraction, requireInteger, requirePositive } from '../shared/validate';
 import { plain, withPrefix } from '../shared/text';
 import { benchFigure, type BenchFigure } from './figure';
+import type { FormulaKey } from '../figures/formulas';
+import type { FigureInput } from '../shared/explained';
 
 export type RuntimeLoad =
   | { kind: 'power'; watts: number }
@@ -77,6 +79,9 @@ export function runtimeReport(p: RuntimeInput): RuntimeReport {
   const assumptions: string[] = [];
   const loadWarnings: string[] = [];
   let direct = false;
+  /** The peak load power figure (key `loadPower`), carrying the load warnings gathered so far. */
+  const loadPowerFigure = (label: string, formulaKey: FormulaKey, inputs: FigureInput[], assumption: string) =>
+    benchFigure({ key: 'loadPower', label, value: peakWatts, unit: 'W', formulaKey, inputs, assumptions: [assumption], warnings: loadWarnings.splice(0) });
   if (load.kind === 'power') {
     peakWatts = requirePositive(load.watts, 'Load power (W)');
     packAmpsPeak = peakWatts / (efficiency * packV);
@@ -94,19 +99,10 @@ export function runtimeReport(p: RuntimeInput): RuntimeReport {
       );
     }
     figures.push(
-      benchFigure({
-        key: 'loadPower',
-        label: 'Load power',
-        value: peakWatts,
-        unit: 'W',
-        formulaKey: 'electrical.power',
-        inputs: [
-          { label: 'Supply voltage', value: supply, unit: 'V' },
-          { label: 'Load resistance', value: ohms, unit: 'Ω' },
-        ],
-        assumptions: ['Resistance constant (a heater element warms up and changes a little).'],
-        warnings: loadWarnings.splice(0),
-      }),
+      loadPowerFigure('Load power', 'electrical.power', [
+        { label: 'Supply voltage', value: supply, unit: 'V' },
+        { label: 'Load resistance', value: ohms, unit: 'Ω' },
+      ], 'Resistance constant (a heater element warms up and changes a little).'),
     );
   } else if (load.kind === 'current') {
     const amps = requirePositive(load.amps, 'Load current (A)');
@@ -116,19 +112,10 @@ export function runtimeReport(p: RuntimeInput): RuntimeReport {
       loadWarnings.push('Efficiency is not applied to a current drawn from the pack: the converter losses are already in that current.');
     }
     figures.push(
-      benchFigure({
-        key: 'loadPower',
-        label: 'Power drawn from the pack',
-        value: peakWatts,
-        unit: 'W',
-        formulaKey: 'pack.loadFromCurrent',
-        inputs: [
-          { label: 'Current from the pack', value: amps, unit: 'A' },
-          { label: 'Pack nominal voltage', value: packV, unit: 'V' },
-        ],
-        assumptions: ['The current is drawn from the pack at its nominal voltage.'],
-        warnings: loadWarnings.splice(0),
-      }),
+      loadPowerFigure('Power drawn from the pack', 'pack.loadFromCurrent', [
+        { label: 'Current from the pack', value: amps, unit: 'A' },
+        { label: 'Pack nominal voltage', value: packV, unit: 'V' },
+      ], 'The current is drawn from the pack at its nominal voltage.'),
     );
   } else {
     throw new RangeError('The load needs its power (W), its resistance (Ω) with a supply voltage (V), or its current (A).');

@@ -1,5 +1,6 @@
 import type { EntityManager } from '@mikro-orm/sqlite';
 import { costModelSchema, type CostModelDto, type TeardownCostModel } from '@splitcase/contracts';
+import { findInChunks, refId } from '../../db/batch';
 import type { AuthUser } from '../../http/route';
 import { diffChanges, recordAudit } from '../audit/audit.service';
 import type { Teardown } from '../teardowns/teardown.entity';
@@ -27,11 +28,21 @@ export async function getWorkspaceModel(em: EntityManager) {
 
 /** The model a teardown is costed with: its own if it has one, else the workspace default. */
 export async function getTeardownModel(em: EntityManager, teardown: Teardown): Promise<TeardownCostModel> {
-  const own = await em.findOne(CostModelSchema, { teardown: teardown.id }, { populate: ['updatedBy'] });
+  return (await teardownModels(em, [teardown.id])).get(teardown.id)!;
+}
+
+/** The models many teardowns are costed with, keyed by teardown id, in two queries whatever the count. */
+export async function teardownModels(em: EntityManager, teardownIds: readonly number[]): Promise<Map<number, TeardownCostModel>> {
+  const own = await findInChunks(teardownIds, (chunk) => em.find(CostModelSchema, { teardown: { $in: chunk } }, { populate: ['updatedBy'] }));
   const workspace = await workspaceModelRow(em);
   const defaults = readModel(workspace);
-  if (own) return { model: readModel(own), source: 'teardown', defaults, ...stamp(own) };
-  return { model: defaults, source: 'workspace', defaults, ...stamp(workspace) };
+  const ownOf = new Map(own.map((row) => [refId(row.teardown), row]));
+  const out = new Map<number, TeardownCostModel>();
+  for (const id of teardownIds) {
+    const row = ownOf.get(id);
+    out.set(id, row ? { model: readModel(row), source: 'teardown', defaults, ...stamp(row) } : { model: defaults, source: 'workspace', defaults, ...stamp(workspace) });
+  }
+  return out;
 }
 
 function audit(em: EntityManager, user: AuthUser, before: CostModelDto, after: CostModelDto, teardown: Teardown | null, action: string, summary: string) {

@@ -9,13 +9,14 @@ import {
   type CostModel,
   type RateTable as CalcRateTable,
 } from '@splitcase/calc';
-import { SALES_TAX_SOURCE, type CostModelDto, type CostRollUpDto, type ImpliedMarginDto, type PartCategory, type PartPriceDto, type PriceView, type SalesTaxSource, type WorkspaceSettings } from '@splitcase/contracts';
+import { SALES_TAX_SOURCE, type CostModelDto, type CostRollUpDto, type ImpliedMarginDto, type PartCategory, type PartPriceDto, type PriceView, type SalesTaxSource, type TeardownCostModel, type WorkspaceSettings } from '@splitcase/contracts';
 import { AppError, validationError } from '../../http/errors';
 import { PartSchema, type Part } from '../parts/part.entity';
 import { getSettings } from '../settings/settings.service';
 import type { Device } from '../devices/device.entity';
 import type { Teardown } from '../teardowns/teardown.entity';
-import { getTeardownModel } from './cost-model.service';
+import { teardownModels } from './cost-model.service';
+import { findInChunks, groupBy, refId } from '../../db/batch';
 import { PartPriceSchema, type PartPrice } from './part-price.entity';
 import { categoriesFor, totalsOnlyLine } from './price-visibility';
 import { currentRateTable, hasRate } from './rates.service';
@@ -82,10 +83,37 @@ const noRate = (code: string, table: RateTable | null) =>
 
 /** The parts of a teardown in BOM order with their prices (price null when not priced). */
 export async function pricedParts(em: EntityManager, teardownId: number): Promise<{ part: Part; price: PartPrice | null }[]> {
-  const parts = await em.find(PartSchema, { teardown: teardownId }, { orderBy: { position: 'asc', id: 'asc' } });
-  const prices = parts.length ? await em.find(PartPriceSchema, { part: { $in: parts.map((p) => p.id) } }, { populate: ['updatedBy'] }) : [];
+  return (await pricedPartsOf(em, [teardownId])).get(teardownId) ?? [];
+}
+
+/** The priced parts of many teardowns, keyed by teardown id (BOM order), in two queries whatever the count. */
+async function pricedPartsOf(em: EntityManager, teardownIds: readonly number[]): Promise<Map<number, { part: Part; price: PartPrice | null }[]>> {
+  const parts = await findInChunks(teardownIds, (chunk) => em.find(PartSchema, { teardown: { $in: chunk } }, { orderBy: { position: 'asc', id: 'asc' } }));
+  const partIds = parts.map((p) => p.id);
+  const prices = partIds.length ? await findInChunks(partIds, (chunk) => em.find(PartPriceSchema, { part: { $in: chunk } }, { populate: ['updatedBy'] })) : [];
   const byPart = new Map(prices.map((p) => [p.part.id, p]));
-  return parts.map((part) => ({ part, price: byPart.get(part.id) ?? null }));
+  return groupBy(
+    parts.map((part) => ({ part, price: byPart.get(part.id) ?? null })),
+    (i) => refId(i.part.teardown),
+  );
+}
+
+/** What the should-cost of some teardowns is made from: read once for all of them (costReads), then costOf each. */
+export interface CostReads {
+  items: Map<number, { part: Part; price: PartPrice | null }[]>;
+  models: Map<number, TeardownCostModel>;
+  table: RateTable | null;
+  settings: WorkspaceSettings;
+}
+
+/** The parts, prices, cost models, current rate table and settings of many teardowns, in a fixed number of queries. */
+export async function costReads(em: EntityManager, teardowns: readonly Teardown[]): Promise<CostReads> {
+  const ids = [...new Set(teardowns.map((t) => t.id))];
+  const items = await pricedPartsOf(em, ids);
+  const models = await teardownModels(em, ids);
+  const table = await currentRateTable(em);
+  const settings = await getSettings(em);
+  return { items, models, table, settings };
 }
 
 /**
@@ -100,10 +128,14 @@ export async function teardownCost(
   query: { volume?: number | undefined; currency?: string | undefined },
   view: PriceView,
 ): Promise<CostRollUpDto> {
-  const items = await pricedParts(em, teardown.id);
-  const modelInfo = await getTeardownModel(em, teardown);
-  const table = await currentRateTable(em);
-  const settings = await getSettings(em);
+  return costOf(await costReads(em, [teardown]), teardown, query, view);
+}
+
+/** teardownCost from what costReads read (the teardown's device loaded). */
+export function costOf(reads: CostReads, teardown: Teardown, query: { volume?: number | undefined; currency?: string | undefined }, view: PriceView): CostRollUpDto {
+  const items = reads.items.get(teardown.id) ?? [];
+  const modelInfo = reads.models.get(teardown.id)!;
+  const { table, settings } = reads;
   const model = modelInfo.model;
   const currency = query.currency ?? settings.reportingCurrency;
   const volumes = model.volumes;

@@ -1,7 +1,9 @@
 // The normalised comparison of a lineup. Per device it takes the latest teardown the caller may
 // see, reads its figures (figures service), its should-cost (cost service) and its latest
 // discharge run (bench runs), converts money into the lineup currency with the current rates, and
-// lets packages/calc do the rest: comparisonMetrics, weightedScores and paretoFrontierXY.
+// lets packages/calc do the rest: comparisonMetrics, weightedScores and paretoFrontierXY. What
+// the rows need is read for all devices at once (LineupReads), so the query count does not grow
+// with the lineup.
 import type { EntityManager } from '@mikro-orm/sqlite';
 import {
   chooseMode,
@@ -38,7 +40,8 @@ import {
 const modeRuleWords = (m: LineupModeChoice) => (m.rule === 'named' ? `called "${m.name}"` : `"${LINEUP_MODE_RULE.labels[m.rule]}"`);
 import { AppError } from '../../http/errors';
 import type { AuthUser } from '../../http/route';
-import { teardownCost } from '../cost/cost.service';
+import { costOf, costReads, type CostReads } from '../cost/cost.service';
+import { findInChunks, refId } from '../../db/batch';
 import { currentRateTable, hasRate } from '../cost/rates.service';
 import type { RateTable } from '../cost/rate-table.entity';
 import type { Device } from '../devices/device.entity';
@@ -180,18 +183,39 @@ const textInput = (f: Figure | undefined, key: string) => {
   return typeof v === 'string' ? v : undefined;
 };
 
+/** What the rows are made from, read for the whole lineup at once (a fixed number of queries whatever the count). */
+interface LineupReads {
+  /** The figures service's input per teardown. */
+  inputs: Map<number, TeardownFigureInput>;
+  /** Parts, prices, cost models, rates and settings of the teardowns. */
+  cost: CostReads;
+  /** Finding counts by severity per teardown. */
+  findings: Map<number, Record<Severity, number>>;
+}
+
+/** Finding counts by severity of many teardowns, in one query per chunk of ids. */
+async function findingCounts(em: EntityManager, teardownIds: readonly number[]): Promise<Map<number, Record<Severity, number>>> {
+  const rows = await findInChunks(teardownIds, (chunk) => em.find(FindingSchema, { teardown: { $in: chunk } }, { fields: ['id', 'teardown', 'severity'] as never }));
+  const out = new Map<number, Record<Severity, number>>();
+  for (const f of rows) {
+    const id = refId(f.teardown);
+    const counts = out.get(id) ?? { note: 0, minor: 0, major: 0, critical: 0 };
+    counts[f.severity] += 1;
+    out.set(id, counts);
+  }
+  return out;
+}
+
 /** Everything known about one device for the lineup, in the lineup currency. */
-async function deviceRow(
-  em: EntityManager,
+function deviceRow(
+  reads: LineupReads,
   device: Device,
   teardown: Teardown | null,
-  /** The figures service's input for the teardown (read for the whole lineup at once). */
-  teardownInput: TeardownFigureInput | null,
   currency: string,
   table: RateTable | null,
   viewer: boolean,
   modeChoice: LineupModeChoice,
-): Promise<DeviceRow> {
+): DeviceRow {
   let mode: DeviceRow['mode'] = null;
   const missing: DeviceRow['missing'] = {};
   const sources: DeviceRow['sources'] = {};
@@ -233,7 +257,7 @@ async function deviceRow(
   const from = `teardown #${teardown.id} (${teardown.date})`;
 
   // Figures of the teardown (pack, loads, heaters, label capacity), through the figures service's input and calc.
-  const input = teardownInput;
+  const input = reads.inputs.get(teardown.id) ?? null;
   let figures: Figure[] = [];
   try {
     if (input) figures = teardownFigures(input).figures;
@@ -334,7 +358,7 @@ async function deviceRow(
   // Should-cost and implied margin from the cost service, at the cost model's middle volume (totals
   // only: a comparison never carries line prices, whoever reads it).
   try {
-    const cost = await teardownCost(em, teardown, { currency }, 'totals');
+    const cost = costOf(reads.cost, teardown, { currency }, 'totals');
     if (cost.lines.length === 0) {
       missing.shouldCost = 'No parts list on the teardown yet.';
       missing.impliedMargin = missing.shouldCost;
@@ -365,8 +389,7 @@ async function deviceRow(
     missing.impliedMargin = missing.shouldCost;
   }
 
-  const findings = await em.find(FindingSchema, { teardown: teardown.id }, { fields: ['id', 'severity'] as never });
-  for (const f of findings) fig.findingsBySeverity[f.severity] += 1;
+  fig.findingsBySeverity = { ...fig.findingsBySeverity, ...reads.findings.get(teardown.id) };
   for (const severity of SEVERITY.values) sources[FINDING_KEYS[severity]] = `Findings of ${from}`;
   const heater = device.category === 'pocket-heater' || (input?.loads.some((l) => l.kind === 'heater') ?? false);
   return { device, teardown, figures: fig, missing, sources, retail, notes, noTeardown, heater, mode };
@@ -408,12 +431,9 @@ export async function lineupComparison(em: EntityManager, user: AuthUser, lineup
   const latestOf = new Map(devices.map((d) => [d.id, teardowns.get(d.id)?.[0] ?? null]));
   const latest = [...latestOf.values()].filter((t): t is Teardown => t !== null);
   await em.populate(latest, ['device']);
-  const inputs = await figureInputs(em, latest);
-  const rows: DeviceRow[] = [];
-  for (const d of devices) {
-    const t = latestOf.get(d.id) ?? null;
-    rows.push(await deviceRow(em, d, t, t ? (inputs.get(t.id) ?? null) : null, currency, table, viewer, opts.mode));
-  }
+  const ids = latest.map((t) => t.id);
+  const reads: LineupReads = { inputs: await figureInputs(em, latest), cost: await costReads(em, latest), findings: await findingCounts(em, ids) };
+  const rows = devices.map((d) => deviceRow(reads, d, latestOf.get(d.id) ?? null, currency, table, viewer, opts.mode));
 
   const computed = rows.map((r) => {
     const metrics = comparisonMetrics(r.figures);

@@ -1,6 +1,7 @@
 // Bench runs: ingest (parse → analyse → keep files → one flush), re-analysis, reads, the downsampled
 // series and the DTOs. Uploads and the demo seed go through ingestRun alike.
 import { existsSync } from 'node:fs';
+import type { FilterQuery } from '@mikro-orm/core';
 import type { EntityManager } from '@mikro-orm/sqlite';
 import type { Request } from 'express';
 import { lttbIndices } from '@splitcase/calc';
@@ -19,6 +20,7 @@ import { analyseRun, compareRun, type AnalysisContext } from './analyse';
 import { BenchRunSchema, type BenchRun } from './bench-run.entity';
 import { parseRunFile } from './parse';
 import { sweepFolders, type SweepResult } from '../../lib/leftovers';
+import { findInChunks, refId } from '../../db/batch';
 import { AuditEntrySchema } from '../audit/audit-entry.entity';
 import {
   columnsOf,
@@ -39,26 +41,56 @@ import {
 
 const numberOrNull = (x: number | string | null | undefined) => (x === null || x === undefined ? null : Number(x));
 
-/** Everything the analysis and the comparison need about a teardown. */
-export async function analysisContext(em: EntityManager, teardown: Teardown): Promise<AnalysisContext> {
-  await em.populate(teardown, ['device']);
-  const device = teardown.device;
-  const pack = await em.findOne(PackSchema, { teardown: teardown.id });
-  const heater = await em.findOne(LoadSchema, { teardown: teardown.id, kind: 'heater', surfaceMaterial: { $ne: null } }, { orderBy: { id: 'asc' } });
+/**
+ * Everything the analysis and the comparison need about each teardown (keyed by id), in a fixed
+ * number of queries whatever the count: the devices, the packs, the heaters with a surface
+ * material, the settings, the discharge runs.
+ */
+export async function analysisContexts(em: EntityManager, teardowns: Teardown[]): Promise<Map<number, AnalysisContext>> {
+  const out = new Map<number, AnalysisContext>();
+  if (!teardowns.length) return out;
+  await em.populate(teardowns, ['device']);
+  const ids = [...new Set(teardowns.map((t) => t.id))];
+  const packs = await findInChunks(ids, (chunk) => em.find(PackSchema, { teardown: { $in: chunk } }));
+  const heaters = await findInChunks(ids, (chunk) =>
+    em.find(LoadSchema, { teardown: { $in: chunk }, kind: 'heater', surfaceMaterial: { $ne: null } }, { orderBy: { id: 'asc' } }),
+  );
   const settings = await getSettings(em);
-  const discharge = await em.findOne(BenchRunSchema, { teardown: teardown.id, kind: 'discharge' }, { orderBy: { createdAt: 'desc', id: 'desc' } });
-  const dischargeWh = discharge?.analysis.wattHours;
-  return {
-    device: { claimCapacityAh: numberOrNull(device.claimCapacityAh), claimCapacityWh: numberOrNull(device.claimCapacityWh) },
-    pack: pack
-      ? { cellNominalVolts: Number(pack.cellNominalVolts), cellRatedAh: Number(pack.cellRatedAh), series: pack.series, parallel: pack.parallel }
-      : null,
-    heaterMaterial: heater?.surfaceMaterial ?? null,
-    measuredCells: discharge && typeof dischargeWh === 'number' ? { wattHours: dischargeWh, label: discharge.label } : null,
-    teardownContactSeconds: teardown.contactSeconds ?? null,
-    defaultContactSeconds: settings.defaultContactSeconds,
-    cutoffDebounceSeconds: settings.cutoffDebounceSeconds,
+  const discharges = await findInChunks(ids, (chunk) =>
+    em.find(BenchRunSchema, { teardown: { $in: chunk }, kind: 'discharge' }, { orderBy: { createdAt: 'desc', id: 'desc' } }),
+  );
+  const packOf = new Map(packs.map((p) => [refId(p.teardown), p]));
+  // In their order (first heater by id, latest discharge run): the first row seen for a teardown counts.
+  const firstOf = <T extends { teardown: unknown }>(rows: T[]) => {
+    const m = new Map<number, T>();
+    for (const r of rows) if (!m.has(refId(r.teardown))) m.set(refId(r.teardown), r);
+    return m;
   };
+  const heaterOf = firstOf(heaters);
+  const dischargeOf = firstOf(discharges);
+  for (const teardown of teardowns) {
+    const device = teardown.device;
+    const pack = packOf.get(teardown.id);
+    const discharge = dischargeOf.get(teardown.id);
+    const dischargeWh = discharge?.analysis.wattHours;
+    out.set(teardown.id, {
+      device: { claimCapacityAh: numberOrNull(device.claimCapacityAh), claimCapacityWh: numberOrNull(device.claimCapacityWh) },
+      pack: pack
+        ? { cellNominalVolts: Number(pack.cellNominalVolts), cellRatedAh: Number(pack.cellRatedAh), series: pack.series, parallel: pack.parallel }
+        : null,
+      heaterMaterial: heaterOf.get(teardown.id)?.surfaceMaterial ?? null,
+      measuredCells: discharge && typeof dischargeWh === 'number' ? { wattHours: dischargeWh, label: discharge.label } : null,
+      teardownContactSeconds: teardown.contactSeconds ?? null,
+      defaultContactSeconds: settings.defaultContactSeconds,
+      cutoffDebounceSeconds: settings.cutoffDebounceSeconds,
+    });
+  }
+  return out;
+}
+
+/** Everything the analysis and the comparison need about one teardown. */
+export async function analysisContext(em: EntityManager, teardown: Teardown): Promise<AnalysisContext> {
+  return (await analysisContexts(em, [teardown])).get(teardown.id)!;
 }
 
 /** Drops unset options so the stored JSON says only what the engineer chose. */
@@ -214,32 +246,63 @@ export async function teardownRuns(em: EntityManager, teardown: Teardown): Promi
   return em.find(BenchRunSchema, { teardown: teardown.id }, { populate: ['teardown', 'teardown.device', 'createdBy'], orderBy: { createdAt: 'desc', id: 'desc' } });
 }
 
-/** Runs the user may read, across teardowns (for overlays), newest first. */
+/** At most this many runs in a list across teardowns. */
+export const RUN_LIST_LIMIT = 500;
+
+/** The text a run is found by: maker, model, unit label and run label. */
+const runText = (r: BenchRun) => `${r.teardown.device.maker} ${r.teardown.device.model} ${r.teardown.unitLabel ?? ''} ${r.label}`.toLowerCase();
+
+/**
+ * A LIKE pattern that finds at least every text containing the word case-insensitively: SQLite's
+ * LIKE folds ASCII letters only, so any other character (and the word's own % and _) stands for
+ * any character here, and the exact rule is checked on the rows found.
+ */
+const likeAtLeast = (word: string) => `%${word.replace(/[^\x20-\x7e]/gu, '_')}%`;
+
+/**
+ * Runs the user may read, across teardowns (for overlays), newest first, at most RUN_LIST_LIMIT.
+ * Every word must be in the maker, model, unit label or run label (case-insensitive); the words
+ * are looked for in SQL, over all runs, not only the latest.
+ */
 export async function visibleRuns(em: EntityManager, user: AuthUser, filter: { kind?: RunKind | undefined; q?: string | undefined }): Promise<BenchRun[]> {
-  const runs = await em.find(
-    BenchRunSchema,
-    { teardown: visibleTeardowns(user), ...(filter.kind ? { kind: filter.kind } : {}) },
-    { populate: ['teardown', 'teardown.device', 'createdBy'], orderBy: { createdAt: 'desc', id: 'desc' }, limit: 500 },
-  );
   const words = (filter.q ?? '').toLowerCase().split(/\s+/).filter(Boolean);
-  if (!words.length) return runs;
-  return runs.filter((r) => {
-    const text = `${r.teardown.device.maker} ${r.teardown.device.model} ${r.teardown.unitLabel ?? ''} ${r.label}`.toLowerCase();
-    return words.every((w) => text.includes(w));
-  });
+  const where: FilterQuery<BenchRun> = {
+    teardown: visibleTeardowns(user),
+    ...(filter.kind ? { kind: filter.kind } : {}),
+    ...(words.length
+      ? {
+          $and: words.map((w) => {
+            const like = { $like: likeAtLeast(w) };
+            return { $or: [{ label: like }, { teardown: { unitLabel: like } }, { teardown: { device: { maker: like } } }, { teardown: { device: { model: like } } }] };
+          }),
+        }
+      : {}),
+  };
+  const out: BenchRun[] = [];
+  // One query in the usual case; more pages only when the pattern found rows the exact rule refuses.
+  for (let offset = 0; out.length < RUN_LIST_LIMIT; offset += RUN_LIST_LIMIT) {
+    const page = await em.find(BenchRunSchema, where, {
+      populate: ['teardown', 'teardown.device', 'createdBy'],
+      orderBy: { createdAt: 'desc', id: 'desc' },
+      limit: RUN_LIST_LIMIT,
+      offset,
+    });
+    for (const r of page) if (out.length < RUN_LIST_LIMIT && words.every((w) => runText(r).includes(w))) out.push(r);
+    if (page.length < RUN_LIST_LIMIT) break;
+  }
+  return out;
 }
 
 /** DTOs with the comparison worked out now (label, pack and threshold may have changed since the upload). */
 export async function toRunDtos(em: EntityManager, runs: BenchRun[]): Promise<RunDto[]> {
   const settings = await getSettings(em);
-  const contexts = new Map<number, AnalysisContext>();
+  const contexts = await analysisContexts(
+    em,
+    runs.map((r) => r.teardown),
+  );
   const out: RunDto[] = [];
   for (const run of runs) {
-    let ctx = contexts.get(run.teardown.id);
-    if (!ctx) {
-      ctx = await analysisContext(em, run.teardown);
-      contexts.set(run.teardown.id, ctx);
-    }
+    const ctx = contexts.get(run.teardown.id)!;
     const device = run.teardown.device;
     out.push({
       id: run.id,
