@@ -36,7 +36,7 @@ const partFields = {
   /** The singular form is accepted too (same meaning). */
   designator: trimmed(300),
   category: partCategorySchema,
-  description: safeString({ error: 'Required' }).trim().min(1, 'Required').max(500, 'At most 500 characters'),
+  description: safeString({ error: 'Required: describe the part.' }).trim().min(1, 'Required: describe the part.').max(500, 'At most 500 characters'),
   quantity: z
     .number({ error: (issue) => (given(issue.input) === null ? 'Enter a whole number of at least 1' : `${given(issue.input)} is not a number: enter a whole number of at least 1.`) })
     .int({ error: (issue) => `${String(issue.input)} is not a whole number.` })
