@@ -17,16 +17,10 @@ import { useCreateConverter } from '../api/create-converter';
 import { useDeleteConverter } from '../api/delete-converter';
 import { useUpdateConverter } from '../api/update-converter';
 import { FormFrame, RecordsCard, useCardForm } from './form-card';
-import { QuantityFields, TypedQuantity, labelsOf, quantityTexts } from './quantity-field';
+import { QuantityFields, quantityList, TypedQuantity, labelsOf, quantityTexts } from './quantity-field';
 
 // Labels, placeholders and the bare-number rule of each field: contracts' CONVERTER_FIELDS.
-const QUANTITIES = [
-  { key: 'inputVolts', unit: 'V' },
-  { key: 'outputVolts', unit: 'V' },
-  { key: 'ratedCurrentAmps', unit: 'A' },
-  { key: 'chargeCurrentAmps', unit: 'A' },
-  { key: 'efficiency', unit: '' },
-] as const;
+const QUANTITIES = quantityList({ inputVolts: 'V', outputVolts: 'V', ratedCurrentAmps: 'A', chargeCurrentAmps: 'A', efficiency: '' });
 type QKey = (typeof QUANTITIES)[number]['key'];
 
 const LABELS = { topology: 'Topology', role: 'Role', label: 'Label', efficiencySource: 'Efficiency is', ...labelsOf(CONVERTER_FIELDS) };

@@ -19,19 +19,10 @@ import { useCreateLoad } from '../api/create-load';
 import { useDeleteLoad } from '../api/delete-load';
 import { useUpdateLoad } from '../api/update-load';
 import { FormFrame, RecordsCard, useCardForm } from './form-card';
-import { QuantityFields, TypedQuantity, labelsOf, quantityTexts } from './quantity-field';
+import { QuantityFields, quantityList, TypedQuantity, labelsOf, quantityTexts } from './quantity-field';
 
 // Labels, placeholders and the bare-number rule of each field: contracts' LOAD_FIELDS.
-const QUANTITIES = [
-  { key: 'resistanceOhms', unit: 'Ω' },
-  { key: 'currentAmps', unit: 'A' },
-  { key: 'powerWatts', unit: 'W' },
-  { key: 'supplyVolts', unit: 'V' },
-  { key: 'count', unit: '' },
-  { key: 'duty', unit: '' },
-  { key: 'heatedAreaM2', unit: 'm²' },
-  { key: 'heatedMassKg', unit: 'kg' },
-] as const;
+const QUANTITIES = quantityList({ resistanceOhms: 'Ω', currentAmps: 'A', powerWatts: 'W', supplyVolts: 'V', count: '', duty: '', heatedAreaM2: 'm²', heatedMassKg: 'kg' });
 type QKey = (typeof QUANTITIES)[number]['key'];
 const only = (...keys: QKey[]) => QUANTITIES.filter((f) => keys.includes(f.key));
 

@@ -19,19 +19,10 @@ import { toast } from 'sonner';
 import { useDeletePack } from '../api/delete-pack';
 import { useSavePack } from '../api/save-pack';
 import { FormFrame, useCardForm } from './form-card';
-import { QuantityField, QuantityFields, TypedQuantity, labelsOf, quantityTexts } from './quantity-field';
+import { QuantityField, QuantityFields, quantityList, TypedQuantity, labelsOf, quantityTexts } from './quantity-field';
 
 // Labels, placeholders and the bare-number rule of each field: contracts' PACK_FIELDS.
-const QUANTITIES = [
-  { key: 'nominalVolts', unit: 'V' },
-  { key: 'maxVolts', unit: 'V' },
-  { key: 'capacityAh', unit: 'Ah' },
-  { key: 'measuredCapacityAh', unit: 'Ah' },
-  { key: 'series', unit: '' },
-  { key: 'parallel', unit: '' },
-  { key: 'massKg', unit: 'kg' },
-  { key: 'internalResistanceOhms', unit: 'Ω' },
-] as const;
+const QUANTITIES = quantityList({ nominalVolts: 'V', maxVolts: 'V', capacityAh: 'Ah', measuredCapacityAh: 'Ah', series: '', parallel: '', massKg: 'kg', internalResistanceOhms: 'Ω' });
 
 /** The two readings of the DC method (IEC 61960-3): the cell voltage at a low and at a high current. */
 const READINGS = ['lowAmps', 'lowVolts', 'highAmps', 'highVolts'] as const;

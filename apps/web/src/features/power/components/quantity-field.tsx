@@ -27,6 +27,9 @@ export interface QuantitySpec<K extends string> {
   unit: string;
 }
 
+/** A card's quantities in their order, from the unit each saved value is shown in: `{ nominalVolts: 'V', series: '' }`. */
+export const quantityList = <K extends string>(units: Record<K, string>): readonly QuantitySpec<K>[] => (Object.keys(units) as K[]).map((key) => ({ key, unit: units[key] }));
+
 /** A record of the power system as the API sends it: SI values by field and the text typed for each. */
 type Saved<K extends string> = Record<K, number | null> & { entered: Record<string, string> };
 
