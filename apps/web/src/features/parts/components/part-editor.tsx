@@ -175,12 +175,14 @@ export function DraftErrors({ errors }: { errors: PartRow['errors'] }) {
   const entries = Object.entries(errors);
   if (!entries.length) return null;
   return (
-    <ul className="space-y-0.5 text-sm text-brick-700" role="alert">
-      {entries.map(([field, message]) => (
-        <li key={field}>
-          {field !== '_' && <span className="font-medium">{LABELS[field as DraftField] ?? field}:</span>} {message}
-        </li>
-      ))}
-    </ul>
+    <div role="alert">
+      <ul className="space-y-0.5 text-sm text-brick-700">
+        {entries.map(([field, message]) => (
+          <li key={field}>
+            {field !== '_' && <span className="font-medium">{LABELS[field as DraftField] ?? field}:</span>} {message}
+          </li>
+        ))}
+      </ul>
+    </div>
   );
 }

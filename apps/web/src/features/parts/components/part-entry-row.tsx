@@ -23,7 +23,7 @@ export function PartEntryRow({ state, busy }: { state: EditorState; busy: boolea
         <td className="px-1.5 py-1">
           <DraftInput field="marking" mono placeholder="472" />
         </td>
-        <td className="px-1.5 py-1 text-right text-xs text-graphite-400">auto</td>
+        <td className="px-1.5 py-1 text-right text-xs text-graphite-600">auto</td>
         <td className="px-1.5 py-1">
           <DraftInput field="makerPartNumber" mono />
         </td>
