@@ -231,6 +231,20 @@ describe('parts CSV import', () => {
     expect(res.body.rows[0].errors).toEqual([]);
   });
 
+  it('checks a row by the rules of a part sent to the API: the same message, named by row and column', async () => {
+    const id = await newTeardown();
+    const long = 'x'.repeat(501);
+    const sent = await eng.post(`/api/teardowns/${id}/parts`, { category: 'ic', description: long, quantity: 1.5 }).expect(400);
+    const csv = ['Category,Description,Quantity,Mount', `ic,${long},1.5,smt`, 'ic,MCU,two,glued'].join('\n');
+    const res = await eng.post(`/api/teardowns/${id}/parts/import?dryRun=1`, { csv }).expect(200);
+    expect(res.body.errors).toEqual([
+      { row: 2, column: 'Description', message: sent.body.error.fields.description },
+      { row: 2, column: 'Quantity', message: sent.body.error.fields.quantity },
+      { row: 3, column: 'Quantity', message: '"two" is not a number: enter a whole number of at least 1.' },
+      { row: 3, column: 'Mount', message: 'Unknown mount "glued": choose smt, tht or manual.' },
+    ]);
+  });
+
   it('names a missing required column against the header row', async () => {
     const id = await newTeardown();
     const res = await eng.post(`/api/teardowns/${id}/parts/import?dryRun=1`, { csv: 'Designators,Description\nR1,Resistor' }).expect(200);

@@ -17,8 +17,18 @@ const trimmed = (max: number) =>
     .nullable()
     .transform((v) => (v === '' ? null : v));
 
-export const partCategorySchema = z.enum(PART_CATEGORY.values, { error: `Choose a category: ${PART_CATEGORY.values.join(', ')}` });
-export const mountTypeSchema = z.enum(MOUNT_TYPE.values, { error: 'Choose smt, tht or manual' });
+/** What was given, quoted for a message (`"gizmo"`), or null when nothing was. */
+const given = (input: unknown) => (input === undefined || input === null || input === '' ? null : `"${String(input)}"`);
+
+export const partCategorySchema = z.enum(PART_CATEGORY.values, {
+  error: (issue) =>
+    given(issue.input) === null
+      ? 'Required: say what kind of part this is (e.g. passive, ic, connector).'
+      : `Unknown category ${given(issue.input)}. Choose a category: ${PART_CATEGORY.values.join(', ')}.`,
+});
+export const mountTypeSchema = z.enum(MOUNT_TYPE.values, {
+  error: (issue) => (given(issue.input) === null ? 'Choose smt, tht or manual' : `Unknown mount ${given(issue.input)}: choose smt, tht or manual.`),
+});
 
 const partFields = {
   /** Reference designators as printed on the board, e.g. "R1, R2" (free text). */
@@ -26,11 +36,11 @@ const partFields = {
   /** The singular form is accepted too (same meaning). */
   designator: trimmed(300),
   category: partCategorySchema,
-  description: safeString({ error: 'Required' }).trim().min(1, 'Required').max(500, 'At most 500 characters'),
+  description: safeString({ error: 'Required: describe the part.' }).trim().min(1, 'Required: describe the part.').max(500, 'At most 500 characters'),
   quantity: z
-    .number({ error: 'Enter a whole number of at least 1' })
-    .int('Enter a whole number')
-    .min(1, 'At least 1')
+    .number({ error: (issue) => (given(issue.input) === null ? 'Enter a whole number of at least 1' : `${given(issue.input)} is not a number: enter a whole number of at least 1.`) })
+    .int({ error: (issue) => `${String(issue.input)} is not a whole number.` })
+    .min(1, { error: (issue) => `At least 1: ${String(issue.input)} is below 1 (a line needs at least one part).` })
     .max(100_000, 'At most 100 000'),
   mount: mountTypeSchema,
   /** The marking as read off the part ("472", "4R7", "68X", "104"). */
@@ -45,6 +55,39 @@ export const createPartBody = z.object({ ...partFields, quantity: partFields.qua
 export type CreatePartBody = z.input<typeof createPartBody>;
 
 export const updatePartBody = patchOf(partFields);
+
+/**
+ * A quantity as typed (the editor's field, a CSV cell): a whole number, spaces allowed ("1 000");
+ * not given (a blank CSV cell), 1. The number's own rules are the body's.
+ */
+const quantityText = z
+  .string()
+  .optional()
+  .transform((v): unknown => {
+    if (v === undefined) return 1;
+    const t = v.replace(/\s/g, '');
+    return /^[+-]?\d+(\.\d+)?$/.test(t) ? Number(t) : t;
+  })
+  .pipe(partFields.quantity);
+
+/**
+ * A part line as text: the parts editor's row (react-hook-form + zodResolver) and a row of the parts
+ * CSV import are both read with it, so a line has the same rules wherever it is typed. The output is
+ * a create/update body; a mount left out follows the category (`defaultMountFor`).
+ */
+export const partFormSchema = z.object({
+  designators: partFields.designators,
+  category: partCategorySchema,
+  description: partFields.description,
+  marking: partFields.marking,
+  makerPartNumber: partFields.makerPartNumber,
+  package: partFields.package,
+  quantity: quantityText,
+  mount: mountTypeSchema.optional(),
+  notes: partFields.notes,
+});
+export type PartFormValues = z.input<typeof partFormSchema>;
+export type PartForm = z.output<typeof partFormSchema>;
 export type UpdatePartBody = z.input<typeof updatePartBody>;
 
 export const reorderPartsBody = z.object({

@@ -227,6 +227,79 @@ export type ModeDto = z.infer<typeof modeSchema>;
 export const modeResponse = z.object({ mode: modeSchema });
 export const modesResponse = z.object({ modes: z.array(modeSchema) });
 
+// ---- forms: the power cards' fields as typed (react-hook-form + zodResolver) ----
+// A form checks what is required and the text's shape; the server is the one reader of quantities
+// (its units, ranges and messages). The output of each form schema is the request body.
+
+/** A quantity as typed ("2700 mAh"), sent as text for the server to read. */
+const typedText = safeString().trim().max(40, 'At most 40 characters');
+const typedRequired = typedText.min(1, 'Required');
+const typedOptional = typedText.transform((v) => (v === '' ? null : v));
+const typedOr = (blank: string) => typedText.transform((v) => (v === '' ? blank : v));
+/** A select with a "not recorded" option (''). */
+const optionalChoice = <T extends readonly [string, ...string[]]>(values: T) => z.union([z.literal(''), choice(values)]).transform((v) => (v === '' ? null : v));
+
+const READING_KEYS = ['lowAmps', 'lowVolts', 'highAmps', 'highVolts'] as const;
+
+export const packFormSchema = z.object({
+  chemistry: packBody.shape.chemistry,
+  cellFormat: packBody.shape.cellFormat,
+  joining: optionalChoice(JOINING.values),
+  protection: z.boolean(),
+  nominalVolts: typedRequired,
+  maxVolts: typedOptional,
+  capacityAh: typedRequired,
+  measuredCapacityAh: typedOptional,
+  series: typedOr('1'),
+  parallel: typedOr('1'),
+  massKg: typedOptional,
+  internalResistanceOhms: typedOptional,
+  /** All four readings of the DC method, or none. */
+  internalResistanceReadings: z
+    .object({ lowAmps: typedText, lowVolts: typedText, highAmps: typedText, highVolts: typedText })
+    .superRefine((r, ctx) => {
+      if (READING_KEYS.every((k) => r[k] === '')) return;
+      for (const k of READING_KEYS) if (r[k] === '') ctx.addIssue({ code: 'custom', path: [k], message: 'Required: give all four readings, or none' });
+    })
+    .transform((r) => (READING_KEYS.every((k) => r[k] === '') ? null : r)),
+});
+export type PackFormValues = z.input<typeof packFormSchema>;
+export type PackForm = z.output<typeof packFormSchema>;
+
+export const loadFormSchema = z.object({
+  kind: loadFields.kind,
+  label: loadFields.label,
+  connection: loadFields.connection,
+  /** The converter's id as the select gives it; '' is straight from the pack. */
+  converterId: z.string().transform((v) => (v === '' ? null : Number(v))),
+  surfaceMaterial: optionalChoice(SURFACE_MATERIAL.values),
+  elementMaterial: optionalChoice(ELEMENT_MATERIAL.values),
+  resistanceOhms: typedOptional,
+  currentAmps: typedOptional,
+  powerWatts: typedOptional,
+  supplyVolts: typedOptional,
+  count: typedOr('1'),
+  duty: typedOr('100 %'),
+  heatedAreaM2: typedOptional,
+  heatedMassKg: typedOptional,
+});
+export type LoadFormValues = z.input<typeof loadFormSchema>;
+export type LoadForm = z.output<typeof loadFormSchema>;
+
+export const converterFormSchema = z.object({
+  label: converterFields.label,
+  topology: converterFields.topology,
+  role: converterFields.role,
+  efficiencySource: converterFields.efficiencySource,
+  inputVolts: typedRequired,
+  outputVolts: typedRequired,
+  ratedCurrentAmps: typedOptional,
+  chargeCurrentAmps: typedOptional,
+  efficiency: typedOptional,
+});
+export type ConverterFormValues = z.input<typeof converterFormSchema>;
+export type ConverterForm = z.output<typeof converterFormSchema>;
+
 export const dutyForTargetQuery = z.object({
   /** Target surface temperature ("45 °C" or 45). */
   target: safeString().trim().min(1, 'Required').max(40, 'At most 40 characters').default('45 °C'),

@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import { Pencil, Trash2, X } from 'lucide-react';
 import { Button } from './button';
 import type { Column } from './data-table';
@@ -16,8 +17,11 @@ export function RowActions({
   onAskDelete,
   onCancelDelete,
   onDelete,
+  editDisabled = false,
 }: {
   confirming: boolean;
+  /** Another row is being edited. */
+  editDisabled?: boolean;
   busy: boolean;
   editLabel: string;
   deleteLabel: string;
@@ -30,7 +34,7 @@ export function RowActions({
   if (confirming) {
     return (
       <span className="inline-flex items-center gap-1">
-        <Button size="sm" variant="danger" className="h-7" busy={busy} onClick={onDelete}>
+        <Button size="sm" variant="danger" className="h-7" busy={busy} onClick={onDelete} autoFocus>
           Delete
         </Button>
         <button type="button" className="rounded p-1 text-graphite-500 hover:bg-graphite-100" aria-label={keepLabel} onClick={onCancelDelete}>
@@ -41,7 +45,7 @@ export function RowActions({
   }
   return (
     <span className="inline-flex">
-      <button type="button" className="rounded p-1.5 text-graphite-500 hover:bg-graphite-100" aria-label={editLabel} onClick={onEdit}>
+      <button type="button" className="rounded p-1.5 text-graphite-500 hover:bg-graphite-100 disabled:opacity-40" aria-label={editLabel} disabled={editDisabled} onClick={onEdit}>
         <Pencil className="size-3.5" />
       </button>
       <button type="button" className="rounded p-1.5 text-graphite-500 hover:bg-graphite-100" aria-label={deleteLabel} onClick={onAskDelete}>
@@ -52,8 +56,10 @@ export function RowActions({
 }
 
 /**
- * The last column of an editable table: RowActions per row for editors, nothing for readers.
- * `confirming` is the id of the row whose delete waits for its second click.
+ * The last column of an editable table, pinned to the right edge: RowActions per row for editors,
+ * nothing for readers. `confirming` is the id of the row whose delete waits for its second click.
+ * A table edited in place gives `editingCell` (the save/cancel of the row being edited) and
+ * `editDisabled` (while a row is edited); clicks on the actions never reach the row.
  */
 export function rowActionsColumn<T extends { id: number }>(o: {
   canEdit: boolean;
@@ -65,6 +71,9 @@ export function rowActionsColumn<T extends { id: number }>(o: {
   keepLabel: string;
   onEdit: (row: T) => void;
   onDelete: (row: T) => void;
+  editingCell?: (row: T) => ReactNode | undefined;
+  editDisabled?: boolean;
+  className?: string;
 }): Column<T> {
   return {
     id: 'actions',
@@ -72,21 +81,27 @@ export function rowActionsColumn<T extends { id: number }>(o: {
     value: () => '',
     sortable: false,
     align: 'right',
-    className: 'whitespace-nowrap',
+    className: `whitespace-nowrap ${o.className ?? ''}`,
     pinRight: o.canEdit,
     cell: (row) =>
       o.canEdit ? (
-        <RowActions
-          confirming={o.confirming === row.id}
-          busy={o.busy}
-          editLabel={o.editLabel(row)}
-          deleteLabel={o.deleteLabel(row)}
-          keepLabel={o.keepLabel}
-          onEdit={() => o.onEdit(row)}
-          onAskDelete={() => o.setConfirming(row.id)}
-          onCancelDelete={() => o.setConfirming(null)}
-          onDelete={() => o.onDelete(row)}
-        />
+        // Clicks on the actions are not clicks on the row (a row click starts editing in some tables).
+        <span className="inline-flex" onClick={(e) => e.stopPropagation()}>
+          {o.editingCell?.(row) ?? (
+            <RowActions
+              confirming={o.confirming === row.id}
+              busy={o.busy}
+              editLabel={o.editLabel(row)}
+              deleteLabel={o.deleteLabel(row)}
+              keepLabel={o.keepLabel}
+              onEdit={() => o.onEdit(row)}
+              onAskDelete={() => o.setConfirming(row.id)}
+              onCancelDelete={() => o.setConfirming(null)}
+              onDelete={() => o.onDelete(row)}
+              editDisabled={o.editDisabled}
+            />
+          )}
+        </span>
       ) : null,
   };
 }

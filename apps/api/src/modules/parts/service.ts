@@ -5,6 +5,8 @@ import {
   PART_CSV_COLUMNS,
   PART_CSV_COMPUTED,
   defaultMountFor,
+  partFormSchema,
+  type PartForm,
   type CsvRowError,
   type ImportPreviewRow,
   type MountType,
@@ -131,7 +133,8 @@ const MOUNT_LOOKUP = new Map<string, MountType>([
 for (const v of MOUNT_TYPE.values) MOUNT_LOOKUP.set(squash(MOUNT_TYPE.labels[v]), v);
 
 const MAX_IMPORT_ROWS = 5000;
-const LIMITS: Partial<Record<PartCsvKey, number>> = { designators: 300, description: 500, marking: 120, makerPartNumber: 120, package: 80, notes: 4000 };
+type PartLineKey = keyof PartForm;
+const COLUMN_ORDER: readonly string[] = PART_CSV_COLUMNS.map((c) => c.key);
 
 export interface ImportPlan {
   delimiter: string;
@@ -191,65 +194,58 @@ export function planPartsImport(csv: string): ImportPlan {
     const rowErrors: CsvRowError[] = [];
     const fail = (key: PartCsvKey | '(row)', message: string) =>
       rowErrors.push({ row: line, column: key === '(row)' ? key : headerName(key), message });
-    const cell = (key: PartCsvKey): string | null => {
-      if (PART_CSV_COMPUTED.includes(key)) return null;
+    const cell = (key: PartCsvKey): string | undefined => {
+      if (PART_CSV_COMPUTED.includes(key)) return undefined;
       const i = columnOf.get(key);
-      if (i === undefined) return null;
+      if (i === undefined) return undefined;
       const raw = unguardCell((cells[i] ?? '').trim());
-      if (raw === '') return null;
-      const max = LIMITS[key];
-      if (max && raw.length > max) {
-        fail(key, `At most ${max} characters (this cell has ${raw.length}).`);
-        return null;
-      }
-      return raw;
+      return raw === '' ? undefined : raw;
     };
     if (cells.length > parsed.header.length) fail('(row)', `This row has ${cells.length} cells but the header has ${parsed.header.length}: check the separator and the quotes.`);
 
+    // The cells as a part line: words the trade uses for a category or a mount ("resistor", "SMD")
+    // are read as ours; every rule is the contracts' part schema, as in the parts editor.
     const categoryText = cell('category');
-    let category: PartCategory | null = null;
-    if (!categoryText) fail('category', 'Required: say what kind of part this is (e.g. passive, ic, connector).');
-    else {
-      category = CATEGORY_LOOKUP.get(squash(categoryText).replace(/[^a-z0-9]/g, '')) ?? null;
-      if (!category) fail('category', `Unknown category "${categoryText}": use one of ${PART_CATEGORY.values.join(', ')}.`);
-    }
-    const description = cell('description');
-    if (!description) fail('description', 'Required: describe the part.');
-
-    const quantityText = cell('quantity');
-    let quantity: number | null = 1;
-    if (quantityText !== null) {
-      const n = Number(quantityText.replace(/\s/g, ''));
-      if (!/^[+-]?\d+(\.\d+)?$/.test(quantityText.replace(/\s/g, '')) || !Number.isFinite(n)) {
-        fail('quantity', `"${quantityText}" is not a number: enter a whole number of at least 1.`);
-        quantity = null;
-      } else if (!Number.isInteger(n)) {
-        fail('quantity', `${quantityText} is not a whole number.`);
-        quantity = null;
-      } else if (n < 1) {
-        fail('quantity', `${quantityText} is below 1: a line needs at least one part.`);
-        quantity = null;
-      } else if (n > 100_000) {
-        fail('quantity', 'At most 100 000.');
-        quantity = null;
-      } else quantity = n;
-    }
     const mountText = cell('mount');
-    let mount: MountType | null = category ? defaultMount(category) : 'smt';
-    if (mountText !== null) {
-      mount = MOUNT_LOOKUP.get(squash(mountText)) ?? null;
-      if (!mount) fail('mount', `Unknown mount "${mountText}": use smt, tht or manual.`);
-    }
-    const v: PartValues = {
+    const input: Record<PartLineKey, string | undefined> = {
       designators: cell('designators'),
-      category: category ?? 'other',
-      description: description ?? '',
+      category: categoryText === undefined ? undefined : (CATEGORY_LOOKUP.get(squash(categoryText).replace(/[^a-z0-9]/g, '')) ?? categoryText),
+      description: cell('description'),
       marking: cell('marking'),
       makerPartNumber: cell('makerPartNumber'),
       package: cell('package'),
+      quantity: cell('quantity'),
+      mount: mountText === undefined ? undefined : (MOUNT_LOOKUP.get(squash(mountText)) ?? mountText),
+      notes: cell('notes'),
+    };
+    const read = partFormSchema.safeParse(input);
+    const failed = new Set<PartLineKey>();
+    for (const issue of read.success ? [] : read.error.issues.toSorted((a, b) => COLUMN_ORDER.indexOf(a.path[0] as PartLineKey) - COLUMN_ORDER.indexOf(b.path[0] as PartLineKey))) {
+      const key = issue.path[0] as PartLineKey;
+      if (failed.has(key)) continue;
+      failed.add(key);
+      fail(key, issue.message);
+    }
+    // A row with errors is previewed field by field (nothing is saved unless every row is valid).
+    const field = <K extends PartLineKey>(key: K): PartForm[K] | null => {
+      if (read.success) return read.data[key];
+      const one = partFormSchema.shape[key].safeParse(input[key]);
+      return one.success ? (one.data as PartForm[K]) : null;
+    };
+    const category = field('category');
+    const description = field('description');
+    const quantity = field('quantity');
+    const mount = failed.has('mount') ? null : (field('mount') ?? (category ? defaultMount(category) : 'smt'));
+    const v: PartValues = {
+      designators: field('designators') ?? null,
+      category: category ?? 'other',
+      description: description ?? '',
+      marking: field('marking') ?? null,
+      makerPartNumber: field('makerPartNumber') ?? null,
+      package: field('package') ?? null,
       quantity: quantity ?? 1,
       mount: mount ?? 'smt',
-      notes: cell('notes'),
+      notes: field('notes') ?? null,
     };
     const decoded = category && description ? decodePartMarking(v) : { value: null, unit: null, readings: [] };
     rows.push({

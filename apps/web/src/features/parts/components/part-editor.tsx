@@ -1,96 +1,17 @@
-// The inputs of one editable part row (the row being edited, or the entry row at the bottom).
-// Each table cell renders one input; the row's state lives in a context so the table's columns
-// do not change on every keystroke.
-import { createContext, useContext, type KeyboardEvent, type RefObject } from 'react';
-import { MOUNT_TYPE, PART_CATEGORY, defaultMountFor, type MountType, type PartCategory, type PartDto, type UpdatePartBody } from '@splitcase/contracts';
+// The inputs of one editable part row (the row being edited, or the entry row at the bottom): a
+// react-hook-form form checked with contracts' partFormSchema (the rules the CSV import reads rows
+// with), the server's field messages put on their inputs. Each table cell renders one input; the
+// row's form lives in a context so the table's columns do not change on every keystroke.
+import { createContext, useContext, useRef, useState, type KeyboardEvent, type RefObject } from 'react';
+import { useForm, type UseFormReturn } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { MOUNT_TYPE, PART_CATEGORY, defaultMountFor, partFormSchema, type PartCategory, type PartDto, type PartForm, type PartFormValues } from '@splitcase/contracts';
+import { applyServerErrors } from '@/lib/form-errors';
 
-export interface PartDraft {
-  designators: string;
-  category: PartCategory;
-  description: string;
-  marking: string;
-  makerPartNumber: string;
-  package: string;
-  quantity: string;
-  mount: MountType;
-  notes: string;
-  /** The user chose the mount; otherwise it follows the category. */
-  mountTouched: boolean;
-}
+export type DraftField = keyof PartForm;
+type Values = PartFormValues;
 
-export type DraftField = Exclude<keyof PartDraft, 'mountTouched'>;
-
-export const emptyDraft = (keep?: Pick<PartDraft, 'category' | 'mount' | 'mountTouched'>): PartDraft => ({
-  designators: '',
-  category: keep?.category ?? 'passive',
-  description: '',
-  marking: '',
-  makerPartNumber: '',
-  package: '',
-  quantity: '1',
-  mount: keep?.mount ?? 'smt',
-  notes: '',
-  mountTouched: keep?.mountTouched ?? false,
-});
-
-export const draftOf = (p: PartDto): PartDraft => ({
-  designators: p.designators ?? '',
-  category: p.category,
-  description: p.description,
-  marking: p.marking ?? '',
-  makerPartNumber: p.makerPartNumber ?? '',
-  package: p.package ?? '',
-  quantity: String(p.quantity),
-  mount: p.mount,
-  notes: p.notes ?? '',
-  mountTouched: true,
-});
-
-/** The request body of a draft, or the field errors found before asking the server. */
-export function bodyOf(d: PartDraft): { body: Required<Omit<UpdatePartBody, 'designator'>> } | { errors: Record<string, string> } {
-  const errors: Record<string, string> = {};
-  const quantity = Number(d.quantity.trim());
-  if (!/^\d+$/.test(d.quantity.trim()) || quantity < 1) errors.quantity = 'Enter a whole number of at least 1';
-  if (!d.description.trim()) errors.description = 'Required: describe the part';
-  if (Object.keys(errors).length) return { errors };
-  const text = (s: string) => (s.trim() === '' ? null : s.trim());
-  return {
-    body: {
-      designators: text(d.designators),
-      category: d.category,
-      description: d.description.trim(),
-      marking: text(d.marking),
-      makerPartNumber: text(d.makerPartNumber),
-      package: text(d.package),
-      quantity,
-      mount: d.mount,
-      notes: text(d.notes),
-    },
-  };
-}
-
-export interface EditorState {
-  /** Which row: 'new' for the entry row. */
-  rowKey: string;
-  draft: PartDraft;
-  errors: Record<string, string>;
-  setField: (field: DraftField, value: string) => void;
-  onKeyDown: (e: KeyboardEvent) => void;
-  firstInput?: RefObject<HTMLInputElement | null>;
-  autoFocus?: boolean;
-}
-
-export const EditorContext = createContext<EditorState | null>(null);
-
-/** Apply a field change; a category change moves an untouched mount to the category's default. */
-export function withField(d: PartDraft, field: DraftField, value: string): PartDraft {
-  if (field === 'category') {
-    const category = value as PartCategory;
-    return { ...d, category, mount: d.mountTouched ? d.mount : defaultMountFor(category) };
-  }
-  if (field === 'mount') return { ...d, mount: value as MountType, mountTouched: true };
-  return { ...d, [field]: value };
-}
+const FIELDS: readonly DraftField[] = ['designators', 'category', 'description', 'marking', 'makerPartNumber', 'package', 'quantity', 'mount', 'notes'];
 
 const LABELS: Record<DraftField, string> = {
   designators: 'Designators',
@@ -104,26 +25,123 @@ const LABELS: Record<DraftField, string> = {
   notes: 'Notes',
 };
 
+const emptyValues = (keep?: Partial<Pick<Values, 'category' | 'mount'>>): Values => ({
+  designators: '',
+  category: keep?.category ?? 'passive',
+  description: '',
+  marking: '',
+  makerPartNumber: '',
+  package: '',
+  quantity: '1',
+  mount: keep?.mount ?? 'smt',
+  notes: '',
+});
+
+const valuesOf = (p: PartDto): Values => ({
+  designators: p.designators ?? '',
+  category: p.category,
+  description: p.description,
+  marking: p.marking ?? '',
+  makerPartNumber: p.makerPartNumber ?? '',
+  package: p.package ?? '',
+  quantity: String(p.quantity),
+  mount: p.mount,
+  notes: p.notes ?? '',
+});
+
+export interface PartRow {
+  form: UseFormReturn<Values, unknown, PartForm>;
+  /** Field messages by field, and `_` for the row as a whole. */
+  errors: Partial<Record<DraftField | '_', string>>;
+  onKeyDown: (e: KeyboardEvent) => void;
+  submit: () => Promise<void>;
+  /** Start editing a saved line (its mount stays as chosen). */
+  load: (p: PartDto) => void;
+  /** Empty the row, keeping the category and mount for the next line. */
+  clear: () => void;
+  /** The user chose the mount; until then it follows the category. */
+  mountTouched: { current: boolean };
+}
+
+/**
+ * One part row's form. `save` sends the body (create or update) and `saved` runs after it;
+ * `cancel` is Escape. Until the mount is chosen it follows the category (`defaultMountFor`).
+ */
+export function usePartRow({ save, saved, cancel }: { save: (body: PartForm) => Promise<unknown>; saved: () => void; cancel: () => void }): PartRow {
+  const form = useForm<Values, unknown, PartForm>({ resolver: zodResolver(partFormSchema), defaultValues: emptyValues() });
+  const [formError, setFormError] = useState<string | null>(null);
+  const mountTouched = useRef(false);
+
+  const submit = form.handleSubmit(async (body) => {
+    setFormError(null);
+    try {
+      await save(body);
+      saved();
+    } catch (err) {
+      setFormError(applyServerErrors(err, form.setError, FIELDS));
+    }
+  });
+  const reset = (values: Values, touched: boolean) => {
+    form.reset(values);
+    mountTouched.current = touched;
+    setFormError(null);
+  };
+  const errors: PartRow['errors'] = {};
+  for (const f of FIELDS) {
+    const message = form.formState.errors[f]?.message;
+    if (message) errors[f] = message;
+  }
+  if (formError) errors._ = formError;
+
+  return {
+    form,
+    errors,
+    submit,
+    onKeyDown: (e) => {
+      if (e.key === 'Enter' && !e.nativeEvent.isComposing) {
+        e.preventDefault();
+        void submit();
+      } else if (e.key === 'Escape') {
+        e.preventDefault();
+        cancel();
+      }
+    },
+    load: (p) => reset(valuesOf(p), true),
+    clear: () => reset(emptyValues({ category: form.getValues('category'), mount: form.getValues('mount') }), mountTouched.current),
+    mountTouched,
+  };
+}
+
+export interface EditorState {
+  /** Which row: 'new' for the entry row. */
+  rowKey: string;
+  row: PartRow;
+  firstInput?: RefObject<HTMLInputElement | null>;
+  autoFocus?: boolean;
+}
+
+export const EditorContext = createContext<EditorState | null>(null);
+
 const cellInput =
   'h-7 w-full rounded border border-graphite-200 bg-white px-1.5 text-sm focus:border-copper-500 focus:outline-none focus:ring-2 focus:ring-copper-200 aria-[invalid=true]:border-brick-600 aria-[invalid=true]:bg-brick-50';
 
 export function DraftInput({ field, mono = false, numeric = false, placeholder }: { field: DraftField; mono?: boolean; numeric?: boolean; placeholder?: string }) {
   const ctx = useContext(EditorContext);
   if (!ctx) return null;
-  const error = ctx.errors[field];
+  const { form, errors, onKeyDown } = ctx.row;
+  const error = errors[field];
   const label = ctx.rowKey === 'new' ? `New part: ${LABELS[field].toLowerCase()}` : `${LABELS[field]}`;
   if (field === 'category' || field === 'mount') {
     const options = field === 'category' ? PART_CATEGORY : MOUNT_TYPE;
+    const touched = ctx.row.mountTouched;
+    const registered = form.register(field, {
+      onChange: (e: { target: { value: string } }) => {
+        if (field === 'mount') touched.current = true;
+        else if (!touched.current) form.setValue('mount', defaultMountFor(e.target.value as PartCategory));
+      },
+    });
     return (
-      <select
-        aria-label={label}
-        aria-invalid={Boolean(error)}
-        title={error}
-        value={ctx.draft[field]}
-        onChange={(e) => ctx.setField(field, e.target.value)}
-        onKeyDown={ctx.onKeyDown}
-        className={`${cellInput} pr-6`}
-      >
+      <select aria-label={label} aria-invalid={Boolean(error)} title={error} {...registered} onKeyDown={onKeyDown} className={`${cellInput} pr-6`}>
         {options.values.map((v) => (
           <option key={v} value={v}>
             {(options.labels as Record<string, string>)[v]}
@@ -132,34 +150,39 @@ export function DraftInput({ field, mono = false, numeric = false, placeholder }
       </select>
     );
   }
+  const { ref, ...registered } = form.register(field);
   return (
     <input
-      ref={field === 'designators' ? ctx.firstInput : undefined}
+      ref={(el) => {
+        ref(el);
+        if (field === 'designators' && ctx.firstInput) ctx.firstInput.current = el;
+      }}
       autoFocus={field === 'designators' && ctx.autoFocus}
       aria-label={label}
       aria-invalid={Boolean(error)}
       title={error}
-      value={ctx.draft[field]}
       placeholder={placeholder}
       inputMode={numeric ? 'numeric' : undefined}
-      onChange={(e) => ctx.setField(field, e.target.value)}
-      onKeyDown={ctx.onKeyDown}
+      {...registered}
+      onKeyDown={onKeyDown}
       className={`${cellInput} ${mono ? 'font-mono' : ''} ${numeric ? 'num text-right' : ''}`}
     />
   );
 }
 
 /** Field messages of a row, by label. */
-export function DraftErrors({ errors }: { errors: Record<string, string> }) {
+export function DraftErrors({ errors }: { errors: PartRow['errors'] }) {
   const entries = Object.entries(errors);
   if (!entries.length) return null;
   return (
-    <ul className="space-y-0.5 text-sm text-brick-700" role="alert">
-      {entries.map(([field, message]) => (
-        <li key={field}>
-          <span className="font-medium">{LABELS[field as DraftField] ?? field}:</span> {message}
-        </li>
-      ))}
-    </ul>
+    <div role="alert">
+      <ul className="space-y-0.5 text-sm text-brick-700">
+        {entries.map(([field, message]) => (
+          <li key={field}>
+            {field !== '_' && <span className="font-medium">{LABELS[field as DraftField] ?? field}:</span>} {message}
+          </li>
+        ))}
+      </ul>
+    </div>
   );
 }
