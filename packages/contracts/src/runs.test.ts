@@ -9,6 +9,7 @@ import {
   runOptionsFor,
   runOptionsSchema,
   runUploadFormSchema,
+  seriesWindowFormSchema,
   type RunMappingFormValues,
 } from './runs';
 
@@ -110,5 +111,15 @@ describe('the run forms', () => {
     });
     const r = runEditFormSchema('thermal').safeParse({ label: '', options: { contactSeconds: '1.5' } });
     expect(Object.fromEntries(r.error!.issues.map((i) => [i.path.join('.'), i.message]))).toEqual({ label: 'Required', 'options.contactSeconds': 'Whole seconds' });
+  });
+});
+
+describe('the chart window form', () => {
+  it('reads a start and a later end, a decimal comma too; anything else asks for both', () => {
+    expect(seriesWindowFormSchema.parse({ from: '1,5', to: ' 3 ' })).toEqual({ from: 1.5, to: 3 });
+    for (const bad of [{ from: '', to: '3' }, { from: '3', to: '3' }, { from: '-1', to: '2' }, { from: 'a', to: '2' }]) {
+      const r = seriesWindowFormSchema.safeParse(bad);
+      expect(r.error?.issues.map((i) => [i.path.join('.'), i.message])).toEqual([['to', 'Give a start and a later end']]);
+    }
   });
 });

@@ -429,6 +429,22 @@ export const runSeriesQuery = z
   .refine((q) => q.from === undefined || q.to === undefined || q.to > q.from, { path: ['to'], message: 'Must be later than from' });
 export type RunSeriesQuery = z.infer<typeof runSeriesQuery>;
 
+/** The chart's window form: a start and a later end as typed ("1,5" reads as 1.5), in the unit of the time axis. */
+export const seriesWindowFormSchema = z
+  .object({ from: safeString(), to: safeString() })
+  .transform((w, ctx) => {
+    const read = (s: string) => (s.trim() === '' ? Number.NaN : Number(s.trim().replace(',', '.')));
+    const from = read(w.from);
+    const to = read(w.to);
+    if (!Number.isFinite(from) || !Number.isFinite(to) || from < 0 || to <= from) {
+      ctx.addIssue({ code: 'custom', path: ['to'], message: 'Give a start and a later end' });
+      return z.NEVER;
+    }
+    return { from, to };
+  });
+export type SeriesWindowFormValues = z.input<typeof seriesWindowFormSchema>;
+export type SeriesWindowForm = z.output<typeof seriesWindowFormSchema>;
+
 const trace = z.object({ t: z.array(z.number()), y: z.array(z.number()) });
 export const runSeriesResponse = z.object({
   runId: z.number().int(),
