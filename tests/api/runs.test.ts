@@ -323,6 +323,9 @@ describe('bad input: a clear message naming the row and column, and nothing stor
     expect(noFile.body.error.fields.file).toMatch(/Attach the log file/);
     const badOption = await upload(a, ids[DRAFT]!, constantDischarge(), dischargeMapping(), { options: { cutoffVolts: -1 } }).expect(400);
     expect(badOption.body.error.fields).toHaveProperty('options.cutoffVolts');
+    // An option another kind reads is refused by the same list the forms show (contracts' RUN_KIND_NEEDS).
+    const otherKind = await upload(a, ids[DRAFT]!, constantDischarge(), dischargeMapping(), { options: { cutoffVolts: 3, contactSeconds: 600 } }).expect(400);
+    expect(otherKind.body.error.fields['options.contactSeconds']).toMatch(/^Contact time \(s\): not a setting of a discharge run/);
     expect(await stored()).toEqual(before);
   });
 
@@ -476,6 +479,8 @@ describe('series, reads and changes', () => {
     expect(after.analysis.discharge.cutoff.reason).toBe('cutoff-voltage');
     expect(after.analysis.ampHours).toBeLessThan(before.analysis.ampHours);
     await a.patch(`/api/runs/${runId}`, { options: { cutoffVolts: 0 } }).expect(400);
+    const otherKind = await a.patch(`/api/runs/${runId}`, { options: { cutoffVolts: 3.6, cvVolts: 4.2 } }).expect(400);
+    expect(otherKind.body.error.fields['options.cvVolts']).toMatch(/^Charge voltage \(V\): not a setting of a discharge run \(it takes cut-off voltage, cut-off debounce\)/);
     await a.patch(`/api/runs/${runId}`, {}).expect(400);
     const audit = (await t.orm.em
       .fork()

@@ -1,4 +1,5 @@
-import type { Browser } from 'playwright-core';
+import AxeBuilder from '@axe-core/playwright';
+import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launch, signedInPage } from './browser';
 
@@ -7,6 +8,12 @@ beforeAll(async () => {
   browser = await launch();
 });
 afterAll(() => browser?.close());
+
+/** No serious or critical accessibility violation in the part of the page a test covers. */
+async function expectNoSeriousViolations(page: Page, selector: string) {
+  const result = await new AxeBuilder({ page }).include(selector).analyze();
+  expect(result.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical').map((v) => v.id)).toEqual([]);
+}
 
 /**
  * A discharge log whose column names give nothing away, so the columns are mapped by hand:
@@ -84,6 +91,46 @@ describe('bench runs', () => {
     await page.goto(`/teardowns/${charge.teardownId}/runs?run=${charge.id}`);
     const termination = page.locator('dt', { hasText: 'Termination current' }).locator('xpath=following-sibling::dd[2]');
     await expect.poll(() => termination.textContent(), { timeout: 30_000 }).toMatch(/0\.05 C of the rated .* Ah \(.*pack record\)/);
+    await page.context().close();
+  });
+
+  it('on a published teardown a run change asks in the dialog: "Keep it published" saves nothing, the confirm saves and moves it to draft', async () => {
+    const page = await signedInPage(browser, 'engineer');
+    type Run = { id: number; teardownId: number; label: string; teardownStatus: string };
+    const all = ((await (await page.request.get('/api/runs')).json()) as { runs: Run[] }).runs;
+    // Not the demo's teardown 1, which the cost and price-view tests read as published.
+    const run = all.filter((r) => r.teardownStatus === 'published' && r.teardownId !== 1).at(-1)!;
+    expect(run, 'a run on a published demo teardown').toBeTruthy();
+    const status = async () => ((await (await page.request.get(`/api/teardowns/${run.teardownId}`)).json()) as { teardown: { status: string } }).teardown.status;
+    const label = async () => ((await (await page.request.get(`/api/runs/${run.id}`)).json()) as { run: Run }).run.label;
+    await page.goto(`/teardowns/${run.teardownId}/runs?run=${run.id}`);
+    await page.getByRole('button', { name: 'Settings' }).click();
+    const form = page.getByRole('form', { name: 'Run settings' });
+    await form.getByLabel('Label', { exact: true }).fill(`${run.label} (checked)`);
+    await form.getByRole('button', { name: 'Save and re-analyse' }).click();
+    const dialog = page.getByRole('dialog');
+    await dialog.getByText('Move this teardown back to draft?').waitFor();
+    await expectNoSeriousViolations(page, 'dialog[open]');
+    await dialog.getByRole('button', { name: 'Keep it published' }).click();
+    await dialog.waitFor({ state: 'detached' });
+    expect(await label()).toBe(run.label);
+    expect(await status()).toBe('published');
+    // The form keeps the edit; saving again and confirming saves it and moves the teardown to draft.
+    await form.getByRole('button', { name: 'Save and re-analyse' }).click();
+    await dialog.getByRole('button', { name: 'Save and move to draft' }).click();
+    await form.waitFor({ state: 'detached' });
+    await expect.poll(label, { timeout: 10_000 }).toBe(`${run.label} (checked)`);
+    expect(await status()).toBe('draft');
+
+    // Put the demo back: the old label, submitted by the engineer and approved by a lead.
+    const token = async (p: Page) => ((await (await p.request.get('/api/auth/csrf')).json()) as { token: string }).token;
+    const headers = { 'X-CSRF-Token': await token(page) };
+    expect((await page.request.patch(`/api/runs/${run.id}`, { headers, data: { label: run.label } })).status()).toBe(200);
+    expect((await page.request.post(`/api/teardowns/${run.teardownId}/submit`, { headers, data: {} })).status()).toBe(200);
+    const lead = await signedInPage(browser, 'lead');
+    expect((await lead.request.post(`/api/teardowns/${run.teardownId}/approve`, { headers: { 'X-CSRF-Token': await token(lead) }, data: {} })).status()).toBe(200);
+    expect(await status()).toBe('published');
+    await lead.context().close();
     await page.context().close();
   });
 

@@ -49,6 +49,9 @@ export const isoDate = safeString()
     return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === s;
   }, 'Not a calendar date');
 
+/** A number as a form has it typed ("0,012" reads as 0.012); blank is null and unreadable text NaN, so the rule after it names the field. */
+const typedNumber = z.union([z.number(), safeString()]).transform((v) => (typeof v === 'number' ? v : v.trim() === '' ? null : Number(v.trim().replace(',', '.'))));
+
 /** Largest amount of money, quantity or rate accepted anywhere in costing (1e9): sane bounds for any currency. */
 export const COST_MAX = 1_000_000_000;
 const AT_MOST = 'At most 1 000 000 000';
@@ -105,6 +108,8 @@ export const setPartPriceBody = partPriceBody.extend({
     .max(20, 'At most 20 price breaks'),
 });
 export type SetPartPriceBody = z.input<typeof setPartPriceBody>;
+/** The price editor's form as checked (the body sent). */
+export type SetPartPriceForm = z.output<typeof setPartPriceBody>;
 
 export const partPriceSchema = z.object({
   partId: z.number().int(),
@@ -166,6 +171,21 @@ export const manualRatesBody = z
   });
 export type ManualRatesBody = z.input<typeof manualRatesBody>;
 
+/**
+ * Rates typed by hand, one row per currency (a row without a code is left out): it becomes
+ * `manualRatesBody`, whose messages name each rate as `rates.<code>`.
+ */
+export const manualRatesFormSchema = z
+  .object({
+    base: safeString(),
+    date: safeString(),
+    source: safeString(),
+    rows: z.array(z.object({ code: safeString(), rate: typedNumber })),
+  })
+  .transform(({ rows, ...rest }) => ({ ...rest, rates: Object.fromEntries(rows.filter((r) => r.code.trim() !== '').map((r) => [r.code.trim().toUpperCase(), r.rate])) }) as ManualRatesBody)
+  .pipe(manualRatesBody);
+export type ManualRatesFormValues = z.input<typeof manualRatesFormSchema>;
+
 // ---- Cost models ----
 
 export const manualOperationSchema = z.object({
@@ -212,6 +232,57 @@ export const costModelSchema = z.object({
 });
 export type CostModelDto = z.output<typeof costModelSchema>;
 export type CostModelBody = z.input<typeof costModelSchema>;
+
+
+/** A volume as typed: 5000, 5k, 1.5k or 2M units (NaN when unreadable: the model's rule names it). */
+export function readVolume(typed: string): number {
+  const m = typed.trim().match(/^([\d.]+)\s*([kKmM]?)$/);
+  if (!m) return Number.NaN;
+  if (m[2] === '') return Number(m[1]);
+  // Round away float noise of the prefix (1.1k → 1100, not 1100.0000000000002).
+  return Number((Number(m[1]) * (m[2]!.toLowerCase() === 'k' ? 1e3 : 1e6)).toPrecision(12));
+}
+
+/**
+ * The cost-model form (workspace defaults and a teardown's own model): the fields of `costModelSchema`
+ * under the same names, money and minutes typed as numbers, shares as percentages ("2.7" = 2.7 %),
+ * the volumes as one line ("1k, 10k, 100k"), a blank attrition category meaning the default. It
+ * becomes the model, checked by `costModelSchema`, whose messages name the form's fields.
+ */
+export const costModelFormSchema = z
+  .object({
+    currency: safeString(),
+    volumes: safeString(),
+    attritionByCategory: z.partialRecord(PART_CATEGORY.schema, percentInput('the attrition')),
+    defaultAttrition: percentInput('the attrition'),
+    smtCostPerPlacement: typedNumber,
+    thtCostPerJoint: typedNumber,
+    thtJointsPerPart: typedNumber,
+    manualOperations: z.array(z.object({ label: safeString(), minutes: typedNumber })),
+    labourRatePerHour: typedNumber,
+    testMinutes: typedNumber,
+    packagingCost: typedNumber,
+    firstPassYield: percentInput('the yield'),
+    overheadFraction: percentInput('the overhead'),
+    freightFraction: percentInput('the freight'),
+    insuranceFraction: percentInput('the insurance'),
+    insuranceBasis: INSURANCE_BASIS.schema,
+    dutyFraction: percentInput('the duty'),
+    retailMarginFraction: percentInput('the retailer margin'),
+    platformMarginFraction: percentInput('the platform fee'),
+    confidenceBand: z.object({ high: percentInput('the band'), medium: percentInput('the band'), low: percentInput('the band') }),
+  })
+  .transform(
+    (f) =>
+      // A blank field goes on as null (typed: a number) for the model's rule to name it.
+      ({
+        ...f,
+        volumes: f.volumes.split(/[,;\s]+/).filter(Boolean).map(readVolume),
+        attritionByCategory: Object.fromEntries(Object.entries(f.attritionByCategory).filter(([, v]) => v !== null && v !== undefined)),
+      }) as CostModelBody,
+  )
+  .pipe(costModelSchema);
+export type CostModelFormValues = z.input<typeof costModelFormSchema>;
 
 export const costModelResponse = z.object({ model: costModelSchema, updatedAt: safeString().nullable(), updatedBy: safeString().nullable() });
 export const teardownCostModelResponse = z.object({

@@ -55,6 +55,43 @@ export const RUN_QUANTITY_LABELS: Record<RunQuantityName, string> = {
 const columnName = safeString().trim().min(1, 'Choose a column').max(200, 'At most 200 characters');
 const mapped = <U extends z.ZodType>(unit: U) => z.object({ column: columnName, unit });
 
+/** Analysis settings a run can have; which kind reads which is in RUN_KIND_NEEDS. */
+export const RUN_OPTION_KEYS = ['cutoffVolts', 'cutoffDebounceSeconds', 'cvVolts', 'terminationFraction', 'material', 'contactSeconds', 'thresholdC', 'cellEnergyWh'] as const;
+export type RunOptionKey = (typeof RUN_OPTION_KEYS)[number];
+
+/** The run options as the forms label them. */
+export const RUN_OPTION_LABELS: Record<RunOptionKey, string> = {
+  cutoffVolts: 'Cut-off voltage (V)',
+  cutoffDebounceSeconds: 'Cut-off debounce (s)',
+  cvVolts: 'Charge voltage (V)',
+  terminationFraction: 'Termination (C)',
+  material: 'Surface touched',
+  contactSeconds: 'Contact time (s)',
+  thresholdC: 'Time to a temperature (°C)',
+  cellEnergyWh: 'Cell energy (Wh)',
+};
+
+/**
+ * What each kind of run needs, the one list the forms show and the server checks: the columns
+ * besides time (each group is one column, any of the group will do) and the analysis options the
+ * kind reads, in the order the forms show them.
+ */
+export const RUN_KIND_NEEDS = {
+  discharge: { columns: [['voltage'], ['current', 'power']], options: ['cutoffVolts', 'cutoffDebounceSeconds'] },
+  charge: { columns: [['voltage'], ['current']], options: ['cvVolts', 'terminationFraction'] },
+  thermal: { columns: [['temperature']], options: ['material', 'contactSeconds', 'thresholdC'] },
+  'power-bank': { columns: [['voltage'], ['current', 'power']], options: ['cellEnergyWh'] },
+} as const satisfies Record<RunKind, { columns: readonly (readonly RunQuantityName[])[]; options: readonly RunOptionKey[] }>;
+
+/** The columns a kind needs, in words: "time, voltage, and current or power". */
+export function runNeedsText(kind: RunKind): string {
+  const items = ['time', ...RUN_KIND_NEEDS[kind].columns.map((group) => group.map((q) => RUN_QUANTITY_LABELS[q].toLowerCase()).join(' or '))];
+  if (items.length === 1) return items[0]!;
+  // A comma before the last item when it is a choice, so "voltage, and current or power" reads one way.
+  const last = items.pop()!;
+  return `${items.join(', ')}${last.includes(' or ') ? ',' : ''} and ${last}`;
+}
+
 /** Which column holds which quantity, in which unit; plus how the file is laid out. */
 export const runMappingSchema = z
   .object({
@@ -72,18 +109,16 @@ export const runMappingSchema = z
     headerRow: z.number().int().min(1, 'At least 1').max(1000, 'At most 1000').optional(),
   })
   .superRefine((m, ctx) => {
-    const need = (q: RunQuantityName, why: string) => {
-      if (!m[q]) ctx.addIssue({ code: 'custom', path: [q, 'column'], message: why });
-    };
-    if (m.kind === 'discharge' || m.kind === 'power-bank') {
-      need('voltage', `A ${RUN_KIND.labels[m.kind].toLowerCase()} run needs a voltage column`);
-      if (!m.current && !m.power) ctx.addIssue({ code: 'custom', path: ['current', 'column'], message: 'Map a current column (or a power column)' });
+    const kindName = RUN_KIND.labels[m.kind].toLowerCase();
+    for (const group of RUN_KIND_NEEDS[m.kind].columns) {
+      if (group.some((q) => m[q])) continue;
+      const [first, ...others] = group;
+      const message =
+        others.length === 0
+          ? `A ${kindName} run needs a ${RUN_QUANTITY_LABELS[first!].toLowerCase()} column`
+          : `Map a ${RUN_QUANTITY_LABELS[first!].toLowerCase()} column (or a ${others.map((q) => RUN_QUANTITY_LABELS[q].toLowerCase()).join(' or ')} column)`;
+      ctx.addIssue({ code: 'custom', path: [first!, 'column'], message });
     }
-    if (m.kind === 'charge') {
-      need('voltage', 'A charge run needs a voltage column');
-      need('current', 'A charge run needs a current column');
-    }
-    if (m.kind === 'thermal') need('temperature', 'A thermal run needs a temperature column');
     const seen = new Map<string, RunQuantityName>();
     for (const q of RUN_QUANTITIES) {
       const c = m[q];
@@ -119,12 +154,108 @@ export const runOptionsSchema = z.object({
 });
 export type RunOptions = z.infer<typeof runOptionsSchema>;
 
+/**
+ * The options a kind of run reads (RUN_KIND_NEEDS), each with its own rule; another kind's option is
+ * refused, naming it, so a stored run says only what its analysis used. The server checks uploads and
+ * changes with it.
+ */
+export const runOptionsFor = (kind: RunKind) =>
+  runOptionsSchema.superRefine((o, ctx) => {
+    const reads: readonly RunOptionKey[] = RUN_KIND_NEEDS[kind].options;
+    for (const key of RUN_OPTION_KEYS) {
+      if (o[key] === undefined || o[key] === null || reads.includes(key)) continue;
+      const takes = reads.map((k) => RUN_OPTION_LABELS[k].replace(/ \(.*\)$/, '').toLowerCase()).join(', ');
+      ctx.addIssue({ code: 'custom', path: [key], message: `${RUN_OPTION_LABELS[key]}: not a setting of a ${RUN_KIND.labels[kind].toLowerCase()} run (it takes ${takes})` });
+    }
+  });
+
+/** A run option as a form has it typed: "3,0" reads as 3.0, blank clears it (null); then the option's own rule. */
+const typedOption = <T extends z.ZodType<unknown, number | null | undefined>>(rule: T) =>
+  z
+    .union([z.number(), safeString().trim(), z.null()])
+    .optional()
+    .transform((v, ctx): number | null | undefined => {
+      if (v === undefined || v === null || v === '') return null;
+      const n = typeof v === 'number' ? v : Number(v.replace(',', '.'));
+      if (!Number.isFinite(n)) {
+        ctx.addIssue({ code: 'custom', message: 'Enter a number' });
+        return z.NEVER;
+      }
+      return n;
+    })
+    .pipe(rule);
+
+const runOptionsForm = z.object({
+  cutoffVolts: typedOption(runOptionsSchema.shape.cutoffVolts),
+  cutoffDebounceSeconds: typedOption(runOptionsSchema.shape.cutoffDebounceSeconds),
+  cvVolts: typedOption(runOptionsSchema.shape.cvVolts),
+  terminationFraction: typedOption(runOptionsSchema.shape.terminationFraction),
+  material: z
+    .union([z.literal(''), z.null(), SURFACE_MATERIAL.schema])
+    .optional()
+    .transform((v) => v || null),
+  contactSeconds: typedOption(runOptionsSchema.shape.contactSeconds),
+  thresholdC: typedOption(runOptionsSchema.shape.thresholdC),
+  cellEnergyWh: typedOption(runOptionsSchema.shape.cellEnergyWh),
+} satisfies Record<RunOptionKey, z.ZodType>);
+export type RunOptionsFormValues = z.input<typeof runOptionsForm>;
+
+/** The options form of a kind of run: its options as typed (blank = not set), the others left out. */
+export const runOptionsFormSchema = (kind: RunKind): z.ZodType<RunOptions, RunOptionsFormValues> =>
+  runOptionsForm.pick(Object.fromEntries(RUN_KIND_NEEDS[kind].options.map((k) => [k, true])) as Record<RunOptionKey, true>);
+
+const columnChoice = z.object({ column: z.string(), unit: z.string() });
+
+/**
+ * The column mapping as the upload form holds it: every quantity with a column ('' = not logged) and a
+ * unit, the header row typed; it becomes `runMappingSchema`, whose messages name the form's fields.
+ */
+export const runMappingFormSchema = z
+  .object({
+    kind: RUN_KIND.schema,
+    time: columnChoice,
+    voltage: columnChoice,
+    current: columnChoice,
+    power: columnChoice,
+    temperature: columnChoice,
+    delimiter: RUN_DELIMITER.schema,
+    decimalComma: z.boolean(),
+    headerRow: z.union([z.string(), z.number()]),
+  })
+  .transform((m, ctx) => {
+    const out: Record<string, unknown> = { kind: m.kind, time: m.time, delimiter: m.delimiter, decimalComma: m.decimalComma };
+    for (const q of RUN_QUANTITIES) if (q !== 'time' && m[q].column !== '') out[q] = m[q];
+    const row = typeof m.headerRow === 'number' ? m.headerRow : m.headerRow.trim() === '' ? 1 : Number(m.headerRow.trim());
+    if (!Number.isInteger(row)) ctx.addIssue({ code: 'custom', path: ['headerRow'], message: 'Enter a whole number, such as 1' });
+    else out.headerRow = row;
+    return out;
+  })
+  .pipe(runMappingSchema);
+export type RunMappingFormValues = z.input<typeof runMappingFormSchema>;
+
+/** The upload form (the multipart fields `label`, `mapping`, `options`): field names as the server names its errors. */
+export const runUploadFormSchema = (kind: RunKind) =>
+  z.object({
+    label: z
+      .string()
+      .transform((s) => s.trim() || undefined)
+      .pipe(runLabel.optional()),
+    mapping: runMappingFormSchema,
+    options: runOptionsFormSchema(kind),
+  });
+export type RunUploadFormValues = z.input<ReturnType<typeof runUploadFormSchema>>;
+export type RunUploadForm = z.output<ReturnType<typeof runUploadFormSchema>>;
+
 export const runLabel = safeString().trim().min(1, 'Required').max(160, 'At most 160 characters');
 
 export const updateRunBody = z
   .object({ label: runLabel.optional(), options: runOptionsSchema.optional() })
   .refine((b) => b.label !== undefined || b.options !== undefined, { message: 'Change the label or the options' });
 export type UpdateRunBody = z.infer<typeof updateRunBody>;
+
+/** A run's settings form: its label and the options of its kind (PATCH /api/runs/:id). */
+export const runEditFormSchema = (kind: RunKind) => z.object({ label: runLabel, options: runOptionsFormSchema(kind) });
+export type RunEditFormValues = z.input<ReturnType<typeof runEditFormSchema>>;
 
 const cutoffSchema = z.object({ index: z.number().int(), t: z.number(), volts: z.number(), reason: z.enum(['cutoff-voltage', 'current-stopped', 'end-of-run']) });
 
@@ -297,6 +428,22 @@ export const runSeriesQuery = z
   })
   .refine((q) => q.from === undefined || q.to === undefined || q.to > q.from, { path: ['to'], message: 'Must be later than from' });
 export type RunSeriesQuery = z.infer<typeof runSeriesQuery>;
+
+/** The chart's window form: a start and a later end as typed ("1,5" reads as 1.5), in the unit of the time axis. */
+export const seriesWindowFormSchema = z
+  .object({ from: safeString(), to: safeString() })
+  .transform((w, ctx) => {
+    const read = (s: string) => (s.trim() === '' ? Number.NaN : Number(s.trim().replace(',', '.')));
+    const from = read(w.from);
+    const to = read(w.to);
+    if (!Number.isFinite(from) || !Number.isFinite(to) || from < 0 || to <= from) {
+      ctx.addIssue({ code: 'custom', path: ['to'], message: 'Give a start and a later end' });
+      return z.NEVER;
+    }
+    return { from, to };
+  });
+export type SeriesWindowFormValues = z.input<typeof seriesWindowFormSchema>;
+export type SeriesWindowForm = z.output<typeof seriesWindowFormSchema>;
 
 const trace = z.object({ t: z.array(z.number()), y: z.array(z.number()) });
 export const runSeriesResponse = z.object({

@@ -8,7 +8,7 @@ import {
   runListQuery,
   runListResponse,
   runMappingSchema,
-  runOptionsSchema,
+  runOptionsFor,
   runPreviewResponse,
   runResponse,
   runSeriesQuery,
@@ -128,7 +128,7 @@ export function runRoutes(deps: AppDeps): RouteDef[] {
         try {
           if (!file) throw validationError({ file: 'Attach the log file (CSV or TSV)' });
           const mapping = jsonField<RunMapping>(req, 'mapping', runMappingSchema, true)!;
-          const options = jsonField<RunOptions>(req, 'options', runOptionsSchema, false);
+          const options = jsonField<RunOptions>(req, 'options', runOptionsFor(mapping.kind), false);
           const labelText = (req.body as Record<string, unknown>).label;
           let label: string | undefined;
           if (labelText !== undefined && String(labelText).trim() !== '') {
@@ -232,6 +232,9 @@ export function runRoutes(deps: AppDeps): RouteDef[] {
       },
       async ({ em, user, params, req, body }) => {
         const run = await editableRun({ em, user, req }, params.id);
+        // The options of the run's kind only (contracts' RUN_KIND_NEEDS, as the upload).
+        const options = body.options && runOptionsFor(run.kind).safeParse(body.options);
+        if (options && !options.success) throw validationError(zodFields(options.error, 'options'));
         return { run: await toRunDto(em, await updateRun(em, env, user, run, body)) };
       },
     ),

@@ -1,72 +1,43 @@
 import { useState, type ReactNode } from 'react';
+import { useFieldArray, useForm, type FieldError, type Path } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
 import { Plus, Trash2 } from 'lucide-react';
-import { INSURANCE_BASIS, PART_CATEGORY, type CostModelBody, type CostModelDto, type InsuranceBasisKey, type PartCategory } from '@splitcase/contracts';
+import { costModelFormSchema, INSURANCE_BASIS, PART_CATEGORY, type CostModelBody, type CostModelDto, type CostModelFormValues } from '@splitcase/contracts';
 import { Button } from '@/components/button';
 import { Field, Input, FormError, LabelledOptions, Select } from '@/components/field';
 import { ApiError } from '@/lib/api-client';
 import { plain, toPercentText } from './display';
 
-type Draft = Record<string, string>;
 const PERCENT = ['defaultAttrition', 'firstPassYield', 'overheadFraction', 'freightFraction', 'insuranceFraction', 'dutyFraction', 'retailMarginFraction', 'platformMarginFraction'] as const;
-const MONEY = ['smtCostPerPlacement', 'thtCostPerJoint', 'labourRatePerHour', 'packagingCost'] as const;
-const PLAIN = ['thtJointsPerPart', 'testMinutes'] as const;
-const BANDS = ['high', 'medium', 'low'] as const;
+const PLAIN = ['smtCostPerPlacement', 'thtCostPerJoint', 'labourRatePerHour', 'packagingCost', 'thtJointsPerPart', 'testMinutes'] as const;
 
-function toDraft(m: CostModelDto): { draft: Draft; ops: { label: string; minutes: string }[] } {
-  const draft: Draft = { currency: m.currency, volumes: m.volumes.join(', '), insuranceBasis: m.insuranceBasis };
-  for (const k of PERCENT) draft[k] = toPercentText(m[k]);
-  for (const k of MONEY) draft[k] = plain(m[k]);
-  for (const k of PLAIN) draft[k] = plain(m[k]);
-  for (const b of BANDS) draft[`band.${b}`] = toPercentText(m.confidenceBand[b]);
-  for (const c of PART_CATEGORY.values) {
-    const v = m.attritionByCategory[c];
-    draft[`attrition.${c}`] = v === undefined ? '' : toPercentText(v);
-  }
-  return { draft, ops: m.manualOperations.map((o) => ({ label: o.label, minutes: plain(o.minutes) })) };
+/** The model as the form shows it: shares as percentages, the volumes on one line. */
+function toValues(m: CostModelDto): CostModelFormValues {
+  const values = {
+    currency: m.currency,
+    volumes: m.volumes.join(', '),
+    insuranceBasis: m.insuranceBasis,
+    attritionByCategory: Object.fromEntries(PART_CATEGORY.values.map((c) => [c, m.attritionByCategory[c] === undefined ? '' : toPercentText(m.attritionByCategory[c])])),
+    manualOperations: m.manualOperations.map((o) => ({ label: o.label, minutes: plain(o.minutes) })),
+    confidenceBand: { high: toPercentText(m.confidenceBand.high), medium: toPercentText(m.confidenceBand.medium), low: toPercentText(m.confidenceBand.low) },
+  } as CostModelFormValues;
+  for (const k of PERCENT) values[k] = toPercentText(m[k]);
+  for (const k of PLAIN) values[k] = plain(m[k]);
+  return values;
 }
 
-/** Blank → NaN, which travels as null: the server names the field that needs a number. */
-const num = (s: string | undefined) => (s === undefined || s.trim() === '' ? Number.NaN : Number(s.replace(',', '.')));
-/** A volume as typed: 5000, 5k, 1.5k or 2M units. */
-const volumeTyped = (s: string) => {
-  const m = s.trim().match(/^([\d.]+)\s*([kKmM]?)$/);
-  if (!m) return Number.NaN;
-  if (m[2] === '') return Number(m[1]);
-  // Round away float noise of the prefix (1.1k → 1100, not 1100.0000000000002).
-  return Number((Number(m[1]) * (m[2]!.toLowerCase() === 'k' ? 1e3 : 1e6)).toPrecision(12));
-};
-/** Percent typed → share sent (2.7 → 0.027); the server checks the range. */
-const share = (s: string | undefined) => num(s) / 100;
-
-function toBody(d: Draft, ops: { label: string; minutes: string }[]): CostModelBody {
-  const attritionByCategory: Partial<Record<PartCategory, number>> = {};
-  for (const c of PART_CATEGORY.values) if ((d[`attrition.${c}`] ?? '').trim() !== '') attritionByCategory[c] = share(d[`attrition.${c}`]);
-  return {
-    currency: (d.currency ?? '').trim(),
-    volumes: (d.volumes ?? '')
-      .split(/[,;\s]+/)
-      .filter(Boolean)
-      .map(volumeTyped),
-    attritionByCategory,
-    defaultAttrition: share(d.defaultAttrition),
-    smtCostPerPlacement: num(d.smtCostPerPlacement),
-    thtCostPerJoint: num(d.thtCostPerJoint),
-    thtJointsPerPart: num(d.thtJointsPerPart),
-    manualOperations: ops.map((o) => ({ label: o.label, minutes: num(o.minutes) })),
-    labourRatePerHour: num(d.labourRatePerHour),
-    testMinutes: num(d.testMinutes),
-    packagingCost: num(d.packagingCost),
-    firstPassYield: share(d.firstPassYield),
-    overheadFraction: share(d.overheadFraction),
-    freightFraction: share(d.freightFraction),
-    insuranceFraction: share(d.insuranceFraction),
-    insuranceBasis: (d.insuranceBasis ?? 'cif') as InsuranceBasisKey,
-    dutyFraction: share(d.dutyFraction),
-    retailMarginFraction: share(d.retailMarginFraction),
-    platformMarginFraction: share(d.platformMarginFraction),
-    confidenceBand: { high: share(d['band.high']), medium: share(d['band.medium']), low: share(d['band.low']) },
-  };
+/** The message of a field, or of the first item of a list field (a volume out of order names its place in the list). */
+function messageOf(error: unknown): string | undefined {
+  if (!error || typeof error !== 'object') return undefined;
+  const e = error as FieldError & Record<number, FieldError | undefined>;
+  if (e.message) return e.message;
+  return Object.values(e).find((x): x is FieldError => Boolean(x && typeof x === 'object' && 'message' in x && x.message))?.message;
 }
+
+const CellError = ({ message }: { message: string | undefined }) => (message ? <p className="mt-0.5 text-xs text-brick-700">{message}</p> : null);
+
+/** Where a field the server names sits in this form (each volume's message goes on the volumes line). */
+const formField = (key: string) => (key.startsWith('volumes') ? 'volumes' : key);
 
 function Group({ title, children, note }: { title: string; children: ReactNode; note?: ReactNode }) {
   return (
@@ -97,65 +68,52 @@ export function CostModelForm({
   readOnly?: boolean;
   extraActions?: ReactNode;
 }) {
-  const start = toDraft(initial);
-  const [draft, setDraft] = useState<Draft>(start.draft);
-  const [ops, setOps] = useState(start.ops);
-  const [errors, setErrors] = useState<Record<string, string>>({});
   const [formError, setFormError] = useState<string | null>(null);
-  const cur = (draft.currency ?? '').toUpperCase() || '…';
+  const { register, control, handleSubmit, setError, watch, formState } = useForm<CostModelFormValues, unknown, CostModelBody>({
+    resolver: zodResolver(costModelFormSchema),
+    defaultValues: toValues(initial),
+  });
+  const ops = useFieldArray({ control, name: 'manualOperations' });
+  const errors = formState.errors as Record<string, unknown>;
+  const errorAt = (path: string) => messageOf(path.split('.').reduce<unknown>((e, k) => (e && typeof e === 'object' ? (e as Record<string, unknown>)[k] : undefined), errors));
+  const cur = (watch('currency') ?? '').toUpperCase() || '…';
 
-  const field = (key: string, label: ReactNode, opts: { unit?: string; errorKey?: string; hint?: string } = {}) => (
-    <Field label={label} error={errors[opts.errorKey ?? key]} hint={opts.hint}>
+  const field = (key: Path<CostModelFormValues>, label: ReactNode, opts: { unit?: string; hint?: string } = {}) => (
+    <Field key={key} label={label} error={errorAt(key)} hint={opts.hint}>
       {(f) => (
         <div className="relative">
-          <Input
-            {...f}
-            name={key}
-            inputMode="decimal"
-            readOnly={readOnly}
-            value={draft[key] ?? ''}
-            onChange={(e) => setDraft((d) => ({ ...d, [key]: e.target.value }))}
-            className={`num ${opts.unit ? 'pr-14' : ''}`}
-          />
+          <Input {...f} inputMode="decimal" readOnly={readOnly} className={`num ${opts.unit ? 'pr-14' : ''}`} {...register(key)} />
           {opts.unit && <span className="pointer-events-none absolute inset-y-0 right-3 flex items-center text-xs text-graphite-500">{opts.unit}</span>}
         </div>
       )}
     </Field>
   );
 
-  const submit = async () => {
-    setErrors({});
+  const submit = handleSubmit(async (body) => {
     setFormError(null);
     try {
-      await onSubmit(toBody(draft, ops));
+      await onSubmit(body);
     } catch (err) {
       if (err instanceof ApiError) {
-        const mapped: Record<string, string> = {};
-        for (const [k, v] of Object.entries(err.fields)) {
-          const key = k.startsWith('volumes') ? 'volumes' : k.startsWith('confidenceBand.') ? `band.${k.split('.')[1]}` : k.startsWith('attritionByCategory.') ? `attrition.${k.split('.')[1]}` : k;
-          mapped[key] ??= v;
-        }
-        setErrors(mapped);
+        for (const [k, v] of Object.entries(err.fields)) setError(formField(k) as Path<CostModelFormValues>, { type: 'server', message: v });
         setFormError(err.message);
       } else setFormError(err instanceof Error ? err.message : 'The cost model could not be saved.');
     }
-  };
+  });
 
   return (
     <form
       className="space-y-4"
       noValidate
       onSubmit={(e) => {
-        e.preventDefault();
-        if (!readOnly) void submit();
+        if (readOnly) e.preventDefault();
+        else void submit(e);
       }}
     >
       <Group title="Volumes and currency">
         {field('volumes', 'Production volumes', { hint: 'Units, small to large, e.g. 1k, 10k, 100k' })}
-        <Field label="Model currency" error={errors.currency} hint="Of the money amounts below">
-          {(f) => (
-            <Input {...f} readOnly={readOnly} maxLength={3} value={draft.currency ?? ''} onChange={(e) => setDraft((d) => ({ ...d, currency: e.target.value.toUpperCase() }))} className="font-mono uppercase" />
-          )}
+        <Field label="Model currency" error={errorAt('currency')} hint="Of the money amounts below">
+          {(f) => <Input {...f} readOnly={readOnly} maxLength={3} className="font-mono uppercase" {...register('currency')} />}
         </Field>
       </Group>
 
@@ -172,36 +130,34 @@ export function CostModelForm({
       <fieldset className="rounded-md border border-graphite-150 p-3">
         <legend className="px-1 text-xs font-semibold uppercase tracking-wide text-graphite-600">Manual operations (minutes × labour rate)</legend>
         <ul className="space-y-2">
-          {ops.map((o, k) => (
-            <li key={k} className="flex items-start gap-2">
+          {ops.fields.map((o, k) => (
+            <li key={o.id} className="flex items-start gap-2">
               <div className="flex-1">
                 <Input
                   aria-label={`Operation ${k + 1}`}
-                  aria-invalid={Boolean(errors[`manualOperations.${k}.label`])}
+                  aria-invalid={Boolean(errorAt(`manualOperations.${k}.label`))}
                   readOnly={readOnly}
-                  value={o.label}
                   placeholder="e.g. Spot-weld cell tabs"
-                  onChange={(e) => setOps((list) => list.map((x, j) => (j === k ? { ...x, label: e.target.value } : x)))}
+                  {...register(`manualOperations.${k}.label`)}
                 />
-                {errors[`manualOperations.${k}.label`] && <p className="mt-0.5 text-xs text-brick-700">{errors[`manualOperations.${k}.label`]}</p>}
+                <CellError message={errorAt(`manualOperations.${k}.label`)} />
               </div>
               <div className="w-32">
                 <div className="relative">
                   <Input
                     aria-label={`Minutes of operation ${k + 1}`}
-                    aria-invalid={Boolean(errors[`manualOperations.${k}.minutes`])}
+                    aria-invalid={Boolean(errorAt(`manualOperations.${k}.minutes`))}
                     readOnly={readOnly}
                     inputMode="decimal"
                     className="num pr-12"
-                    value={o.minutes}
-                    onChange={(e) => setOps((list) => list.map((x, j) => (j === k ? { ...x, minutes: e.target.value } : x)))}
+                    {...register(`manualOperations.${k}.minutes`)}
                   />
                   <span className="pointer-events-none absolute inset-y-0 right-3 flex items-center text-xs text-graphite-500">min</span>
                 </div>
-                {errors[`manualOperations.${k}.minutes`] && <p className="mt-0.5 text-xs text-brick-700">{errors[`manualOperations.${k}.minutes`]}</p>}
+                <CellError message={errorAt(`manualOperations.${k}.minutes`)} />
               </div>
               {!readOnly && (
-                <Button size="md" variant="ghost" aria-label={`Remove operation ${k + 1}`} onClick={() => setOps((list) => list.filter((_, j) => j !== k))}>
+                <Button size="md" variant="ghost" aria-label={`Remove operation ${k + 1}`} onClick={() => ops.remove(k)}>
                   <Trash2 className="size-4" aria-hidden />
                 </Button>
               )}
@@ -209,7 +165,7 @@ export function CostModelForm({
           ))}
         </ul>
         {!readOnly && (
-          <Button size="sm" variant="quiet" className="mt-2" onClick={() => setOps((list) => [...list, { label: '', minutes: '' }])}>
+          <Button size="sm" variant="quiet" className="mt-2" onClick={() => ops.append({ label: '', minutes: '' })}>
             <Plus className="size-4" aria-hidden /> Add an operation
           </Button>
         )}
@@ -217,16 +173,16 @@ export function CostModelForm({
 
       <Group title="Attrition (extra parts bought to cover losses)" note="Leave a category blank to use the default. Typical: passives 1–5 %, ICs 0.5–1 %.">
         {field('defaultAttrition', 'Default', { unit: '%' })}
-        {PART_CATEGORY.values.map((c) => field(`attrition.${c}`, PART_CATEGORY.labels[c], { unit: '%' }))}
+        {PART_CATEGORY.values.map((c) => field(`attritionByCategory.${c}`, PART_CATEGORY.labels[c], { unit: '%' }))}
       </Group>
 
       <Group title="Overhead, freight and duty">
         {field('overheadFraction', 'Overhead', { unit: '%' })}
         {field('freightFraction', 'Freight', { unit: '%', hint: 'Share of the ex-works cost' })}
         {field('insuranceFraction', 'Insurance', { unit: '%', hint: 'Typical 0.5–2 %' })}
-        <Field label="Insurance on" error={errors.insuranceBasis} hint="CIF: goods + freight, the value duty is levied on">
+        <Field label="Insurance on" error={errorAt('insuranceBasis')} hint="CIF: goods + freight, the value duty is levied on">
           {(f) => (
-            <Select {...f} name="insuranceBasis" disabled={readOnly} value={draft.insuranceBasis ?? 'cif'} onChange={(e) => setDraft((d) => ({ ...d, insuranceBasis: e.target.value }))}>
+            <Select {...f} disabled={readOnly} {...register('insuranceBasis')}>
               <LabelledOptions list={INSURANCE_BASIS} />
             </Select>
           )}
@@ -240,9 +196,9 @@ export function CostModelForm({
       </Group>
 
       <Group title="Confidence band (± on unit prices)">
-        {field('band.high', 'High confidence', { unit: '± %' })}
-        {field('band.medium', 'Medium confidence', { unit: '± %' })}
-        {field('band.low', 'Low confidence', { unit: '± %' })}
+        {field('confidenceBand.high', 'High confidence', { unit: '± %' })}
+        {field('confidenceBand.medium', 'Medium confidence', { unit: '± %' })}
+        {field('confidenceBand.low', 'Low confidence', { unit: '± %' })}
       </Group>
 
       <FormError message={formError} />

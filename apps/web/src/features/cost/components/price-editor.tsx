@@ -1,22 +1,20 @@
 import { useState, type KeyboardEvent } from 'react';
+import { useFieldArray, useForm, type FieldErrors } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
 import { toast } from 'sonner';
 import { Plus, Trash2, X } from 'lucide-react';
-import { MIN_QTY_FIELD, PRICE_CONFIDENCE, PRICE_FIELDS, PRICE_SOURCE, type CostLine, type PriceConfidence, type PriceSource } from '@splitcase/contracts';
+import { MIN_QTY_FIELD, PRICE_CONFIDENCE, PRICE_FIELDS, PRICE_SOURCE, setPartPriceBody, type CostLine, type SetPartPriceBody, type SetPartPriceForm } from '@splitcase/contracts';
 import { Button } from '@/components/button';
-import { Field, Input, Select, inputClass, FormError } from '@/components/field';
+import { Field, Input, LabelledOptions, Select, inputClass, FormError } from '@/components/field';
 import { ApiError } from '@/lib/api-client';
 import { useDeletePrice } from '../api/delete-price';
 import { useSetPrice } from '../api/set-price';
 import { plain } from './display';
 
-interface Row {
-  minQty: string;
-  unitPrice: string;
-}
-
 const today = () => new Date().toISOString().slice(0, 10);
 
 const FIELD_LABELS: Record<string, string> = { currency: 'Currency', priceDate: 'Price date', source: 'Source', confidence: 'Confidence', note: 'Note', breaks: 'Price breaks' };
+const FIELDS = Object.keys(FIELD_LABELS);
 
 /** The label a field key of the price body has in this editor, or null when the editor shows no such field. */
 function fieldLabel(key: string, rowCount: number): string | null {
@@ -25,64 +23,76 @@ function fieldLabel(key: string, rowCount: number): string | null {
   return FIELD_LABELS[key] ?? null;
 }
 
+/** The field keys of the form's own errors ("breaks.0.unitPrice"), as the server names them. */
+function errorKeys(errors: FieldErrors<SetPartPriceBody>): string[] {
+  const keys = FIELDS.filter((k) => k !== 'breaks' && errors[k as keyof SetPartPriceBody]);
+  const breaks = errors.breaks;
+  if (breaks?.message) keys.push('breaks');
+  if (Array.isArray(breaks)) breaks.forEach((b, k) => b && (['minQty', 'unitPrice'] as const).forEach((f) => b[f] && keys.push(`breaks.${k}.${f}`)));
+  return keys;
+}
+
+/** "Not saved: check Break 1 unit price." — the fields named as this editor labels them, never by their keys. */
+const checkMessage = (keys: string[], rowCount: number, fallback: string) => {
+  const labels = keys.map((key) => fieldLabel(key, rowCount));
+  return labels.length && labels.every(Boolean) ? `Not saved: check ${labels.join(', ')}.` : fallback;
+};
+
 /**
- * Price breaks, currency, source, confidence and date of one BOM line. The server checks
- * everything (order of breaks, negative prices, a currency without a rate) and names the field;
+ * Price breaks, currency, source, confidence and date of one BOM line. The form checks the shape
+ * (contracts' `setPartPriceBody`); the server reads the amounts typed, checks the rest (order of
+ * breaks, a currency mark that is not the line's, a currency without a rate) and names the field;
  * the roll-up is then read again from the server.
  */
 export function PriceEditor({ teardownId, line, currencies, onClose }: { teardownId: number; line: CostLine; currencies: string[]; onClose: () => void }) {
   const p = line.price;
-  const [currency, setCurrency] = useState(p?.currency ?? currencies[0] ?? 'USD');
-  const [source, setSource] = useState<PriceSource>(p?.source ?? 'catalogue');
-  const [confidence, setConfidence] = useState<PriceConfidence>(p?.confidence ?? 'medium');
-  const [priceDate, setPriceDate] = useState(p?.priceDate ?? today());
-  const [note, setNote] = useState(p?.note ?? '');
-  const [rows, setRows] = useState<Row[]>(p ? p.breaks.map((b) => ({ minQty: plain(b.minQty), unitPrice: plain(b.unitPrice) })) : [{ minQty: '1', unitPrice: '' }]);
-  const [errors, setErrors] = useState<Record<string, string>>({});
   const [formError, setFormError] = useState<string | null>(null);
+  const { register, control, handleSubmit, setError, watch, formState } = useForm<SetPartPriceBody, unknown, SetPartPriceForm>({
+    resolver: zodResolver(setPartPriceBody),
+    defaultValues: {
+      currency: p?.currency ?? currencies[0] ?? 'USD',
+      source: p?.source ?? 'catalogue',
+      confidence: p?.confidence ?? 'medium',
+      priceDate: p?.priceDate ?? today(),
+      note: p?.note ?? '',
+      breaks: p ? p.breaks.map((b) => ({ minQty: plain(b.minQty), unitPrice: plain(b.unitPrice) })) : [{ minQty: '1', unitPrice: '' }],
+    },
+  });
+  const breaks = useFieldArray({ control, name: 'breaks' });
+  const errors = formState.errors;
+  const rows = breaks.fields.length;
   const save = useSetPrice(teardownId);
   const remove = useDeletePrice(teardownId);
   const name = line.designators ?? line.description;
+  const currency = watch('currency');
   const options = [...new Set([...currencies, currency])].sort();
 
-  const update = (k: number, patch: Partial<Row>) => setRows((rs) => rs.map((r, j) => (j === k ? { ...r, ...patch } : r)));
-  const addRow = () => {
-    setRows((rs) => [...rs, { minQty: '', unitPrice: '' }]);
-    setTimeout(() => document.getElementById(`break-qty-${rows.length}`)?.focus(), 0);
-  };
+  const addRow = () => breaks.append({ minQty: '', unitPrice: '' }, { shouldFocus: true });
   // Enter in the last unit price adds the next break (one hand on the keyboard).
   const onPriceKey = (k: number) => (e: KeyboardEvent<HTMLInputElement>) => {
-    if (e.key === 'Enter' && k === rows.length - 1) {
+    if (e.key === 'Enter' && k === rows - 1) {
       e.preventDefault();
       addRow();
     }
   };
 
-  const submit = async () => {
-    setErrors({});
-    setFormError(null);
-    try {
-      await save.mutateAsync({
-        partId: line.partId,
-        currency,
-        source,
-        confidence,
-        priceDate,
-        note: note.trim() || undefined,
-        // Sent as typed ("5k", "$0.12", "0,12 €"): the server reads them against the currency and names the break and field it refuses.
-        breaks: rows.map((r) => ({ minQty: r.minQty, unitPrice: r.unitPrice })),
-      });
-      toast.success(`Price of ${name} saved; totals updated.`);
-      onClose();
-    } catch (err) {
-      if (err instanceof ApiError && Object.keys(err.fields).length) {
-        setErrors(err.fields);
-        // Name the fields as this editor labels them ("Break 1 unit price"), never by their keys.
-        const labels = Object.keys(err.fields).map((key) => fieldLabel(key, rows.length));
-        setFormError(labels.every(Boolean) ? `Not saved: check ${labels.join(', ')}.` : err.message);
-      } else setFormError(err instanceof Error ? err.message : 'The price could not be saved.');
-    }
-  };
+  const submit = handleSubmit(
+    async (body) => {
+      setFormError(null);
+      try {
+        // The breaks go as typed ("5k", "$0.12", "0,12 €"): the server reads them against the currency and names the break and field it refuses.
+        await save.mutateAsync({ partId: line.partId, ...body });
+        toast.success(`Price of ${name} saved; totals updated.`);
+        onClose();
+      } catch (err) {
+        if (err instanceof ApiError && Object.keys(err.fields).length) {
+          for (const [key, message] of Object.entries(err.fields)) if (fieldLabel(key, rows)) setError(key as never, { type: 'server', message });
+          setFormError(checkMessage(Object.keys(err.fields), rows, err.message));
+        } else setFormError(err instanceof Error ? err.message : 'The price could not be saved.');
+      }
+    },
+    (invalid) => setFormError(checkMessage(errorKeys(invalid), rows, 'Not saved: check the marked fields.')),
+  );
 
   const drop = async () => {
     try {
@@ -111,42 +121,34 @@ export function PriceEditor({ teardownId, line, currencies, onClose }: { teardow
       </div>
       <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(0,1.2fr)]">
         <div className="grid grid-cols-2 gap-3">
-          <Field label="Currency" error={errors.currency}>
+          <Field label="Currency" error={errors.currency?.message}>
             {(f) => (
-              <Select {...f} value={currency} onChange={(e) => setCurrency(e.target.value)}>
+              <Select {...f} {...register('currency')}>
                 {options.map((c) => (
                   <option key={c}>{c}</option>
                 ))}
               </Select>
             )}
           </Field>
-          <Field label="Price date" error={errors.priceDate}>
-            {(f) => <Input {...f} type="date" value={priceDate} onChange={(e) => setPriceDate(e.target.value)} />}
+          <Field label="Price date" error={errors.priceDate?.message}>
+            {(f) => <Input {...f} type="date" {...register('priceDate')} />}
           </Field>
-          <Field label="Source" error={errors.source}>
+          <Field label="Source" error={errors.source?.message}>
             {(f) => (
-              <Select {...f} value={source} onChange={(e) => setSource(e.target.value as PriceSource)}>
-                {PRICE_SOURCE.values.map((s) => (
-                  <option key={s} value={s}>
-                    {PRICE_SOURCE.labels[s]}
-                  </option>
-                ))}
+              <Select {...f} {...register('source')}>
+                <LabelledOptions list={PRICE_SOURCE} />
               </Select>
             )}
           </Field>
-          <Field label="Confidence" error={errors.confidence}>
+          <Field label="Confidence" error={errors.confidence?.message}>
             {(f) => (
-              <Select {...f} value={confidence} onChange={(e) => setConfidence(e.target.value as PriceConfidence)}>
-                {PRICE_CONFIDENCE.values.map((c) => (
-                  <option key={c} value={c}>
-                    {PRICE_CONFIDENCE.labels[c]}
-                  </option>
-                ))}
+              <Select {...f} {...register('confidence')}>
+                <LabelledOptions list={PRICE_CONFIDENCE} />
               </Select>
             )}
           </Field>
-          <Field label="Note" error={errors.note} className="col-span-2">
-            {(f) => <Input {...f} value={note} maxLength={300} placeholder="Quote reference, supplier, conditions…" onChange={(e) => setNote(e.target.value)} />}
+          <Field label="Note" error={errors.note?.message} className="col-span-2">
+            {(f) => <Input {...f} maxLength={300} placeholder="Quote reference, supplier, conditions…" {...register('note')} />}
           </Field>
         </div>
         <div>
@@ -165,21 +167,19 @@ export function PriceEditor({ teardownId, line, currencies, onClose }: { teardow
               </tr>
             </thead>
             <tbody>
-              {rows.map((r, k) => {
-                const qtyErr = errors[`breaks.${k}.minQty`];
-                const priceErr = errors[`breaks.${k}.unitPrice`];
+              {breaks.fields.map((r, k) => {
+                const qtyErr = errors.breaks?.[k]?.minQty?.message;
+                const priceErr = errors.breaks?.[k]?.unitPrice?.message;
                 return (
-                  <tr key={k} className="align-top">
+                  <tr key={r.id} className="align-top">
                     <td className="pr-2 pb-2">
                       <input
-                        id={`break-qty-${k}`}
                         aria-label={`Break ${k + 1} minimum quantity`}
                         aria-invalid={Boolean(qtyErr)}
                         placeholder={MIN_QTY_FIELD.example}
                         autoComplete="off"
-                        value={r.minQty}
-                        onChange={(e) => update(k, { minQty: e.target.value })}
                         className={`${inputClass} num h-8`}
+                        {...register(`breaks.${k}.minQty`)}
                       />
                       {qtyErr && <p className="mt-0.5 text-xs text-brick-700">{qtyErr}</p>}
                     </td>
@@ -189,15 +189,14 @@ export function PriceEditor({ teardownId, line, currencies, onClose }: { teardow
                         aria-invalid={Boolean(priceErr)}
                         placeholder={PRICE_FIELDS.unitPrice.example}
                         autoComplete="off"
-                        value={r.unitPrice}
                         onKeyDown={onPriceKey(k)}
-                        onChange={(e) => update(k, { unitPrice: e.target.value })}
                         className={`${inputClass} num h-8`}
+                        {...register(`breaks.${k}.unitPrice`)}
                       />
                       {priceErr && <p className="mt-0.5 text-xs text-brick-700">{priceErr}</p>}
                     </td>
                     <td className="pb-2">
-                      <Button size="sm" variant="ghost" aria-label={`Remove break ${k + 1}`} disabled={rows.length === 1} onClick={() => setRows((rs) => rs.filter((_, j) => j !== k))}>
+                      <Button size="sm" variant="ghost" aria-label={`Remove break ${k + 1}`} disabled={rows === 1} onClick={() => breaks.remove(k)}>
                         <Trash2 className="size-4" aria-hidden />
                       </Button>
                     </td>
@@ -206,7 +205,7 @@ export function PriceEditor({ teardownId, line, currencies, onClose }: { teardow
               })}
             </tbody>
           </table>
-          {errors.breaks && <p className="text-xs text-brick-700">{errors.breaks}</p>}
+          {(errors.breaks?.message ?? errors.breaks?.root?.message) && <p className="text-xs text-brick-700">{errors.breaks?.message ?? errors.breaks?.root?.message}</p>}
           <Button size="sm" variant="quiet" onClick={addRow}>
             <Plus className="size-4" aria-hidden /> Add a break
           </Button>
@@ -214,7 +213,7 @@ export function PriceEditor({ teardownId, line, currencies, onClose }: { teardow
       </div>
       <FormError message={formError} />
       <div className="mt-4 flex flex-wrap items-center gap-2">
-        <Button variant="primary" busy={save.isPending} onClick={submit}>
+        <Button variant="primary" busy={save.isPending} onClick={() => void submit()}>
           Save price
         </Button>
         <Button onClick={onClose}>Cancel</Button>

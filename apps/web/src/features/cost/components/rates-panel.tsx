@@ -1,7 +1,9 @@
 import { useState } from 'react';
+import { useFieldArray, useForm, type FieldErrors } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
 import { toast } from 'sonner';
 import { FileUp, History, Plus, Trash2 } from 'lucide-react';
-import { RATE_TABLE_KIND, type RateTableDto } from '@splitcase/contracts';
+import { manualRatesFormSchema, RATE_TABLE_KIND, type ManualRatesBody, type ManualRatesFormValues, type RateTableDto } from '@splitcase/contracts';
 import { Badge } from '@/components/badges';
 import { Button } from '@/components/button';
 import { ErrorPanel } from '@/components/error-boundary';
@@ -78,74 +80,67 @@ function ImportRates() {
 
 /** Rates typed by hand: saved as a new table (the history keeps the old ones). */
 function ManualRates({ current, onDone }: { current: RateTableDto | null; onDone: () => void }) {
-  const [base, setBase] = useState(current?.base ?? 'EUR');
-  const [date, setDate] = useState(new Date().toISOString().slice(0, 10));
-  const [source, setSource] = useState('Entered by hand');
-  const [rows, setRows] = useState<{ code: string; rate: string }[]>(
-    current ? Object.entries(current.rates).map(([code, rate]) => ({ code, rate: plain(rate) })) : [{ code: 'USD', rate: '' }],
-  );
-  const [errors, setErrors] = useState<Record<string, string>>({});
   const [formError, setFormError] = useState<string | null>(null);
   const save = useSaveRates();
-  const submit = async () => {
-    setErrors({});
+  const { register, control, handleSubmit, setError, watch, formState } = useForm<ManualRatesFormValues, unknown, ManualRatesBody>({
+    resolver: zodResolver(manualRatesFormSchema),
+    defaultValues: {
+      base: current?.base ?? 'EUR',
+      date: new Date().toISOString().slice(0, 10),
+      source: 'Entered by hand',
+      rows: current ? Object.entries(current.rates).map(([code, rate]) => ({ code, rate: plain(rate) })) : [{ code: 'USD', rate: '' }],
+    },
+  });
+  const rows = useFieldArray({ control, name: 'rows' });
+  const values = watch();
+  const errors = formState.errors as FieldErrors<ManualRatesFormValues> & { rates?: Record<string, { message?: string } | undefined> };
+  // The schema and the server name a rate by its code (rates.USD); the form shows it on that row.
+  const rateError = (k: number) => errors.rates?.[(values.rows[k]?.code ?? '').trim().toUpperCase()]?.message ?? errors.rows?.[k]?.rate?.message;
+
+  const submit = handleSubmit(async (body) => {
     setFormError(null);
     try {
-      const rates = Object.fromEntries(rows.filter((r) => r.code.trim() !== '').map((r) => [r.code.trim().toUpperCase(), r.rate.trim() === '' ? Number.NaN : Number(r.rate.replace(',', '.'))]));
-      const r = await save.mutateAsync({ base: base.trim().toUpperCase(), date, source, rates });
+      const r = await save.mutateAsync(body);
       toast.success(`Rates of ${formatDate(r.rates.date)} saved as the current table.`);
       r.warnings.forEach((w) => toast.warning(w));
       onDone();
     } catch (err) {
       if (err instanceof ApiError) {
-        setErrors(err.fields);
+        for (const [key, message] of Object.entries(err.fields)) setError(key as never, { type: 'server', message });
         setFormError(err.message);
       } else setFormError('The rates could not be saved.');
     }
-  };
+  });
   return (
-    <form
-      noValidate
-      className="space-y-3"
-      onSubmit={(e) => {
-        e.preventDefault();
-        void submit();
-      }}
-    >
+    <form noValidate className="space-y-3" onSubmit={submit}>
       <div className="grid gap-3 sm:grid-cols-3">
-        <Field label="Base currency" error={errors.base}>
-          {(f) => <Input {...f} value={base} maxLength={3} className="font-mono uppercase" onChange={(e) => setBase(e.target.value)} />}
+        <Field label="Base currency" error={errors.base?.message}>
+          {(f) => <Input {...f} maxLength={3} className="font-mono uppercase" {...register('base')} />}
         </Field>
-        <Field label="Rates of (date)" error={errors.date}>
-          {(f) => <Input {...f} type="date" value={date} onChange={(e) => setDate(e.target.value)} />}
+        <Field label="Rates of (date)" error={errors.date?.message}>
+          {(f) => <Input {...f} type="date" {...register('date')} />}
         </Field>
-        <Field label="Source" error={errors.source}>
-          {(f) => <Input {...f} value={source} onChange={(e) => setSource(e.target.value)} />}
+        <Field label="Source" error={errors.source?.message}>
+          {(f) => <Input {...f} {...register('source')} />}
         </Field>
       </div>
       <table className="w-full max-w-md text-sm">
-        <caption className="mb-1 text-left text-sm font-medium text-graphite-800">Units of each currency per 1 {base.toUpperCase() || 'base'}</caption>
+        <caption className="mb-1 text-left text-sm font-medium text-graphite-800">Units of each currency per 1 {values.base.toUpperCase() || 'base'}</caption>
         <tbody>
-          {rows.map((r, k) => {
-            const err = errors[`rates.${r.code.trim().toUpperCase()}`];
+          {rows.fields.map((r, k) => {
+            const err = rateError(k);
+            const code = values.rows[k]?.code ?? '';
             return (
-              <tr key={k} className="align-top">
+              <tr key={r.id} className="align-top">
                 <td className="w-28 pr-2 pb-1.5">
-                  <Input aria-label={`Currency ${k + 1}`} value={r.code} maxLength={3} className="h-8 font-mono uppercase" onChange={(e) => setRows((rs) => rs.map((x, j) => (j === k ? { ...x, code: e.target.value } : x)))} />
+                  <Input aria-label={`Currency ${k + 1}`} maxLength={3} className="h-8 font-mono uppercase" {...register(`rows.${k}.code`)} />
                 </td>
                 <td className="pr-2 pb-1.5">
-                  <Input
-                    aria-label={`Rate of ${r.code || `currency ${k + 1}`}`}
-                    aria-invalid={Boolean(err)}
-                    inputMode="decimal"
-                    className="num h-8"
-                    value={r.rate}
-                    onChange={(e) => setRows((rs) => rs.map((x, j) => (j === k ? { ...x, rate: e.target.value } : x)))}
-                  />
+                  <Input aria-label={`Rate of ${code || `currency ${k + 1}`}`} aria-invalid={Boolean(err)} inputMode="decimal" className="num h-8" {...register(`rows.${k}.rate`)} />
                   {err && <p className="mt-0.5 text-xs text-brick-700">{err}</p>}
                 </td>
                 <td className="pb-1.5">
-                  <Button size="sm" variant="ghost" aria-label={`Remove ${r.code || `currency ${k + 1}`}`} onClick={() => setRows((rs) => rs.filter((_, j) => j !== k))}>
+                  <Button size="sm" variant="ghost" aria-label={`Remove ${code || `currency ${k + 1}`}`} onClick={() => rows.remove(k)}>
                     <Trash2 className="size-4" aria-hidden />
                   </Button>
                 </td>
@@ -154,7 +149,7 @@ function ManualRates({ current, onDone }: { current: RateTableDto | null; onDone
           })}
         </tbody>
       </table>
-      <Button size="sm" variant="quiet" onClick={() => setRows((rs) => [...rs, { code: '', rate: '' }])}>
+      <Button size="sm" variant="quiet" onClick={() => rows.append({ code: '', rate: '' })}>
         <Plus className="size-4" aria-hidden /> Add a currency
       </Button>
       <FormError message={formError} />

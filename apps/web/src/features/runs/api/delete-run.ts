@@ -1,10 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { CONFIRM_UNPUBLISH_HEADER, type RunDto } from '@splitcase/contracts';
+import type { RunDto } from '@splitcase/contracts';
 import { api } from '@/lib/api-client';
 import { rootKeys, teardownScope } from '@/lib/query-keys';
+import { withUnpublishConfirm } from '@/lib/unpublish-confirm';
 
-export const deleteRun = ({ run, confirmUnpublish }: { run: RunDto; confirmUnpublish?: boolean }) =>
-  api.delete<void>(`/api/runs/${run.id}`, confirmUnpublish ? { headers: { [CONFIRM_UNPUBLISH_HEADER]: 'yes' } } : {});
+/** Deleting a run of a published teardown asks first (it moves the teardown back to draft). */
+export const deleteRun = ({ run }: { run: RunDto }) => withUnpublishConfirm((opts) => api.delete<void>(`/api/runs/${run.id}`, opts));
 
 export function useDeleteRun() {
   const qc = useQueryClient();

@@ -1,10 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { CONFIRM_UNPUBLISH_HEADER, type RunDto, type UpdateRunBody } from '@splitcase/contracts';
+import type { RunDto, UpdateRunBody } from '@splitcase/contracts';
 import { api } from '@/lib/api-client';
 import { rootKeys, teardownScope } from '@/lib/query-keys';
+import { withUnpublishConfirm } from '@/lib/unpublish-confirm';
 
-export const updateRun = ({ run, body, confirmUnpublish }: { run: RunDto; body: UpdateRunBody; confirmUnpublish?: boolean }) =>
-  api.patch<{ run: RunDto }>(`/api/runs/${run.id}`, body, confirmUnpublish ? { headers: { [CONFIRM_UNPUBLISH_HEADER]: 'yes' } } : {}).then((r) => r.run);
+/** A change to a run of a published teardown asks first (it moves the teardown back to draft). */
+export const updateRun = ({ run, body }: { run: RunDto; body: UpdateRunBody }) =>
+  withUnpublishConfirm((opts) => api.patch<{ run: RunDto }>(`/api/runs/${run.id}`, body, opts)).then((r) => r.run);
 
 export function useUpdateRun() {
   const qc = useQueryClient();

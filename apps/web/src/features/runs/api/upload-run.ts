@@ -1,6 +1,6 @@
 import { useCallback, useRef, useState } from 'react';
 import { useQueryClient } from '@tanstack/react-query';
-import { CONFIRM_UNPUBLISH_HEADER, type RunDto, type RunMapping, type RunOptions } from '@splitcase/contracts';
+import type { RunDto, RunMapping, RunOptions } from '@splitcase/contracts';
 import { api } from '@/lib/api-client';
 import { rootKeys, teardownScope } from '@/lib/query-keys';
 
@@ -11,9 +11,10 @@ export interface UploadRunInput {
   teardownId: number;
   file: File;
   mapping: RunMapping;
-  label?: string;
-  options?: RunOptions;
-  confirmUnpublish?: boolean;
+  label?: string | undefined;
+  options?: RunOptions | undefined;
+  /** From `confirmUnpublishFirst`: the confirm header when the teardown is published and the person said yes. */
+  headers?: Record<string, string> | undefined;
 }
 
 /** Upload with progress; after the last byte the server parses and analyses, shown as its own phase. */
@@ -34,7 +35,7 @@ export function useUploadRun() {
         `/api/teardowns/${input.teardownId}/runs`,
         form,
         (fraction) => setPhase(fraction >= 1 ? { step: 'analysing', since: Date.now() } : { step: 'uploading', fraction }),
-        input.confirmUnpublish ? { [CONFIRM_UNPUBLISH_HEADER]: 'yes' } : {},
+        input.headers ?? {},
       );
       abortRef.current = abort;
       try {

@@ -1,12 +1,14 @@
 import { lazy, Suspense, useEffect, useState } from 'react';
 import { useSearchParams } from 'react-router';
+import { toast } from 'sonner';
 import { Activity, Download, Layers, Pencil, Plus, Trash2 } from 'lucide-react';
 import { RUN_KIND, type RunDto, type TeardownDto } from '@splitcase/contracts';
 import { Badge } from '@/components/badges';
 import { Button } from '@/components/button';
 import { ErrorPanel, WidgetBoundary } from '@/components/error-boundary';
 import { Card, EmptyState, Spinner } from '@/components/page';
-import { ApiError } from '@/lib/api-client';
+import { confirmDialog } from '@/lib/confirm';
+import { mutationErrorMessage } from '@/lib/unpublish-confirm';
 import { formatDateTime } from '@/lib/format';
 import { useDeleteRun } from '../api/delete-run';
 import { useTeardownRuns } from '../api/teardown-runs';
@@ -32,41 +34,30 @@ export function ChartsPanel({ runs }: { runs: RunDto[] }) {
 
 function DeleteRun({ run, onDeleted }: { run: RunDto; onDeleted: () => void }) {
   const del = useDeleteRun();
-  const [asking, setAsking] = useState<'plain' | 'published' | null>(null);
-  const go = (confirmUnpublish: boolean) =>
+  const onDelete = async () => {
+    const ok = await confirmDialog({
+      title: `Delete “${run.label}”?`,
+      message: 'The run and its log file are removed. The history keeps a line saying it was deleted.',
+      confirmLabel: 'Delete the run',
+      cancelLabel: 'Keep it',
+      tone: 'danger',
+    });
+    if (!ok) return;
     del.mutate(
-      { run, confirmUnpublish },
+      { run },
       {
-        onSuccess: () => {
-          setAsking(null);
-          onDeleted();
-        },
+        onSuccess: onDeleted,
         onError: (err) => {
-          if (err instanceof ApiError && err.status === 409 && (err.details as { reason?: string } | undefined)?.reason === 'published') setAsking('published');
+          const m = mutationErrorMessage(err);
+          if (m) toast.error(m);
         },
       },
     );
-  if (!asking) {
-    return (
-      <Button size="sm" variant="danger" onClick={() => setAsking(run.teardownStatus === 'published' ? 'published' : 'plain')}>
-        <Trash2 className="size-4" aria-hidden /> Delete
-      </Button>
-    );
-  }
+  };
   return (
-    <div role="alert" className="flex flex-wrap items-center gap-2 rounded-md border border-brick-100 bg-brick-50 px-3 py-2 text-sm text-brick-800">
-      <span>
-        Delete “{run.label}” and its log file?
-        {asking === 'published' && ' The teardown is published: this moves it back to draft.'}
-      </span>
-      <Button size="sm" variant="danger" busy={del.isPending} onClick={() => go(asking === 'published')}>
-        Delete the run
-      </Button>
-      <Button size="sm" onClick={() => setAsking(null)}>
-        Keep it
-      </Button>
-      {del.isError && !(del.error instanceof ApiError && del.error.status === 409) && <span>{del.error.message}</span>}
-    </div>
+    <Button size="sm" variant="danger" busy={del.isPending} onClick={onDelete}>
+      <Trash2 className="size-4" aria-hidden /> Delete
+    </Button>
   );
 }
 
