@@ -125,7 +125,7 @@ describe('authorization matrix (tests/api/access-matrix.txt)', () => {
       : '';
     expect(wrong, hint).toEqual([]);
     expect(toAdd, hint).toEqual([]);
-  });
+  }, 300_000); // 720 requests: about 13 s alone, several times that on a loaded CI machine
 });
 
 /** Reads that answer only for a record of one kind (400 otherwise), with that kind. */
