@@ -1,15 +1,17 @@
 // The review workflow: draft → in_review (leads get an e-mail) → published, or back to draft with a
 // comment (the engineer gets an e-mail). Each step is audited and kept as a comment of its kind.
+// A teardown in review is read-only (access.ts `assertWritable`); its engineer or an admin
+// withdraws it back to draft to edit it (audited).
 import type { EntityManager } from '@mikro-orm/sqlite';
 import { approveTeardownBody, idParam, sendBackTeardownBody, submitTeardownBody, teardownResponse, TEARDOWN_STATUS, type TeardownStatus } from '@splitcase/contracts';
-import { AppError } from '../../http/errors';
+import { AppError, forbidden } from '../../http/errors';
 import type { AppDeps } from '../../http/deps';
 import { route, type AuthUser, type RouteDef } from '../../http/route';
 import { recordAudit } from '../audit/audit.service';
 import type { OutgoingMail } from '../mail/mailer';
 import { linkMail } from '../mail/templates';
 import { UserSchema } from '../users/user.entity';
-import { CONTENT_EDITORS, readableTeardown, REVIEWERS } from './access';
+import { CONTENT_EDITORS, mayWithdraw, readableTeardown, REVIEWERS } from './access';
 import { CommentSchema } from './comment.entity';
 import { teardownDto, teardownName } from './teardown.service';
 import type { Teardown } from './teardown.entity';
@@ -106,6 +108,33 @@ export const reviewRoutes: RouteDef[] = [
           'submitted',
         );
       }
+      return { teardown: await teardownDto(em, t, user) };
+    },
+  ),
+  route(
+    {
+      method: 'post',
+      path: '/api/teardowns/:id/withdraw',
+      tag: 'Teardowns',
+      summary: 'Withdraw a teardown from review back to draft to edit it (its engineer or an admin)',
+      access: CONTENT_EDITORS,
+      params: idParam,
+      response: teardownResponse,
+    },
+    async ({ em, user, params }) => {
+      const t = await readableTeardown(em, user, params.id);
+      if (!mayWithdraw(user, t)) throw forbidden();
+      requireStatus(t, 'in_review', 'withdrawn from review');
+      t.status = 'draft';
+      recordAudit(em, user, {
+        action: 'teardown.withdrawn',
+        entityType: 'teardown',
+        entityId: t.id,
+        scope: { type: 'teardown', id: t.id },
+        summary: 'Withdrawn from review to edit',
+        changes: { status: { from: 'in_review', to: 'draft' } },
+      });
+      await em.flush();
       return { teardown: await teardownDto(em, t, user) };
     },
   ),

@@ -73,7 +73,7 @@ export function PartList({
     const built = bodyOf(editDraft);
     if ('errors' in built) return setEditErrors(built.errors);
     try {
-      await update.mutateAsync({ id: editingId, body: built.body, headers: gate.headers });
+      await update.mutateAsync({ id: editingId, body: built.body });
       setEditingId(null);
       setEditErrors({});
     } catch (err) {
@@ -85,7 +85,7 @@ export function PartList({
     const built = bodyOf(newDraft);
     if ('errors' in built) return setNewErrors(built.errors);
     try {
-      await create.mutateAsync({ teardownId, body: built.body, headers: gate.headers });
+      await create.mutateAsync({ teardownId, body: built.body });
       setNewDraft(emptyDraft({ category: newDraft.category, mount: newDraft.mount, mountTouched: newDraft.mountTouched }));
       setNewErrors({});
       firstNewInput.current?.focus();
@@ -96,7 +96,7 @@ export function PartList({
 
   const remove1 = (p: PartDto) =>
     remove.mutate(
-      { id: p.id, headers: gate.headers },
+      { id: p.id },
       { onSuccess: () => toast.success(`Removed ${p.designators ?? p.description}.`), onError: (e) => toast.error(e.message), onSettled: () => setConfirmDelete(null) },
     );
 
@@ -106,7 +106,7 @@ export function PartList({
     const j = i + by;
     if (j < 0 || j >= ids.length) return;
     [ids[i], ids[j]] = [ids[j]!, ids[i]!];
-    reorder.mutate({ teardownId, ids, headers: gate.headers }, { onError: (e) => toast.error(e.message) });
+    reorder.mutate({ teardownId, ids }, { onError: (e) => toast.error(e.message) });
   };
 
   const keyHandler = (save: () => void, cancel: () => void) => (e: KeyboardEvent) => {

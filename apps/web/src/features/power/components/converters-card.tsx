@@ -95,7 +95,7 @@ export function ConvertersCard({ teardownId, converters, gate }: { teardownId: n
         deleteLabel: (c) => `Delete ${c.label}`,
         keepLabel: 'Keep the converter',
         onEdit: setEditing,
-        onDelete: (c) => remove.mutate({ teardownId, id: c.id, headers: gate.headers }, { onSuccess: () => toast.success(`Removed ${c.label}.`), onError: (e) => toast.error(e.message), onSettled: () => setConfirmDelete(null) }),
+        onDelete: (c) => remove.mutate({ teardownId, id: c.id }, { onSuccess: () => toast.success(`Removed ${c.label}.`), onError: (e) => toast.error(e.message), onSettled: () => setConfirmDelete(null) }),
       }),
     ],
     [gate, confirmDelete, remove, teardownId],
@@ -115,13 +115,13 @@ export function ConvertersCard({ teardownId, converters, gate }: { teardownId: n
     >
       <div className="space-y-3 p-2">
         <DataTable caption="Converters" rows={converters} columns={columns} rowId={(c) => String(c.id)} empty={gate.canEdit ? 'No converters yet: add the charger and any boost or buck stage.' : 'No converters recorded.'} />
-        {editing !== null && <ConverterForm key={editing === 'new' ? 'new' : editing.id} teardownId={teardownId} converter={editing === 'new' ? null : editing} gate={gate} onDone={() => setEditing(null)} />}
+        {editing !== null && <ConverterForm key={editing === 'new' ? 'new' : editing.id} teardownId={teardownId} converter={editing === 'new' ? null : editing} onDone={() => setEditing(null)} />}
       </div>
     </Card>
   );
 }
 
-function ConverterForm({ teardownId, converter, gate, onDone }: { teardownId: number; converter: ConverterDto | null; gate: EditGate; onDone: () => void }) {
+function ConverterForm({ teardownId, converter, onDone }: { teardownId: number; converter: ConverterDto | null; onDone: () => void }) {
   const create = useCreateConverter(teardownId);
   const update = useUpdateConverter(teardownId);
   const [draft, setDraft] = useState<Draft>(() => draftOf(converter));
@@ -143,8 +143,8 @@ function ConverterForm({ teardownId, converter, gate, onDone }: { teardownId: nu
       outputVolts: q.outputVolts ?? '',
     };
     try {
-      if (converter) await update.mutateAsync({ teardownId, id: converter.id, body, headers: gate.headers });
-      else await create.mutateAsync({ teardownId, body, headers: gate.headers });
+      if (converter) await update.mutateAsync({ teardownId, id: converter.id, body });
+      else await create.mutateAsync({ teardownId, body });
       toast.success(converter ? 'Converter saved.' : 'Converter added.');
       onDone();
     } catch (err) {

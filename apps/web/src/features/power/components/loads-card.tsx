@@ -111,7 +111,7 @@ export function LoadsCard({ teardownId, loads, converters, gate }: { teardownId:
         deleteLabel: (l) => `Delete ${l.label}`,
         keepLabel: 'Keep the load',
         onEdit: setEditing,
-        onDelete: (l) => remove.mutate({ teardownId, id: l.id, headers: gate.headers }, { onSuccess: () => toast.success(`Removed ${l.label}.`), onError: (e) => toast.error(e.message), onSettled: () => setConfirmDelete(null) }),
+        onDelete: (l) => remove.mutate({ teardownId, id: l.id }, { onSuccess: () => toast.success(`Removed ${l.label}.`), onError: (e) => toast.error(e.message), onSettled: () => setConfirmDelete(null) }),
       }),
     ],
     [gate, confirmDelete, remove, teardownId, converterName],
@@ -132,14 +132,14 @@ export function LoadsCard({ teardownId, loads, converters, gate }: { teardownId:
       <div className="space-y-3 p-2">
         <DataTable caption="Loads" rows={loads} columns={columns} rowId={(l) => String(l.id)} empty={gate.canEdit ? 'No loads yet: add the heater elements, motors, LEDs or USB outputs the pack feeds.' : 'No loads recorded.'} />
         {editing !== null && (
-          <LoadForm key={editing === 'new' ? 'new' : editing.id} teardownId={teardownId} load={editing === 'new' ? null : editing} converters={converters} gate={gate} onDone={() => setEditing(null)} />
+          <LoadForm key={editing === 'new' ? 'new' : editing.id} teardownId={teardownId} load={editing === 'new' ? null : editing} converters={converters} onDone={() => setEditing(null)} />
         )}
       </div>
     </Card>
   );
 }
 
-function LoadForm({ teardownId, load, converters, gate, onDone }: { teardownId: number; load: LoadDto | null; converters: ConverterDto[]; gate: EditGate; onDone: () => void }) {
+function LoadForm({ teardownId, load, converters, onDone }: { teardownId: number; load: LoadDto | null; converters: ConverterDto[]; onDone: () => void }) {
   const create = useCreateLoad(teardownId);
   const update = useUpdateLoad(teardownId);
   const [draft, setDraft] = useState<Draft>(() => draftOf(load));
@@ -162,8 +162,8 @@ function LoadForm({ teardownId, load, converters, gate, onDone }: { teardownId: 
       duty: draft.q.duty.trim() || '100 %',
     };
     try {
-      if (load) await update.mutateAsync({ teardownId, id: load.id, body, headers: gate.headers });
-      else await create.mutateAsync({ teardownId, body, headers: gate.headers });
+      if (load) await update.mutateAsync({ teardownId, id: load.id, body });
+      else await create.mutateAsync({ teardownId, body });
       toast.success(load ? 'Load saved.' : 'Load added.');
       onDone();
     } catch (err) {
