@@ -3,9 +3,9 @@
 // number here is invented for the demo (part numbers follow no real maker's scheme).
 import type { MeasuredQuantity, MountType, PartCategory } from '@splitcase/contracts';
 import { MeasurementSchema } from '../modules/measurements/measurement.entity';
-import { readMeasuredValue } from '../modules/measurements/service';
+import { readMeasuredValue } from '../modules/measurements/measurements.service';
 import { PartSchema, type Part } from '../modules/parts/part.entity';
-import { applyPartValues, defaultMount } from '../modules/parts/service';
+import { applyPartValues, defaultMount } from '../modules/parts/parts.service';
 import { ConverterSchema, type Converter } from '../modules/power/converter.entity';
 import { LoadSchema, type Load } from '../modules/power/load.entity';
 import { PackSchema } from '../modules/power/pack.entity';

@@ -12,9 +12,9 @@ import { diffChanges, recordAudit } from '../audit/audit.service';
 import { CONTENT_EDITORS, readableTeardown } from '../teardowns/access';
 import { changeTeardownContent } from '../teardowns/content-change';
 import { UserSchema } from '../users/user.entity';
-import { csvFileName } from '../parts/service';
+import { csvFileName } from '../parts/parts.service';
 import { MeasurementSchema, type Measurement } from './measurement.entity';
-import { measurementsCsv, readMeasuredValue, toMeasurementDto } from './service';
+import { measurementsCsv, readMeasuredValue, toMeasurementDto } from './measurements.service';
 
 const TAG = 'Measurements';
 const scope = (teardownId: number) => ({ type: 'teardown', id: teardownId });

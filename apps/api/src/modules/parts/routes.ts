@@ -15,7 +15,7 @@ import { diffChanges, recordAudit } from '../audit/audit.service';
 import { CONTENT_EDITORS, readableTeardown } from '../teardowns/access';
 import { changeTeardownContent } from '../teardowns/content-change';
 import { PartSchema, type Part } from './part.entity';
-import { applyPartValues, csvFileName, defaultMount, nextPosition, partSummary, partsCsv, planPartsImport, toPartDto, type PartValues } from './service';
+import { applyPartValues, csvFileName, defaultMount, nextPosition, partSummary, partsCsv, planPartsImport, toPartDto, type PartValues } from './parts.service';
 
 const TAG = 'Parts';
 const scope = (teardownId: number) => ({ type: 'teardown', id: teardownId });

@@ -16,7 +16,7 @@ import { LoadSchema } from './load.entity';
 import { ModeLoadSchema } from './mode-load.entity';
 import { OperatingModeSchema, type OperatingMode } from './mode.entity';
 import { mergeEntered, readQuantities } from './quantities';
-import { MODE_DUTY_RULE, MODE_RULES, modesOf, toModeDto } from './service';
+import { MODE_DUTY_RULE, MODE_RULES, modesOf, toModeDto } from './power.service';
 
 const TAG = 'Power system';
 const modeParams = z.object({ id: idParam.shape.id, modeId: idParam.shape.id });

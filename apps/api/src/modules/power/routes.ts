@@ -39,7 +39,7 @@ import {
   toConverterDto,
   toLoadDto,
   toPackDto,
-} from './service';
+} from './power.service';
 
 const TAG = 'Power system';
 const scope = (teardownId: number) => ({ type: 'teardown', id: teardownId });
