@@ -1,12 +1,13 @@
-import { findingResponse, figuresResponse, idParam, suggestionParams, suggestionResponse } from '@splitcase/contracts';
+import { findingResponse, figuresResponse, suggestionParams, suggestionResponse } from '@splitcase/contracts';
 import { AppError, notFound } from '../../http/errors';
 import { route, type RouteContext, type RouteDef } from '../../http/route';
 import { recordAudit } from '../audit/audit.service';
 import { createFinding, FINDING_POPULATE, toFindingDto } from '../findings/finding.service';
 import { UserSchema } from '../users/user.entity';
-import { CONTENT_EDITORS, editableTeardown, readableTeardown } from '../teardowns/access';
+import { CONTENT_EDITORS, editableTeardown } from '../teardowns/access';
 import { SuggestionDecisionSchema } from '../teardowns/suggestion-decision.entity';
 import { teardownFiguresFor } from './figures.service';
+import { teardownRead } from '../teardowns/teardown-routes';
 
 /**
  * The suggestion of the route's teardown (editable) and key, with its decision, when it is not
@@ -24,18 +25,14 @@ async function notAcceptedSuggestion(ctx: RouteContext<unknown, unknown, { id: n
 }
 
 export const figureRoutes: RouteDef[] = [
-  route(
+  teardownRead(
     {
-      method: 'get',
       path: '/api/teardowns/:id/figures',
       tag: 'Figures',
       summary: 'Derived figures (value, unit, formula, source, inputs, assumptions, warnings) and suggested findings, computed from the stored records',
-      access: 'signed-in',
-      params: idParam,
       response: figuresResponse,
     },
-    async ({ em, user, params }) => {
-      const t = await readableTeardown(em, user, params.id);
+    async ({ em }, t) => {
       const { figures, modes, suggestions, note } = await teardownFiguresFor(em, t);
       return { figures, modes, suggestions, note };
     },

@@ -6,7 +6,7 @@ import type { EntityManager } from '@mikro-orm/sqlite';
 import { approveTeardownBody, idParam, sendBackTeardownBody, submitTeardownBody, teardownResponse, TEARDOWN_STATUS, type TeardownStatus } from '@splitcase/contracts';
 import { AppError, forbidden } from '../../http/errors';
 import type { AppDeps } from '../../http/deps';
-import { route, type AuthUser, type RouteDef } from '../../http/route';
+import { route, type AuthUser, type RouteContext, type RouteDef } from '../../http/route';
 import { recordAudit } from '../audit/audit.service';
 import type { OutgoingMail } from '../mail/mailer';
 import { linkMail } from '../mail/templates';
@@ -46,6 +46,73 @@ function addReviewComment(em: EntityManager, t: Teardown, user: AuthUser, kind: 
 }
 
 const link = (deps: AppDeps, t: Teardown) => `${deps.env.publicUrl}/teardowns/${t.id}`;
+
+/** What approving and sending back do to a teardown in review (the one handler below reads it). */
+const DECISIONS = {
+  approve: { kind: 'approved', to: 'published', verb: 'approved', noteDefault: 'Approved and published.', summary: (note: string | null) => `Approved and published${note ? `: ${note}` : ''}` },
+  'send-back': { kind: 'sent-back', to: 'draft', verb: 'sent back', noteDefault: '', summary: (note: string | null) => `Sent back to draft: ${note}` },
+} as const;
+
+/**
+ * Approve or send back a teardown in review: the status, the review note, a comment of its kind and
+ * the audit entry; a send-back then e-mails the engineer (undone when the mail server refuses).
+ */
+async function decide(ctx: RouteContext<unknown, unknown, { id: number }>, which: keyof typeof DECISIONS, note: string | null) {
+  const { em, user, deps } = ctx;
+  const d = DECISIONS[which];
+  const t = await readableTeardown(em, user, ctx.params.id);
+  requireStatus(t, 'in_review', d.verb);
+  const previousNote = t.lastReviewNote ?? null;
+  t.status = d.to;
+  t.lastReviewNote = note;
+  if (which === 'approve') {
+    t.publishedAt = new Date();
+    t.publishedBy = em.getReference(UserSchema, user.id);
+  }
+  const comment = addReviewComment(em, t, user, d.kind, note ?? d.noteDefault);
+  recordAudit(em, user, {
+    action: `teardown.${d.kind}`,
+    entityType: 'teardown',
+    entityId: t.id,
+    scope: { type: 'teardown', id: t.id },
+    summary: d.summary(note),
+    changes: { status: { from: 'in_review', to: d.to } },
+  });
+  await em.flush();
+  if (which === 'send-back' && t.engineer.active) {
+    await sendOrUndo(
+      deps,
+      linkMail({
+        to: t.engineer.email,
+        subject: `Sent back: ${teardownName(t)}`,
+        lines: [
+          `Hello ${t.engineer.name.split(' ')[0]},`,
+          `${user.name} sent your teardown of ${teardownName(t)} back to draft with this comment:`,
+          `“${note}”`,
+          'Make the changes, then submit it for review again.',
+        ],
+        linkLabel: 'Open the teardown',
+        url: link(deps, t),
+      }),
+      async () => {
+        t.status = 'in_review';
+        t.lastReviewNote = previousNote;
+        em.remove(comment);
+        recordAudit(em, user, {
+          action: 'teardown.send-back-undone',
+          entityType: 'teardown',
+          entityId: t.id,
+          scope: { type: 'teardown', id: t.id },
+          summary: 'Send-back undone: the e-mail to the engineer could not be sent',
+          changes: { status: { from: 'draft', to: 'in_review' } },
+        });
+        await em.flush();
+      },
+      'sent back',
+    );
+  }
+  return { teardown: await teardownDto(em, t, user) };
+}
 
 export const reviewRoutes: RouteDef[] = [
   route(
@@ -149,25 +216,7 @@ export const reviewRoutes: RouteDef[] = [
       body: approveTeardownBody,
       response: teardownResponse,
     },
-    async ({ em, user, params, body }) => {
-      const t = await readableTeardown(em, user, params.id);
-      requireStatus(t, 'in_review', 'approved');
-      t.status = 'published';
-      t.publishedAt = new Date();
-      t.publishedBy = em.getReference(UserSchema, user.id);
-      t.lastReviewNote = body.note ?? null;
-      addReviewComment(em, t, user, 'approved', body.note ?? 'Approved and published.');
-      recordAudit(em, user, {
-        action: 'teardown.approved',
-        entityType: 'teardown',
-        entityId: t.id,
-        scope: { type: 'teardown', id: t.id },
-        summary: `Approved and published${body.note ? `: ${body.note}` : ''}`,
-        changes: { status: { from: 'in_review', to: 'published' } },
-      });
-      await em.flush();
-      return { teardown: await teardownDto(em, t, user) };
-    },
+    (ctx) => decide(ctx, 'approve', ctx.body.note ?? null),
   ),
   route(
     {
@@ -180,55 +229,6 @@ export const reviewRoutes: RouteDef[] = [
       body: sendBackTeardownBody,
       response: teardownResponse,
     },
-    async ({ em, user, params, body, deps }) => {
-      const t = await readableTeardown(em, user, params.id);
-      requireStatus(t, 'in_review', 'sent back');
-      const previousNote = t.lastReviewNote ?? null;
-      t.status = 'draft';
-      t.lastReviewNote = body.comment;
-      const comment = addReviewComment(em, t, user, 'sent-back', body.comment);
-      recordAudit(em, user, {
-        action: 'teardown.sent-back',
-        entityType: 'teardown',
-        entityId: t.id,
-        scope: { type: 'teardown', id: t.id },
-        summary: `Sent back to draft: ${body.comment}`,
-        changes: { status: { from: 'in_review', to: 'draft' } },
-      });
-      await em.flush();
-      if (t.engineer.active) {
-        await sendOrUndo(
-          deps,
-          linkMail({
-            to: t.engineer.email,
-            subject: `Sent back: ${teardownName(t)}`,
-            lines: [
-              `Hello ${t.engineer.name.split(' ')[0]},`,
-              `${user.name} sent your teardown of ${teardownName(t)} back to draft with this comment:`,
-              `“${body.comment}”`,
-              'Make the changes, then submit it for review again.',
-            ],
-            linkLabel: 'Open the teardown',
-            url: link(deps, t),
-          }),
-          async () => {
-            t.status = 'in_review';
-            t.lastReviewNote = previousNote;
-            em.remove(comment);
-            recordAudit(em, user, {
-              action: 'teardown.send-back-undone',
-              entityType: 'teardown',
-              entityId: t.id,
-              scope: { type: 'teardown', id: t.id },
-              summary: 'Send-back undone: the e-mail to the engineer could not be sent',
-              changes: { status: { from: 'draft', to: 'in_review' } },
-            });
-            await em.flush();
-          },
-          'sent back',
-        );
-      }
-      return { teardown: await teardownDto(em, t, user) };
-    },
+    (ctx) => decide(ctx, 'send-back', ctx.body.comment),
   ),
 ];
