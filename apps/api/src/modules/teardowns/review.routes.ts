@@ -45,6 +45,11 @@ function addReviewComment(em: EntityManager, t: Teardown, user: AuthUser, kind: 
   return em.create(CommentSchema, { teardown: t, author: em.getReference(UserSchema, user.id), kind, body } as never);
 }
 
+/** The audit entry of a review step: the teardown's status from → to. */
+function statusAudit(em: EntityManager, user: AuthUser, t: Teardown, action: string, summary: string, from: TeardownStatus, to: TeardownStatus) {
+  recordAudit(em, user, { action, entityType: 'teardown', entityId: t.id, scope: { type: 'teardown', id: t.id }, summary, changes: { status: { from, to } } });
+}
+
 const link = (deps: AppDeps, t: Teardown) => `${deps.env.publicUrl}/teardowns/${t.id}`;
 
 /** What approving and sending back do to a teardown in review (the one handler below reads it). */
@@ -70,14 +75,7 @@ async function decide(ctx: RouteContext<unknown, unknown, { id: number }>, which
     t.publishedBy = em.getReference(UserSchema, user.id);
   }
   const comment = addReviewComment(em, t, user, d.kind, note ?? d.noteDefault);
-  recordAudit(em, user, {
-    action: `teardown.${d.kind}`,
-    entityType: 'teardown',
-    entityId: t.id,
-    scope: { type: 'teardown', id: t.id },
-    summary: d.summary(note),
-    changes: { status: { from: 'in_review', to: d.to } },
-  });
+  statusAudit(em, user, t, `teardown.${d.kind}`, d.summary(note), 'in_review', d.to);
   await em.flush();
   if (which === 'send-back' && t.engineer.active) {
     await sendOrUndo(
@@ -98,14 +96,7 @@ async function decide(ctx: RouteContext<unknown, unknown, { id: number }>, which
         t.status = 'in_review';
         t.lastReviewNote = previousNote;
         em.remove(comment);
-        recordAudit(em, user, {
-          action: 'teardown.send-back-undone',
-          entityType: 'teardown',
-          entityId: t.id,
-          scope: { type: 'teardown', id: t.id },
-          summary: 'Send-back undone: the e-mail to the engineer could not be sent',
-          changes: { status: { from: 'draft', to: 'in_review' } },
-        });
+        statusAudit(em, user, t, 'teardown.send-back-undone', 'Send-back undone: the e-mail to the engineer could not be sent', 'draft', 'in_review');
         await em.flush();
       },
       'sent back',
@@ -133,14 +124,7 @@ export const reviewRoutes: RouteDef[] = [
       t.status = 'in_review';
       t.submittedAt = new Date();
       const comment = addReviewComment(em, t, user, 'submitted', body.note ?? 'Submitted for review.');
-      recordAudit(em, user, {
-        action: 'teardown.submitted',
-        entityType: 'teardown',
-        entityId: t.id,
-        scope: { type: 'teardown', id: t.id },
-        summary: `Submitted for review${body.note ? `: ${body.note}` : ''}`,
-        changes: { status: { from: 'draft', to: 'in_review' } },
-      });
+      statusAudit(em, user, t, 'teardown.submitted', `Submitted for review${body.note ? `: ${body.note}` : ''}`, 'draft', 'in_review');
       await em.flush();
       const leads = await em.find(UserSchema, { role: 'lead', active: true }, { orderBy: { id: 'asc' } });
       if (leads.length > 0) {
@@ -162,14 +146,7 @@ export const reviewRoutes: RouteDef[] = [
             t.status = 'draft';
             t.submittedAt = previous.submittedAt;
             em.remove(comment);
-            recordAudit(em, user, {
-              action: 'teardown.submit-undone',
-              entityType: 'teardown',
-              entityId: t.id,
-              scope: { type: 'teardown', id: t.id },
-              summary: 'Submission undone: the e-mail to the leads could not be sent',
-              changes: { status: { from: 'in_review', to: 'draft' } },
-            });
+            statusAudit(em, user, t, 'teardown.submit-undone', 'Submission undone: the e-mail to the leads could not be sent', 'in_review', 'draft');
             await em.flush();
           },
           'submitted',
@@ -193,14 +170,7 @@ export const reviewRoutes: RouteDef[] = [
       if (!mayWithdraw(user, t)) throw forbidden();
       requireStatus(t, 'in_review', 'withdrawn from review');
       t.status = 'draft';
-      recordAudit(em, user, {
-        action: 'teardown.withdrawn',
-        entityType: 'teardown',
-        entityId: t.id,
-        scope: { type: 'teardown', id: t.id },
-        summary: 'Withdrawn from review to edit',
-        changes: { status: { from: 'in_review', to: 'draft' } },
-      });
+      statusAudit(em, user, t, 'teardown.withdrawn', 'Withdrawn from review to edit', 'in_review', 'draft');
       await em.flush();
       return { teardown: await teardownDto(em, t, user) };
     },
