@@ -2,6 +2,7 @@ import { RequestContext } from '@mikro-orm/core';
 import type { EntityManager } from '@mikro-orm/sqlite';
 import type { RequestHandler, Response } from 'express';
 import multer from 'multer';
+import type { ZodType } from 'zod';
 import {
   calloutResponse,
   calloutsResponse,
@@ -56,6 +57,10 @@ const precheckUploadTarget: RequestHandler = async (req, _res, next) => {
   assertWritable(t, confirmsUnpublish(req));
   next();
 };
+
+/** A PATCH of a photo or a pin by its id, by content editors. */
+const editSpec = <B extends ZodType>(path: string, summary: string, body: B, response: ZodType) =>
+  ({ method: 'patch', path, tag: TAG, summary, access: CONTENT_EDITORS, params: idParam, body, response }) as const;
 
 /** Load a photo with its teardown; a user who may not read that teardown gets 404. */
 async function readablePhoto(em: EntityManager, user: AuthUser, id: number): Promise<Photo> {
@@ -142,16 +147,7 @@ export function photoRoutes(deps: AppDeps): RouteDef[] {
       },
     ),
     route(
-      {
-        method: 'patch',
-        path: '/api/photos/:id',
-        tag: TAG,
-        summary: "Change a photo's caption, layer or step",
-        access: CONTENT_EDITORS,
-        params: idParam,
-        body: updatePhotoBody,
-        response: photoResponse,
-      },
+      editSpec('/api/photos/:id', "Change a photo's caption, layer or step", updatePhotoBody, photoResponse),
       async (ctx) => {
         const { em, params, body, user } = ctx;
         const photo = await readablePhoto(em, user, params.id);
@@ -262,16 +258,7 @@ export function photoRoutes(deps: AppDeps): RouteDef[] {
       },
     ),
     route(
-      {
-        method: 'patch',
-        path: '/api/callouts/:id',
-        tag: TAG,
-        summary: 'Move a pin, change its label, or link/unlink a part or finding of the same teardown',
-        access: CONTENT_EDITORS,
-        params: idParam,
-        body: updateCalloutBody,
-        response: calloutResponse,
-      },
+      editSpec('/api/callouts/:id', 'Move a pin, change its label, or link/unlink a part or finding of the same teardown', updateCalloutBody, calloutResponse),
       async (ctx) => {
         const { em, params, body, user } = ctx;
         const callout = await readableCallout(em, user, params.id);
