@@ -335,6 +335,8 @@ describe('bad input: a clear message naming the row and column, and nothing stor
     await em.getConnection().execute("delete from bench_runs where teardown_id = ? and kind = 'discharge'", [id]);
     // The demo seed records this device's pack; this test starts from the label alone.
     await em.getConnection().execute('delete from packs where teardown_id = ?', [id]);
+    // The demo has it in review, which is read-only: its engineer withdraws it to edit it.
+    await (await t.as('engineer2')).post(`/api/teardowns/${id}/withdraw`, {}).expect(200);
     const a = await t.as('engineer');
     const mapping = { kind: 'power-bank', time: { column: 't', unit: 's' }, voltage: { column: 'v', unit: 'V' }, current: { column: 'i', unit: 'A' } };
     const log = 't,v,i\n0,5,1\n3600,5,1\n';

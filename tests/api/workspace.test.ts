@@ -304,6 +304,67 @@ describe('review workflow', () => {
     expect(history.map((e) => e.action)).toEqual(['teardown.submit-undone', 'teardown.submitted', 'teardown.created']);
   });
 
+  it('a teardown in review is read-only: every write to it or its records is refused with 409 in_review, with or without the confirm', async () => {
+    const td = await newTeardown(undefined, { summary: 'Before review' });
+    const eng = await as('engineer');
+    const part = (await eng.post(`/api/teardowns/${td.id}/parts`, { designator: 'R1', category: 'passive', description: 'Sense resistor', quantity: 1 }).expect(201)).body.part as { id: number };
+    const reading = (await eng.post(`/api/teardowns/${td.id}/measurements`, { quantity: 'resistance', subject: 'Heater flex, cold', value: '3.02 Ω' }).expect(201)).body.measurement as { id: number };
+    const finding = (await eng.post(`/api/teardowns/${td.id}/findings`, { kind: 'safety', severity: 'minor', text: 'Loose wire' }).expect(201)).body.finding as { id: number };
+    await eng.post(`/api/teardowns/${td.id}/loads`, { kind: 'heater', resistanceOhms: 3 }).expect(201);
+    const submitted = (await eng.post(`/api/teardowns/${td.id}/submit`, {}).expect(200)).body.teardown;
+
+    const writes: [string, () => PromiseLike<{ status: number; body: { error?: { code: string; message: string; details?: unknown } } }>][] = [
+      ['PATCH teardown', () => eng.patch(`/api/teardowns/${td.id}`, { version: submitted.version, summary: 'Changed in review' })],
+      ['POST part', () => eng.post(`/api/teardowns/${td.id}/parts`, { designator: 'R2', category: 'passive', description: 'Another', quantity: 1 })],
+      ['PATCH part', () => eng.patch(`/api/parts/${part.id}`, { description: 'Changed' })],
+      ['DELETE part', () => eng.delete(`/api/parts/${part.id}`)],
+      ['PUT pack', () => eng.put(`/api/teardowns/${td.id}/pack`, { chemistry: 'li-ion', nominalVolts: '3.7 V', capacityAh: '2 Ah' })],
+      ['POST load', () => eng.post(`/api/teardowns/${td.id}/loads`, { kind: 'heater', resistanceOhms: 3 })],
+      ['POST measurement', () => eng.post(`/api/teardowns/${td.id}/measurements`, { quantity: 'resistance', subject: 'Another', value: '1 Ω' })],
+      ['PATCH measurement', () => eng.patch(`/api/measurements/${reading.id}`, { value: '3.1 Ω' })],
+      ['PATCH finding', () => eng.patch(`/api/teardowns/${td.id}/findings/${finding.id}`, { text: 'Changed' })],
+      ['POST finding', () => eng.post(`/api/teardowns/${td.id}/findings`, { kind: 'safety', severity: 'minor', text: 'Another' })],
+      ['POST mode', () => eng.post(`/api/teardowns/${td.id}/modes`, { name: 'High', loads: [] })],
+      ['photo upload', () => eng.upload(`/api/teardowns/${td.id}/photos`).attach('file', Buffer.from('not read'), 'x.jpg')],
+      ['PATCH teardown, confirmed', () => eng.patch(`/api/teardowns/${td.id}`, { version: submitted.version, summary: 'Changed in review' }).set(CONFIRM_UNPUBLISH_HEADER, 'yes')],
+      ['POST part, confirmed', () => eng.post(`/api/teardowns/${td.id}/parts`, { designator: 'R2', category: 'passive', description: 'Another', quantity: 1 }).set(CONFIRM_UNPUBLISH_HEADER, 'yes')],
+    ];
+    for (const [what, write] of writes) {
+      const res = await write();
+      expect([what, res.status]).toEqual([what, 409]);
+      expect(res.body.error).toMatchObject({ code: 'conflict', details: { reason: 'in_review' } });
+      expect(res.body.error!.message).toMatch(/in review/);
+    }
+    const after = (await eng.get(`/api/teardowns/${td.id}`).expect(200)).body.teardown;
+    expect(after).toMatchObject({ status: 'in_review', summary: 'Before review', version: submitted.version, permissions: { edit: false, withdraw: true } });
+    expect(((await eng.get(`/api/teardowns/${td.id}/parts`).expect(200)).body.parts as unknown[]).length).toBe(1);
+    // Comments stay open during review.
+    await (await as('lead')).post(`/api/teardowns/${td.id}/comments`, { body: 'Looking at it now.' }).expect(201);
+  });
+
+  it('its engineer or an admin withdraws a teardown from review to edit it; others may not', async () => {
+    const td = await newTeardown();
+    const eng = await as('engineer');
+    await eng.post(`/api/teardowns/${td.id}/submit`, {}).expect(200);
+    for (const role of ['engineer2', 'lead', 'sourcing']) {
+      const res = await (await as(role)).post(`/api/teardowns/${td.id}/withdraw`, {}).expect(403);
+      expect(res.body.error.code).toBe('forbidden');
+    }
+    await (await as('viewer')).post(`/api/teardowns/${td.id}/withdraw`, {}).expect(403);
+    expect((await (await as('engineer2')).get(`/api/teardowns/${td.id}`).expect(200)).body.teardown.permissions).toMatchObject({ edit: false, withdraw: false });
+
+    const withdrawn = (await eng.post(`/api/teardowns/${td.id}/withdraw`, {}).expect(200)).body.teardown;
+    expect(withdrawn).toMatchObject({ status: 'draft', permissions: { edit: true, withdraw: false } });
+    const twice = await eng.post(`/api/teardowns/${td.id}/withdraw`, {}).expect(409);
+    expect(twice.body.error).toMatchObject({ code: 'conflict', details: { status: 'draft' } });
+    await eng.patch(`/api/teardowns/${td.id}`, { version: withdrawn.version, summary: 'Edited after withdrawing' }).expect(200);
+    const history = (await eng.get(`/api/teardowns/${td.id}/history`).expect(200)).body.entries as { action: string }[];
+    expect(history.map((e) => e.action).slice(0, 3)).toEqual(['teardown.updated', 'teardown.withdrawn', 'teardown.submitted']);
+
+    await eng.post(`/api/teardowns/${td.id}/submit`, {}).expect(200);
+    expect((await (await as('admin')).post(`/api/teardowns/${td.id}/withdraw`, {}).expect(200)).body.teardown.status).toBe('draft');
+  });
+
   it('admins may approve; a wrong state names the state', async () => {
     const td = await newTeardown();
     const admin = await as('admin');

@@ -10,6 +10,8 @@ export const teardownPermissionsSchema = z.object({
   review: z.boolean(),
   comment: z.boolean(),
   editPrices: z.boolean(),
+  /** In review, and the caller is its engineer or an admin: may withdraw it from review to edit it. */
+  withdraw: z.boolean(),
 });
 export type TeardownPermissions = z.infer<typeof teardownPermissionsSchema>;
 
@@ -38,6 +40,7 @@ export const teardownResponse = z.object({ teardown: teardownSchema });
 /**
  * Writes to a published teardown move it back to draft. The server refuses them with 409
  * (`details.reason = 'published'`) unless the request carries this header with the value `yes`.
+ * Writes to a teardown in review are refused whatever the header (409, `details.reason = 'in_review'`).
  */
 export const CONFIRM_UNPUBLISH_HEADER = 'X-Confirm-Unpublish';
 

@@ -1,6 +1,6 @@
 import type { EntityManager } from '@mikro-orm/sqlite';
 import type { Request, RequestHandler, Response, Router } from 'express';
-import type { PriceView, Role } from '@splitcase/contracts';
+import { CONFIRM_UNPUBLISH_HEADER, type PriceView, type Role } from '@splitcase/contracts';
 import { z, type ZodType } from 'zod';
 import { AppError, forbidden, validationError, zodFields } from './errors';
 import type { AppDeps } from './deps';
@@ -59,7 +59,12 @@ export interface RouteContext<B, Q, P> {
   maybeUser: AuthUser | null;
   /** 'detail' or 'totals' for this caller; only on routes that declare `prices` in the route table. */
   priceView: PriceView;
+  /** The request carries `X-Confirm-Unpublish: yes`: a write may move a published teardown back to draft. */
+  confirmUnpublish: boolean;
 }
+
+/** The one reading of the confirm header (handlers get it as `ctx.confirmUnpublish`). */
+export const confirmsUnpublish = (req: Request): boolean => req.get(CONFIRM_UNPUBLISH_HEADER)?.toLowerCase() === 'yes';
 
 export interface RouteDef {
   spec: RouteSpec<ZodType, ZodType, ZodType>;
@@ -121,6 +126,7 @@ export function mountRoutes(router: Router, defs: RouteDef[], deps: AppDeps, get
         em: getEm(),
         deps,
         maybeUser,
+        confirmUnpublish: confirmsUnpublish(req),
         get user() {
           if (!maybeUser) throw new AppError('unauthenticated', 'Sign in to continue.');
           return maybeUser;

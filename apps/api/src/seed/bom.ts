@@ -3,8 +3,8 @@
 // number here is invented for the demo (part numbers follow no real maker's scheme).
 import type { MeasuredQuantity, MountType, PartCategory } from '@splitcase/contracts';
 import { MeasurementSchema } from '../modules/measurements/measurement.entity';
-import { readMeasuredValue } from '../modules/measurements/service';
-import { defaultMount, newPart } from '../modules/parts/service';
+import { readMeasuredValue } from '../modules/measurements/measurements.service';
+import { defaultMount, newPart } from '../modules/parts/parts.service';
 import { ConverterSchema, type Converter } from '../modules/power/converter.entity';
 import { LoadSchema, type Load } from '../modules/power/load.entity';
 import { PackSchema } from '../modules/power/pack.entity';

@@ -1,53 +1,38 @@
-import { useState } from 'react';
-import { PencilLine } from 'lucide-react';
-import { CONFIRM_UNPUBLISH_HEADER, type TeardownDto } from '@splitcase/contracts';
-import { Button } from './button';
+import { Info } from 'lucide-react';
+import type { TeardownDto } from '@splitcase/contracts';
 
 export interface EditGate {
-  /** Published, and the user chose to edit anyway: the first change moves it back to draft. */
-  unlockedPublished: boolean;
-  /** The user may change this section now. */
+  /** The user may change this section now (the server's `permissions.edit`: false while in review). */
   canEdit: boolean;
-  /** Published and not yet unlocked: show PublishedEditNotice. */
-  locked: boolean;
-  unlock: () => void;
-  /** Headers for write requests: the confirm header once a published teardown is unlocked. */
-  headers: Record<string, string> | undefined;
+  /** The teardown is published: a change asks first (withUnpublishConfirm) and moves it back to draft. */
+  published: boolean;
+  /** In review and the user may withdraw it: read-only until withdrawn (the button is in the header). */
+  withdrawable: boolean;
 }
 
 /**
- * Editing a published teardown moves it back to draft (the server asks for a confirm header). The
- * section stays read-only until the user chooses to edit anyway; after the first change the
- * teardown is a draft and the gate opens by itself.
+ * Whether a teardown section is editable now. Writes themselves go through `withUnpublishConfirm`
+ * (lib/unpublish-confirm.ts), which asks before a change moves a published teardown back to draft.
  */
 export function useEditGate(teardown: TeardownDto): EditGate {
-  const [unlocked, setUnlocked] = useState(false);
-  const published = teardown.status === 'published';
-  const locked = published && !unlocked;
   return {
-    unlockedPublished: teardown.permissions.edit && published && unlocked,
-    canEdit: teardown.permissions.edit && !locked,
-    locked: teardown.permissions.edit && locked,
-    unlock: () => setUnlocked(true),
-    headers: published ? { [CONFIRM_UNPUBLISH_HEADER]: 'yes' } : undefined,
+    canEdit: teardown.permissions.edit,
+    published: teardown.permissions.edit && teardown.status === 'published',
+    withdrawable: teardown.permissions.withdraw,
   };
 }
 
+/** A line above an editable section saying what a change does (published) or why it is read-only (in review). */
 export function PublishedEditNotice({ gate }: { gate: EditGate }) {
-  if (gate.unlockedPublished) {
-    return (
-      <p className="rounded-md border border-amber-100 bg-amber-50 px-3 py-2 text-sm text-amber-800" role="note">
-        Editing a published teardown: your first change moves it back to draft for review.
-      </p>
-    );
-  }
-  if (!gate.locked) return null;
+  const text = gate.withdrawable
+    ? 'In review, so read-only. To change it, withdraw it from review (at the top of the page); it needs submitting again.'
+    : gate.published
+      ? 'Published: saving a change asks first, then moves it back to draft for review.'
+      : null;
+  if (!text) return null;
   return (
-    <div className="flex flex-wrap items-center justify-between gap-3 rounded-md border border-cell-100 bg-cell-50 px-3 py-2 text-sm text-cell-800" role="note">
-      <p>This teardown is published. A change moves it back to draft, and it needs review again.</p>
-      <Button size="sm" onClick={gate.unlock}>
-        <PencilLine className="size-4" aria-hidden /> Edit anyway
-      </Button>
-    </div>
+    <p className="flex items-center gap-2 rounded-md border border-cell-100 bg-cell-50 px-3 py-2 text-sm text-cell-800" role="note">
+      <Info className="size-4 shrink-0" aria-hidden /> {text}
+    </p>
   );
 }

@@ -8,7 +8,7 @@ import { PartSchema } from '../parts/part.entity';
 import { ConverterSchema } from '../power/converter.entity';
 import { LoadSchema } from '../power/load.entity';
 import { PackSchema } from '../power/pack.entity';
-import { modesOf } from '../power/service';
+import { modesOf } from '../power/power.service';
 import { getSettings } from '../settings/settings.service';
 import { SuggestionDecisionSchema } from '../teardowns/suggestion-decision.entity';
 import type { Teardown } from '../teardowns/teardown.entity';

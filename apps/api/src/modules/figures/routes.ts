@@ -1,12 +1,14 @@
-import { findingResponse, figuresResponse, idParam, suggestionParams, suggestionResponse } from '@splitcase/contracts';
+import type { EntityManager } from '@mikro-orm/sqlite';
+import { findingResponse, figuresResponse, suggestionParams, suggestionResponse } from '@splitcase/contracts';
 import { AppError, notFound } from '../../http/errors';
-import { route, type RouteContext, type RouteDef } from '../../http/route';
+import { route, type AuthUser, type RouteContext, type RouteDef } from '../../http/route';
 import { recordAudit } from '../audit/audit.service';
 import { createFinding, FINDING_POPULATE, toFindingDto } from '../findings/finding.service';
 import { UserSchema } from '../users/user.entity';
-import { CONTENT_EDITORS, editableTeardown, readableTeardown } from '../teardowns/access';
+import { CONTENT_EDITORS, editableTeardown } from '../teardowns/access';
 import { SuggestionDecisionSchema } from '../teardowns/suggestion-decision.entity';
 import { teardownFiguresFor } from './figures.service';
+import { teardownRead } from '../teardowns/teardown-routes';
 
 /**
  * The suggestion of the route's teardown (editable) and key, with its decision, when it is not
@@ -23,19 +25,24 @@ async function notAcceptedSuggestion(ctx: RouteContext<unknown, unknown, { id: n
   return { t, s };
 }
 
+/** The audit entry of a decision on a suggestion. */
+function suggestionAudit(em: EntityManager, user: AuthUser, teardownId: number, key: string, action: string, summary: string) {
+  recordAudit(em, user, { action, entityType: 'suggestion', entityId: key, scope: { type: 'teardown', id: teardownId }, summary });
+}
+
+/** The route of dismissing or reopening a suggestion. */
+const suggestionStep = (step: 'dismiss' | 'reopen', summary: string) =>
+  ({ method: 'post', path: `/api/teardowns/:id/suggestions/:key/${step}`, tag: 'Figures', summary, access: CONTENT_EDITORS, params: suggestionParams, response: suggestionResponse }) as const;
+
 export const figureRoutes: RouteDef[] = [
-  route(
+  teardownRead(
     {
-      method: 'get',
       path: '/api/teardowns/:id/figures',
       tag: 'Figures',
       summary: 'Derived figures (value, unit, formula, source, inputs, assumptions, warnings) and suggested findings, computed from the stored records',
-      access: 'signed-in',
-      params: idParam,
       response: figuresResponse,
     },
-    async ({ em, user, params }) => {
-      const t = await readableTeardown(em, user, params.id);
+    async ({ em }, t) => {
       const { figures, modes, suggestions, note } = await teardownFiguresFor(em, t);
       return { figures, modes, suggestions, note };
     },
@@ -71,13 +78,7 @@ export const figureRoutes: RouteDef[] = [
         } else {
           tx.create(SuggestionDecisionSchema, { teardown: t, key: s.key, status: 'accepted', findingId: f.id, decidedBy: tx.getReference(UserSchema, user.id) });
         }
-        recordAudit(tx, user, {
-          action: 'suggestion.accepted',
-          entityType: 'suggestion',
-          entityId: s.key,
-          scope: { type: 'teardown', id: t.id },
-          summary: `Accepted the suggestion "${s.title}" as finding #${f.id}`,
-        });
+        suggestionAudit(tx, user, t.id, s.key, 'suggestion.accepted', `Accepted the suggestion "${s.title}" as finding #${f.id}`);
         return f;
       });
       await em.populate(finding, [...FINDING_POPULATE]);
@@ -85,55 +86,27 @@ export const figureRoutes: RouteDef[] = [
     },
   ),
   route(
-    {
-      method: 'post',
-      path: '/api/teardowns/:id/suggestions/:key/dismiss',
-      tag: 'Figures',
-      summary: 'Dismiss a suggested finding (remembered; reopen undoes it)',
-      access: CONTENT_EDITORS,
-      params: suggestionParams,
-      response: suggestionResponse,
-    },
+    suggestionStep('dismiss', 'Dismiss a suggested finding (remembered; reopen undoes it)'),
     async (ctx) => {
       const { em, user } = ctx;
       const { t, s } = await notAcceptedSuggestion(ctx);
       if (s.status === 'open') {
         em.create(SuggestionDecisionSchema, { teardown: t, key: s.key, status: 'dismissed', decidedBy: em.getReference(UserSchema, user.id) });
-        recordAudit(em, user, {
-          action: 'suggestion.dismissed',
-          entityType: 'suggestion',
-          entityId: s.key,
-          scope: { type: 'teardown', id: t.id },
-          summary: `Dismissed the suggestion "${s.title}"`,
-        });
+        suggestionAudit(em, user, t.id, s.key, 'suggestion.dismissed', `Dismissed the suggestion "${s.title}"`);
       }
       await em.flush();
       return { suggestion: { ...s, status: 'dismissed' as const, decidedBy: s.decidedBy ?? user.name, decidedAt: s.decidedAt ?? new Date().toISOString() } };
     },
   ),
   route(
-    {
-      method: 'post',
-      path: '/api/teardowns/:id/suggestions/:key/reopen',
-      tag: 'Figures',
-      summary: 'Reopen a dismissed suggestion',
-      access: CONTENT_EDITORS,
-      params: suggestionParams,
-      response: suggestionResponse,
-    },
+    suggestionStep('reopen', 'Reopen a dismissed suggestion'),
     async (ctx) => {
       const { em, user } = ctx;
       const { t, s } = await notAcceptedSuggestion(ctx);
       if (s.status === 'dismissed') {
         await em.transactional(async (tx) => {
           await tx.nativeDelete(SuggestionDecisionSchema, { teardown: t.id, key: s.key });
-          recordAudit(tx, user, {
-            action: 'suggestion.reopened',
-            entityType: 'suggestion',
-            entityId: s.key,
-            scope: { type: 'teardown', id: t.id },
-            summary: `Reopened the suggestion "${s.title}"`,
-          });
+          suggestionAudit(tx, user, t.id, s.key, 'suggestion.reopened', `Reopened the suggestion "${s.title}"`);
         });
       } else await em.flush();
       return { suggestion: { ...s, status: 'open' as const, decidedBy: null, decidedAt: null, findingId: null } };

@@ -4,26 +4,23 @@ import { route, type RouteDef } from '../../http/route';
 import { diffChanges, recordAudit } from '../audit/audit.service';
 import { PartSchema } from '../parts/part.entity';
 import { PhotoSchema } from '../photos/photo.entity';
-import { CONTENT_EDITORS, editableTeardown, readableTeardown } from '../teardowns/access';
+import { CONTENT_EDITORS, editableTeardown } from '../teardowns/access';
 import { SuggestionDecisionSchema } from '../teardowns/suggestion-decision.entity';
 import { FindingSchema } from './finding.entity';
 import { createFinding, FINDING_POPULATE, findingSummary, linkedRecords, toFindingDto, toLinkablePart, toLinkablePhoto } from './finding.service';
+import { teardownRead } from '../teardowns/teardown-routes';
 
 const SEVERITY_ORDER = { critical: 0, major: 1, minor: 2, note: 3 } as const;
 
 export const findingRoutes: RouteDef[] = [
-  route(
+  teardownRead(
     {
-      method: 'get',
       path: '/api/teardowns/:id/findings',
       tag: 'Findings',
       summary: 'Findings of a teardown, most severe first, with the parts and photos a finding may link to',
-      access: 'signed-in',
-      params: idParam,
       response: findingsResponse,
     },
-    async ({ em, user, params }) => {
-      const t = await readableTeardown(em, user, params.id);
+    async ({ em }, t) => {
       const [findings, parts, photos] = await Promise.all([
         em.find(FindingSchema, { teardown: t.id }, { populate: [...FINDING_POPULATE], orderBy: { id: 'asc' } }),
         em.find(PartSchema, { teardown: t.id }, { orderBy: { position: 'asc', id: 'asc' } }),

@@ -9,13 +9,14 @@ import {
   reorderPartsBody,
   updatePartBody,
 } from '@splitcase/contracts';
-import { AppError, notFound, validationError } from '../../http/errors';
+import { AppError, validationError } from '../../http/errors';
 import { route, type RouteDef } from '../../http/route';
 import { diffChanges, recordAudit } from '../audit/audit.service';
 import { CONTENT_EDITORS, readableTeardown } from '../teardowns/access';
 import { changeTeardownContent } from '../teardowns/content-change';
+import { recordWrite, teardownRead, teardownWrite } from '../teardowns/teardown-routes';
 import { PartSchema, type Part } from './part.entity';
-import { applyPartValues, csvFileName, defaultMount, newPart, nextPosition, partSummary, partsCsv, planPartsImport, toPartDto, type PartValues } from './service';
+import { applyPartValues, csvFileName, defaultMount, newPart, nextPosition, partSummary, partsCsv, planPartsImport, toPartDto, type PartValues } from './parts.service';
 
 const TAG = 'Parts';
 const scope = (teardownId: number) => ({ type: 'teardown', id: teardownId });
@@ -36,33 +37,25 @@ async function partsOf(em: Parameters<typeof readableTeardown>[0], teardownId: n
 }
 
 export const partRoutes: RouteDef[] = [
-  route(
+  teardownRead(
     {
-      method: 'get',
       path: '/api/teardowns/:id/parts',
       tag: TAG,
       summary: 'The bill of materials of a teardown, in list order',
-      access: 'signed-in',
-      params: idParam,
       response: partsResponse,
     },
-    async ({ em, user, params }) => {
-      await readableTeardown(em, user, params.id);
+    async ({ em, params }) => {
       return { parts: (await partsOf(em, params.id)).map(toPartDto) };
     },
   ),
-  route(
+  teardownRead(
     {
-      method: 'get',
       path: '/api/teardowns/:id/parts.csv',
       tag: TAG,
       summary: 'The bill of materials as CSV (UTF-8 with BOM, CRLF, quoted fields, formula-safe)',
-      access: 'signed-in',
-      params: idParam,
       produces: 'text/csv',
     },
-    async ({ em, user, params, res }) => {
-      const t = await readableTeardown(em, user, params.id);
+    async ({ em, params, res }, t) => {
       const csv = partsCsv(await partsOf(em, params.id));
       res.setHeader('Content-Type', 'text/csv; charset=utf-8');
       res.setHeader('Content-Disposition', `attachment; filename="${csvFileName(t.device.maker, t.device.model, 'parts')}"`);
@@ -70,125 +63,108 @@ export const partRoutes: RouteDef[] = [
       res.status(200).send(csv);
     },
   ),
-  route(
+  teardownWrite(
     {
       method: 'post',
       path: '/api/teardowns/:id/parts',
       tag: TAG,
       summary: 'Add a part line; a resistor or capacitor marking is decoded into decodedValue (Ω or F) and decodedReadings (every reading, ranked, as the bench marking decoder)',
-      access: CONTENT_EDITORS,
-      params: idParam,
       body: createPartBody,
       response: partResponse,
       status: 201,
     },
-    (ctx) =>
-      changeTeardownContent(ctx, ctx.params.id, async (tx, t) => {
-        const { designator, mount, ...rest } = ctx.body;
-        const part = newPart(tx, t, await nextPosition(tx, t.id), {
-          designators: rest.designators ?? designator ?? null,
-          category: rest.category,
-          description: rest.description,
-          marking: rest.marking ?? null,
-          makerPartNumber: rest.makerPartNumber ?? null,
-          package: rest.package ?? null,
-          quantity: rest.quantity,
-          mount: mount ?? defaultMount(rest.category),
-          notes: rest.notes ?? null,
-        });
-        await tx.flush();
-        recordAudit(tx, ctx.user, {
-          action: 'part.created',
-          entityType: 'part',
-          entityId: part.id,
-          scope: scope(t.id),
-          summary: `Added part ${partSummary(part)} ×${part.quantity}`,
-        });
-        return { part: toPartDto(part) };
-      }),
+    async (ctx, tx, t) => {
+      const { designator, mount, ...rest } = ctx.body;
+      const part = newPart(tx, t, await nextPosition(tx, t.id), {
+        designators: rest.designators ?? designator ?? null,
+        category: rest.category,
+        description: rest.description,
+        marking: rest.marking ?? null,
+        makerPartNumber: rest.makerPartNumber ?? null,
+        package: rest.package ?? null,
+        quantity: rest.quantity,
+        mount: mount ?? defaultMount(rest.category),
+        notes: rest.notes ?? null,
+      });
+      await tx.flush();
+      recordAudit(tx, ctx.user, {
+        action: 'part.created',
+        entityType: 'part',
+        entityId: part.id,
+        scope: scope(t.id),
+        summary: `Added part ${partSummary(part)} ×${part.quantity}`,
+      });
+      return { part: toPartDto(part) };
+    },
   ),
-  route(
+  recordWrite(
     {
       method: 'patch',
       path: '/api/parts/:id',
       tag: TAG,
       summary: 'Change a part line (the decoded value follows the marking)',
-      access: CONTENT_EDITORS,
-      params: idParam,
       body: updatePartBody,
       response: partResponse,
     },
-    async (ctx) => {
-      const found = await ctx.em.findOne(PartSchema, { id: ctx.params.id });
-      if (!found) throw notFound('The part');
-      return changeTeardownContent(ctx, found.teardown.id, async (tx, t) => {
-        const part = await tx.findOneOrFail(PartSchema, { id: ctx.params.id });
-        const before = snapshot(part);
-        const { designator, ...rest } = ctx.body;
-        const next: Partial<PartValues> = { ...(rest as Partial<PartValues>) };
-        if (designator !== undefined && rest.designators === undefined) next.designators = designator;
-        applyPartValues(part, next);
-        const changes = diffChanges(before as unknown as Record<string, unknown>, snapshot(part) as unknown as Record<string, unknown>);
-        if (Object.keys(changes).length) {
-          recordAudit(tx, ctx.user, {
-            action: 'part.updated',
-            entityType: 'part',
-            entityId: part.id,
-            scope: scope(t.id),
-            summary: `Changed part ${partSummary(part)}: ${Object.keys(changes).join(', ')}`,
-            changes,
-          });
-        }
-        await tx.flush();
-        return { part: toPartDto(part) };
-      });
-    },
-  ),
-  route(
-    { method: 'delete', path: '/api/parts/:id', tag: TAG, summary: 'Remove a part line (pins linked to it lose the link)', access: CONTENT_EDITORS, params: idParam },
-    async (ctx) => {
-      const found = await ctx.em.findOne(PartSchema, { id: ctx.params.id });
-      if (!found) throw notFound('The part');
-      await changeTeardownContent(ctx, found.teardown.id, async (tx, t) => {
-        const part = await tx.findOneOrFail(PartSchema, { id: ctx.params.id });
+    { entity: PartSchema, what: 'The part' },
+    async (ctx, tx, t, part) => {
+      const before = snapshot(part);
+      const { designator, ...rest } = ctx.body;
+      const next: Partial<PartValues> = { ...(rest as Partial<PartValues>) };
+      if (designator !== undefined && rest.designators === undefined) next.designators = designator;
+      applyPartValues(part, next);
+      const changes = diffChanges(before as unknown as Record<string, unknown>, snapshot(part) as unknown as Record<string, unknown>);
+      if (Object.keys(changes).length) {
         recordAudit(tx, ctx.user, {
-          action: 'part.deleted',
+          action: 'part.updated',
           entityType: 'part',
           entityId: part.id,
           scope: scope(t.id),
-          summary: `Removed part ${partSummary(part)}`,
-          changes: Object.fromEntries(Object.entries(snapshot(part)).map(([k, v]) => [k, { from: v, to: null }])),
+          summary: `Changed part ${partSummary(part)}: ${Object.keys(changes).join(', ')}`,
+          changes,
         });
-        tx.remove(part);
-      });
-      return undefined;
+      }
+      await tx.flush();
+      return { part: toPartDto(part) };
     },
   ),
-  route(
+  recordWrite(
+    { method: 'delete', path: '/api/parts/:id', tag: TAG, summary: 'Remove a part line (pins linked to it lose the link)' },
+    { entity: PartSchema, what: 'The part' },
+    async (ctx, tx, t, part) => {
+      recordAudit(tx, ctx.user, {
+        action: 'part.deleted',
+        entityType: 'part',
+        entityId: part.id,
+        scope: scope(t.id),
+        summary: `Removed part ${partSummary(part)}`,
+        changes: Object.fromEntries(Object.entries(snapshot(part)).map(([k, v]) => [k, { from: v, to: null }])),
+      });
+      tx.remove(part);
+    },
+  ),
+  teardownWrite(
     {
       method: 'put',
       path: '/api/teardowns/:id/parts/order',
       tag: TAG,
       summary: 'Put the part lines in a new order (every part id of the teardown, once)',
-      access: CONTENT_EDITORS,
-      params: idParam,
       body: reorderPartsBody,
       response: partsResponse,
     },
-    (ctx) =>
-      changeTeardownContent(ctx, ctx.params.id, async (tx, t) => {
-        const parts = await partsOf(tx, t.id);
-        const ids = ctx.body.ids;
-        const known = new Set(parts.map((p) => p.id));
-        if (ids.length !== parts.length || new Set(ids).size !== ids.length || ids.some((id) => !known.has(id))) {
-          throw validationError({ ids: `Give each of the ${parts.length} part ids of this teardown exactly once.` });
-        }
-        const byId = new Map(parts.map((p) => [p.id, p]));
-        ids.forEach((id, i) => (byId.get(id)!.position = i + 1));
-        recordAudit(tx, ctx.user, { action: 'parts.reordered', entityType: 'teardown', entityId: t.id, scope: scope(t.id), summary: 'Reordered the parts list' });
-        await tx.flush();
-        return { parts: ids.map((id) => toPartDto(byId.get(id)!)) };
-      }),
+    async (ctx, tx, t) => {
+      const parts = await partsOf(tx, t.id);
+      const ids = ctx.body.ids;
+      const known = new Set(parts.map((p) => p.id));
+      if (ids.length !== parts.length || new Set(ids).size !== ids.length || ids.some((id) => !known.has(id))) {
+        throw validationError({ ids: `Give each of the ${parts.length} part ids of this teardown exactly once.` });
+      }
+      const byId = new Map(parts.map((p) => [p.id, p]));
+      ids.forEach((id, i) => (byId.get(id)!.position = i + 1));
+      recordAudit(tx, ctx.user, { action: 'parts.reordered', entityType: 'teardown', entityId: t.id, scope: scope(t.id), summary: 'Reordered the parts list' });
+      await tx.flush();
+      return { parts: ids.map((id) => toPartDto(byId.get(id)!)) };
+    },
   ),
   route(
     {

@@ -2,8 +2,8 @@ import { RequestContext } from '@mikro-orm/core';
 import type { EntityManager } from '@mikro-orm/sqlite';
 import type { RequestHandler, Response } from 'express';
 import multer from 'multer';
+import type { ZodType } from 'zod';
 import {
-  CONFIRM_UNPUBLISH_HEADER,
   calloutResponse,
   calloutsResponse,
   calloutTargetsResponse,
@@ -18,14 +18,14 @@ import {
   updatePhotoBody,
   uploadPhotoFields,
 } from '@splitcase/contracts';
-import { AppError, forbidden, notFound, validationError } from '../../http/errors';
+import { forbidden, notFound, validationError } from '../../http/errors';
 import { uploadOne } from '../../http/multipart';
-import { route, type AuthUser, type RouteDef } from '../../http/route';
+import { confirmsUnpublish, route, type AuthUser, type RouteDef } from '../../http/route';
 import type { AppDeps } from '../../http/deps';
 import { diffChanges, recordAudit } from '../audit/audit.service';
 import { FindingSchema } from '../findings/finding.entity';
 import { PartSchema } from '../parts/part.entity';
-import { CONTENT_EDITORS, canSee, editableTeardown, readableTeardown } from '../teardowns/access';
+import { assertWritable, CONTENT_EDITORS, canSee, editableTeardown, readableTeardown } from '../teardowns/access';
 import { CalloutSchema, type Callout } from './callout.entity';
 import { removePhotoFiles, uploadLimits, variantMime, variantPath } from './photo-files';
 import { PhotoSchema, type Photo } from './photo.entity';
@@ -45,19 +45,22 @@ const TAG = 'Photos';
 const getEm = () => RequestContext.getEntityManager() as EntityManager;
 
 /**
- * Before the body is read: the teardown must exist for this user, their role must edit it, and a
- * published one needs the confirm header — so a refused upload is refused before 25 MB arrive.
+ * Before the body is read: the teardown must exist for this user, their role must edit it, it must
+ * not be in review, and a published one needs the confirm header — so a refused upload is refused
+ * before 25 MB arrive.
  */
 const precheckUploadTarget: RequestHandler = async (req, _res, next) => {
   const id = Number(req.params.id);
   if (!Number.isInteger(id) || id <= 0) return next(validationError({ 'params.id': 'Must be a positive whole number' }));
   const t = await readableTeardown(getEm(), req.authUser as AuthUser, id);
   if (!CONTENT_EDITORS.includes((req.authUser as AuthUser).role)) return next(forbidden());
-  if (t.status === 'published' && req.get(CONFIRM_UNPUBLISH_HEADER)?.toLowerCase() !== 'yes') {
-    return next(new AppError('conflict', 'This teardown is published. Changing it moves it back to draft; it will need review again.', undefined, { reason: 'published' }));
-  }
+  assertWritable(t, confirmsUnpublish(req));
   next();
 };
+
+/** A PATCH of a photo or a pin by its id, by content editors. */
+const editSpec = <B extends ZodType>(path: string, summary: string, body: B, response: ZodType) =>
+  ({ method: 'patch', path, tag: TAG, summary, access: CONTENT_EDITORS, params: idParam, body, response }) as const;
 
 /** Load a photo with its teardown; a user who may not read that teardown gets 404. */
 async function readablePhoto(em: EntityManager, user: AuthUser, id: number): Promise<Photo> {
@@ -144,16 +147,7 @@ export function photoRoutes(deps: AppDeps): RouteDef[] {
       },
     ),
     route(
-      {
-        method: 'patch',
-        path: '/api/photos/:id',
-        tag: TAG,
-        summary: "Change a photo's caption, layer or step",
-        access: CONTENT_EDITORS,
-        params: idParam,
-        body: updatePhotoBody,
-        response: photoResponse,
-      },
+      editSpec('/api/photos/:id', "Change a photo's caption, layer or step", updatePhotoBody, photoResponse),
       async (ctx) => {
         const { em, params, body, user } = ctx;
         const photo = await readablePhoto(em, user, params.id);
@@ -264,16 +258,7 @@ export function photoRoutes(deps: AppDeps): RouteDef[] {
       },
     ),
     route(
-      {
-        method: 'patch',
-        path: '/api/callouts/:id',
-        tag: TAG,
-        summary: 'Move a pin, change its label, or link/unlink a part or finding of the same teardown',
-        access: CONTENT_EDITORS,
-        params: idParam,
-        body: updateCalloutBody,
-        response: calloutResponse,
-      },
+      editSpec('/api/callouts/:id', 'Move a pin, change its label, or link/unlink a part or finding of the same teardown', updateCalloutBody, calloutResponse),
       async (ctx) => {
         const { em, params, body, user } = ctx;
         const callout = await readableCallout(em, user, params.id);

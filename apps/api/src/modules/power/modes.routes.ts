@@ -4,19 +4,18 @@ import type { EntityManager } from '@mikro-orm/sqlite';
 import { MODE_FIELDS, createModeBody, dutyForTargetQuery, figureSchema, idParam, modeResponse, modesResponse, updateModeBody } from '@splitcase/contracts';
 import { teardownFigures } from '@splitcase/calc';
 import { z } from 'zod';
-import { AppError, notFound, validationError } from '../../http/errors';
-import { route, type RouteDef } from '../../http/route';
+import { AppError, validationError } from '../../http/errors';
+import type { RouteDef } from '../../http/route';
 import { readQuantity } from '../../lib/units';
 import { diffChanges, recordAudit } from '../audit/audit.service';
 import { figureInput, toFigureDto } from '../figures/figures.service';
-import { CONTENT_EDITORS, readableTeardown } from '../teardowns/access';
-import { changeTeardownContent } from '../teardowns/content-change';
+import { recordOf, teardownRead, teardownWrite } from '../teardowns/teardown-routes';
 import type { Teardown } from '../teardowns/teardown.entity';
 import { LoadSchema } from './load.entity';
 import { ModeLoadSchema } from './mode-load.entity';
 import { OperatingModeSchema, type OperatingMode } from './mode.entity';
 import { mergeEntered, readQuantities } from './quantities';
-import { MODE_DUTY_RULE, MODE_RULES, modesOf, toModeDto } from './service';
+import { MODE_DUTY_RULE, MODE_RULES, modesOf, toModeDto } from './power.service';
 
 const TAG = 'Power system';
 const modeParams = z.object({ id: idParam.shape.id, modeId: idParam.shape.id });
@@ -68,103 +67,89 @@ const snapshot = (m: ReturnType<typeof toModeDto>) => ({ name: m.name, note: m.n
 const describeLoads = (n: number) => (n === 0 ? 'no loads' : `${n} load${n > 1 ? 's' : ''}`);
 
 export const modeRoutes: RouteDef[] = [
-  route(
-    { method: 'get', path: '/api/teardowns/:id/modes', tag: TAG, summary: 'Operating modes of a teardown, in order, with the loads active in each and their duty', access: 'signed-in', params: idParam, response: modesResponse },
-    async ({ em, user, params }) => {
-      await readableTeardown(em, user, params.id);
+  teardownRead(
+    { path: '/api/teardowns/:id/modes', tag: TAG, summary: 'Operating modes of a teardown, in order, with the loads active in each and their duty', response: modesResponse },
+    async ({ em, params }) => {
       return { modes: (await modesOf(em, [params.id])).map(({ mode, loads }) => toModeDto(mode, loads)) };
     },
   ),
-  route(
+  teardownWrite(
     {
       method: 'post',
       path: '/api/teardowns/:id/modes',
       tag: TAG,
       summary: 'Add an operating mode: a name, the loads active in it with their duty ("60 %"), and the quiescent current ("20 µA")',
-      access: CONTENT_EDITORS,
-      params: idParam,
       body: createModeBody,
       response: modeResponse,
       status: 201,
     },
-    (ctx) =>
-      changeTeardownContent(ctx, ctx.params.id, async (tx, t) => {
-        const body = ctx.body;
-        await uniqueName(tx, t, body.name);
-        const q = readQuantities({ quiescentAmps: body.quiescentAmps ?? null }, MODE_RULES);
-        const loads = await readModeLoads(tx, t, body.loads);
-        const last = await tx.findOne(OperatingModeSchema, { teardown: t.id }, { orderBy: { position: 'desc' } });
-        const mode = tx.create(OperatingModeSchema, {
-          teardown: t,
-          name: body.name,
-          note: body.note ?? null,
-          position: last ? last.position + 1 : 0,
-          quiescentAmps: q.values.quiescentAmps ?? null,
-          entered: Object.keys(q.entered).length ? (q.entered as Record<string, string>) : null,
-        });
-        await tx.flush();
-        await replaceLoads(tx, mode, loads);
-        await tx.flush();
-        recordAudit(tx, ctx.user, { action: 'mode.created', entityType: 'mode', entityId: mode.id, scope: scope(t.id), summary: `Added mode "${mode.name}" (${describeLoads(loads.length)})` });
-        return { mode: await modeDto(tx, mode) };
-      }),
-  ),
-  route(
-    { method: 'patch', path: '/api/teardowns/:id/modes/:modeId', tag: TAG, summary: 'Change a mode: only the fields sent (the loads list, when sent, replaces the old one)', access: CONTENT_EDITORS, params: modeParams, body: updateModeBody, response: modeResponse },
-    (ctx) =>
-      changeTeardownContent(ctx, ctx.params.id, async (tx, t) => {
-        const mode = await tx.findOne(OperatingModeSchema, { id: ctx.params.modeId, teardown: t.id });
-        if (!mode) throw notFound('The mode');
-        const before = snapshot(await modeDto(tx, mode));
-        const body = ctx.body;
-        if (body.name !== undefined) {
-          await uniqueName(tx, t, body.name, mode.id);
-          mode.name = body.name;
-        }
-        if (body.note !== undefined) mode.note = body.note ?? null;
-        if ('quiescentAmps' in body) {
-          const q = readQuantities({ quiescentAmps: body.quiescentAmps ?? null }, MODE_RULES);
-          mode.quiescentAmps = q.values.quiescentAmps ?? null;
-          mode.entered = mergeEntered(mode.entered, q as never);
-        }
-        if (body.loads !== undefined) await replaceLoads(tx, mode, await readModeLoads(tx, t, body.loads));
-        await tx.flush();
-        const dto = await modeDto(tx, mode);
-        const changes = diffChanges(before, snapshot(dto));
-        if (Object.keys(changes).length) {
-          recordAudit(tx, ctx.user, { action: 'mode.updated', entityType: 'mode', entityId: mode.id, scope: scope(t.id), summary: `Changed mode "${mode.name}": ${Object.keys(changes).join(', ')}`, changes });
-        }
-        return { mode: dto };
-      }),
-  ),
-  route(
-    { method: 'delete', path: '/api/teardowns/:id/modes/:modeId', tag: TAG, summary: 'Remove a mode', access: CONTENT_EDITORS, params: modeParams },
-    async (ctx) => {
-      await changeTeardownContent(ctx, ctx.params.id, async (tx, t) => {
-        const mode = await tx.findOne(OperatingModeSchema, { id: ctx.params.modeId, teardown: t.id });
-        if (!mode) throw notFound('The mode');
-        recordAudit(tx, ctx.user, { action: 'mode.deleted', entityType: 'mode', entityId: mode.id, scope: scope(t.id), summary: `Removed mode "${mode.name}"` });
-        await tx.nativeDelete(ModeLoadSchema, { mode: mode.id });
-        tx.remove(mode);
+    async (ctx, tx, t) => {
+      const body = ctx.body;
+      await uniqueName(tx, t, body.name);
+      const q = readQuantities({ quiescentAmps: body.quiescentAmps ?? null }, MODE_RULES);
+      const loads = await readModeLoads(tx, t, body.loads);
+      const last = await tx.findOne(OperatingModeSchema, { teardown: t.id }, { orderBy: { position: 'desc' } });
+      const mode = tx.create(OperatingModeSchema, {
+        teardown: t,
+        name: body.name,
+        note: body.note ?? null,
+        position: last ? last.position + 1 : 0,
+        quiescentAmps: q.values.quiescentAmps ?? null,
+        entered: Object.keys(q.entered).length ? (q.entered as Record<string, string>) : null,
       });
-      return undefined;
+      await tx.flush();
+      await replaceLoads(tx, mode, loads);
+      await tx.flush();
+      recordAudit(tx, ctx.user, { action: 'mode.created', entityType: 'mode', entityId: mode.id, scope: scope(t.id), summary: `Added mode "${mode.name}" (${describeLoads(loads.length)})` });
+      return { mode: await modeDto(tx, mode) };
     },
   ),
-  route(
+  teardownWrite(
+    { method: 'patch', path: '/api/teardowns/:id/modes/:modeId', tag: TAG, summary: 'Change a mode: only the fields sent (the loads list, when sent, replaces the old one)', params: modeParams, body: updateModeBody, response: modeResponse },
+    async (ctx, tx, t) => {
+      const mode = await recordOf(tx, OperatingModeSchema, ctx.params.modeId, t, 'The mode');
+      const before = snapshot(await modeDto(tx, mode));
+      const body = ctx.body;
+      if (body.name !== undefined) {
+        await uniqueName(tx, t, body.name, mode.id);
+        mode.name = body.name;
+      }
+      if (body.note !== undefined) mode.note = body.note ?? null;
+      if ('quiescentAmps' in body) {
+        const q = readQuantities({ quiescentAmps: body.quiescentAmps ?? null }, MODE_RULES);
+        mode.quiescentAmps = q.values.quiescentAmps ?? null;
+        mode.entered = mergeEntered(mode.entered, q as never);
+      }
+      if (body.loads !== undefined) await replaceLoads(tx, mode, await readModeLoads(tx, t, body.loads));
+      await tx.flush();
+      const dto = await modeDto(tx, mode);
+      const changes = diffChanges(before, snapshot(dto));
+      if (Object.keys(changes).length) {
+        recordAudit(tx, ctx.user, { action: 'mode.updated', entityType: 'mode', entityId: mode.id, scope: scope(t.id), summary: `Changed mode "${mode.name}": ${Object.keys(changes).join(', ')}`, changes });
+      }
+      return { mode: dto };
+    },
+  ),
+  teardownWrite(
+    { method: 'delete', path: '/api/teardowns/:id/modes/:modeId', tag: TAG, summary: 'Remove a mode', params: modeParams },
+    async (ctx, tx, t) => {
+      const mode = await recordOf(tx, OperatingModeSchema, ctx.params.modeId, t, 'The mode');
+      recordAudit(tx, ctx.user, { action: 'mode.deleted', entityType: 'mode', entityId: mode.id, scope: scope(t.id), summary: `Removed mode "${mode.name}"` });
+      await tx.nativeDelete(ModeLoadSchema, { mode: mode.id });
+      tx.remove(mode);
+    },
+  ),
+  teardownRead(
     {
-      method: 'get',
       path: '/api/teardowns/:id/loads/:loadId/duty-for-target',
       tag: TAG,
       summary: 'The PWM duty that holds a heater load at a target surface temperature (steady state, convection + exact radiation), with formula and inputs',
-      access: 'signed-in',
       params: loadParams,
       query: dutyForTargetQuery,
       response: z.object({ figure: figureSchema }),
     },
-    async ({ em, user, params, query }) => {
-      const t = await readableTeardown(em, user, params.id);
-      const load = await em.findOne(LoadSchema, { id: params.loadId, teardown: t.id });
-      if (!load) throw notFound('The load');
+    async ({ em, params, query }, t) => {
+      const load = await recordOf(em, LoadSchema, params.loadId, t, 'The load');
       if (load.kind !== 'heater' || load.heatedAreaM2 == null) throw validationError({ loadId: 'A heater load with a heated area is needed for a target temperature' });
       let targetC: number;
       try {

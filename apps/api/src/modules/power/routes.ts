@@ -21,8 +21,9 @@ import { internalResistanceDc } from '@splitcase/calc';
 import { notFound, validationError } from '../../http/errors';
 import { route, type RouteContext, type RouteDef } from '../../http/route';
 import { diffChanges, recordAudit } from '../audit/audit.service';
-import { CONTENT_EDITORS, readableTeardown } from '../teardowns/access';
+import { CONTENT_EDITORS } from '../teardowns/access';
 import { changeTeardownContent } from '../teardowns/content-change';
+import { recordOf, teardownRead, teardownWrite } from '../teardowns/teardown-routes';
 import type { Teardown } from '../teardowns/teardown.entity';
 import { ConverterSchema, type Converter } from './converter.entity';
 import { LoadSchema, type Load } from './load.entity';
@@ -39,7 +40,7 @@ import {
   toConverterDto,
   toLoadDto,
   toPackDto,
-} from './service';
+} from './power.service';
 
 const TAG = 'Power system';
 const scope = (teardownId: number) => ({ type: 'teardown', id: teardownId });
@@ -189,25 +190,20 @@ const converterSnapshot = (c: Converter) => toConverterDto(c) as unknown as Reco
 const CONVERTER_AUDIT_KEYS = ['label', 'topology', 'role', 'inputVolts', 'outputVolts', 'ratedCurrentAmps', 'chargeCurrentAmps', 'efficiency', 'efficiencySource'];
 
 export const powerRoutes: RouteDef[] = [
-  route(
+  teardownRead(
     {
-      method: 'get',
       path: '/api/teardowns/:id/power',
       tag: TAG,
       summary: 'The power system of a teardown: pack, loads and converters (SI, with the text typed)',
-      access: 'signed-in',
-      params: idParam,
       response: powerSystemResponse,
     },
-    async ({ em, user, params }) => {
-      await readableTeardown(em, user, params.id);
+    async ({ em, params }) => {
       return powerSystem(em, params.id);
     },
   ),
-  route(
-    { method: 'get', path: '/api/teardowns/:id/pack', tag: TAG, summary: 'The pack of a teardown (null when not recorded)', access: 'signed-in', params: idParam, response: packResponse },
-    async ({ em, user, params }) => {
-      await readableTeardown(em, user, params.id);
+  teardownRead(
+    { path: '/api/teardowns/:id/pack', tag: TAG, summary: 'The pack of a teardown (null when not recorded)', response: packResponse },
+    async ({ em, params }) => {
       const pack = await em.findOne(PackSchema, { teardown: params.id });
       return { pack: pack ? toPackDto(pack) : null };
     },
@@ -239,211 +235,187 @@ export const powerRoutes: RouteDef[] = [
     },
     (ctx) => putPack(ctx as never),
   ),
-  route(
-    { method: 'delete', path: '/api/teardowns/:id/pack', tag: TAG, summary: 'Remove the pack record', access: CONTENT_EDITORS, params: idParam },
-    async (ctx) => {
-      await changeTeardownContent(ctx, ctx.params.id, async (tx, t) => {
-        const pack = await tx.findOne(PackSchema, { teardown: t.id });
-        if (!pack) throw notFound('The pack');
-        recordAudit(tx, ctx.user, { action: 'pack.deleted', entityType: 'pack', entityId: pack.id, scope: scope(t.id), summary: 'Removed the pack record' });
-        tx.remove(pack);
-      });
-      return undefined;
+  teardownWrite(
+    { method: 'delete', path: '/api/teardowns/:id/pack', tag: TAG, summary: 'Remove the pack record' },
+    async (ctx, tx, t) => {
+      const pack = await tx.findOne(PackSchema, { teardown: t.id });
+      if (!pack) throw notFound('The pack');
+      recordAudit(tx, ctx.user, { action: 'pack.deleted', entityType: 'pack', entityId: pack.id, scope: scope(t.id), summary: 'Removed the pack record' });
+      tx.remove(pack);
     },
   ),
 
   // loads
-  route(
-    { method: 'get', path: '/api/teardowns/:id/loads', tag: TAG, summary: 'Loads of a teardown', access: 'signed-in', params: idParam, response: loadsResponse },
-    async ({ em, user, params }) => {
-      await readableTeardown(em, user, params.id);
+  teardownRead(
+    { path: '/api/teardowns/:id/loads', tag: TAG, summary: 'Loads of a teardown', response: loadsResponse },
+    async ({ em, params }) => {
       return { loads: (await em.find(LoadSchema, { teardown: params.id }, { orderBy: { id: 'asc' } })).map(toLoadDto) };
     },
   ),
-  route(
+  teardownWrite(
     {
       method: 'post',
       path: '/api/teardowns/:id/loads',
       tag: TAG,
       summary: 'Add a load (per-element resistance, current or power; count in series or parallel; duty)',
-      access: CONTENT_EDITORS,
-      params: idParam,
       body: createLoadBody,
       response: loadResponse,
       status: 201,
     },
-    (ctx) =>
-      changeTeardownContent(ctx, ctx.params.id, async (tx, t) => {
-        const body = ctx.body;
-        const read = readQuantities(loadRaw(body), LOAD_RULES);
-        const converter = await converterOf(tx, t, body.converterId);
-        const load = tx.create(LoadSchema, {
-          teardown: t,
-          kind: body.kind,
-          label: body.label ?? defaultLoadLabel(body.kind),
-          connection: body.connection,
-          converter: converter ?? null,
-          surfaceMaterial: body.surfaceMaterial ?? null,
-          elementMaterial: body.elementMaterial ?? null,
-          count: 1,
-          duty: 1,
-        });
-        applyLoadValues(load, read);
-        checkLoad(load);
-        await tx.flush();
-        recordAudit(tx, ctx.user, {
-          action: 'load.created',
-          entityType: 'load',
-          entityId: load.id,
-          scope: scope(t.id),
-          summary: `Added load ${load.label} (${LOAD_KIND.labels[load.kind]}, ${load.count} in ${CONNECTION.labels[load.connection as 'series' | 'parallel'].toLowerCase()})`,
-        });
-        return { load: toLoadDto(load) };
-      }),
-  ),
-  route(
-    { method: 'patch', path: '/api/teardowns/:id/loads/:loadId', tag: TAG, summary: 'Change a load', access: CONTENT_EDITORS, params: loadParams, body: updateLoadBody, response: loadResponse },
-    (ctx) =>
-      changeTeardownContent(ctx, ctx.params.id, async (tx, t) => {
-        const load = await tx.findOne(LoadSchema, { id: ctx.params.loadId, teardown: t.id });
-        if (!load) throw notFound('The load');
-        const before = loadSnapshot(load);
-        const body = ctx.body;
-        const read = readQuantities(loadRaw(body), LOAD_RULES);
-        const converter = await converterOf(tx, t, body.converterId);
-        if (body.kind) load.kind = body.kind;
-        if (body.label !== undefined) load.label = body.label ?? defaultLoadLabel(load.kind);
-        if (body.connection) load.connection = body.connection;
-        if (converter !== undefined) load.converter = converter;
-        if (body.surfaceMaterial !== undefined) load.surfaceMaterial = body.surfaceMaterial ?? null;
-        if (body.elementMaterial !== undefined) load.elementMaterial = body.elementMaterial ?? null;
-        applyLoadValues(load, read);
-        checkLoad(load);
-        const changes = diffChanges(before, loadSnapshot(load), LOAD_AUDIT_KEYS);
-        if (Object.keys(changes).length) {
-          recordAudit(tx, ctx.user, { action: 'load.updated', entityType: 'load', entityId: load.id, scope: scope(t.id), summary: `Changed load ${load.label}: ${Object.keys(changes).join(', ')}`, changes });
-        }
-        await tx.flush();
-        return { load: toLoadDto(load) };
-      }),
-  ),
-  route(
-    { method: 'delete', path: '/api/teardowns/:id/loads/:loadId', tag: TAG, summary: 'Remove a load', access: CONTENT_EDITORS, params: loadParams },
-    async (ctx) => {
-      await changeTeardownContent(ctx, ctx.params.id, async (tx, t) => {
-        const load = await tx.findOne(LoadSchema, { id: ctx.params.loadId, teardown: t.id });
-        if (!load) throw notFound('The load');
-        recordAudit(tx, ctx.user, { action: 'load.deleted', entityType: 'load', entityId: load.id, scope: scope(t.id), summary: `Removed load ${load.label}` });
-        tx.remove(load);
+    async (ctx, tx, t) => {
+      const body = ctx.body;
+      const read = readQuantities(loadRaw(body), LOAD_RULES);
+      const converter = await converterOf(tx, t, body.converterId);
+      const load = tx.create(LoadSchema, {
+        teardown: t,
+        kind: body.kind,
+        label: body.label ?? defaultLoadLabel(body.kind),
+        connection: body.connection,
+        converter: converter ?? null,
+        surfaceMaterial: body.surfaceMaterial ?? null,
+        elementMaterial: body.elementMaterial ?? null,
+        count: 1,
+        duty: 1,
       });
-      return undefined;
+      applyLoadValues(load, read);
+      checkLoad(load);
+      await tx.flush();
+      recordAudit(tx, ctx.user, {
+        action: 'load.created',
+        entityType: 'load',
+        entityId: load.id,
+        scope: scope(t.id),
+        summary: `Added load ${load.label} (${LOAD_KIND.labels[load.kind]}, ${load.count} in ${CONNECTION.labels[load.connection as 'series' | 'parallel'].toLowerCase()})`,
+      });
+      return { load: toLoadDto(load) };
+    },
+  ),
+  teardownWrite(
+    { method: 'patch', path: '/api/teardowns/:id/loads/:loadId', tag: TAG, summary: 'Change a load', params: loadParams, body: updateLoadBody, response: loadResponse },
+    async (ctx, tx, t) => {
+      const load = await recordOf(tx, LoadSchema, ctx.params.loadId, t, 'The load');
+      const before = loadSnapshot(load);
+      const body = ctx.body;
+      const read = readQuantities(loadRaw(body), LOAD_RULES);
+      const converter = await converterOf(tx, t, body.converterId);
+      if (body.kind) load.kind = body.kind;
+      if (body.label !== undefined) load.label = body.label ?? defaultLoadLabel(load.kind);
+      if (body.connection) load.connection = body.connection;
+      if (converter !== undefined) load.converter = converter;
+      if (body.surfaceMaterial !== undefined) load.surfaceMaterial = body.surfaceMaterial ?? null;
+      if (body.elementMaterial !== undefined) load.elementMaterial = body.elementMaterial ?? null;
+      applyLoadValues(load, read);
+      checkLoad(load);
+      const changes = diffChanges(before, loadSnapshot(load), LOAD_AUDIT_KEYS);
+      if (Object.keys(changes).length) {
+        recordAudit(tx, ctx.user, { action: 'load.updated', entityType: 'load', entityId: load.id, scope: scope(t.id), summary: `Changed load ${load.label}: ${Object.keys(changes).join(', ')}`, changes });
+      }
+      await tx.flush();
+      return { load: toLoadDto(load) };
+    },
+  ),
+  teardownWrite(
+    { method: 'delete', path: '/api/teardowns/:id/loads/:loadId', tag: TAG, summary: 'Remove a load', params: loadParams },
+    async (ctx, tx, t) => {
+      const load = await recordOf(tx, LoadSchema, ctx.params.loadId, t, 'The load');
+      recordAudit(tx, ctx.user, { action: 'load.deleted', entityType: 'load', entityId: load.id, scope: scope(t.id), summary: `Removed load ${load.label}` });
+      tx.remove(load);
     },
   ),
 
   // converters
-  route(
-    { method: 'get', path: '/api/teardowns/:id/converters', tag: TAG, summary: 'Converters of a teardown', access: 'signed-in', params: idParam, response: convertersResponse },
-    async ({ em, user, params }) => {
-      await readableTeardown(em, user, params.id);
+  teardownRead(
+    { path: '/api/teardowns/:id/converters', tag: TAG, summary: 'Converters of a teardown', response: convertersResponse },
+    async ({ em, params }) => {
       return { converters: (await em.find(ConverterSchema, { teardown: params.id }, { orderBy: { id: 'asc' } })).map(toConverterDto) };
     },
   ),
-  route(
+  teardownWrite(
     {
       method: 'post',
       path: '/api/teardowns/:id/converters',
       tag: TAG,
       summary: 'Add a converter stage (buck, boost, buck-boost) with its efficiency, measured or assumed',
-      access: CONTENT_EDITORS,
-      params: idParam,
       body: createConverterBody,
       response: converterResponse,
       status: 201,
     },
-    (ctx) =>
-      changeTeardownContent(ctx, ctx.params.id, async (tx, t) => {
-        const body = ctx.body;
-        const read = readQuantities(converterRaw(body), CONVERTER_RULES);
-        const v = read.values;
-        const converter = tx.create(ConverterSchema, {
-          teardown: t,
-          label: body.label ?? defaultConverterLabel(body.topology, body.role),
-          topology: body.topology,
-          role: body.role,
-          vin: v.inputVolts!,
-          vout: v.outputVolts!,
-          ratedCurrentA: v.ratedCurrentAmps ?? null,
-          chargeCurrentA: v.chargeCurrentAmps ?? null,
-          efficiency: v.efficiency ?? null,
-          efficiencySource: body.efficiencySource,
-          entered: Object.keys(read.entered).length ? read.entered : null,
-        });
-        await tx.flush();
-        recordAudit(tx, ctx.user, { action: 'converter.created', entityType: 'converter', entityId: converter.id, scope: scope(t.id), summary: `Added converter ${converter.label}` });
-        return { converter: toConverterDto(converter) };
-      }),
+    async (ctx, tx, t) => {
+      const body = ctx.body;
+      const read = readQuantities(converterRaw(body), CONVERTER_RULES);
+      const v = read.values;
+      const converter = tx.create(ConverterSchema, {
+        teardown: t,
+        label: body.label ?? defaultConverterLabel(body.topology, body.role),
+        topology: body.topology,
+        role: body.role,
+        vin: v.inputVolts!,
+        vout: v.outputVolts!,
+        ratedCurrentA: v.ratedCurrentAmps ?? null,
+        chargeCurrentA: v.chargeCurrentAmps ?? null,
+        efficiency: v.efficiency ?? null,
+        efficiencySource: body.efficiencySource,
+        entered: Object.keys(read.entered).length ? read.entered : null,
+      });
+      await tx.flush();
+      recordAudit(tx, ctx.user, { action: 'converter.created', entityType: 'converter', entityId: converter.id, scope: scope(t.id), summary: `Added converter ${converter.label}` });
+      return { converter: toConverterDto(converter) };
+    },
   ),
-  route(
+  teardownWrite(
     {
       method: 'patch',
       path: '/api/teardowns/:id/converters/:converterId',
       tag: TAG,
       summary: 'Change a converter',
-      access: CONTENT_EDITORS,
       params: converterParams,
       body: updateConverterBody,
       response: converterResponse,
     },
-    (ctx) =>
-      changeTeardownContent(ctx, ctx.params.id, async (tx, t) => {
-        const converter = await tx.findOne(ConverterSchema, { id: ctx.params.converterId, teardown: t.id });
-        if (!converter) throw notFound('The converter');
-        const before = converterSnapshot(converter);
-        const body = ctx.body;
-        const read = readQuantities(converterRaw(body), { ...CONVERTER_RULES, inputVolts: { ...CONVERTER_RULES.inputVolts, required: false }, outputVolts: { ...CONVERTER_RULES.outputVolts, required: false } });
-        for (const key of read.present) {
-          const value = read.values[key];
-          if ((key === 'inputVolts' || key === 'outputVolts') && value == null) throw validationError({ [key]: 'Required' });
-          (converter as unknown as Record<string, unknown>)[CONVERTER_FIELD[key]] = value ?? null;
-        }
-        converter.entered = mergeEntered(converter.entered, read as never);
-        if (body.topology) converter.topology = body.topology;
-        if (body.role) converter.role = body.role;
-        if (body.efficiencySource) converter.efficiencySource = body.efficiencySource;
-        if (body.label !== undefined) converter.label = body.label ?? defaultConverterLabel(converter.topology, converter.role);
-        const changes = diffChanges(before, converterSnapshot(converter), CONVERTER_AUDIT_KEYS);
-        if (Object.keys(changes).length) {
-          recordAudit(tx, ctx.user, {
-            action: 'converter.updated',
-            entityType: 'converter',
-            entityId: converter.id,
-            scope: scope(t.id),
-            summary: `Changed converter ${converter.label}: ${Object.keys(changes).join(', ')}`,
-            changes,
-          });
-        }
-        await tx.flush();
-        return { converter: toConverterDto(converter) };
-      }),
-  ),
-  route(
-    { method: 'delete', path: '/api/teardowns/:id/converters/:converterId', tag: TAG, summary: 'Remove a converter (loads fed through it are then fed straight from the pack)', access: CONTENT_EDITORS, params: converterParams },
-    async (ctx) => {
-      await changeTeardownContent(ctx, ctx.params.id, async (tx, t) => {
-        const converter = await tx.findOne(ConverterSchema, { id: ctx.params.converterId, teardown: t.id });
-        if (!converter) throw notFound('The converter');
-        const fed = await tx.find(LoadSchema, { converter: converter.id });
-        for (const l of fed) l.converter = null;
+    async (ctx, tx, t) => {
+      const converter = await recordOf(tx, ConverterSchema, ctx.params.converterId, t, 'The converter');
+      const before = converterSnapshot(converter);
+      const body = ctx.body;
+      const read = readQuantities(converterRaw(body), { ...CONVERTER_RULES, inputVolts: { ...CONVERTER_RULES.inputVolts, required: false }, outputVolts: { ...CONVERTER_RULES.outputVolts, required: false } });
+      for (const key of read.present) {
+        const value = read.values[key];
+        if ((key === 'inputVolts' || key === 'outputVolts') && value == null) throw validationError({ [key]: 'Required' });
+        (converter as unknown as Record<string, unknown>)[CONVERTER_FIELD[key]] = value ?? null;
+      }
+      converter.entered = mergeEntered(converter.entered, read as never);
+      if (body.topology) converter.topology = body.topology;
+      if (body.role) converter.role = body.role;
+      if (body.efficiencySource) converter.efficiencySource = body.efficiencySource;
+      if (body.label !== undefined) converter.label = body.label ?? defaultConverterLabel(converter.topology, converter.role);
+      const changes = diffChanges(before, converterSnapshot(converter), CONVERTER_AUDIT_KEYS);
+      if (Object.keys(changes).length) {
         recordAudit(tx, ctx.user, {
-          action: 'converter.deleted',
+          action: 'converter.updated',
           entityType: 'converter',
           entityId: converter.id,
           scope: scope(t.id),
-          summary: `Removed converter ${converter.label}${fed.length ? ` (${fed.length} load${fed.length > 1 ? 's' : ''} now fed from the pack)` : ''}`,
+          summary: `Changed converter ${converter.label}: ${Object.keys(changes).join(', ')}`,
+          changes,
         });
-        tx.remove(converter);
+      }
+      await tx.flush();
+      return { converter: toConverterDto(converter) };
+    },
+  ),
+  teardownWrite(
+    { method: 'delete', path: '/api/teardowns/:id/converters/:converterId', tag: TAG, summary: 'Remove a converter (loads fed through it are then fed straight from the pack)', params: converterParams },
+    async (ctx, tx, t) => {
+      const converter = await recordOf(tx, ConverterSchema, ctx.params.converterId, t, 'The converter');
+      const fed = await tx.find(LoadSchema, { converter: converter.id });
+      for (const l of fed) l.converter = null;
+      recordAudit(tx, ctx.user, {
+        action: 'converter.deleted',
+        entityType: 'converter',
+        entityId: converter.id,
+        scope: scope(t.id),
+        summary: `Removed converter ${converter.label}${fed.length ? ` (${fed.length} load${fed.length > 1 ? 's' : ''} now fed from the pack)` : ''}`,
       });
-      return undefined;
+      tx.remove(converter);
     },
   ),
 ];

@@ -123,7 +123,7 @@ export function runRoutes(deps: AppDeps): RouteDef[] {
         response: runResponse,
         status: 201,
       },
-      async ({ em, user, params, req }) => {
+      async ({ em, user, params, req, confirmUnpublish }) => {
         const file = req.file;
         try {
           if (!file) throw validationError({ file: 'Attach the log file (CSV or TSV)' });
@@ -136,7 +136,7 @@ export function runRoutes(deps: AppDeps): RouteDef[] {
             if (!parsed.success) throw validationError(zodFields(parsed.error, 'label'));
             label = parsed.data;
           }
-          const teardown = await editableTeardown({ em, user, req }, params.id);
+          const teardown = await editableTeardown({ em, user, confirmUnpublish }, params.id);
           const run = await ingestRun(em, env, {
             teardown,
             user,
@@ -230,8 +230,8 @@ export function runRoutes(deps: AppDeps): RouteDef[] {
         body: updateRunBody,
         response: runResponse,
       },
-      async ({ em, user, params, req, body }) => {
-        const run = await editableRun({ em, user, req }, params.id);
+      async ({ em, user, params, body, confirmUnpublish }) => {
+        const run = await editableRun({ em, user, confirmUnpublish }, params.id);
         // The options of the run's kind only (contracts' RUN_KIND_NEEDS, as the upload).
         const options = body.options && runOptionsFor(run.kind).safeParse(body.options);
         if (options && !options.success) throw validationError(zodFields(options.error, 'options'));
@@ -240,8 +240,8 @@ export function runRoutes(deps: AppDeps): RouteDef[] {
     ),
     route(
       { method: 'delete', path: '/api/runs/:id', tag: 'Bench runs', summary: 'Delete a run and its files', access: CONTENT_EDITORS, params: idParam },
-      async ({ em, user, params, req }) => {
-        const run = await editableRun({ em, user, req }, params.id);
+      async ({ em, user, params, confirmUnpublish }) => {
+        const run = await editableRun({ em, user, confirmUnpublish }, params.id);
         await deleteRun(em, env, user, run);
         return undefined;
       },

@@ -3,7 +3,6 @@
 import { existsSync } from 'node:fs';
 import type { FilterQuery } from '@mikro-orm/core';
 import type { EntityManager } from '@mikro-orm/sqlite';
-import type { Request } from 'express';
 import { lttbIndices } from '@splitcase/calc';
 import { RUN_KIND, type RunDto, type RunKind, type RunMapping, type RunOptions, type RunSeries, type RunSeriesQuery } from '@splitcase/contracts';
 import type { Env } from '../../config/env';
@@ -13,7 +12,7 @@ import { diffChanges, recordAudit } from '../audit/audit.service';
 import { LoadSchema } from '../power/load.entity';
 import { PackSchema } from '../power/pack.entity';
 import { getSettings } from '../settings/settings.service';
-import { canSee, editableTeardown, visibleTeardowns } from '../teardowns/access';
+import { canSee, editableTeardown, visibleTeardowns, type TeardownWriter } from '../teardowns/access';
 import type { Teardown } from '../teardowns/teardown.entity';
 import { UserSchema } from '../users/user.entity';
 import { analyseRun, compareRun, type AnalysisContext } from './analyse';
@@ -188,8 +187,8 @@ export async function readableRun(em: EntityManager, user: AuthUser, id: number)
   return run;
 }
 
-/** Loads a run for a change: the teardown must be editable by the user (published needs the confirm header). */
-export async function editableRun(ctx: { em: EntityManager; user: AuthUser; req: Request }, id: number): Promise<BenchRun> {
+/** Loads a run for a change: the teardown must be editable by the user (published needs the confirm, in review is refused). */
+export async function editableRun(ctx: TeardownWriter, id: number): Promise<BenchRun> {
   const run = await readableRun(ctx.em, ctx.user, id);
   await editableTeardown(ctx, run.teardown.id);
   return run;

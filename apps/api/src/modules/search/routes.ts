@@ -1,7 +1,7 @@
 import { DEVICE_CATEGORY, FINDING_KIND, SEARCH_TYPE, SEVERITY, TEARDOWN_STATUS, patternsResponse, searchQuery, searchResponse, snippetText } from '@splitcase/contracts';
 import { toCsv } from '../../lib/csv';
 import { route, type RouteDef } from '../../http/route';
-import { csvFileName } from '../parts/service';
+import { csvFileName } from '../parts/parts.service';
 import { computePatterns } from './patterns.service';
 import { search, searchHits, snippetsFor, toSearchItem } from './search.service';
 

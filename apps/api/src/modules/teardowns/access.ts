@@ -1,7 +1,6 @@
 import type { EntityManager } from '@mikro-orm/sqlite';
 import type { FilterQuery } from '@mikro-orm/core';
-import type { Request } from 'express';
-import { CONFIRM_UNPUBLISH_HEADER, type Role, type TeardownPermissions } from '@splitcase/contracts';
+import type { Role, TeardownPermissions } from '@splitcase/contracts';
 import { AppError, forbidden, notFound } from '../../http/errors';
 import type { AuthUser } from '../../http/route';
 import { recordAudit } from '../audit/audit.service';
@@ -25,12 +24,18 @@ export function visibleTeardowns(user: AuthUser): FilterQuery<Teardown> {
   return DRAFT_READERS.includes(user.role) ? {} : { status: 'published' };
 }
 
-export function permissionsFor(user: AuthUser): TeardownPermissions {
+/** Its engineer, or an admin, may take a teardown back out of review to edit it. */
+export const mayWithdraw = (user: AuthUser, t: Pick<Teardown, 'engineer'>) => user.role === 'admin' || t.engineer.id === user.id;
+
+/** What the user may do with this teardown now: a teardown in review is read-only until withdrawn. */
+export function permissionsFor(user: AuthUser, t: Pick<Teardown, 'status' | 'engineer'>): TeardownPermissions {
+  const inReview = t.status === 'in_review';
   return {
-    edit: CONTENT_EDITORS.includes(user.role),
+    edit: CONTENT_EDITORS.includes(user.role) && !inReview,
     review: REVIEWERS.includes(user.role),
     comment: COMMENTERS.includes(user.role),
     editPrices: PRICE_EDITORS.includes(user.role),
+    withdraw: inReview && mayWithdraw(user, t),
   };
 }
 
@@ -41,23 +46,38 @@ export async function readableTeardown(em: EntityManager, user: AuthUser, id: nu
   return t;
 }
 
+/** Who is changing a teardown, and whether they confirmed moving a published one back to draft. */
+export interface TeardownWriter {
+  em: EntityManager;
+  user: AuthUser;
+  /** `ctx.confirmUnpublish` of the route (the X-Confirm-Unpublish header). */
+  confirmUnpublish: boolean;
+}
+
 /**
- * Load a teardown for a change by one of `roles` (default: content editors). A change to a
- * published teardown needs the confirm header and moves it back to draft (audited); the caller flushes.
+ * The one rule for a write to a teardown's content: a teardown in review is read-only (409,
+ * `details.reason = 'in_review'`; its engineer withdraws it first), a published one needs the
+ * confirm (409, `details.reason = 'published'`). Also run before an upload's body is read.
  */
-export async function editableTeardown(
-  ctx: { em: EntityManager; user: AuthUser; req: Request },
-  id: number,
-  roles: readonly Role[] = CONTENT_EDITORS,
-): Promise<Teardown> {
+export function assertWritable(t: Pick<Teardown, 'status'>, confirmUnpublish: boolean): void {
+  if (t.status === 'in_review') {
+    throw new AppError('conflict', 'This teardown is in review, so it is read-only. Withdraw it from review to edit it.', undefined, { reason: 'in_review' });
+  }
+  if (t.status === 'published' && !confirmUnpublish) {
+    throw new AppError('conflict', 'This teardown is published. Changing it moves it back to draft; it will need review again.', undefined, { reason: 'published' });
+  }
+}
+
+/**
+ * Load a teardown for a change by one of `roles` (default: content editors). A teardown in review
+ * is refused; a change to a published teardown needs the confirm and moves it back to draft
+ * (audited); the caller flushes.
+ */
+export async function editableTeardown(ctx: TeardownWriter, id: number, roles: readonly Role[] = CONTENT_EDITORS): Promise<Teardown> {
   const t = await readableTeardown(ctx.em, ctx.user, id);
   if (!roles.includes(ctx.user.role)) throw forbidden();
+  assertWritable(t, ctx.confirmUnpublish);
   if (t.status === 'published') {
-    if (ctx.req.get(CONFIRM_UNPUBLISH_HEADER)?.toLowerCase() !== 'yes') {
-      throw new AppError('conflict', 'This teardown is published. Changing it moves it back to draft; it will need review again.', undefined, {
-        reason: 'published',
-      });
-    }
     t.status = 'draft';
     t.publishedAt = null;
     recordAudit(ctx.em, ctx.user, {

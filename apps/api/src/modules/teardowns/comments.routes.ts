@@ -7,6 +7,7 @@ import { toAuditDto } from '../audit/routes';
 import { UserSchema } from '../users/user.entity';
 import { COMMENTERS, readableTeardown } from './access';
 import { CommentSchema, type Comment } from './comment.entity';
+import { teardownRead } from './teardown-routes';
 
 export const toCommentDto = (c: Comment) => ({
   id: c.id,
@@ -17,18 +18,14 @@ export const toCommentDto = (c: Comment) => ({
 });
 
 export const commentRoutes: RouteDef[] = [
-  route(
+  teardownRead(
     {
-      method: 'get',
       path: '/api/teardowns/:id/comments',
       tag: 'Teardowns',
       summary: 'Comments on a teardown, oldest first (review decisions are comments of their kind)',
-      access: 'signed-in',
-      params: idParam,
       response: commentsResponse,
     },
-    async ({ em, user, params }) => {
-      const t = await readableTeardown(em, user, params.id);
+    async ({ em }, t) => {
       const rows = await em.find(CommentSchema, { teardown: t.id }, { orderBy: { createdAt: 'asc', id: 'asc' }, populate: ['author'] });
       return { comments: rows.map(toCommentDto) };
     },
@@ -63,19 +60,15 @@ export const commentRoutes: RouteDef[] = [
       return { comment: toCommentDto(comment) };
     },
   ),
-  route(
+  teardownRead(
     {
-      method: 'get',
       path: '/api/teardowns/:id/history',
       tag: 'Teardowns',
       summary: 'Every change to a teardown and its records (who, when, what), newest first; price entries only for the roles that see prices',
-      access: 'signed-in',
-      params: idParam,
       response: teardownHistoryResponse,
       prices: 'by-role',
     },
-    async ({ em, user, params, priceView }) => {
-      const t = await readableTeardown(em, user, params.id);
+    async ({ em, priceView }, t) => {
       const where = { scopeType: 'teardown', scopeId: String(t.id), ...historyCondition(priceView) };
       const rows = await em.find(AuditEntrySchema, where, { orderBy: { at: 'desc', id: 'desc' }, limit: 1000, populate: ['actor'] });
       return { entries: rows.map(toAuditDto) };

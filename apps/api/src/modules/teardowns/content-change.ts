@@ -1,8 +1,6 @@
 import type { EntityManager } from '@mikro-orm/sqlite';
-import type { Request } from 'express';
 import type { Role } from '@splitcase/contracts';
-import type { AuthUser } from '../../http/route';
-import { CONTENT_EDITORS, editableTeardown } from './access';
+import { CONTENT_EDITORS, editableTeardown, type TeardownWriter } from './access';
 import type { Teardown } from './teardown.entity';
 
 /**
@@ -11,13 +9,13 @@ import type { Teardown } from './teardown.entity';
  * commit together or not at all. `fn` may flush to get ids; the transaction flushes at the end.
  */
 export function changeTeardownContent<T>(
-  ctx: { em: EntityManager; user: AuthUser; req: Request },
+  ctx: TeardownWriter,
   teardownId: number,
   fn: (tx: EntityManager, teardown: Teardown) => Promise<T>,
   roles: readonly Role[] = CONTENT_EDITORS,
 ): Promise<T> {
   return ctx.em.transactional(async (tx) => {
-    const teardown = await editableTeardown({ em: tx as EntityManager, user: ctx.user, req: ctx.req }, teardownId, roles);
+    const teardown = await editableTeardown({ em: tx as EntityManager, user: ctx.user, confirmUnpublish: ctx.confirmUnpublish }, teardownId, roles);
     return fn(tx as EntityManager, teardown);
   });
 }

@@ -20,7 +20,7 @@ export function toTeardownDto(t: Teardown, user: AuthUser, cell: TeardownDto['ce
     publishedAt: t.publishedAt?.toISOString() ?? null,
     lastReviewNote: t.lastReviewNote ?? null,
     updatedAt: t.updatedAt.toISOString(),
-    permissions: permissionsFor(user),
+    permissions: permissionsFor(user, t),
     cell,
   };
 }

@@ -1,15 +1,17 @@
 // The review workflow: draft → in_review (leads get an e-mail) → published, or back to draft with a
 // comment (the engineer gets an e-mail). Each step is audited and kept as a comment of its kind.
+// A teardown in review is read-only (access.ts `assertWritable`); its engineer or an admin
+// withdraws it back to draft to edit it (audited).
 import type { EntityManager } from '@mikro-orm/sqlite';
 import { approveTeardownBody, idParam, sendBackTeardownBody, submitTeardownBody, teardownResponse, TEARDOWN_STATUS, type TeardownStatus } from '@splitcase/contracts';
-import { AppError } from '../../http/errors';
+import { AppError, forbidden } from '../../http/errors';
 import type { AppDeps } from '../../http/deps';
-import { route, type AuthUser, type RouteDef } from '../../http/route';
+import { route, type AuthUser, type RouteContext, type RouteDef } from '../../http/route';
 import { recordAudit } from '../audit/audit.service';
 import type { OutgoingMail } from '../mail/mailer';
 import { linkMail } from '../mail/templates';
 import { UserSchema } from '../users/user.entity';
-import { CONTENT_EDITORS, readableTeardown, REVIEWERS } from './access';
+import { CONTENT_EDITORS, mayWithdraw, readableTeardown, REVIEWERS } from './access';
 import { CommentSchema } from './comment.entity';
 import { teardownDto, teardownName } from './teardown.service';
 import type { Teardown } from './teardown.entity';
@@ -43,7 +45,65 @@ function addReviewComment(em: EntityManager, t: Teardown, user: AuthUser, kind: 
   return em.create(CommentSchema, { teardown: t, author: em.getReference(UserSchema, user.id), kind, body });
 }
 
+/** The audit entry of a review step: the teardown's status from → to. */
+function statusAudit(em: EntityManager, user: AuthUser, t: Teardown, action: string, summary: string, from: TeardownStatus, to: TeardownStatus) {
+  recordAudit(em, user, { action, entityType: 'teardown', entityId: t.id, scope: { type: 'teardown', id: t.id }, summary, changes: { status: { from, to } } });
+}
+
 const link = (deps: AppDeps, t: Teardown) => `${deps.env.publicUrl}/teardowns/${t.id}`;
+
+/** What approving and sending back do to a teardown in review (the one handler below reads it). */
+const DECISIONS = {
+  approve: { kind: 'approved', to: 'published', verb: 'approved', noteDefault: 'Approved and published.', summary: (note: string | null) => `Approved and published${note ? `: ${note}` : ''}` },
+  'send-back': { kind: 'sent-back', to: 'draft', verb: 'sent back', noteDefault: '', summary: (note: string | null) => `Sent back to draft: ${note}` },
+} as const;
+
+/**
+ * Approve or send back a teardown in review: the status, the review note, a comment of its kind and
+ * the audit entry; a send-back then e-mails the engineer (undone when the mail server refuses).
+ */
+async function decide(ctx: RouteContext<unknown, unknown, { id: number }>, which: keyof typeof DECISIONS, note: string | null) {
+  const { em, user, deps } = ctx;
+  const d = DECISIONS[which];
+  const t = await readableTeardown(em, user, ctx.params.id);
+  requireStatus(t, 'in_review', d.verb);
+  const previousNote = t.lastReviewNote ?? null;
+  t.status = d.to;
+  t.lastReviewNote = note;
+  if (which === 'approve') {
+    t.publishedAt = new Date();
+    t.publishedBy = em.getReference(UserSchema, user.id);
+  }
+  const comment = addReviewComment(em, t, user, d.kind, note ?? d.noteDefault);
+  statusAudit(em, user, t, `teardown.${d.kind}`, d.summary(note), 'in_review', d.to);
+  await em.flush();
+  if (which === 'send-back' && t.engineer.active) {
+    await sendOrUndo(
+      deps,
+      linkMail({
+        to: t.engineer.email,
+        subject: `Sent back: ${teardownName(t)}`,
+        lines: [
+          `Hello ${t.engineer.name.split(' ')[0]},`,
+          `${user.name} sent your teardown of ${teardownName(t)} back to draft with this comment:`,
+          `“${note}”`,
+          'Make the changes, then submit it for review again.',
+        ],
+        linkLabel: 'Open the teardown',
+        url: link(deps, t),
+      }),
+      async () => {
+        t.status = 'in_review';
+        t.lastReviewNote = previousNote;
+        em.remove(comment);
+        statusAudit(em, user, t, 'teardown.send-back-undone', 'Send-back undone: the e-mail to the engineer could not be sent', 'draft', 'in_review');
+        await em.flush();
+      },
+      'sent back',
+    );
+  }
+  return { teardown: await teardownDto(em, t, user) };
+}
 
 export const reviewRoutes: RouteDef[] = [
   route(
@@ -64,14 +124,7 @@ export const reviewRoutes: RouteDef[] = [
       t.status = 'in_review';
       t.submittedAt = new Date();
       const comment = addReviewComment(em, t, user, 'submitted', body.note ?? 'Submitted for review.');
-      recordAudit(em, user, {
-        action: 'teardown.submitted',
-        entityType: 'teardown',
-        entityId: t.id,
-        scope: { type: 'teardown', id: t.id },
-        summary: `Submitted for review${body.note ? `: ${body.note}` : ''}`,
-        changes: { status: { from: 'draft', to: 'in_review' } },
-      });
+      statusAudit(em, user, t, 'teardown.submitted', `Submitted for review${body.note ? `: ${body.note}` : ''}`, 'draft', 'in_review');
       await em.flush();
       const leads = await em.find(UserSchema, { role: 'lead', active: true }, { orderBy: { id: 'asc' } });
       if (leads.length > 0) {
@@ -93,19 +146,32 @@ export const reviewRoutes: RouteDef[] = [
             t.status = 'draft';
             t.submittedAt = previous.submittedAt;
             em.remove(comment);
-            recordAudit(em, user, {
-              action: 'teardown.submit-undone',
-              entityType: 'teardown',
-              entityId: t.id,
-              scope: { type: 'teardown', id: t.id },
-              summary: 'Submission undone: the e-mail to the leads could not be sent',
-              changes: { status: { from: 'in_review', to: 'draft' } },
-            });
+            statusAudit(em, user, t, 'teardown.submit-undone', 'Submission undone: the e-mail to the leads could not be sent', 'in_review', 'draft');
             await em.flush();
           },
           'submitted',
         );
       }
+      return { teardown: await teardownDto(em, t, user) };
+    },
+  ),
+  route(
+    {
+      method: 'post',
+      path: '/api/teardowns/:id/withdraw',
+      tag: 'Teardowns',
+      summary: 'Withdraw a teardown from review back to draft to edit it (its engineer or an admin)',
+      access: CONTENT_EDITORS,
+      params: idParam,
+      response: teardownResponse,
+    },
+    async ({ em, user, params }) => {
+      const t = await readableTeardown(em, user, params.id);
+      if (!mayWithdraw(user, t)) throw forbidden();
+      requireStatus(t, 'in_review', 'withdrawn from review');
+      t.status = 'draft';
+      statusAudit(em, user, t, 'teardown.withdrawn', 'Withdrawn from review to edit', 'in_review', 'draft');
+      await em.flush();
       return { teardown: await teardownDto(em, t, user) };
     },
   ),
@@ -120,25 +186,7 @@ export const reviewRoutes: RouteDef[] = [
       body: approveTeardownBody,
       response: teardownResponse,
     },
-    async ({ em, user, params, body }) => {
-      const t = await readableTeardown(em, user, params.id);
-      requireStatus(t, 'in_review', 'approved');
-      t.status = 'published';
-      t.publishedAt = new Date();
-      t.publishedBy = em.getReference(UserSchema, user.id);
-      t.lastReviewNote = body.note ?? null;
-      addReviewComment(em, t, user, 'approved', body.note ?? 'Approved and published.');
-      recordAudit(em, user, {
-        action: 'teardown.approved',
-        entityType: 'teardown',
-        entityId: t.id,
-        scope: { type: 'teardown', id: t.id },
-        summary: `Approved and published${body.note ? `: ${body.note}` : ''}`,
-        changes: { status: { from: 'in_review', to: 'published' } },
-      });
-      await em.flush();
-      return { teardown: await teardownDto(em, t, user) };
-    },
+    (ctx) => decide(ctx, 'approve', ctx.body.note ?? null),
   ),
   route(
     {
@@ -151,55 +199,6 @@ export const reviewRoutes: RouteDef[] = [
       body: sendBackTeardownBody,
       response: teardownResponse,
     },
-    async ({ em, user, params, body, deps }) => {
-      const t = await readableTeardown(em, user, params.id);
-      requireStatus(t, 'in_review', 'sent back');
-      const previousNote = t.lastReviewNote ?? null;
-      t.status = 'draft';
-      t.lastReviewNote = body.comment;
-      const comment = addReviewComment(em, t, user, 'sent-back', body.comment);
-      recordAudit(em, user, {
-        action: 'teardown.sent-back',
-        entityType: 'teardown',
-        entityId: t.id,
-        scope: { type: 'teardown', id: t.id },
-        summary: `Sent back to draft: ${body.comment}`,
-        changes: { status: { from: 'in_review', to: 'draft' } },
-      });
-      await em.flush();
-      if (t.engineer.active) {
-        await sendOrUndo(
-          deps,
-          linkMail({
-            to: t.engineer.email,
-            subject: `Sent back: ${teardownName(t)}`,
-            lines: [
-              `Hello ${t.engineer.name.split(' ')[0]},`,
-              `${user.name} sent your teardown of ${teardownName(t)} back to draft with this comment:`,
-              `“${body.comment}”`,
-              'Make the changes, then submit it for review again.',
-            ],
-            linkLabel: 'Open the teardown',
-            url: link(deps, t),
-          }),
-          async () => {
-            t.status = 'in_review';
-            t.lastReviewNote = previousNote;
-            em.remove(comment);
-            recordAudit(em, user, {
-              action: 'teardown.send-back-undone',
-              entityType: 'teardown',
-              entityId: t.id,
-              scope: { type: 'teardown', id: t.id },
-              summary: 'Send-back undone: the e-mail to the engineer could not be sent',
-              changes: { status: { from: 'draft', to: 'in_review' } },
-            });
-            await em.flush();
-          },
-          'sent back',
-        );
-      }
-      return { teardown: await teardownDto(em, t, user) };
-    },
+    (ctx) => decide(ctx, 'send-back', ctx.body.comment),
   ),
 ];

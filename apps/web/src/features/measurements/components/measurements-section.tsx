@@ -8,7 +8,7 @@ import { DataTable, type Column } from '@/components/data-table';
 import { ErrorPanel } from '@/components/error-boundary';
 import { inputClass } from '@/components/field';
 import { Card, Spinner } from '@/components/page';
-import { PublishedEditNotice, useEditGate, type EditGate } from '@/components/published-edit';
+import { PublishedEditNotice, useEditGate } from '@/components/published-edit';
 import { ApiError } from '@/lib/api-client';
 import { formatDateTime, formatStored, sameQuantityText } from '@/lib/format';
 import { useCreateMeasurement } from '../api/create-measurement';
@@ -95,7 +95,7 @@ export function MeasurementsSection({ teardown }: { teardown: TeardownDto }) {
         deleteLabel: (m) => `Delete the reading of ${m.subject}`,
         keepLabel: 'Keep the reading',
         onEdit: setEditing,
-        onDelete: (m) => remove.mutate({ id: m.id, headers: gate.headers }, { onSuccess: () => toast.success('Reading removed.'), onError: (e) => toast.error(e.message), onSettled: () => setConfirmDelete(null) }),
+        onDelete: (m) => remove.mutate({ id: m.id }, { onSuccess: () => toast.success('Reading removed.'), onError: (e) => toast.error(e.message), onSettled: () => setConfirmDelete(null) }),
       }),
     ],
     [gate, confirmDelete, remove],
@@ -107,7 +107,7 @@ export function MeasurementsSection({ teardown }: { teardown: TeardownDto }) {
   return (
     <div className="space-y-4">
       <PublishedEditNotice gate={gate} />
-      {gate.canEdit && <QuickEntry key={editing?.id ?? 'new'} teardownId={teardown.id} gate={gate} editing={editing} onDoneEditing={() => setEditing(null)} />}
+      {gate.canEdit && <QuickEntry key={editing?.id ?? 'new'} teardownId={teardown.id} editing={editing} onDoneEditing={() => setEditing(null)} />}
       <Card
         title={
           <span>
@@ -142,7 +142,7 @@ export function MeasurementsSection({ teardown }: { teardown: TeardownDto }) {
 
 const big = `${inputClass} h-11 text-base`;
 
-function QuickEntry({ teardownId, gate, editing, onDoneEditing }: { teardownId: number; gate: EditGate; editing: MeasurementDto | null; onDoneEditing: () => void }) {
+function QuickEntry({ teardownId, editing, onDoneEditing }: { teardownId: number; editing: MeasurementDto | null; onDoneEditing: () => void }) {
   const create = useCreateMeasurement(teardownId);
   const update = useUpdateMeasurement(teardownId);
   const [draft, setDraft] = useState<Draft>(() => (editing ? draftOf(editing) : blank));
@@ -168,12 +168,12 @@ function QuickEntry({ teardownId, gate, editing, onDoneEditing }: { teardownId: 
     };
     try {
       if (editing) {
-        await update.mutateAsync({ id: editing.id, body, headers: gate.headers });
+        await update.mutateAsync({ id: editing.id, body });
         toast.success('Reading corrected.');
         onDoneEditing();
         return;
       }
-      const m = await create.mutateAsync({ teardownId, body, headers: gate.headers });
+      const m = await create.mutateAsync({ teardownId, body });
       setSaved(`Saved ${m.entered} — ${m.subject}. Ready for the next reading.`);
       setDraft((d) => ({ ...d, value: '' }));
       valueInput.current?.focus();

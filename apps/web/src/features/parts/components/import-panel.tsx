@@ -4,7 +4,6 @@ import { CircleCheck, FileUp, TriangleAlert, X } from 'lucide-react';
 import { MOUNT_TYPE, PART_CATEGORY, PART_CSV_COLUMNS, type CsvRowError, type ImportPartsResponse } from '@splitcase/contracts';
 import { Button } from '@/components/button';
 import { Card } from '@/components/page';
-import type { EditGate } from '@/components/published-edit';
 import { ApiError } from '@/lib/api-client';
 import { DecodedMarking } from '@/components/decoded-marking';
 import { useCommitPartsImport, usePreviewPartsImport } from '../api/import-parts';
@@ -12,7 +11,7 @@ import { useCommitPartsImport, usePreviewPartsImport } from '../api/import-parts
 const MAX_BYTES = 900_000;
 
 /** CSV import: choose or paste a file, preview it on the server (row-level errors), then commit all or nothing. */
-export function ImportPanel({ teardownId, gate, onClose }: { teardownId: number; gate: EditGate; onClose: () => void }) {
+export function ImportPanel({ teardownId, onClose }: { teardownId: number; onClose: () => void }) {
   const [csv, setCsv] = useState('');
   const [fileName, setFileName] = useState<string | null>(null);
   const [mode, setMode] = useState<'append' | 'replace'>('append');
@@ -48,7 +47,7 @@ export function ImportPanel({ teardownId, gate, onClose }: { teardownId: number;
   const runCommit = async () => {
     setProblem(null);
     try {
-      const res = await commit.mutateAsync({ teardownId, body: { csv, mode }, headers: gate.headers });
+      const res = await commit.mutateAsync({ teardownId, body: { csv, mode } });
       toast.success(`Imported ${res.imported} part${res.imported === 1 ? '' : 's'}.`);
       onClose();
     } catch (err) {

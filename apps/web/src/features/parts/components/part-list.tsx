@@ -40,12 +40,12 @@ export function PartList({
   const firstNewInput = useRef<HTMLInputElement | null>(null);
 
   const edit = usePartRow({
-    save: (body) => update.mutateAsync({ id: editingId!, body, headers: gate.headers }),
+    save: (body) => update.mutateAsync({ id: editingId!, body }),
     saved: () => setEditingId(null),
     cancel: () => setEditingId(null),
   });
   const entry = usePartRow({
-    save: (body) => create.mutateAsync({ teardownId, body, headers: gate.headers }),
+    save: (body) => create.mutateAsync({ teardownId, body }),
     saved: () => {
       entry.clear();
       firstNewInput.current?.focus();
@@ -67,7 +67,7 @@ export function PartList({
 
   const removeLine = (p: PartDto) =>
     remove.mutate(
-      { id: p.id, headers: gate.headers },
+      { id: p.id },
       { onSuccess: () => toast.success(`Removed ${partName(p)}.`), onError: (e) => toast.error(e.message), onSettled: () => setConfirmDelete(null) },
     );
   const latestRemove = useRef(removeLine);
@@ -80,7 +80,7 @@ export function PartList({
     const j = i + by;
     if (j < 0 || j >= ids.length) return;
     [ids[i], ids[j]] = [ids[j]!, ids[i]!];
-    reorder.mutate({ teardownId, ids, headers: gate.headers }, { onError: (e) => toast.error(e.message) });
+    reorder.mutate({ teardownId, ids }, { onError: (e) => toast.error(e.message) });
   };
 
   const columns = useMemo(

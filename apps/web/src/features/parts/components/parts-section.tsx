@@ -23,7 +23,7 @@ export function PartsSection({ teardown, renderPartExtras }: { teardown: Teardow
   return (
     <div className="space-y-4">
       <PublishedEditNotice gate={gate} />
-      {importing && gate.canEdit && <ImportPanel teardownId={teardown.id} gate={gate} onClose={() => setImporting(false)} />}
+      {importing && gate.canEdit && <ImportPanel teardownId={teardown.id} onClose={() => setImporting(false)} />}
       <Card
         title={
           <span>

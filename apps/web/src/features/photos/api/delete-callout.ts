@@ -1,8 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
+import { withUnpublishConfirm } from '@/lib/unpublish-confirm';
 import { teardownScope } from '@/lib/query-keys';
 
-export const deleteCallout = ({ id, headers }: { id: number; headers?: Record<string, string> }) => api.delete<void>(`/api/callouts/${id}`, { headers });
+export const deleteCallout = ({ id }: { id: number }) => withUnpublishConfirm((opts) => api.delete<void>(`/api/callouts/${id}`, opts));
 
 export function useDeleteCallout(teardownId: number) {
   const qc = useQueryClient();

@@ -1,11 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { CalloutDto, PhotosResponse, UpdateCalloutBody } from '@splitcase/contracts';
 import { api } from '@/lib/api-client';
+import { withUnpublishConfirm } from '@/lib/unpublish-confirm';
 import { teardownScope } from '@/lib/query-keys';
 import { photosKey } from './get-photos';
 
-export const updateCallout = ({ id, body, headers }: { id: number; body: UpdateCalloutBody; headers?: Record<string, string> }) =>
-  api.patch<{ callout: CalloutDto }>(`/api/callouts/${id}`, body, { headers });
+export const updateCallout = ({ id, body }: { id: number; body: UpdateCalloutBody }) =>
+  withUnpublishConfirm((opts) => api.patch<{ callout: CalloutDto }>(`/api/callouts/${id}`, body, opts));
 
 /** Moves show at once (optimistic position), and roll back if the server refuses. */
 export function useUpdateCallout(teardownId: number) {

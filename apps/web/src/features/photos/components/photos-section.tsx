@@ -5,6 +5,7 @@ import { Camera } from 'lucide-react';
 import type { CalloutDto, PhotoDto, TeardownDto } from '@splitcase/contracts';
 import { Card, EmptyState, Spinner } from '@/components/page';
 import { ErrorPanel } from '@/components/error-boundary';
+import { mutationErrorMessage } from '@/lib/unpublish-confirm';
 import { usePhotos } from '../api/get-photos';
 import { useCalloutTargets } from '../api/get-callout-targets';
 import { useCreateCallout } from '../api/create-callout';
@@ -19,7 +20,6 @@ import { PhotoStage } from './photo-stage';
 import { PinPanel, type PinValues } from './pin-panel';
 import { UploadPanel } from './upload-panel';
 import { useUploadQueue } from './use-upload-queue';
-import { useWriteHeaders } from './use-write-headers';
 
 const nextStepIn = (photos: PhotoDto[], layer: number) => Math.max(0, ...photos.filter((p) => p.layer === layer).map((p) => p.step)) + 1;
 
@@ -28,8 +28,7 @@ export function PhotosSection({ teardown }: { teardown: TeardownDto }) {
   const canEdit = teardown.permissions.edit;
   const photos = usePhotos(teardown.id);
   const targets = useCalloutTargets(teardown.id, canEdit);
-  const headersFor = useWriteHeaders(teardown);
-  const queue = useUploadQueue(teardown.id, headersFor);
+  const queue = useUploadQueue(teardown);
   const [params, setParams] = useSearchParams();
   const [draft, setDraft] = useState<{ x: number; y: number } | null>(null);
   const [uploadLayer, setUploadLayer] = useState(1);
@@ -65,38 +64,46 @@ export function PhotosSection({ teardown }: { teardown: TeardownDto }) {
   if (photos.isError) return <ErrorPanel error={photos.error} onRetry={() => photos.refetch()} />;
   const { limits } = photos.data;
 
-  const withHeaders = async <T,>(run: (headers: Record<string, string>) => Promise<T>): Promise<T | undefined> => {
-    const headers = await headersFor();
-    if (!headers) return undefined;
-    return run(headers);
+  // Each write asks first when the teardown is published (withUnpublishConfirm in the api/ files);
+  // choosing to keep it published is not an error to show.
+  const failed = (prefix = '') => (e: unknown) => {
+    const message = mutationErrorMessage(e);
+    if (message) toast.error(`${prefix}${message}`);
   };
+  const quiet = () => {};
 
   const placePin = (v: PinValues) =>
     current &&
-    void withHeaders((headers) =>
-      createPin.mutateAsync({ photoId: current.id, body: { x: draft!.x, y: draft!.y, label: v.label, partId: v.partId, findingId: v.findingId }, headers }).then(({ callout }) => {
-        select(current.id, callout.id);
-      }),
-    ).catch(() => {});
+    void createPin
+      .mutateAsync({ photoId: current.id, body: { x: draft!.x, y: draft!.y, label: v.label, partId: v.partId, findingId: v.findingId } })
+      .then(({ callout }) => select(current.id, callout.id))
+      .catch(quiet);
   const savePin = (c: CalloutDto, v: PinValues) =>
-    void withHeaders((headers) => updatePin.mutateAsync({ id: c.id, body: { label: v.label, partId: v.partId, findingId: v.findingId }, headers }).then(() => toast.success(`Pin ${c.number} saved.`))).catch(() => {});
-  const movePin = (c: CalloutDto, pos: { x: number; y: number }) =>
-    void withHeaders((headers) => updatePin.mutateAsync({ id: c.id, body: pos, headers })).catch((e: Error) => toast.error(`Pin ${c.number} was not moved: ${e.message}`));
+    void updatePin
+      .mutateAsync({ id: c.id, body: { label: v.label, partId: v.partId, findingId: v.findingId } })
+      .then(() => toast.success(`Pin ${c.number} saved.`))
+      .catch(quiet);
+  const movePin = (c: CalloutDto, pos: { x: number; y: number }) => void updatePin.mutateAsync({ id: c.id, body: pos }).catch(failed(`Pin ${c.number} was not moved: `));
   const removePin = (c: CalloutDto) =>
-    void withHeaders((headers) => deletePin.mutateAsync({ id: c.id, headers }).then(() => selectPin(null))).catch((e: Error) => toast.error(e.message));
+    void deletePin
+      .mutateAsync({ id: c.id })
+      .then(() => selectPin(null))
+      .catch(failed());
   const savePhoto = (v: PhotoValues) =>
     current &&
-    void withHeaders((headers) =>
-      updatePhoto.mutateAsync({ id: current.id, body: { caption: v.caption.trim() || null, layer: v.layer, step: v.step }, headers }).then(() => toast.success('Photo details saved.')),
-    ).catch(() => {});
+    void updatePhoto
+      .mutateAsync({ id: current.id, body: { caption: v.caption.trim() || null, layer: v.layer, step: v.step } })
+      .then(() => toast.success('Photo details saved.'))
+      .catch(quiet);
   const removePhoto = () =>
     current &&
-    void withHeaders((headers) =>
-      deletePhoto.mutateAsync({ id: current.id, headers }).then(() => {
+    void deletePhoto
+      .mutateAsync({ id: current.id })
+      .then(() => {
         toast.success('Photo and its pins deleted.');
         select(null);
-      }),
-    ).catch((e: Error) => toast.error(e.message));
+      })
+      .catch(failed());
 
   const upload = canEdit && (
     <UploadPanel limits={limits} queue={queue} layer={uploadLayer} onLayerChange={setUploadLayer} nextStep={(layer) => nextStepIn(list, layer) + queue.items.filter((i) => i.layer === layer && i.status !== 'done' && i.status !== 'refused').length} compact={list.length > 0} />

@@ -1,8 +1,9 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { useQueryClient } from '@tanstack/react-query';
-import type { UploadLimits } from '@splitcase/contracts';
-import { ApiError } from '@/lib/api-client';
+import type { TeardownDto, UploadLimits } from '@splitcase/contracts';
+import { ApiError, type RequestOptions } from '@/lib/api-client';
 import { teardownScope } from '@/lib/query-keys';
+import { confirmUnpublishFirst, isUnpublishCancelled } from '@/lib/unpublish-confirm';
 import { uploadPhoto } from '../api/upload-photo';
 
 export type UploadStatus = 'queued' | 'uploading' | 'processing' | 'done' | 'failed' | 'cancelled' | 'refused';
@@ -37,12 +38,26 @@ export function precheck(file: File, limits: UploadLimits): string | null {
 
 /**
  * A batch upload queue: two files at a time, a progress per file and overall, cancel and retry per
- * file. `confirm` resolves to the headers a write needs (or null when the user declines).
+ * file. An upload cannot simply be sent again, so a published teardown is asked about first
+ * (`confirmUnpublishFirst`), once for the files started together.
  */
-export function useUploadQueue(teardownId: number, confirm: () => Promise<Record<string, string> | null>) {
+export function useUploadQueue(teardown: Pick<TeardownDto, 'id' | 'status'>) {
+  const teardownId = teardown.id;
   const [items, setItems] = useState<UploadItem[]>([]);
   const aborts = useRef(new Map<string, () => void>());
+  const asked = useRef<Promise<Pick<RequestOptions, 'headers'>> | null>(null);
   const qc = useQueryClient();
+  // One answer serves the files sent while the teardown is in this state; a new state asks anew.
+  useEffect(() => {
+    asked.current = null;
+  }, [teardown.status]);
+  const confirm = useCallback(() => {
+    const pending = (asked.current ??= confirmUnpublishFirst(teardown));
+    pending.catch(() => {
+      if (asked.current === pending) asked.current = null;
+    });
+    return pending;
+  }, [teardown]);
 
   const patch = useCallback((key: string, change: Partial<UploadItem>) => setItems((all) => all.map((i) => (i.key === key ? { ...i, ...change } : i))), []);
 
@@ -71,14 +86,17 @@ export function useUploadQueue(teardownId: number, confirm: () => Promise<Record
   const start = useCallback(
     async (item: UploadItem) => {
       patch(item.key, { status: 'uploading', progress: 0, error: undefined });
-      const headers = await confirm();
-      if (!headers) {
+      let opts: Pick<RequestOptions, 'headers'>;
+      try {
+        opts = await confirm();
+      } catch (err) {
+        if (!isUnpublishCancelled(err)) throw err;
         patch(item.key, { status: 'cancelled', error: 'Not sent: the teardown stays published.' });
         return;
       }
       const job = uploadPhoto({ teardownId, file: item.file, layer: item.layer, step: item.step, caption: item.caption }, (f) =>
         patch(item.key, f >= 1 ? { progress: 1, status: 'processing' } : { progress: f }),
-      headers);
+      opts.headers);
       aborts.current.set(item.key, job.abort);
       try {
         const { photo } = await job.promise;

@@ -1,9 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
+import { withUnpublishConfirm } from '@/lib/unpublish-confirm';
 import { teardownScope } from '@/lib/query-keys';
 
-export const deleteConverter = ({ teardownId, id, headers }: { teardownId: number; id: number; headers?: Record<string, string> }) =>
-  api.delete<void>(`/api/teardowns/${teardownId}/converters/${id}`, { headers });
+export const deleteConverter = ({ teardownId, id }: { teardownId: number; id: number }) =>
+  withUnpublishConfirm((opts) => api.delete<void>(`/api/teardowns/${teardownId}/converters/${id}`, opts));
 
 export function useDeleteConverter(teardownId: number) {
   const qc = useQueryClient();

@@ -1,11 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { PackBody, PackDto } from '@splitcase/contracts';
 import { api } from '@/lib/api-client';
+import { withUnpublishConfirm } from '@/lib/unpublish-confirm';
 import { teardownScope } from '@/lib/query-keys';
 
 /** Record or replace the pack (values typed with units; the server stores SI and keeps the text). */
-export const savePack = ({ teardownId, body, headers }: { teardownId: number; body: PackBody; headers?: Record<string, string> }) =>
-  api.put<{ pack: PackDto }>(`/api/teardowns/${teardownId}/pack`, body, { headers }).then((r) => r.pack);
+export const savePack = ({ teardownId, body }: { teardownId: number; body: PackBody }) =>
+  withUnpublishConfirm((opts) => api.put<{ pack: PackDto }>(`/api/teardowns/${teardownId}/pack`, body, opts)).then((r) => r.pack);
 
 export function useSavePack(teardownId: number) {
   const qc = useQueryClient();

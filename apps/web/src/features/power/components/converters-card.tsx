@@ -87,7 +87,7 @@ export function ConvertersCard({ teardownId, converters, gate }: { teardownId: n
       columns={columns}
       gate={gate}
       empty={{ editor: 'No converters yet: add the charger and any boost or buck stage.', reader: 'No converters recorded.' }}
-      remove={{ busy: remove.isPending, run: (c) => remove.mutateAsync({ teardownId, id: c.id, headers: gate.headers }) }}
+      remove={{ busy: remove.isPending, run: (c) => remove.mutateAsync({ teardownId, id: c.id }) }}
       renderForm={(converter, done) => <ConverterForm teardownId={teardownId} converter={converter} gate={gate} onDone={done} />}
     />
   );
@@ -99,7 +99,7 @@ function ConverterForm({ teardownId, converter, gate, onDone }: { teardownId: nu
   const card = useCardForm<ConverterFormValues, ConverterBody>({
     schema: converterFormSchema,
     defaultValues: useMemo(() => valuesOf(converter), [converter]),
-    save: (body) => (converter ? update.mutateAsync({ teardownId, id: converter.id, body, headers: gate.headers }) : create.mutateAsync({ teardownId, body, headers: gate.headers })),
+    save: (body) => (converter ? update.mutateAsync({ teardownId, id: converter.id, body }) : create.mutateAsync({ teardownId, body })),
     saved: () => (converter ? 'Converter saved.' : 'Converter added.'),
     onSaved: onDone,
   });

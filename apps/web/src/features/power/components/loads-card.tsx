@@ -102,7 +102,7 @@ export function LoadsCard({ teardownId, loads, converters, gate }: { teardownId:
       columns={columns}
       gate={gate}
       empty={{ editor: 'No loads yet: add the heater elements, motors, LEDs or USB outputs the pack feeds.', reader: 'No loads recorded.' }}
-      remove={{ busy: remove.isPending, run: (l) => remove.mutateAsync({ teardownId, id: l.id, headers: gate.headers }) }}
+      remove={{ busy: remove.isPending, run: (l) => remove.mutateAsync({ teardownId, id: l.id }) }}
       renderForm={(load, done) => <LoadForm teardownId={teardownId} load={load} converters={converters} gate={gate} onDone={done} />}
     />
   );
@@ -114,7 +114,7 @@ function LoadForm({ teardownId, load, converters, gate, onDone }: { teardownId: 
   const card = useCardForm<LoadFormValues, LoadBody>({
     schema: loadFormSchema,
     defaultValues: useMemo(() => valuesOf(load), [load]),
-    save: (body) => (load ? update.mutateAsync({ teardownId, id: load.id, body, headers: gate.headers }) : create.mutateAsync({ teardownId, body, headers: gate.headers })),
+    save: (body) => (load ? update.mutateAsync({ teardownId, id: load.id, body }) : create.mutateAsync({ teardownId, body })),
     saved: () => (load ? 'Load saved.' : 'Load added.'),
     onSaved: onDone,
   });

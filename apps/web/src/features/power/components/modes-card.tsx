@@ -51,7 +51,7 @@ export function ModesCard({ teardownId, loads, modes, gate }: { teardownId: numb
 
   if (loads.length === 0 && modes.length === 0) return null;
   const editRow = (mode: ModeDto | null) => (
-    <ModeRow key={mode?.id ?? 'new'} teardownId={teardownId} mode={mode} loads={loads} heaters={heaters} gate={gate} onDone={() => setEditing(null)} />
+    <ModeRow key={mode?.id ?? 'new'} teardownId={teardownId} mode={mode} loads={loads} heaters={heaters} onDone={() => setEditing(null)} />
   );
 
   return (
@@ -133,7 +133,7 @@ export function ModesCard({ teardownId, loads, modes, gate }: { teardownId: numb
                             onCancelDelete={() => setConfirmDelete(null)}
                             onDelete={() =>
                               remove.mutate(
-                                { teardownId, id: m.id, headers: gate.headers },
+                                { teardownId, id: m.id },
                                 { onSuccess: () => toast.success(`Removed mode ${m.name}.`), onError: (e) => toast.error(e.message), onSettled: () => setConfirmDelete(null) },
                               )
                             }
@@ -153,7 +153,7 @@ export function ModesCard({ teardownId, loads, modes, gate }: { teardownId: numb
   );
 }
 
-function ModeRow({ teardownId, mode, loads, heaters, gate, onDone }: { teardownId: number; mode: ModeDto | null; loads: LoadDto[]; heaters: LoadDto[]; gate: EditGate; onDone: () => void }) {
+function ModeRow({ teardownId, mode, loads, heaters, onDone }: { teardownId: number; mode: ModeDto | null; loads: LoadDto[]; heaters: LoadDto[]; onDone: () => void }) {
   const create = useCreateMode(teardownId);
   const update = useUpdateMode(teardownId);
   const duty = useDutyForTarget();
@@ -175,8 +175,8 @@ function ModeRow({ teardownId, mode, loads, heaters, gate, onDone }: { teardownI
       loads: sent.map((l) => ({ loadId: l.id, duty: values.duties[String(l.id)]! })),
     };
     try {
-      if (mode) await update.mutateAsync({ teardownId, id: mode.id, body, headers: gate.headers });
-      else await create.mutateAsync({ teardownId, body, headers: gate.headers });
+      if (mode) await update.mutateAsync({ teardownId, id: mode.id, body });
+      else await create.mutateAsync({ teardownId, body });
       toast.success(mode ? `Mode ${values.name} saved.` : `Mode ${values.name} added.`);
       onDone();
     } catch (err) {

@@ -50,7 +50,7 @@ export function PackCard({ teardownId, pack, gate }: { teardownId: number; pack:
   const card = useCardForm<PackFormValues, PackForm>({
     schema: packFormSchema,
     defaultValues,
-    save: (body) => save.mutateAsync({ teardownId, headers: gate.headers, body }),
+    save: (body) => save.mutateAsync({ teardownId, body }),
     saved: () => 'Pack saved.',
   });
   const { form } = card;
@@ -72,7 +72,7 @@ export function PackCard({ teardownId, pack, gate }: { teardownId: number; pack:
         (confirmRemove ? (
           <span className="flex items-center gap-2 text-sm">
             Remove the pack record?
-            <Button size="sm" variant="danger" busy={remove.isPending} onClick={() => remove.mutate({ teardownId, headers: gate.headers }, { onSuccess: () => toast.success('Pack removed.'), onSettled: () => setConfirmRemove(false), onError: (e) => toast.error(e.message) })}>
+            <Button size="sm" variant="danger" busy={remove.isPending} onClick={() => remove.mutate({ teardownId }, { onSuccess: () => toast.success('Pack removed.'), onSettled: () => setConfirmRemove(false), onError: (e) => toast.error(e.message) })}>
               Remove
             </Button>
             <Button size="sm" variant="ghost" onClick={() => setConfirmRemove(false)}>

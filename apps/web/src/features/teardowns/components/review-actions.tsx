@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { toast } from 'sonner';
-import { CircleCheck, Send, Undo2 } from 'lucide-react';
+import { CircleCheck, PencilLine, Send, Undo2 } from 'lucide-react';
 import { sendBackTeardownBody, type SendBackTeardownBody, type TeardownDto } from '@splitcase/contracts';
 import { Button } from '@/components/button';
 import { Dialog } from '@/components/dialog';
@@ -11,11 +11,13 @@ import { applyServerErrors } from '@/lib/form-errors';
 import { useApproveTeardown } from '../api/approve-teardown';
 import { useSendBackTeardown } from '../api/send-back-teardown';
 import { useSubmitTeardown } from '../api/submit-teardown';
+import { useWithdrawTeardown } from '../api/withdraw-teardown';
 
 /** The review buttons of the teardown header, per status and what the person may do. */
 export function ReviewActions({ teardown: t }: { teardown: TeardownDto }) {
   const submit = useSubmitTeardown(t.id);
   const approve = useApproveTeardown(t.id);
+  const withdraw = useWithdrawTeardown(t.id);
   const [dialog, setDialog] = useState<'submit' | 'approve' | 'send-back' | null>(null);
   const [note, setNote] = useState('');
   const close = () => {
@@ -36,13 +38,22 @@ export function ReviewActions({ teardown: t }: { teardown: TeardownDto }) {
       toast.error((err as Error).message);
     }
   };
+  const withdrawToEdit = () =>
+    withdraw.mutate(undefined, { onSuccess: () => toast.success('Withdrawn from review: it is a draft again. Submit it again when it is ready.'), onError: (e) => toast.error(e.message) });
   const canSubmit = t.status === 'draft' && t.permissions.edit;
   const canReview = t.status === 'in_review' && t.permissions.review;
-  if (!canSubmit && !canReview) {
-    return t.status === 'in_review' && t.permissions.edit ? <p className="text-sm text-graphite-500">Waiting for a lead to review it.</p> : null;
-  }
+  const canWithdraw = t.permissions.withdraw;
+  if (!canSubmit && !canReview && !canWithdraw) return null;
   return (
-    <div className="no-print flex flex-wrap gap-2">
+    <div className="no-print flex flex-wrap items-center gap-2">
+      {canWithdraw && (
+        <>
+          <p className="text-sm text-graphite-500">Waiting for a lead to review it.</p>
+          <Button busy={withdraw.isPending} onClick={withdrawToEdit}>
+            <PencilLine className="size-4" aria-hidden /> Withdraw from review to edit
+          </Button>
+        </>
+      )}
       {canSubmit && (
         <Button variant="primary" onClick={() => setDialog('submit')}>
           <Send className="size-4" aria-hidden /> Submit for review
