@@ -88,12 +88,12 @@ export function ConvertersCard({ teardownId, converters, gate }: { teardownId: n
       gate={gate}
       empty={{ editor: 'No converters yet: add the charger and any boost or buck stage.', reader: 'No converters recorded.' }}
       remove={{ busy: remove.isPending, run: (c) => remove.mutateAsync({ teardownId, id: c.id }) }}
-      renderForm={(converter, done) => <ConverterForm teardownId={teardownId} converter={converter} gate={gate} onDone={done} />}
+      renderForm={(converter, done) => <ConverterForm teardownId={teardownId} converter={converter} onDone={done} />}
     />
   );
 }
 
-function ConverterForm({ teardownId, converter, gate, onDone }: { teardownId: number; converter: ConverterDto | null; gate: EditGate; onDone: () => void }) {
+function ConverterForm({ teardownId, converter, onDone }: { teardownId: number; converter: ConverterDto | null; onDone: () => void }) {
   const create = useCreateConverter(teardownId);
   const update = useUpdateConverter(teardownId);
   const card = useCardForm<ConverterFormValues, ConverterBody>({

@@ -103,12 +103,12 @@ export function LoadsCard({ teardownId, loads, converters, gate }: { teardownId:
       gate={gate}
       empty={{ editor: 'No loads yet: add the heater elements, motors, LEDs or USB outputs the pack feeds.', reader: 'No loads recorded.' }}
       remove={{ busy: remove.isPending, run: (l) => remove.mutateAsync({ teardownId, id: l.id }) }}
-      renderForm={(load, done) => <LoadForm teardownId={teardownId} load={load} converters={converters} gate={gate} onDone={done} />}
+      renderForm={(load, done) => <LoadForm teardownId={teardownId} load={load} converters={converters} onDone={done} />}
     />
   );
 }
 
-function LoadForm({ teardownId, load, converters, gate, onDone }: { teardownId: number; load: LoadDto | null; converters: ConverterDto[]; gate: EditGate; onDone: () => void }) {
+function LoadForm({ teardownId, load, converters, onDone }: { teardownId: number; load: LoadDto | null; converters: ConverterDto[]; onDone: () => void }) {
   const create = useCreateLoad(teardownId);
   const update = useUpdateLoad(teardownId);
   const card = useCardForm<LoadFormValues, LoadBody>({
