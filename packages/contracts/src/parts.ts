@@ -60,8 +60,7 @@ export const updatePartBody = patchOf(partFields);
  * A quantity as typed (the editor's field, a CSV cell): a whole number, spaces allowed ("1 000");
  * not given (a blank CSV cell), 1. The number's own rules are the body's.
  */
-const quantityText = z
-  .string()
+const quantityText = safeString()
   .optional()
   .transform((v): unknown => {
     if (v === undefined) return 1;

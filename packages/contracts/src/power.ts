@@ -271,7 +271,7 @@ export const loadFormSchema = z.object({
   label: loadFields.label,
   connection: loadFields.connection,
   /** The converter's id as the select gives it; '' is straight from the pack. */
-  converterId: z.string().transform((v) => (v === '' ? null : Number(v))),
+  converterId: safeString().transform((v) => (v === '' ? null : Number(v))),
   surfaceMaterial: optionalChoice(SURFACE_MATERIAL.values),
   elementMaterial: optionalChoice(ELEMENT_MATERIAL.values),
   resistanceOhms: typedOptional,

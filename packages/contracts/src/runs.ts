@@ -204,7 +204,7 @@ export type RunOptionsFormValues = z.input<typeof runOptionsForm>;
 export const runOptionsFormSchema = (kind: RunKind): z.ZodType<RunOptions, RunOptionsFormValues> =>
   runOptionsForm.pick(Object.fromEntries(RUN_KIND_NEEDS[kind].options.map((k) => [k, true])) as Record<RunOptionKey, true>);
 
-const columnChoice = z.object({ column: z.string(), unit: z.string() });
+const columnChoice = z.object({ column: safeString(), unit: safeString() });
 
 /**
  * The column mapping as the upload form holds it: every quantity with a column ('' = not logged) and a
@@ -220,7 +220,7 @@ export const runMappingFormSchema = z
     temperature: columnChoice,
     delimiter: RUN_DELIMITER.schema,
     decimalComma: z.boolean(),
-    headerRow: z.union([z.string(), z.number()]),
+    headerRow: z.union([safeString(), z.number()]),
   })
   .transform((m, ctx) => {
     const out: Record<string, unknown> = { kind: m.kind, time: m.time, delimiter: m.delimiter, decimalComma: m.decimalComma };
@@ -236,8 +236,7 @@ export type RunMappingFormValues = z.input<typeof runMappingFormSchema>;
 /** The upload form (the multipart fields `label`, `mapping`, `options`): field names as the server names its errors. */
 export const runUploadFormSchema = (kind: RunKind) =>
   z.object({
-    label: z
-      .string()
+    label: safeString()
       .transform((s) => s.trim() || undefined)
       .pipe(runLabel.optional()),
     mapping: runMappingFormSchema,
