@@ -12,7 +12,9 @@ try {
   const bytes = manifest.files.reduce((s, f) => s + f.bytes, 0);
   const rows = Object.values(manifest.tables).reduce((s, n) => s + n, 0);
   console.log(`Backup written to ${folder}`);
-  console.log(`  ${manifest.files.length} files, ${(bytes / 1024 / 1024).toFixed(1)} MB; ${rows.toLocaleString('en-GB')} rows in ${Object.keys(manifest.tables).length} tables; ${manifest.photos} photos, ${manifest.runs} bench runs`);
+  console.log(
+    `  ${manifest.files.length} files, ${(bytes / 1024 / 1024).toFixed(1)} MB; ${rows.toLocaleString('en-GB')} rows in ${Object.keys(manifest.tables).length} tables; ${manifest.photos} photos, ${manifest.runs} bench runs`,
+  );
   console.log(`  took ${((Date.now() - started) / 1000).toFixed(1)} s. Restore with: npm run restore ${folder}`);
 } catch (err) {
   console.error(`Backup failed: ${(err as Error).message}`);

@@ -277,7 +277,8 @@ if (warmNon2xx) failures.push(`${warmNon2xx} answers of the warm-up were not 2xx
 if (result.errors || result.timeouts) failures.push(`${result.errors} connection errors (${result.timeouts} timeouts)`);
 if (non2xx) failures.push(`${non2xx} answers were not 2xx`);
 if (heap.length < 4) failures.push('too few memory samples for a trend');
-else if (rise > GROWTH_LIMIT * trend.meanMb) failures.push(`the heap after GC rose ${rise.toFixed(1)} MB over ${span.toFixed(0)} s (more than ${GROWTH_LIMIT * 100} % of ${trend.meanMb.toFixed(1)} MB)`);
+else if (rise > GROWTH_LIMIT * trend.meanMb)
+  failures.push(`the heap after GC rose ${rise.toFixed(1)} MB over ${span.toFixed(0)} s (more than ${GROWTH_LIMIT * 100} % of ${trend.meanMb.toFixed(1)} MB)`);
 stopServer();
 if (failures.length) {
   for (const f of failures) console.log(`✗ ${f}`);

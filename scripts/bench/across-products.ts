@@ -90,9 +90,21 @@ try {
   const calls: { name: string; target: keyof typeof TARGET_MS; who: Agent; path: string; check: (body: unknown, text: string) => string }[] = [
     { name: 'search "sensor" (lead)', target: 'search', who: lead, path: '/api/search?q=sensor', check: (b) => `${(b as { total: number }).total} hits` },
     { name: 'search prefix "therm" (lead)', target: 'search', who: lead, path: '/api/search?q=therm', check: (b) => `${(b as { total: number }).total} hits` },
-    { name: 'search two words, 2 facets (lead)', target: 'search', who: lead, path: '/api/search?q=cell+charger&category=power-bank&type=part', check: (b) => `${(b as { total: number }).total} hits` },
+    {
+      name: 'search two words, 2 facets (lead)',
+      target: 'search',
+      who: lead,
+      path: '/api/search?q=cell+charger&category=power-bank&type=part',
+      check: (b) => `${(b as { total: number }).total} hits`,
+    },
     { name: 'search "sensor" (viewer)', target: 'search', who: viewer, path: '/api/search?q=sensor', check: (b) => `${(b as { total: number }).total} hits` },
-    { name: 'browse findings, severity facet', target: 'browse', who: lead, path: '/api/search?severity=major&severity=critical&sort=date&dir=desc', check: (b) => `${(b as { total: number }).total} findings` },
+    {
+      name: 'browse findings, severity facet',
+      target: 'browse',
+      who: lead,
+      path: '/api/search?severity=major&severity=critical&sort=date&dir=desc',
+      check: (b) => `${(b as { total: number }).total} findings`,
+    },
     { name: 'search CSV export "cell"', target: 'csv', who: lead, path: '/api/search.csv?q=cell', check: (_b, text) => `${text.split('\r\n').length - 2} rows` },
     { name: 'pattern counts (lead)', target: 'patterns', who: lead, path: '/api/patterns', check: (b) => `${(b as { patterns: unknown[] }).patterns.length} patterns` },
     { name: 'home (lead)', target: 'home', who: lead, path: '/api/home', check: () => 'ok' },

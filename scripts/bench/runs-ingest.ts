@@ -53,7 +53,12 @@ try {
   const env = testEnv({ dataDir });
   const orm = await openOrm(env.dbPath);
   await migrate(orm);
-  await seedIfEmpty(orm, env, () => {}, SEED_STEPS.filter((s) => s.name === 'users' || s.name === 'workspace'));
+  await seedIfEmpty(
+    orm,
+    env,
+    () => {},
+    SEED_STEPS.filter((s) => s.name === 'users' || s.name === 'workspace'),
+  );
   const incoming = ensureIncomingDir(env.uploadsDir);
 
   const results: Record<string, string | number>[] = [];

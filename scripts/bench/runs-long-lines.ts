@@ -50,7 +50,7 @@ async function writeLog(path: string, bytes: number, shape: Shape): Promise<void
     const tail = extra ? ',' + Array.from({ length: extra }, () => '1.500000').join(',') : '';
     let chunk = '';
     for (let k = 0; written < bytes; k++) {
-      const line = `${k},${(4.2 - ((k % 100000) * 1e-5)).toFixed(5)},1.0000${tail}\n`;
+      const line = `${k},${(4.2 - (k % 100000) * 1e-5).toFixed(5)},1.0000${tail}\n`;
       chunk += line;
       written += line.length;
       if (chunk.length > 1 << 16) {
@@ -71,7 +71,12 @@ async function child(shape: Shape, file: string) {
     const env = testEnv({ dataDir });
     const orm = await openOrm(env.dbPath);
     await migrate(orm);
-    await seedIfEmpty(orm, env, () => {}, SEED_STEPS.filter((s) => s.name === 'users' || s.name === 'workspace'));
+    await seedIfEmpty(
+      orm,
+      env,
+      () => {},
+      SEED_STEPS.filter((s) => s.name === 'users' || s.name === 'workspace'),
+    );
     const path = join(ensureIncomingDir(env.uploadsDir), `bench-${shape}.part`);
     renameSync(file, path);
     const size = statSync(path).size;
@@ -173,7 +178,9 @@ async function parent() {
     if (shape !== 'one-line' && growth > 3) failures.push(`${shape}: twice the bytes took ${growth.toFixed(2)}× the CPU time (target ≤ 3, linear ≈ 2)`);
   }
   console.table(rows);
-  console.log(`Ratios of the same run, fastest of ${repeat}: CPU time of the ingest, and peak memory above the process start (Node, the ORM and the app modules loaded). Linear ≈ 2 at twice the bytes; quadratic ≈ 4.`);
+  console.log(
+    `Ratios of the same run, fastest of ${repeat}: CPU time of the ingest, and peak memory above the process start (Node, the ORM and the app modules loaded). Linear ≈ 2 at twice the bytes; quadratic ≈ 4.`,
+  );
   if (failures.length) {
     for (const f of failures) console.log(`✗ ${f}`);
     process.exitCode = 1;

@@ -43,7 +43,10 @@ function readTable(): Map<string, Row> {
 const keyOf = (r: RouteDef) => `${r.spec.method.toUpperCase()} ${r.spec.path}`;
 const formatRow = (key: string, statuses: number[]) => {
   const [method, path] = key.split(' ');
-  return `${method!.padEnd(7)}${path!.padEnd(52)}${statuses.map((s, i) => String(s).padEnd(CALLERS[i]!.length + 1)).join('').trimEnd()}`;
+  return `${method!.padEnd(7)}${path!.padEnd(52)}${statuses
+    .map((s, i) => String(s).padEnd(CALLERS[i]!.length + 1))
+    .join('')
+    .trimEnd()}`;
 };
 
 let t: TestApp;
@@ -120,9 +123,7 @@ describe('authorization matrix (tests/api/access-matrix.txt)', () => {
         if (got[k] !== row.expected[caller]) wrong.push(`${row.key} as ${caller}: expected ${row.expected[caller]}, got ${got[k]} (line ${row.line}, ${r.spec.method.toUpperCase()} ${url})`);
       });
     }
-    const hint = toAdd.length
-      ? `\nAdd these rows to ${TABLE_FILE} (the statuses seen now; check them against who may call each route):\n${toAdd.join('\n')}\n`
-      : '';
+    const hint = toAdd.length ? `\nAdd these rows to ${TABLE_FILE} (the statuses seen now; check them against who may call each route):\n${toAdd.join('\n')}\n` : '';
     expect(wrong, hint).toEqual([]);
     expect(toAdd, hint).toEqual([]);
   }, 300_000); // 720 requests: about 13 s alone, several times that on a loaded CI machine

@@ -45,7 +45,17 @@ describe('parts: happy path, decoding and audit', () => {
     const id = await newTeardown();
     const created = await eng.post(`/api/teardowns/${id}/parts`, part({ package: '0402', makerPartNumber: 'QZ-R4702', notes: 'pull-up' })).expect(201);
     const p = created.body.part;
-    expect(p).toMatchObject({ id: expect.any(Number), designators: 'R1', category: 'passive', marking: '472', decodedUnit: 'Ω', quantity: 1, mount: 'smt', package: '0402', makerPartNumber: 'QZ-R4702' });
+    expect(p).toMatchObject({
+      id: expect.any(Number),
+      designators: 'R1',
+      category: 'passive',
+      marking: '472',
+      decodedUnit: 'Ω',
+      quantity: 1,
+      mount: 'smt',
+      package: '0402',
+      makerPartNumber: 'QZ-R4702',
+    });
     // 472 = 47 × 10² Ω [S: REFERENCES.md §1, SMD resistor codes]
     expect(p.decodedValue).toBeCloseTo(4700, 9);
 
@@ -189,7 +199,10 @@ describe('roles and the published state', () => {
 
   it('a refused change leaves a published teardown published (the unpublish rolls back with it)', async () => {
     const id = await newTeardown('published');
-    await eng.post(`/api/teardowns/${id}/parts`, part({ quantity: 0 })).set(CONFIRM_UNPUBLISH_HEADER, 'yes').expect(400);
+    await eng
+      .post(`/api/teardowns/${id}/parts`, part({ quantity: 0 }))
+      .set(CONFIRM_UNPUBLISH_HEADER, 'yes')
+      .expect(400);
     await eng.put(`/api/teardowns/${id}/pack`, { chemistry: 'li-ion', nominalVolts: '3.7 A', capacityAh: '2 Ah' }).set(CONFIRM_UNPUBLISH_HEADER, 'yes').expect(400);
     expect((await eng.get(`/api/teardowns/${id}`)).body.teardown.status).toBe('published');
     expect(await auditFor(id)).toEqual([]);
@@ -317,11 +330,14 @@ describe('parts CSV export', () => {
     const id = await newTeardown();
     await eng.post(`/api/teardowns/${id}/parts`, part({ description: '=HYPERLINK("http://x.test","click")', notes: '+1 spare', marking: '472' })).expect(201);
     await eng.post(`/api/teardowns/${id}/parts`, part({ designators: 'U1', category: 'ic', description: '@SUM(A1)', makerPartNumber: '-5V-REG', marking: null, notes: 'ohm Ω, "quoted"' })).expect(201);
-    const res = await eng.get(`/api/teardowns/${id}/parts.csv`).buffer(true).parse((r, cb) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (c: Buffer) => chunks.push(c));
-      r.on('end', () => cb(null, Buffer.concat(chunks)));
-    });
+    const res = await eng
+      .get(`/api/teardowns/${id}/parts.csv`)
+      .buffer(true)
+      .parse((r, cb) => {
+        const chunks: Buffer[] = [];
+        r.on('data', (c: Buffer) => chunks.push(c));
+        r.on('end', () => cb(null, Buffer.concat(chunks)));
+      });
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/^text\/csv; charset=utf-8/);
     expect(res.headers['content-disposition']).toMatch(/attachment; filename="pellam-works-stackcell-10-parts\.csv"/);
@@ -436,7 +452,17 @@ describe('power system: units stored in SI with the typed text kept', () => {
   it('converters and loads: create with units, feed a load through a converter, change, remove', async () => {
     const id = await newTeardown();
     const conv = (
-      await eng.post(`/api/teardowns/${id}/converters`, { topology: 'boost', role: 'output', inputVolts: '3.7V', outputVolts: '5 V', ratedCurrentAmps: '2.1 A', efficiency: '88 %', efficiencySource: 'measured' }).expect(201)
+      await eng
+        .post(`/api/teardowns/${id}/converters`, {
+          topology: 'boost',
+          role: 'output',
+          inputVolts: '3.7V',
+          outputVolts: '5 V',
+          ratedCurrentAmps: '2.1 A',
+          efficiency: '88 %',
+          efficiencySource: 'measured',
+        })
+        .expect(201)
     ).body.converter;
     expect(conv).toMatchObject({ topology: 'boost', role: 'output', inputVolts: 3.7, outputVolts: 5, ratedCurrentAmps: 2.1, efficiencySource: 'measured', label: 'Boost — power-bank output' });
     expect(conv.efficiency).toBeCloseTo(0.88, 12);
@@ -447,7 +473,18 @@ describe('power system: units stored in SI with the typed text kept', () => {
     expect(plain.body.converter).toMatchObject({ role: 'load', efficiency: null, efficiencySource: 'assumed' });
 
     const heater = (
-      await eng.post(`/api/teardowns/${id}/loads`, { kind: 'heater', resistanceOhms: '3R0', supplyVolts: '3.65 V', count: 2, connection: 'parallel', duty: '60 %', heatedAreaM2: '27 cm²', surfaceMaterial: 'metal' }).expect(201)
+      await eng
+        .post(`/api/teardowns/${id}/loads`, {
+          kind: 'heater',
+          resistanceOhms: '3R0',
+          supplyVolts: '3.65 V',
+          count: 2,
+          connection: 'parallel',
+          duty: '60 %',
+          heatedAreaM2: '27 cm²',
+          surfaceMaterial: 'metal',
+        })
+        .expect(201)
     ).body.load;
     expect(heater).toMatchObject({ kind: 'heater', label: 'Heater element', resistanceOhms: 3, supplyVolts: 3.65, count: 2, connection: 'parallel', converterId: null, surfaceMaterial: 'metal' });
     expect(heater.duty).toBeCloseTo(0.6, 12);
@@ -493,7 +530,7 @@ describe('power system: units stored in SI with the typed text kept', () => {
     expect((await eng.get(`/api/teardowns/${id}/loads`)).body.loads).toEqual([]);
   });
 
-  it("loads: refuses a converter of another teardown", async () => {
+  it('loads: refuses a converter of another teardown', async () => {
     const a = await newTeardown();
     const b = await newTeardown();
     const conv = (await eng.post(`/api/teardowns/${a}/converters`, { topology: 'boost', inputVolts: 3.7, outputVolts: 5 }).expect(201)).body.converter;
@@ -517,7 +554,9 @@ describe('power system: units stored in SI with the typed text kept', () => {
 describe('measurements', () => {
   it('records a reading typed with its unit, lists, corrects and removes it', async () => {
     const id = await newTeardown();
-    const res = await eng.post(`/api/teardowns/${id}/measurements`, { quantity: 'resistance', value: '3.02 Ω', subject: 'Heater element, front', conditions: '23 °C', instrument: 'Bench DMM', uncertainty: '±0.2 %' }).expect(201);
+    const res = await eng
+      .post(`/api/teardowns/${id}/measurements`, { quantity: 'resistance', value: '3.02 Ω', subject: 'Heater element, front', conditions: '23 °C', instrument: 'Bench DMM', uncertainty: '±0.2 %' })
+      .expect(201);
     const m = res.body.measurement;
     expect(m).toMatchObject({ quantity: 'resistance', value: 3.02, unit: 'Ω', entered: '3.02 Ω', subject: 'Heater element, front', takenBy: { name: expect.any(String) } });
 

@@ -19,8 +19,7 @@ afterAll(() => t.close());
 const routes = allRoutes({ env: {} } as never, 'test');
 const CONTROL_MESSAGE = /control character/i;
 const withIds = (path: string) => path.replace(/:(\w+)/g, (_m, name: string) => (name === 'key' ? 'capacity.implausible' : name === 'variant' ? 'thumb' : '1'));
-const send = (method: string, url: string, body: unknown) =>
-  method === 'get' ? admin.get(url) : (admin[method as 'post' | 'put' | 'patch'](url, body) as ReturnType<Agent['post']>);
+const send = (method: string, url: string, body: unknown) => (method === 'get' ? admin.get(url) : (admin[method as 'post' | 'put' | 'patch'](url, body) as ReturnType<Agent['post']>));
 
 describe('control characters in text', () => {
   const bodies = routes.filter((r) => r.spec.body && !r.spec.multipart);

@@ -40,14 +40,34 @@ const MODEL: CostModelBody = {
 };
 
 const PRICES = {
-  cell: { currency: 'USD', breaks: [{ minQty: 1, unitPrice: 2.5 }, { minQty: 1000, unitPrice: 2.16 }], source: 'quote', confidence: 'medium' },
+  cell: {
+    currency: 'USD',
+    breaks: [
+      { minQty: 1, unitPrice: 2.5 },
+      { minQty: 1000, unitPrice: 2.16 },
+    ],
+    source: 'quote',
+    confidence: 'medium',
+  },
   ic: {
     currency: 'CNY',
-    breaks: [{ minQty: 1, unitPrice: 3.12 }, { minQty: 1000, unitPrice: 2.34 }, { minQty: 5000, unitPrice: 1.95 }],
+    breaks: [
+      { minQty: 1, unitPrice: 3.12 },
+      { minQty: 1000, unitPrice: 2.34 },
+      { minQty: 5000, unitPrice: 1.95 },
+    ],
     source: 'catalogue',
     confidence: 'high',
   },
-  res: { currency: 'USD', breaks: [{ minQty: 100, unitPrice: 0.01 }, { minQty: 4000, unitPrice: 0.0054 }], source: 'catalogue', confidence: 'high' },
+  res: {
+    currency: 'USD',
+    breaks: [
+      { minQty: 100, unitPrice: 0.01 },
+      { minQty: 4000, unitPrice: 0.0054 },
+    ],
+    source: 'catalogue',
+    confidence: 'high',
+  },
   usb: { currency: 'GBP', breaks: [{ minQty: 500, unitPrice: 0.17 }], source: 'marketplace', confidence: 'low' },
 } as const;
 
@@ -63,7 +83,14 @@ beforeAll(async () => {
   // No part routes in this module: the parts are written straight to the database.
   const em = t.orm.em.fork();
   const engineer = await em.findOneOrFail(UserSchema, { email: 'engineer@splitcase.test' });
-  const device = em.create(DeviceSchema, { maker: 'Testbrook (invented)', model: 'Cost Cube 1', category: 'pocket-heater', retailPrice: 20, retailCurrency: 'GBP', priceSeenOn: '2026-11-01' } as never);
+  const device = em.create(DeviceSchema, {
+    maker: 'Testbrook (invented)',
+    model: 'Cost Cube 1',
+    category: 'pocket-heater',
+    retailPrice: 20,
+    retailCurrency: 'GBP',
+    priceSeenOn: '2026-11-01',
+  } as never);
   const published = em.create(TeardownSchema, { device, engineer, date: '2026-11-20', status: 'published', publishedAt: new Date() } as never);
   const draft = em.create(TeardownSchema, { device, engineer, date: '2026-11-21', status: 'draft' } as never);
   const part = (teardown: unknown, position: number, v: Record<string, unknown>) => em.create(PartSchema, { teardown, position, quantity: 1, ...v } as never);
@@ -116,8 +143,8 @@ describe('rates: the euro reference-rate XML import', () => {
     const other = await as.sourcing!.upload('/api/rates/import').attach('file', Buffer.from('<?xml version="1.0"?><catalogue><item sku="A1" price="2.00"/></catalogue>'), 'prices.xml');
     expect(other.status).toBe(400);
     expect(other.body.error.fields.file).toMatch(/not the euro reference-rate XML format: the root element must be gesmes:Envelope \(found <catalogue>\)/);
-    const noRates = await as.sourcing!
-      .upload('/api/rates/import')
+    const noRates = await as
+      .sourcing!.upload('/api/rates/import')
       .attach('file', Buffer.from('<gesmes:Envelope xmlns:gesmes="http://www.gesmes.org/xml/2002-08-01"><Cube><Cube time="2026-11-27"/></Cube></gesmes:Envelope>'), 'empty.xml');
     expect(noRates.status).toBe(400);
     expect(noRates.body.error.fields.file).toMatch(/Cube time="2026-11-27" has no Cube currency\/rate entries/);
@@ -148,10 +175,23 @@ describe('prices: who may set them, and bad input', () => {
 
   it('names the field of overlapping or unordered breaks, negative prices and an unknown currency, and saves nothing', async () => {
     const put = (body: unknown) => as.sourcing!.put(`/api/parts/${ids.cell}/price`, body);
-    const overlap = await put({ ...PRICES.cell, breaks: [{ minQty: 1, unitPrice: 2.5 }, { minQty: 1000, unitPrice: 2.2 }, { minQty: 1000, unitPrice: 2.1 }] });
+    const overlap = await put({
+      ...PRICES.cell,
+      breaks: [
+        { minQty: 1, unitPrice: 2.5 },
+        { minQty: 1000, unitPrice: 2.2 },
+        { minQty: 1000, unitPrice: 2.1 },
+      ],
+    });
     expect(overlap.status).toBe(400);
     expect(overlap.body.error.fields['breaks.2.minQty']).toMatch(/overlap or are out of order: 1000 comes after 1000/);
-    const unordered = await put({ ...PRICES.cell, breaks: [{ minQty: 1000, unitPrice: 2.16 }, { minQty: 10, unitPrice: 2.5 }] });
+    const unordered = await put({
+      ...PRICES.cell,
+      breaks: [
+        { minQty: 1000, unitPrice: 2.16 },
+        { minQty: 10, unitPrice: 2.5 },
+      ],
+    });
     expect(unordered.body.error.fields['breaks.1.minQty']).toMatch(/out of order: 10 comes after 1000/);
     const negative = await put({ ...PRICES.cell, breaks: [{ minQty: 1, unitPrice: -0.5 }] });
     expect(negative.status).toBe(400);
@@ -326,7 +366,16 @@ describe('GET /api/teardowns/:id/cost — a small BOM worked by hand [C]', () =>
     expect(after.rateDate).toBe('2026-11-28');
     expect(after.partsTotal - before.partsTotal).toBeCloseTo(0.0135, 12);
     // U1 at 1000 from 2.34 to 2.60 CNY: + 0.26 × 0.138461538 × 1.02 = +0.036720
-    await as.sourcing!.put(`/api/parts/${ids.ic}/price`, { ...PRICES.ic, breaks: [{ minQty: 1, unitPrice: 3.12 }, { minQty: 1000, unitPrice: 2.6 }, { minQty: 5000, unitPrice: 1.95 }] }).expect(200);
+    await as
+      .sourcing!.put(`/api/parts/${ids.ic}/price`, {
+        ...PRICES.ic,
+        breaks: [
+          { minQty: 1, unitPrice: 3.12 },
+          { minQty: 1000, unitPrice: 2.6 },
+          { minQty: 5000, unitPrice: 1.95 },
+        ],
+      })
+      .expect(200);
     const after2 = await cost(as.sourcing!, ids.published);
     expect(after2.partsTotal - after.partsTotal).toBeCloseTo(0.03672, 12);
     // Back to the fixture rates and the first price for the tests that follow.
@@ -373,12 +422,15 @@ describe('cost models', () => {
 
 describe('costed-BOM CSV export and price CSV import', () => {
   const exportCsv = async (a: Agent, id = ids.published) => {
-    const res = await a.get(`/api/teardowns/${id}/cost.csv?volume=1000&currency=USD`).buffer(true).parse((r, cb) => {
-      let data = '';
-      r.setEncoding('utf8');
-      r.on('data', (c: string) => (data += c));
-      r.on('end', () => cb(null, data));
-    });
+    const res = await a
+      .get(`/api/teardowns/${id}/cost.csv?volume=1000&currency=USD`)
+      .buffer(true)
+      .parse((r, cb) => {
+        let data = '';
+        r.setEncoding('utf8');
+        r.on('data', (c: string) => (data += c));
+        r.on('end', () => cb(null, data));
+      });
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/text\/csv/);
     expect(res.headers['content-disposition']).toMatch(/costed-bom-testbrook-invented-cost-cube-1-1000-USD\.csv/);
@@ -422,13 +474,32 @@ describe('costed-BOM CSV export and price CSV import', () => {
     const rows = parse(csv);
     rows[1]!.breaks = '1@3.00;1000@2.20;5000@1.80';
     Object.assign(rows[4]!, { currency: 'CNY', breaks: '1000@4.5', source: 'Estimate', confidence: 'LOW', price_date: '2026-11-15' });
-    const edited = Papa.unparse(rows.map((r) => ({ confidence: r.confidence, breaks: r.breaks, designators: r.designators, maker_part_number: r.maker_part_number, description: r.description, currency: r.currency, source: r.source, price_date: r.price_date })));
+    const edited = Papa.unparse(
+      rows.map((r) => ({
+        confidence: r.confidence,
+        breaks: r.breaks,
+        designators: r.designators,
+        maker_part_number: r.maker_part_number,
+        description: r.description,
+        currency: r.currency,
+        source: r.source,
+        price_date: r.price_date,
+      })),
+    );
     const preview = (await importCsv(as.sourcing!, edited, 'preview').expect(200)).body;
     expect(preview).toMatchObject({ mode: 'preview', saved: 0 });
     const u1 = preview.rows.find((r: { partId: number }) => r.partId === ids.ic);
     expect(u1.before.breaks).toEqual(PRICES.ic.breaks);
-    expect(u1.after.breaks).toEqual([{ minQty: 1, unitPrice: 3 }, { minQty: 1000, unitPrice: 2.2 }, { minQty: 5000, unitPrice: 1.8 }]);
-    expect(preview.rows.find((r: { partId: number }) => r.partId === ids.shell)).toMatchObject({ matchedBy: 'description', before: null, after: { currency: 'CNY', source: 'estimate', confidence: 'low', priceDate: '2026-11-15' } });
+    expect(u1.after.breaks).toEqual([
+      { minQty: 1, unitPrice: 3 },
+      { minQty: 1000, unitPrice: 2.2 },
+      { minQty: 5000, unitPrice: 1.8 },
+    ]);
+    expect(preview.rows.find((r: { partId: number }) => r.partId === ids.shell)).toMatchObject({
+      matchedBy: 'description',
+      before: null,
+      after: { currency: 'CNY', source: 'estimate', confidence: 'low', priceDate: '2026-11-15' },
+    });
     expect((await cost(as.sourcing!, ids.published)).unpricedPartIds).toEqual([ids.shell]);
 
     const applied = (await importCsv(as.sourcing!, edited, 'apply').expect(200)).body;
@@ -575,7 +646,15 @@ describe('implied margin with sales tax, unpriced lines, the price break on the 
     Object.assign(p2, { device: device.id, teardown: teardown.id, ic: ic.id, res: res.id, cell: cell.id });
     await as.sourcing!.put(`/api/teardowns/${p2.teardown}/cost-model`, FLAT).expect(200);
     await as.sourcing!.put(`/api/parts/${p2.ic}/price`, price([{ minQty: 1, unitPrice: 4 }])).expect(200);
-    await as.sourcing!.put(`/api/parts/${p2.res}/price`, price([{ minQty: 10, unitPrice: 0.1 }, { minQty: 2000, unitPrice: 0.05 }])).expect(200);
+    await as
+      .sourcing!.put(
+        `/api/parts/${p2.res}/price`,
+        price([
+          { minQty: 10, unitPrice: 0.1 },
+          { minQty: 2000, unitPrice: 0.05 },
+        ]),
+      )
+      .expect(200);
     await as.sourcing!.put(`/api/parts/${p2.cell}/price`, price([{ minQty: 1, unitPrice: 1.895 }])).expect(200);
   });
 

@@ -126,7 +126,9 @@ async function expectClean() {
 
 async function photoUpload(session: HttpSession, name: string): Promise<Response> {
   const form = new FormData();
-  const jpeg = await sharp({ create: { width: 64, height: 48, channels: 3, background: '#3d7a4a' } }).jpeg().toBuffer();
+  const jpeg = await sharp({ create: { width: 64, height: 48, channels: 3, background: '#3d7a4a' } })
+    .jpeg()
+    .toBuffer();
   form.append('file', new Blob([jpeg], { type: 'image/jpeg' }), name);
   return fetch(`${session.base}/api/teardowns/${teardownId}/photos`, {
     method: 'POST',
@@ -154,7 +156,12 @@ const signInEngineer = (c: Child) => signIn(c.base, 'engineer@splitcase.test', D
 beforeAll(async () => {
   const orm = await openOrm(env.dbPath);
   await migrate(orm);
-  await seedIfEmpty(orm, env, () => {}, SEED_STEPS.filter((s) => s.name === 'users' || s.name === 'workspace'));
+  await seedIfEmpty(
+    orm,
+    env,
+    () => {},
+    SEED_STEPS.filter((s) => s.name === 'users' || s.name === 'workspace'),
+  );
   const [row] = (await orm.em.fork().getConnection().execute('select min(id) as id from teardowns')) as { id: number }[];
   teardownId = row!.id;
   await orm.close();
@@ -224,7 +231,9 @@ describe('a bench-run upload killed half-way', () => {
       headers: { cookie: session.cookie, 'x-csrf-token': session.csrf, 'content-type': `multipart/form-data; boundary=${boundary}`, 'content-length': String(50 * 1024 * 1024) },
     });
     req.on('error', () => {});
-    req.write(`--${boundary}\r\nContent-Disposition: form-data; name="mapping"\r\n\r\n${MAPPING}\r\n--${boundary}\r\nContent-Disposition: form-data; name="file"; filename="big.csv"\r\nContent-Type: text/csv\r\n\r\n`);
+    req.write(
+      `--${boundary}\r\nContent-Disposition: form-data; name="mapping"\r\n\r\n${MAPPING}\r\n--${boundary}\r\nContent-Disposition: form-data; name="file"; filename="big.csv"\r\nContent-Type: text/csv\r\n\r\n`,
+    );
     const row = Buffer.from('0,4.1000,1.000\n'.repeat(70_000));
     for (let k = 0; k < 4; k++) req.write(row);
     // Wait until the server has written part of the file to its temporary path.

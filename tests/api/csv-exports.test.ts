@@ -45,12 +45,15 @@ beforeAll(async () => {
 afterAll(() => t.close());
 
 async function download(url: string): Promise<string[][]> {
-  const res = await admin.get(url).buffer(true).parse((r, cb) => {
-    let data = '';
-    r.setEncoding('utf8');
-    r.on('data', (c: string) => (data += c));
-    r.on('end', () => cb(null, data));
-  });
+  const res = await admin
+    .get(url)
+    .buffer(true)
+    .parse((r, cb) => {
+      let data = '';
+      r.setEncoding('utf8');
+      r.on('data', (c: string) => (data += c));
+      r.on('end', () => cb(null, data));
+    });
   expect(res.status, url).toBe(200);
   expect(res.headers['content-type']).toMatch(/^text\/csv/);
   const text = res.body as string;

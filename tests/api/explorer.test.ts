@@ -258,7 +258,12 @@ describe('search', () => {
     expect(await count('select count(*) as n from search_fts')).toBe(
       await count('select (select count(*) from findings) + (select count(*) from parts) + (select count(*) from teardowns) + (select count(*) from comments) as n'),
     );
-    for (const [type, table, offset] of [['finding', 'findings', 0], ['part', 'parts', 1], ['teardown', 'teardowns', 2], ['comment', 'comments', 3]] as const) {
+    for (const [type, table, offset] of [
+      ['finding', 'findings', 0],
+      ['part', 'parts', 1],
+      ['teardown', 'teardowns', 2],
+      ['comment', 'comments', 3],
+    ] as const) {
       expect(await count(`select count(*) as n from ${table} r left join search_fts s on s.rowid = r.id * 4 + ${offset} where s.type is not '${type}' or s.record_id != r.id`), table).toBe(0);
     }
     // The triggers survive migrations (a later migration that rebuilds one of these tables must re-create them).
@@ -278,7 +283,11 @@ describe('search', () => {
     const { id } = await addFinding(teardownId, 'Placeholder zymurgic text');
     await t.orm.em.fork().getConnection().execute('update findings set text = ? where id = ?', [fake, id]);
     const [item] = (await search('lead', 'q=zymurgic')).items;
-    expect(snippetParts(item!.snippet).filter((p) => p.hit).map((p) => p.text)).toEqual(['zymurgic']);
+    expect(
+      snippetParts(item!.snippet)
+        .filter((p) => p.hit)
+        .map((p) => p.text),
+    ).toEqual(['zymurgic']);
     expect(item!.snippet).toContain('<b>bold</b>');
   });
 });
@@ -352,7 +361,9 @@ describe('facets and filters', () => {
     }
     expect(r.facets.kind.safety).toBe(await count("select count(*) as n from findings where kind = 'safety'"));
     expect(r.facets.tag.thermal).toBe(await count("select count(*) as n from findings f, json_each(f.tags) j where j.value = 'thermal'"));
-    expect(r.facets.category['pocket-heater']).toBe(await count("select count(*) as n from findings f join teardowns t on t.id = f.teardown_id join devices d on d.id = t.device_id where d.category = 'pocket-heater'"));
+    expect(r.facets.category['pocket-heater']).toBe(
+      await count("select count(*) as n from findings f join teardowns t on t.id = f.teardown_id join devices d on d.id = t.device_id where d.category = 'pocket-heater'"),
+    );
     expect(r.facets.maker.Halvix).toBe(await count("select count(*) as n from findings f join teardowns t on t.id = f.teardown_id join devices d on d.id = t.device_id where d.maker = 'Halvix'"));
     expect(r.facets.status.draft).toBe(await count("select count(*) as n from findings f join teardowns t on t.id = f.teardown_id where t.status = 'draft'"));
     expect(r.facets.month['2026-10']).toBe(await count("select count(*) as n from findings f join teardowns t on t.id = f.teardown_id where t.date like '2026-10-%'"));
@@ -475,7 +486,12 @@ describe('roles', () => {
     const leadAll = await everything('lead', 'q=sensor');
     expect(viewerAll.length).toBeLessThan(leadAll.length);
     expect(viewerAll.every((i) => i.teardown.status === 'published')).toBe(true);
-    expect(viewerAll.map((i) => `${i.type}:${i.id}`).sort()).toEqual(leadAll.filter((i) => i.teardown.status === 'published').map((i) => `${i.type}:${i.id}`).sort());
+    expect(viewerAll.map((i) => `${i.type}:${i.id}`).sort()).toEqual(
+      leadAll
+        .filter((i) => i.teardown.status === 'published')
+        .map((i) => `${i.type}:${i.id}`)
+        .sort(),
+    );
     // A draft's comment ("repeat the capacity run") is the lead's to find, not the viewer's.
     expect((await search('lead', 'q=repeat+capacity')).total).toBeGreaterThan(0);
     expect((await search('viewer', 'q=repeat+capacity')).total).toBe(0);

@@ -67,8 +67,7 @@ async function snapshot() {
 }
 
 const raw = (a: Agent, path: string, form: { contentType: string; body: Buffer }) => a.agent.post(path).set('X-CSRF-Token', a.csrf).set('Content-Type', form.contentType).send(form.body);
-const photo = (buffer: Buffer, filename: string, contentType = 'image/jpeg') =>
-  as.engineer.upload(`/api/teardowns/${draftId}/photos`).attach('file', buffer, { filename, contentType });
+const photo = (buffer: Buffer, filename: string, contentType = 'image/jpeg') => as.engineer.upload(`/api/teardowns/${draftId}/photos`).attach('file', buffer, { filename, contentType });
 const dischargeMapping = JSON.stringify({ kind: 'discharge', time: { column: 'elapsed_s', unit: 's' }, voltage: { column: 'volts', unit: 'V' }, current: { column: 'amps', unit: 'A' } });
 const runLog = (buffer: Buffer, filename = 'log.csv') =>
   as.engineer.upload(`/api/teardowns/${draftId}/runs`).field('mapping', dischargeMapping).attach('file', buffer, { filename, contentType: 'text/csv' });
@@ -82,12 +81,15 @@ const mappingPart = `--${BOUNDARY}\r\nContent-Disposition: form-data; name="mapp
 
 /** The costed-BOM export of the published teardown, parsed (the price import reads the same columns). */
 async function costRows(): Promise<Record<string, string>[]> {
-  const res = await as.sourcing.get(`/api/teardowns/${publishedId}/cost.csv?volume=1000`).buffer(true).parse((r, cb) => {
-    let data = '';
-    r.setEncoding('utf8');
-    r.on('data', (c: string) => (data += c));
-    r.on('end', () => cb(null, data));
-  });
+  const res = await as.sourcing
+    .get(`/api/teardowns/${publishedId}/cost.csv?volume=1000`)
+    .buffer(true)
+    .parse((r, cb) => {
+      let data = '';
+      r.setEncoding('utf8');
+      r.on('data', (c: string) => (data += c));
+      r.on('end', () => cb(null, data));
+    });
   expect(res.status).toBe(200);
   return Papa.parse<Record<string, string>>((res.body as string).replace(/^\uFEFF/, '').trim(), { header: true }).data;
 }
@@ -190,7 +192,13 @@ const CASES: Case[] = [
   },
   {
     name: 'photo: a GIF named .jpg (the message says which types are accepted)',
-    send: async () => photo(await sharp({ create: { width: 10, height: 10, channels: 3, background: '#ff0000' } }).gif().toBuffer(), 'anim.jpg'),
+    send: async () =>
+      photo(
+        await sharp({ create: { width: 10, height: 10, channels: 3, background: '#ff0000' } })
+          .gif()
+          .toBuffer(),
+        'anim.jpg',
+      ),
     status: 415,
     code: 'unsupported_media_type',
     message: /GIF.*JPEG, PNG, WebP/,
@@ -371,7 +379,7 @@ const CASES: Case[] = [
     message: /control character/,
   },
   {
-    name: "run: a NUL in the file name, percent-encoded, leaves no file in the incoming folder",
+    name: 'run: a NUL in the file name, percent-encoded, leaves no file in the incoming folder',
     send: async () =>
       raw(as.engineer, `/api/teardowns/${draftId}/runs`, {
         contentType: `multipart/form-data; boundary=${BOUNDARY}`,
@@ -557,7 +565,6 @@ const CASES: Case[] = [
     code: 'validation_failed',
     field: 'file',
   },
-
 ];
 
 beforeAll(async () => {
@@ -587,30 +594,34 @@ describe('the hostile-input corpus', () => {
   });
 
   for (const c of CASES) {
-    it(c.name, async () => {
-      const before = await snapshot();
-      const res = await c.send();
-      expect(res.status, JSON.stringify(res.body).slice(0, 400)).toBe(c.status);
-      if (c.status >= 400) {
-        // The standard error shape, and nothing more (no stack, no driver message).
-        const body = res.body as { error: { code: string; message: string; fields?: Record<string, string> } };
-        expect(Object.keys(body)).toEqual(['error']);
-        expect(typeof body.error.message).toBe('string');
-        expect(Object.keys(body.error).every((k) => ['code', 'message', 'fields', 'details'].includes(k))).toBe(true);
-        expect(JSON.stringify(body)).not.toMatch(/\bat .*\.(ts|js):\d+/);
-        if (c.code) expect(body.error.code).toBe(c.code);
-        if (c.field) expect(body.error.fields, JSON.stringify(body.error)).toHaveProperty([c.field]);
-        if (c.message) expect(body.error.message + ' ' + JSON.stringify(body.error.fields ?? {})).toMatch(c.message);
-      }
-      await c.neutralised?.(res);
-      const after = await snapshot();
-      if (!c.neutralised) {
-        expect(after).toEqual(before);
-      } else {
-        // Whatever was kept has been removed again: the same rows and files as before.
-        expect(after.rows).toEqual(before.rows);
-        expect(after.files).toEqual(before.files);
-      }
-    }, 60_000);
+    it(
+      c.name,
+      async () => {
+        const before = await snapshot();
+        const res = await c.send();
+        expect(res.status, JSON.stringify(res.body).slice(0, 400)).toBe(c.status);
+        if (c.status >= 400) {
+          // The standard error shape, and nothing more (no stack, no driver message).
+          const body = res.body as { error: { code: string; message: string; fields?: Record<string, string> } };
+          expect(Object.keys(body)).toEqual(['error']);
+          expect(typeof body.error.message).toBe('string');
+          expect(Object.keys(body.error).every((k) => ['code', 'message', 'fields', 'details'].includes(k))).toBe(true);
+          expect(JSON.stringify(body)).not.toMatch(/\bat .*\.(ts|js):\d+/);
+          if (c.code) expect(body.error.code).toBe(c.code);
+          if (c.field) expect(body.error.fields, JSON.stringify(body.error)).toHaveProperty([c.field]);
+          if (c.message) expect(body.error.message + ' ' + JSON.stringify(body.error.fields ?? {})).toMatch(c.message);
+        }
+        await c.neutralised?.(res);
+        const after = await snapshot();
+        if (!c.neutralised) {
+          expect(after).toEqual(before);
+        } else {
+          // Whatever was kept has been removed again: the same rows and files as before.
+          expect(after.rows).toEqual(before.rows);
+          expect(after.files).toEqual(before.files);
+        }
+      },
+      60_000,
+    );
   }
 });

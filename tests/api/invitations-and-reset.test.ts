@@ -47,7 +47,10 @@ describe('invitations, end to end through the capture SMTP server', () => {
     const admin = await t.as('admin');
     await admin.post('/api/invitations', { email: 'late@example.test', role: 'viewer' }).expect(201);
     const token = linkIn((await t.waitForMail('late@example.test')).text).searchParams.get('token')!;
-    await t.orm.em.fork().getConnection().execute(`update invitations set expires_at = ? where email = 'late@example.test'`, [new Date(Date.now() - 1000).toISOString()]);
+    await t.orm.em
+      .fork()
+      .getConnection()
+      .execute(`update invitations set expires_at = ? where email = 'late@example.test'`, [new Date(Date.now() - 1000).toISOString()]);
     const res = await (await t.anonymous()).post('/api/auth/invitations/accept', { token, name: 'Late Comer', password: 'a-long-password-3' }).expect(410);
     expect(res.body.error.code).toBe('token_expired');
     const users = (await admin.get('/api/users')).body.users as { email: string }[];
@@ -97,7 +100,10 @@ describe('password reset by e-mail link', () => {
     const before = (await t.orm.em.fork().getConnection().execute(`select max(id) as id from outbox_messages`))[0]?.id ?? 0;
     await anon.post('/api/auth/password-reset/request', { email: 'lead@splitcase.test' }).expect(202);
     const token = linkIn((await t.waitForMail('lead@splitcase.test', before)).text).searchParams.get('token')!;
-    await t.orm.em.fork().getConnection().execute(`update password_reset_tokens set expires_at = ?`, [new Date(Date.now() - 1000).toISOString()]);
+    await t.orm.em
+      .fork()
+      .getConnection()
+      .execute(`update password_reset_tokens set expires_at = ?`, [new Date(Date.now() - 1000).toISOString()]);
     const res = await anon.post('/api/auth/password-reset/confirm', { token, password: 'never-applied-pass' }).expect(410);
     expect(res.body.error.code).toBe('token_expired');
     await (await t.anonymous()).post('/api/auth/login', { email: 'lead@splitcase.test', password: 'test-demo-password' }).expect(200);

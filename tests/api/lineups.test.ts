@@ -314,7 +314,12 @@ describe('the comparison', () => {
     expect(c.pareto.x).toBe('retailPrice');
     expect(c.pareto.y).toBe('packWh');
     expect(c.pareto.deviceIds).toEqual([dev.breeze!.id, dev.slimvolt!.id, dev.pellam10!.id]);
-    expect(c.pareto.points.filter((p) => !p.onFrontier).map((p) => p.deviceId).sort()).toEqual([dev.duo!.id, dev.pocketsun!.id].sort());
+    expect(
+      c.pareto.points
+        .filter((p) => !p.onFrontier)
+        .map((p) => p.deviceId)
+        .sort(),
+    ).toEqual([dev.duo!.id, dev.pocketsun!.id].sort());
     expect(c.pareto.leftOut).toEqual([]);
   });
 
@@ -327,7 +332,13 @@ describe('the comparison', () => {
     //   Pocketsun S   7.4 / 0.036    = 206 Wh/kg,  Ah / 2
     //   Breeze Pocket 4.44 / 0.040   = 111 Wh/kg,  Ah / 2
     const ratio: Record<string, number> = {};
-    for (const [key, label] of [['pellam10', 10], ['slimvolt', 5], ['duo', 5.2], ['pocketsun', 2], ['breeze', 2]] as const) {
+    for (const [key, label] of [
+      ['pellam10', 10],
+      ['slimvolt', 5],
+      ['duo', 5.2],
+      ['pocketsun', 2],
+      ['breeze', 2],
+    ] as const) {
       ratio[key] = (await dischargeAh(as.lead!, dev[key]!.latestTeardown!.id)).ah / label;
     }
     // The demo runs give Pocketsun 1.93 / 2 ≈ 0.963 and Stackcell 9.63 / 10 ≈ 0.962; every other
@@ -368,7 +379,8 @@ describe('the comparison', () => {
 
   it('missing values are null with a reason, never 0, and are left out of the score (weights renormalised)', async () => {
     // An invented device with a price but no teardown yet, and one with neither.
-    const priced = (await as.engineer!.post('/api/devices', { maker: 'Testbrook (invented)', model: 'Unopened 12', category: 'power-bank', retailPrice: 12, currency: 'USD' }).expect(201)).body.device as DeviceDto;
+    const priced = (await as.engineer!.post('/api/devices', { maker: 'Testbrook (invented)', model: 'Unopened 12', category: 'power-bank', retailPrice: 12, currency: 'USD' }).expect(201)).body
+      .device as DeviceDto;
     const bare = (await as.engineer!.post('/api/devices', { maker: 'Testbrook (invented)', model: 'Bare 0', category: 'pocket-heater' }).expect(201)).body.device as DeviceDto;
     // A teardown with nothing recorded yet: figures missing, findings counted (zero is a count here).
     const td = (await as.engineer!.post('/api/teardowns', { deviceId: bare.id }).expect(201)).body.teardown as { id: number };
@@ -416,7 +428,8 @@ describe('the comparison', () => {
 
   it('the implied margin is missing with the reason while a line of the teardown is unpriced, and a number once all are priced', async () => {
     // An invented device with a two-line BOM, one line priced.
-    const d = (await as.engineer!.post('/api/devices', { maker: 'Testbrook (invented)', model: 'Half-priced 2', category: 'power-bank', retailPrice: 24.99, currency: 'USD' }).expect(201)).body.device as DeviceDto;
+    const d = (await as.engineer!.post('/api/devices', { maker: 'Testbrook (invented)', model: 'Half-priced 2', category: 'power-bank', retailPrice: 24.99, currency: 'USD' }).expect(201)).body
+      .device as DeviceDto;
     const td = (await as.engineer!.post('/api/teardowns', { deviceId: d.id }).expect(201)).body.teardown as { id: number };
     const em = t.orm.em.fork();
     const part = (position: number, v: Record<string, unknown>) => em.create(PartSchema, { teardown: td.id, position, quantity: 1, mount: 'manual', ...v } as never);

@@ -30,7 +30,9 @@ const parsed = () => lines.map((l) => JSON.parse(l) as Line);
 /** The request lines logged since `from`, once `count` of them are there (the line is written when the response has gone). */
 async function requestLines(from: number, count: number): Promise<Line[]> {
   for (let k = 0; k < 100; k++) {
-    const found = parsed().slice(from).filter((l) => 'route' in l);
+    const found = parsed()
+      .slice(from)
+      .filter((l) => 'route' in l);
     if (found.length >= count) return found;
     await new Promise((r) => setTimeout(r, 20));
   }
@@ -54,9 +56,15 @@ describe('server logs', () => {
       expect(line.msg).toBe(`${line.method} ${line.route} ${line.status}`);
     }
     // One line per request.
-    expect(parsed().slice(from).filter((l) => 'route' in l)).toHaveLength(2);
+    expect(
+      parsed()
+        .slice(from)
+        .filter((l) => 'route' in l),
+    ).toHaveLength(2);
     const text = lines.slice(from).join('\n');
-    const cookie = String(login.headers['set-cookie']?.[0] ?? '').split(';')[0]!.split('=')[1]!;
+    const cookie = String(login.headers['set-cookie']?.[0] ?? '')
+      .split(';')[0]!
+      .split('=')[1]!;
     for (const secret of [DEMO_PASSWORD, email, csrf, cookie, '987654']) expect(text, secret).not.toContain(secret);
     expect(text).not.toMatch(/cookie|x-csrf-token|"headers"|"body"/i);
   });

@@ -24,10 +24,21 @@ async function heaterTeardown() {
   const device = (await eng.post('/api/devices', { maker: 'Testwright', model: `Modes ${Math.random().toString(36).slice(2, 8)}`, category: 'pocket-heater' }).expect(201)).body.device;
   const td = (await eng.post('/api/teardowns', { deviceId: device.id }).expect(201)).body.teardown;
   await eng.put(`/api/teardowns/${td.id}/pack`, { chemistry: 'li-ion', nominalVolts: '3.7 V', maxVolts: '4.2 V', capacityAh: '2700 mAh', protection: true }).expect(200);
-  const boost = (await eng.post(`/api/teardowns/${td.id}/converters`, { topology: 'boost', role: 'output', inputVolts: '3.7 V', outputVolts: '5 V', efficiency: '88 %', efficiencySource: 'measured' }).expect(201)).body.converter;
+  const boost = (
+    await eng.post(`/api/teardowns/${td.id}/converters`, { topology: 'boost', role: 'output', inputVolts: '3.7 V', outputVolts: '5 V', efficiency: '88 %', efficiencySource: 'measured' }).expect(201)
+  ).body.converter;
   const heater = (
     await eng
-      .post(`/api/teardowns/${td.id}/loads`, { kind: 'heater', label: 'Heater pads', resistanceOhms: '3R0', supplyVolts: '3.65 V', count: 2, connection: 'parallel', heatedAreaM2: '100 cm²', surfaceMaterial: 'plastic' })
+      .post(`/api/teardowns/${td.id}/loads`, {
+        kind: 'heater',
+        label: 'Heater pads',
+        resistanceOhms: '3R0',
+        supplyVolts: '3.65 V',
+        count: 2,
+        connection: 'parallel',
+        heatedAreaM2: '100 cm²',
+        surfaceMaterial: 'plastic',
+      })
       .expect(201)
   ).body.load;
   const usb = (await eng.post(`/api/teardowns/${td.id}/loads`, { kind: 'usb-output', label: 'USB-A', currentAmps: '1 A', converterId: boost.id }).expect(201)).body.load;
@@ -112,7 +123,17 @@ describe('POST/PATCH/DELETE /api/teardowns/:id/modes (the contract)', () => {
     expect(await bad({ name: 'X', loads: [{ loadId: 999999, duty: 1 }] })).toEqual({ 'loads.0.loadId': 'Choose a load of this teardown' });
     expect(await bad({ name: 'X', loads: [{ loadId: other.heater, duty: 1 }] })).toEqual({ 'loads.0.loadId': 'Choose a load of this teardown' });
     expect((await bad({ name: 'X', loads: [{ loadId: td.heater, duty: '150 %' }] }))['loads.0.duty']).toMatch(/^Duty: at most 100 %/);
-    expect((await bad({ name: 'X', loads: [{ loadId: td.heater, duty: 1 }, { loadId: td.heater, duty: 0.5 }] }))['loads.1.loadId']).toMatch(/already in the mode/);
+    expect(
+      (
+        await bad({
+          name: 'X',
+          loads: [
+            { loadId: td.heater, duty: 1 },
+            { loadId: td.heater, duty: 0.5 },
+          ],
+        })
+      )['loads.1.loadId'],
+    ).toMatch(/already in the mode/);
     expect(await bad({ name: 'X', loads: [], quiescentAmps: '5 V' })).toHaveProperty('quiescentAmps');
     await eng.post(`/api/teardowns/${td.id}/modes`, { name: 'High', loads: [{ loadId: td.heater, duty: 1 }] }).expect(201);
     expect((await bad({ name: ' high ', loads: [] })).name).toMatch(/already has a mode called "high"/);
@@ -155,7 +176,9 @@ describe('the figures the bench expects, through the records', () => {
     const amps = 2.433333 + 5 / 0.88 / 3.7;
     expect(fig(r, 'pack.terminalVolts')!.value as number).toBeCloseTo(3.7 - amps * 0.05, 4);
     expect(fig(r, 'pack.terminalVolts')!.inputs.find((i) => i.key === 'source')!.value).toMatch(/two DC-method readings/);
-    const wrong = await eng.put(`/api/teardowns/${td.id}/pack`, { chemistry: 'li-ion', nominalVolts: 3.7, capacityAh: 2.7, internalResistanceReadings: { lowAmps: 3, lowVolts: 3.9, highAmps: 0.6, highVolts: 3.8 } }).expect(400);
+    const wrong = await eng
+      .put(`/api/teardowns/${td.id}/pack`, { chemistry: 'li-ion', nominalVolts: 3.7, capacityAh: 2.7, internalResistanceReadings: { lowAmps: 3, lowVolts: 3.9, highAmps: 0.6, highVolts: 3.8 } })
+      .expect(400);
     expect(wrong.body.error.fields).toHaveProperty('internalResistanceReadings.highAmps');
   });
 

@@ -20,10 +20,11 @@ afterAll(() => t.close());
 const addPart = async (designators: string, description: string, marking: string): Promise<PartDto> =>
   (await eng.post(`/api/teardowns/${teardownId}/parts`, { designators, category: 'passive', description, quantity: 1, mount: 'smt', marking }).expect(201)).body.part;
 
-const bench = async (code: string, kind: 'resistor' | 'capacitor'): Promise<MarkingToolResponse> =>
-  (await eng.post('/api/tools/marking', { code, kind }).expect(200)).body;
+const bench = async (code: string, kind: 'resistor' | 'capacitor'): Promise<MarkingToolResponse> => (await eng.post('/api/tools/marking', { code, kind }).expect(200)).body;
 
-const summary = (r: Pick<DecodedReadingDto, 'rank' | 'value' | 'unit' | 'scheme' | 'schemeLabel' | 'schemeShortLabel' | 'rankReason'> & { tolerance: { text: string; letter: string | null } | null }) => ({
+const summary = (
+  r: Pick<DecodedReadingDto, 'rank' | 'value' | 'unit' | 'scheme' | 'schemeLabel' | 'schemeShortLabel' | 'rankReason'> & { tolerance: { text: string; letter: string | null } | null },
+) => ({
   rank: r.rank,
   value: r.value,
   unit: r.unit,
@@ -41,14 +42,59 @@ describe('a part decodes its marking exactly as the bench decoder does', () => {
     ['R1', 'Chip resistor', '4K7', 'resistor', [['letter-and-digit', 4700, null]]],
     ['R2', 'Chip resistor', '10K', 'resistor', [['letter-and-digit', 10000, null]]],
     // 10R = 10 Ω R-notation [S: IEC 60062], then EIA-96 index 10 = 124 × 0.01 = 1.24 Ω [S: EIA-96; C]
-    ['R3', 'Chip resistor', '10R', 'resistor', [['letter-and-digit', 10, null], ['eia-96', 1.24, null]]],
+    [
+      'R3',
+      'Chip resistor',
+      '10R',
+      'resistor',
+      [
+        ['letter-and-digit', 10, null],
+        ['eia-96', 1.24, null],
+      ],
+    ],
     // 47R = 47 Ω [S], then EIA-96 index 47 = 301 × 0.01 = 3.01 Ω [S; C]
-    ['R4', 'Chip resistor', '47R', 'resistor', [['letter-and-digit', 47, null], ['eia-96', 3.01, null]]],
+    [
+      'R4',
+      'Chip resistor',
+      '47R',
+      'resistor',
+      [
+        ['letter-and-digit', 47, null],
+        ['eia-96', 3.01, null],
+      ],
+    ],
     // 102K = 1 kΩ ±10 % (3-digit code, letter K) [S: IEC 60062 letters], then 102 kΩ (letter-and-digit) [S]; order [CP]
-    ['R5', 'Chip resistor', '102K', 'resistor', [['three-digit', 1000, '±10 %'], ['letter-and-digit', 102000, null]]],
+    [
+      'R5',
+      'Chip resistor',
+      '102K',
+      'resistor',
+      [
+        ['three-digit', 1000, '±10 %'],
+        ['letter-and-digit', 102000, null],
+      ],
+    ],
     // 104P = 100 nF +100/−0 % [S: IEC 60062 capacitor P], then 104 pF; 104N = 100 nF ±30 % [S: N], then 104 nF
-    ['C1', 'Ceramic capacitor', '104P', 'capacitor', [['three-digit', 1e-7, '+100 / −0 %'], ['letter-decimal', 104e-12, null]]],
-    ['C2', 'Ceramic capacitor', '104N', 'capacitor', [['three-digit', 1e-7, '±30 %'], ['letter-decimal', 104e-9, null]]],
+    [
+      'C1',
+      'Ceramic capacitor',
+      '104P',
+      'capacitor',
+      [
+        ['three-digit', 1e-7, '+100 / −0 %'],
+        ['letter-decimal', 104e-12, null],
+      ],
+    ],
+    [
+      'C2',
+      'Ceramic capacitor',
+      '104N',
+      'capacitor',
+      [
+        ['three-digit', 1e-7, '±30 %'],
+        ['letter-decimal', 104e-9, null],
+      ],
+    ],
   ] as const)('%s %s marked "%s"', async (designators, description, marking, kind, expected) => {
     const part = await addPart(designators, description, marking);
     const tool = await bench(marking, kind);
@@ -80,7 +126,9 @@ describe('a part decodes its marking exactly as the bench decoder does', () => {
   });
 
   it('the CSV preview and the export use the same first reading', async () => {
-    const preview = await eng.post(`/api/teardowns/${teardownId}/parts/import?dryRun=1`, { csv: 'Designators,Category,Description,Marking\nR30,passive,Chip resistor,10R\nC30,passive,Ceramic capacitor,104N\n' }).expect(200);
+    const preview = await eng
+      .post(`/api/teardowns/${teardownId}/parts/import?dryRun=1`, { csv: 'Designators,Category,Description,Marking\nR30,passive,Chip resistor,10R\nC30,passive,Ceramic capacitor,104N\n' })
+      .expect(200);
     const [r, c] = preview.body.rows;
     expect(r.part).toMatchObject({ decodedValue: 10, decodedUnit: 'Ω' });
     expect(r.part.decodedReadings.map((x: DecodedReadingDto) => x.scheme)).toEqual(['letter-and-digit', 'eia-96']);

@@ -193,7 +193,15 @@ const cases = (): Record<string, PatchCase> => ({
   'PATCH /api/lineups/:id': {
     url: () => `/api/lineups/${d.lineups.draft}`,
     read: async (a) => (await get(a, `/api/lineups/${d.lineups.draft}`)).lineup,
-    values: { name: 'Lineup from the PATCH walk', description: 'Described by the walk', currency: 'EUR', weights: { packWh: 4 }, mode: { rule: 'named', name: 'High' }, deviceIds: [d.draft.device, d.published.device], status: 'published' },
+    values: {
+      name: 'Lineup from the PATCH walk',
+      description: 'Described by the walk',
+      currency: 'EUR',
+      weights: { packWh: 4 },
+      mode: { rule: 'named', name: 'High' },
+      deviceIds: [d.draft.device, d.published.device],
+      status: 'published',
+    },
     notSent: ['version'],
     derived: { deviceIds: ['devices', 'hiddenDevices'], status: ['publishedAt', 'publishedBy', 'permissions'] },
   },
@@ -234,7 +242,7 @@ describe('a PATCH changes only what it is sent', () => {
       const notSent = c.notSent ?? [];
       expect(Object.keys(c.values).sort(), `values for every field of the body of ${key}`).toEqual(shape.filter((k) => !notSent.includes(k)).sort());
       for (const [field, value] of Object.entries(c.values)) {
-                const before = await c.read(a);
+        const before = await c.read(a);
         const body = { ...(c.extra?.(before) ?? {}), [field]: value };
         const res = await a.patch(c.url(), body).set('X-Confirm-Unpublish', 'yes');
         expect(res.status, `${key} with ${JSON.stringify(body)}: ${JSON.stringify(res.body)}`).toBe(200);

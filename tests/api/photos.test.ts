@@ -28,7 +28,9 @@ async function orientation6Jpeg() {
 async function bigJpeg(side: number) {
   const raw = Buffer.alloc(side * side * 3);
   for (let i = 0; i < raw.length; i++) raw[i] = (i * 2654435761) >>> 24;
-  return sharp(raw, { raw: { width: side, height: side, channels: 3 } }).jpeg({ quality: 95 }).toBuffer();
+  return sharp(raw, { raw: { width: side, height: side, channels: 3 } })
+    .jpeg({ quality: 95 })
+    .toBuffer();
 }
 
 // ---- helpers ---------------------------------------------------------------------------------
@@ -37,10 +39,7 @@ let t: TestApp;
 let engineer: Agent;
 
 async function teardownIdOf(app: TestApp, model: string): Promise<number> {
-  const rows = (await app.orm.em
-    .fork()
-    .getConnection()
-    .execute('select t.id from teardowns t join devices d on d.id = t.device_id where d.model = ?', [model])) as { id: number }[];
+  const rows = (await app.orm.em.fork().getConnection().execute('select t.id from teardowns t join devices d on d.id = t.device_id where d.model = ?', [model])) as { id: number }[];
   if (!rows[0]) throw new Error(`No demo teardown for ${model}`);
   return rows[0].id;
 }
@@ -48,10 +47,14 @@ async function teardownIdOf(app: TestApp, model: string): Promise<number> {
 async function insertPart(app: TestApp, teardownId: number, description: string, category = 'ic'): Promise<number> {
   const conn = app.orm.em.fork().getConnection();
   const now = new Date().toISOString();
-  await conn.execute(
-    'insert into parts (teardown_id, position, category, description, quantity, mount, created_at, updated_at) values (?, 0, ?, ?, 1, ?, ?, ?)',
-    [teardownId, category, description, 'smt', now, now],
-  );
+  await conn.execute('insert into parts (teardown_id, position, category, description, quantity, mount, created_at, updated_at) values (?, 0, ?, ?, 1, ?, ?, ?)', [
+    teardownId,
+    category,
+    description,
+    'smt',
+    now,
+    now,
+  ]);
   const rows = (await conn.execute('select max(id) as id from parts')) as { id: number }[];
   return rows[0]!.id;
 }
@@ -61,11 +64,14 @@ const uploadAs = (agent: Agent, teardownId: number, buffer: Buffer, filename: st
 
 const binary = (res: { body: unknown }) => res.body as Buffer;
 const getFile = (agent: Agent, url: string) =>
-  agent.get(url).buffer(true).parse((res, cb) => {
-    const chunks: Buffer[] = [];
-    res.on('data', (c: Buffer) => chunks.push(c));
-    res.on('end', () => cb(null, Buffer.concat(chunks)));
-  });
+  agent
+    .get(url)
+    .buffer(true)
+    .parse((res, cb) => {
+      const chunks: Buffer[] = [];
+      res.on('data', (c: Buffer) => chunks.push(c));
+      res.on('end', () => cb(null, Buffer.concat(chunks)));
+    });
 
 const photoDir = (app: TestApp) => join(app.env.uploadsDir, 'photos');
 const storageFolders = (app: TestApp) => (existsSync(photoDir(app)) ? readdirSync(photoDir(app)) : []);
@@ -83,7 +89,10 @@ afterAll(() => t?.close());
 
 describe('upload', () => {
   it('stores a JPEG and a PNG with thumbnail and display image under random names', async () => {
-    const jpg = await uploadAs(engineer, draftId, await jpegFixture(2400, 1800), 'board top.jpg').field('caption', 'Main board, top').field('layer', '7').expect(201);
+    const jpg = await uploadAs(engineer, draftId, await jpegFixture(2400, 1800), 'board top.jpg')
+      .field('caption', 'Main board, top')
+      .field('layer', '7')
+      .expect(201);
     const photo = jpg.body.photo as PhotoDto;
     expect(photo).toMatchObject({ teardownId: draftId, name: 'board top.jpg', mime: 'image/jpeg', width: 2400, height: 1800, caption: 'Main board, top', layer: 7, step: 1 });
     expect(photo.urls.thumb).toBe(`/api/photos/${photo.id}/thumb`);
@@ -100,7 +109,9 @@ describe('upload', () => {
     expect(original.headers['content-type']).toBe('image/jpeg');
     expect((await sharp(binary(original)).metadata()).width).toBe(2400);
 
-    const png = await uploadAs(engineer, draftId, await pngFixture(), 'cell-pack.png', 'image/png').field('layer', '7').expect(201);
+    const png = await uploadAs(engineer, draftId, await pngFixture(), 'cell-pack.png', 'image/png')
+      .field('layer', '7')
+      .expect(201);
     expect(png.body.photo).toMatchObject({ mime: 'image/png', width: 64, height: 48, layer: 7, step: 2 });
     // A small image is not enlarged.
     const pngThumb = await sharp(binary(await getFile(engineer, png.body.photo.urls.thumb).expect(200))).metadata();
@@ -121,8 +132,13 @@ describe('upload', () => {
     const webp = await solid(50, 50, '#4fa89f').webp().toBuffer();
     const res = await uploadAs(engineer, otherDraftId, webp, 'x.webp', 'image/webp').field('layer', '1').field('step', '5').expect(201);
     expect(res.body.photo.mime).toBe('image/webp');
-    await uploadAs(engineer, otherDraftId, await jpegFixture(), 'a.jpg').field('layer', '1').field('step', '2').expect(201);
-    await uploadAs(engineer, otherDraftId, await jpegFixture(), 'b.jpg').field('layer', '0').expect(400);
+    await uploadAs(engineer, otherDraftId, await jpegFixture(), 'a.jpg')
+      .field('layer', '1')
+      .field('step', '2')
+      .expect(201);
+    await uploadAs(engineer, otherDraftId, await jpegFixture(), 'b.jpg')
+      .field('layer', '0')
+      .expect(400);
     const list = (await engineer.get(`/api/teardowns/${otherDraftId}/photos`).expect(200)).body.photos as PhotoDto[];
     const order = list.map((p) => [p.layer, p.step]);
     expect(order).toEqual([...order].sort((a, b) => a[0]! - b[0]! || a[1]! - b[1]!));
@@ -155,7 +171,10 @@ describe('upload refusals', () => {
   it('answers 400 naming the field when no file is sent, or under another field name', async () => {
     const none = await engineer.upload(`/api/teardowns/${draftId}/photos`).field('caption', 'x').expect(400);
     expect(none.body.error.fields).toHaveProperty('file');
-    await engineer.upload(`/api/teardowns/${draftId}/photos`).attach('photo', await jpegFixture(), 'a.jpg').expect(400);
+    await engineer
+      .upload(`/api/teardowns/${draftId}/photos`)
+      .attach('photo', await jpegFixture(), 'a.jpg')
+      .expect(400);
   });
 
   it('keeps nothing when a derivative cannot be written', async () => {
@@ -250,14 +269,21 @@ describe('who may upload and see', () => {
     const id = await teardownIdOf(t, 'Slimvolt 5');
     const refused = await uploadAs(engineer, id, await jpegFixture(), 'x.jpg').expect(409);
     expect(refused.body.error.details).toEqual({ reason: 'published' });
-    await uploadAs(engineer, id, await jpegFixture(), 'x.jpg').set(CONFIRM_UNPUBLISH_HEADER, 'yes').expect(201);
+    await uploadAs(engineer, id, await jpegFixture(), 'x.jpg')
+      .set(CONFIRM_UNPUBLISH_HEADER, 'yes')
+      .expect(201);
     expect((await engineer.get(`/api/teardowns/${id}`).expect(200)).body.teardown.status).toBe('draft');
   });
 });
 
 describe('caption, layer, step and delete', () => {
   it('edits the caption, layer and step, validates them, and records the change', async () => {
-    const photo = (await uploadAs(engineer, draftId, await jpegFixture(), 'edit-me.jpg').field('layer', '2').field('step', '9').expect(201)).body.photo as PhotoDto;
+    const photo = (
+      await uploadAs(engineer, draftId, await jpegFixture(), 'edit-me.jpg')
+        .field('layer', '2')
+        .field('step', '9')
+        .expect(201)
+    ).body.photo as PhotoDto;
     const res = await engineer.patch(`/api/photos/${photo.id}`, { caption: '  Charger IC and inductor  ', layer: 3, step: 4 }).expect(200);
     expect(res.body.photo).toMatchObject({ caption: 'Charger IC and inductor', layer: 3, step: 4 });
     const cleared = await engineer.patch(`/api/photos/${photo.id}`, { caption: '' }).expect(200);
@@ -380,17 +406,17 @@ describe('callouts', () => {
 describe('demo photos', () => {
   it('gives every demo teardown 2–4 processed illustrations with pins inside the picture', async () => {
     const conn = t.orm.em.fork().getConnection();
-    const perTeardown = (await conn.execute(
-      "select teardown_id, count(*) as n from photos where original_name like 'demo-%' group by teardown_id",
-    )) as { teardown_id: number; n: number }[];
+    const perTeardown = (await conn.execute("select teardown_id, count(*) as n from photos where original_name like 'demo-%' group by teardown_id")) as { teardown_id: number; n: number }[];
     expect(perTeardown).toHaveLength(DEMO_DEVICES.length);
     for (const row of perTeardown) {
       expect(row.n).toBeGreaterThanOrEqual(2);
       expect(row.n).toBeLessThanOrEqual(4);
     }
-    const pins = (await conn.execute(
-      "select c.x, c.y, c.label, c.number from callouts c join photos p on p.id = c.photo_id where p.original_name like 'demo-%'",
-    )) as { x: number; y: number; label: string }[];
+    const pins = (await conn.execute("select c.x, c.y, c.label, c.number from callouts c join photos p on p.id = c.photo_id where p.original_name like 'demo-%'")) as {
+      x: number;
+      y: number;
+      label: string;
+    }[];
     expect(pins.length).toBeGreaterThan(DEMO_DEVICES.length * 6);
     for (const pin of pins) {
       expect(pin.x).toBeGreaterThanOrEqual(0);

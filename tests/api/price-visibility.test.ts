@@ -71,7 +71,7 @@ describe('cost JSON', () => {
     expect(viewer.warnings.some((w) => /price break/.test(w))).toBe(false);
   });
 
-  it('a viewer gets no subtotal per category: a category of one line would be that line\'s price', async () => {
+  it("a viewer gets no subtotal per category: a category of one line would be that line's price", async () => {
     const full = await costOf('lead');
     const single = full.byCategory.find((c) => c.lines === 1 && c.total > 0);
     expect(single, 'the demo teardown has a category of one priced line').toBeDefined();

@@ -16,10 +16,7 @@ let scratch: string;
 
 beforeAll(async () => {
   t = await makeTestApp({ seed: 'demo' });
-  const rows = (await t.orm.em
-    .fork()
-    .getConnection()
-    .execute('select t.id, d.model, t.status from teardowns t join devices d on d.id = t.device_id')) as { id: number; model: string }[];
+  const rows = (await t.orm.em.fork().getConnection().execute('select t.id, d.model, t.status from teardowns t join devices d on d.id = t.device_id')) as { id: number; model: string }[];
   for (const r of rows) ids[r.model] = r.id;
   scratch = mkdtempSync(join(tmpdir(), 'splitcase-runs-test-'));
 });
@@ -152,7 +149,15 @@ describe('upload and analysis of each run kind', () => {
     const a = await t.as('engineer');
     const lines = ['Logger export', 'Channel: load 1', 'time;voltage;current'];
     for (let k = 0; k <= 3600; k += 60) lines.push(`${k} s;${(4.1 - (0.8 * k) / 3600).toFixed(4).replace('.', ',')} V;1000 mA`);
-    const mapping = { kind: 'discharge', time: { column: 'time', unit: 's' }, voltage: { column: 'voltage', unit: 'V' }, current: { column: 'current', unit: 'mA' }, delimiter: ';', decimalComma: true, headerRow: 3 };
+    const mapping = {
+      kind: 'discharge',
+      time: { column: 'time', unit: 's' },
+      voltage: { column: 'voltage', unit: 'V' },
+      current: { column: 'current', unit: 'mA' },
+      delimiter: ';',
+      decimalComma: true,
+      headerRow: 3,
+    };
     const { run } = (await upload(a, ids[DRAFT]!, lines.join('\r\n'), mapping).expect(201)).body;
     expect(run.samples).toBe(61);
     expect(run.analysis.ampHours).toBeCloseTo(1.0, 9);
@@ -354,7 +359,10 @@ describe('bad input: a clear message naming the row and column, and nothing stor
     // With a pack record (1S2P of 3.7 V, 2.0 Ah cells = 14.8 Wh) the rating gives the cell energy, and a discharge is compared with it.
     await em
       .getConnection()
-      .execute("insert into packs (teardown_id, chemistry, cell_nominal_volts, cell_rated_ah, series, parallel, protection, updated_at) values (?, 'li-ion', 3.7, 2.0, 1, 2, 1, ?)", [id, new Date().toISOString()]);
+      .execute("insert into packs (teardown_id, chemistry, cell_nominal_volts, cell_rated_ah, series, parallel, protection, updated_at) values (?, 'li-ion', 3.7, 2.0, 1, 2, 1, ?)", [
+        id,
+        new Date().toISOString(),
+      ]);
     const fromPack = (await upload(a, id, log, mapping).expect(201)).body.run;
     expect(fromPack.analysis.powerBank.cellEnergyWh).toBeCloseTo(14.8, 9);
     expect(fromPack.analysis.powerBank.cellEnergySource).toMatch(/pack record: 1S2P/);
@@ -568,7 +576,12 @@ describe('column preview', () => {
     const a = await t.as('engineer');
     const lines = ['Logger LX-2 (demo)', 'Started 2026-11-02 09:00', 'Zeitstempel;Spannung (mV);Strom [mA];Temp °C'];
     for (let k = 0; k < 40; k++) lines.push(`${k};${3700 - k};${'600,5'};${(25 + k / 10).toFixed(1).replace('.', ',')}`);
-    const p = (await a.upload(`/api/teardowns/${ids[DRAFT]}/runs/preview`).attach('file', Buffer.from(lines.join('\n')), 'lx2.csv').expect(200)).body;
+    const p = (
+      await a
+        .upload(`/api/teardowns/${ids[DRAFT]}/runs/preview`)
+        .attach('file', Buffer.from(lines.join('\n')), 'lx2.csv')
+        .expect(200)
+    ).body;
     expect(p.delimiter).toBe(';');
     expect(p.headerRow).toBe(3);
     expect(p.decimalComma).toBe(true);
@@ -584,7 +597,12 @@ describe('column preview', () => {
     const a = await t.as('engineer');
     const tsv = ['time\tsurface_F'];
     for (let k = 0; k < 5; k++) tsv.push(`2026-11-02T09:00:0${k}Z\t${70 + k}`);
-    const p = (await a.upload(`/api/teardowns/${ids[DRAFT]}/runs/preview`).attach('file', Buffer.from(tsv.join('\n')), 'th.tsv').expect(200)).body;
+    const p = (
+      await a
+        .upload(`/api/teardowns/${ids[DRAFT]}/runs/preview`)
+        .attach('file', Buffer.from(tsv.join('\n')), 'th.tsv')
+        .expect(200)
+    ).body;
     expect(p.delimiter).toBe('\t');
     expect(p.guess.kind).toBe('thermal');
     expect(p.guess.time).toEqual({ column: 'time', unit: 'iso' });
@@ -597,7 +615,12 @@ describe('column preview', () => {
     const a = await t.as('engineer');
     const lines = ['elapsed_s,volts,amps'];
     for (let k = 0; k < 20000; k++) lines.push(`${k},4.0000,1.0000`);
-    const p = (await a.upload(`/api/teardowns/${ids[DRAFT]}/runs/preview`).attach('file', Buffer.from(lines.join('\n')), 'big.csv').expect(200)).body;
+    const p = (
+      await a
+        .upload(`/api/teardowns/${ids[DRAFT]}/runs/preview`)
+        .attach('file', Buffer.from(lines.join('\n')), 'big.csv')
+        .expect(200)
+    ).body;
     expect(p.rows.length).toBe(20);
     expect(p.guess).toMatchObject({ kind: 'discharge', time: { column: 'elapsed_s', unit: 's' }, voltage: { column: 'volts', unit: 'V' }, current: { column: 'amps', unit: 'A' } });
   });
@@ -622,11 +645,7 @@ describe('a 1,000,000-row log', () => {
     out.end(chunk);
     await once(out, 'finish');
     const a = await t.as('engineer');
-    const res = await a
-      .upload(`/api/teardowns/${ids[DRAFT]}/runs`)
-      .field('mapping', JSON.stringify(dischargeMapping()))
-      .attach('file', path)
-      .expect(201);
+    const res = await a.upload(`/api/teardowns/${ids[DRAFT]}/runs`).field('mapping', JSON.stringify(dischargeMapping())).attach('file', path).expect(201);
     const { run } = res.body;
     expect(run.samples).toBe(n);
     expect(run.analysis.durationS).toBe(n - 1);
@@ -644,10 +663,7 @@ describe('the upload limit', () => {
     try {
       const a = await small.as('engineer');
       const [row] = (await small.orm.em.fork().getConnection().execute("select t.id from teardowns t join devices d on d.id = t.device_id where d.model = 'Stackcell 20 PD'")) as { id: number }[];
-      const res = await a
-        .upload(`/api/teardowns/${row!.id}/runs`)
-        .field('mapping', JSON.stringify(dischargeMapping()))
-        .attach('file', Buffer.from(constantDischarge()), 'big.csv');
+      const res = await a.upload(`/api/teardowns/${row!.id}/runs`).field('mapping', JSON.stringify(dischargeMapping())).attach('file', Buffer.from(constantDischarge()), 'big.csv');
       expect(res.status).toBe(413);
       expect(res.body.error.code).toBe('payload_too_large');
       expect(readdirSync(join(small.env.uploadsDir, 'runs', '.incoming'))).toEqual([]);
@@ -788,7 +804,10 @@ describe('cell internal resistance from a current pulse, and what the bench runs
     const teardown = await em.findOneOrFail(TeardownSchema, { id });
     let fed = (await benchRunFigureInputs(em, [teardown])).get(id)!;
     expect(fed.measuredDischarge).toMatchObject({ ampHours: expect.closeTo(722.4 / 3600, 9), durationSeconds: 1200, basis: 'discharge run "Pulse at half charge"' });
-    expect(fed.cellInternalResistance).toEqual({ ohms: expect.closeTo(0.05, 9), basis: expect.stringMatching(/50 mΩ at the pack terminals .*0\.6 A → 3 A in the discharge run "Pulse at half charge" \(one cell/) });
+    expect(fed.cellInternalResistance).toEqual({
+      ohms: expect.closeTo(0.05, 9),
+      basis: expect.stringMatching(/50 mΩ at the pack terminals .*0\.6 A → 3 A in the discharge run "Pulse at half charge" \(one cell/),
+    });
     expect(fed.powerBankRun).toBeUndefined();
 
     // A later discharge without a pulse: the resistance still comes from the run that had one.

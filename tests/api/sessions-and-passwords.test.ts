@@ -25,8 +25,7 @@ function sessionsDb<T>(app: TestApp, sql: string, params: unknown[] = []): Promi
     });
   });
 }
-const storedSessionsOf = async (app: TestApp, userId: number) =>
-  (await sessionsDb<{ n: number }>(app, "select count(*) as n from sessions where json_extract(sess, '$.userId') = ?", [userId]))[0]!.n;
+const storedSessionsOf = async (app: TestApp, userId: number) => (await sessionsDb<{ n: number }>(app, "select count(*) as n from sessions where json_extract(sess, '$.userId') = ?", [userId]))[0]!.n;
 
 async function newUser(email: string, name: string, password: string): Promise<number> {
   const admin = await t.as('admin');
@@ -126,10 +125,8 @@ describe('session lifetime', () => {
     const engineer = await t.as('engineer');
     const id = (await engineer.get('/api/auth/me').expect(200)).body.user.id;
     const minutesAgo = (m: number) => Date.now() - m * 60_000;
-    const setSeen = (minutes: number) =>
-      sessionsDb(t, "update sessions set sess = json_set(sess, '$.lastSeenAt', ?) where json_extract(sess, '$.userId') = ?", [minutesAgo(minutes), id]);
-    const seenAt = async () =>
-      (await sessionsDb<{ seen: number }>(t, "select max(json_extract(sess, '$.lastSeenAt')) as seen from sessions where json_extract(sess, '$.userId') = ?", [id]))[0]!.seen;
+    const setSeen = (minutes: number) => sessionsDb(t, "update sessions set sess = json_set(sess, '$.lastSeenAt', ?) where json_extract(sess, '$.userId') = ?", [minutesAgo(minutes), id]);
+    const seenAt = async () => (await sessionsDb<{ seen: number }>(t, "select max(json_extract(sess, '$.lastSeenAt')) as seen from sessions where json_extract(sess, '$.userId') = ?", [id]))[0]!.seen;
     try {
       // Idle 50 min of 60: the request goes through and counts as use.
       await setSeen(50);
@@ -142,11 +139,7 @@ describe('session lifetime', () => {
       // With the absolute limit lowered to 2 h, a session signed in 3 h ago ends though just used.
       await admin.patch('/api/settings', { sessionIdleMinutes: 60, sessionMaxHours: 2 }).expect(200);
       const again = await t.as('engineer');
-      await sessionsDb(t, "update sessions set sess = json_set(sess, '$.signedInAt', ?, '$.lastSeenAt', ?) where json_extract(sess, '$.userId') = ?", [
-        minutesAgo(180),
-        minutesAgo(1),
-        id,
-      ]);
+      await sessionsDb(t, "update sessions set sess = json_set(sess, '$.signedInAt', ?, '$.lastSeenAt', ?) where json_extract(sess, '$.userId') = ?", [minutesAgo(180), minutesAgo(1), id]);
       expect(await me(again)).toBe(401);
     } finally {
       await admin.patch('/api/settings', { sessionIdleMinutes: 60, sessionMaxHours: 12 }).expect(200);

@@ -172,9 +172,7 @@ describe('POST /api/tools/heater-trace', () => {
   it('a 3R0 heater element path at 3.65 V: 4.440833 W and 1.216667 A [C], above its IPC-2221 rating, power density and hot-surface warning', async () => {
     // 1.546894 m of 10 mil, 1 oz copper is 3.000 Ω at 20 °C (L = R·w·t / ρ).
     const lengthM = (3 * 0.254e-3 * 35e-6) / 1.7241e-8;
-    const res = await eng
-      .post('/api/tools/heater-trace', { length: lengthM, width: '10 mil', thickness: '1 oz', supplyVoltage: '3.65 V', layer: 'external', area: '24 cm²' })
-      .expect(200);
+    const res = await eng.post('/api/tools/heater-trace', { length: lengthM, width: '10 mil', thickness: '1 oz', supplyVoltage: '3.65 V', layer: 'external', area: '24 cm²' }).expect(200);
     expect(figure(res.body, 'resistance').value as number).toBeCloseTo(3, 9);
     expect(figure(res.body, 'current').value as number).toBeCloseTo(1.216667, 6);
     expect(figure(res.body, 'power').value as number).toBeCloseTo(4.440833, 6);
@@ -191,9 +189,7 @@ describe('POST /api/tools/heater-trace', () => {
   });
 
   it('400 naming each wrong field, with what did parse in details', async () => {
-    const res = await eng
-      .post('/api/tools/heater-trace', { length: '100 V', width: '-1 mm', thickness: '1 lb', temperatureRise: 'warm', area: '0 cm²', layer: 'external' })
-      .expect(400);
+    const res = await eng.post('/api/tools/heater-trace', { length: '100 V', width: '-1 mm', thickness: '1 lb', temperatureRise: 'warm', area: '0 cm²', layer: 'external' }).expect(400);
     expect(res.body.error.code).toBe('validation_failed');
     expect(res.body.error.fields).toEqual({
       length: expect.stringMatching(/length/),

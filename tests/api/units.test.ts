@@ -60,7 +60,9 @@ describe('pack mass: "46" is 46 g, never 46 kg', () => {
 describe('the forgiving reader on the power system', () => {
   it('reads "2700mah", "3,65 V", "4,2 V" and "2620 MAH" (never mega-amp-hours)', async () => {
     const id = await newTeardown();
-    const res = await eng.put(`/api/teardowns/${id}/pack`, { chemistry: 'li-ion', nominalVolts: '3,65 V', maxVolts: '4,2 V', capacityAh: '2700mah', measuredCapacityAh: '2620 MAH', massKg: '46 G' }).expect(200);
+    const res = await eng
+      .put(`/api/teardowns/${id}/pack`, { chemistry: 'li-ion', nominalVolts: '3,65 V', maxVolts: '4,2 V', capacityAh: '2700mah', measuredCapacityAh: '2620 MAH', massKg: '46 G' })
+      .expect(200);
     expect(res.body.pack).toMatchObject({ nominalVolts: 3.65, maxVolts: 4.2, capacityAh: 2.7, measuredCapacityAh: 2.62, massKg: 0.046 });
     expect(res.body.pack.entered).toMatchObject({ capacityAh: '2700mah', nominalVolts: '3,65 V' });
   });
@@ -105,7 +107,9 @@ describe('every 400 about a quantity names the field as the screen labels it', (
   });
 
   it('a label claim of zero names the claim', async () => {
-    const res = await eng.post('/api/devices', { maker: 'Unitwright (invented)', model: `Zero ${Math.random().toString(36).slice(2, 7)}`, category: 'power-bank', claimCapacityAh: '0 mAh' }).expect(400);
+    const res = await eng
+      .post('/api/devices', { maker: 'Unitwright (invented)', model: `Zero ${Math.random().toString(36).slice(2, 7)}`, category: 'power-bank', claimCapacityAh: '0 mAh' })
+      .expect(400);
     expect(res.body.error.fields).toEqual({ claimCapacityAh: 'Capacity on the label: must be more than zero' });
   });
 });
@@ -184,12 +188,28 @@ describe('price breaks', () => {
   it('refuses "0,12 €" on a USD price and a blank price, naming the break; the order check still applies', async () => {
     const partId = await newPart();
     const body = { currency: 'USD', source: 'quote', confidence: 'medium' };
-    const bad = await sourcing.put(`/api/parts/${partId}/price`, { ...body, breaks: [{ minQty: '1', unitPrice: '0,12 €' }, { minQty: '1000', unitPrice: '' }] }).expect(400);
+    const bad = await sourcing
+      .put(`/api/parts/${partId}/price`, {
+        ...body,
+        breaks: [
+          { minQty: '1', unitPrice: '0,12 €' },
+          { minQty: '1000', unitPrice: '' },
+        ],
+      })
+      .expect(400);
     expect(bad.body.error.fields).toEqual({
       'breaks.0.unitPrice': 'Unit price: "€" is EUR, but this price is in USD: choose EUR as the currency, or type the amount in USD',
       'breaks.1.unitPrice': 'Required',
     });
-    const order = await sourcing.put(`/api/parts/${partId}/price`, { ...body, breaks: [{ minQty: '5k', unitPrice: '0.1' }, { minQty: '1000', unitPrice: '0.12' }] }).expect(400);
+    const order = await sourcing
+      .put(`/api/parts/${partId}/price`, {
+        ...body,
+        breaks: [
+          { minQty: '5k', unitPrice: '0.1' },
+          { minQty: '1000', unitPrice: '0.12' },
+        ],
+      })
+      .expect(400);
     expect(order.body.error.fields['breaks.1.minQty']).toMatch(/out of order/);
     await sourcing.delete(`/api/parts/${partId}/price`).expect(404);
   });
@@ -210,7 +230,9 @@ describe('price import (CSV breaks)', () => {
       [{ minQty: 1000, unitPrice: 0.3 }],
     ]);
     const bad = await upload('designators;currency;breaks;source;confidence\nU1;USD;1@0,30 €;quote;high\n').expect(400);
-    expect(bad.body.error.fields['lines.2.breaks']).toBe('Line 2, column breaks: break 1 (unitPrice): Unit price: "€" is EUR, but this price is in USD: choose EUR as the currency, or type the amount in USD');
+    expect(bad.body.error.fields['lines.2.breaks']).toBe(
+      'Line 2, column breaks: break 1 (unitPrice): Unit price: "€" is EUR, but this price is in USD: choose EUR as the currency, or type the amount in USD',
+    );
   });
 });
 

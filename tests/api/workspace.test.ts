@@ -223,7 +223,12 @@ describe('teardowns', () => {
     const ok = await eng.patch(`/api/teardowns/${pub.teardownId}`, { version: current.version, unitLabel: 'Unit A (rev 2)' }).set(CONFIRM_UNPUBLISH_HEADER, 'yes').expect(200);
     expect(ok.body.teardown).toMatchObject({ status: 'draft', unitLabel: 'Unit A (rev 2)', publishedAt: null });
     const history = (await eng.get(`/api/teardowns/${pub.teardownId}/history`).expect(200)).body.entries as { action: string }[];
-    expect(history.slice(0, 2).map((e) => e.action).sort()).toEqual(['teardown.unpublished', 'teardown.updated']);
+    expect(
+      history
+        .slice(0, 2)
+        .map((e) => e.action)
+        .sort(),
+    ).toEqual(['teardown.unpublished', 'teardown.updated']);
     await (await as('viewer')).get(`/api/teardowns/${pub.teardownId}`).expect(404);
   });
 });
@@ -420,8 +425,19 @@ describe('findings', () => {
     const part = em.create(PartSchema, { teardown: td.id, designators: 'U1', category: 'ic', description: 'Charger and boost IC' } as never);
     await em.flush();
     const eng = await as('engineer');
-    const note = (await eng.post(`/api/teardowns/${td.id}/findings`, { kind: 'clever-idea', severity: 'note', text: 'One IC does charging and boost.', tags: ['Power-Path', 'power-path'], partIds: [part.id] }).expect(201)).body.finding;
-    expect(note).toMatchObject({ id: expect.any(Number), kind: 'clever-idea', severity: 'note', tags: ['power-path'], parts: [{ id: part.id, designators: 'U1', description: 'Charger and boost IC' }], photos: [] });
+    const note = (
+      await eng
+        .post(`/api/teardowns/${td.id}/findings`, { kind: 'clever-idea', severity: 'note', text: 'One IC does charging and boost.', tags: ['Power-Path', 'power-path'], partIds: [part.id] })
+        .expect(201)
+    ).body.finding;
+    expect(note).toMatchObject({
+      id: expect.any(Number),
+      kind: 'clever-idea',
+      severity: 'note',
+      tags: ['power-path'],
+      parts: [{ id: part.id, designators: 'U1', description: 'Charger and boost IC' }],
+      photos: [],
+    });
     const major = (await eng.post(`/api/teardowns/${td.id}/findings`, { kind: 'safety', severity: 'major', text: 'No fuse.', tags: [] }).expect(201)).body.finding;
     const list = (await eng.get(`/api/teardowns/${td.id}/findings`).expect(200)).body;
     expect(list.findings.map((f: { id: number }) => f.id)).toEqual([major.id, note.id]);
@@ -498,9 +514,40 @@ describe('figures of the demo heater', () => {
     const duo = await demoTeardown('Halvix', 'HandGlow Duo 10');
     const td = await newTeardown(duo.deviceId, { unitLabel: 'Unit F' });
     const em = t.orm.em.fork();
-    em.create(PackSchema, { teardown: td.id, chemistry: 'li-ion', cellFormat: '18650', cellNominalVolts: 3.7, cellMaxVolts: 4.2, cellRatedAh: 2.7, series: 1, parallel: 1, packMassKg: 0.046, protection: false, joining: 'welded-tab' } as never);
-    const heater = em.create(LoadSchema, { teardown: td.id, kind: 'heater', label: 'Flexible PCB heater elements', resistanceOhms: 3.0, supplyVolts: 3.65, count: 2, connection: 'parallel', duty: 1 } as never);
-    em.create(ConverterSchema, { teardown: td.id, label: 'Charger (buck)', topology: 'buck-boost', role: 'charge', vin: 5, vout: 4.2, efficiency: 0.9, efficiencySource: 'assumed', chargeCurrentA: 1 } as never);
+    em.create(PackSchema, {
+      teardown: td.id,
+      chemistry: 'li-ion',
+      cellFormat: '18650',
+      cellNominalVolts: 3.7,
+      cellMaxVolts: 4.2,
+      cellRatedAh: 2.7,
+      series: 1,
+      parallel: 1,
+      packMassKg: 0.046,
+      protection: false,
+      joining: 'welded-tab',
+    } as never);
+    const heater = em.create(LoadSchema, {
+      teardown: td.id,
+      kind: 'heater',
+      label: 'Flexible PCB heater elements',
+      resistanceOhms: 3.0,
+      supplyVolts: 3.65,
+      count: 2,
+      connection: 'parallel',
+      duty: 1,
+    } as never);
+    em.create(ConverterSchema, {
+      teardown: td.id,
+      label: 'Charger (buck)',
+      topology: 'buck-boost',
+      role: 'charge',
+      vin: 5,
+      vout: 4.2,
+      efficiency: 0.9,
+      efficiencySource: 'assumed',
+      chargeCurrentA: 1,
+    } as never);
     em.create(ConverterSchema, { teardown: td.id, label: 'USB output (boost)', topology: 'buck-boost', role: 'output', vin: 3.7, vout: 5, efficiency: 0.88, efficiencySource: 'measured' } as never);
     em.create(PartSchema, { teardown: td.id, designators: 'HT1, HT2', category: 'heater', description: 'Flexible PCB heater, 3.0 Ω' } as never);
     await em.flush();

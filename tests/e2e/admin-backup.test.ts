@@ -17,7 +17,7 @@ afterAll(() => browser?.close());
 
 async function seriousViolations(page: Page) {
   const results = await new AxeBuilder({ page: page as never }).analyze();
-  return results.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical').map((v) => `${v.id}: ${v.help} (${v.nodes.map((n) => n.target.join(" ")).join(", ")})`);
+  return results.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical').map((v) => `${v.id}: ${v.help} (${v.nodes.map((n) => n.target.join(' ')).join(', ')})`);
 }
 
 describe('last backup on the admin page', () => {

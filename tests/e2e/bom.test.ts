@@ -44,17 +44,19 @@ describe('parts, measurements and the pack at the bench', () => {
   });
 
   it('edits a line in place: Enter saves, the decoded value follows the marking', async () => {
-    await row(page, 'E2E chip resistor, pull-down').getByRole('button', { name: /^Edit R42/ }).click();
+    await row(page, 'E2E chip resistor, pull-down')
+      .getByRole('button', { name: /^Edit R42/ })
+      .click();
     const marking = page.getByRole('textbox', { name: 'Marking', exact: true });
     await marking.fill('4R7');
     await marking.press('Enter');
-    await expect
-      .poll(async () => row(page, 'E2E chip resistor, pull-down').textContent(), { timeout: 10_000 })
-      .toContain('4.70 Ω');
+    await expect.poll(async () => row(page, 'E2E chip resistor, pull-down').textContent(), { timeout: 10_000 }).toContain('4.70 Ω');
   });
 
   it('shows that a marking reads another way too, and lists every reading from the keyboard [S: IEC 60062; EIA-96; CP: ranking]', async () => {
-    await row(page, 'E2E chip resistor, pull-down').getByRole('button', { name: /^Edit R42/ }).click();
+    await row(page, 'E2E chip resistor, pull-down')
+      .getByRole('button', { name: /^Edit R42/ })
+      .click();
     const marking = page.getByRole('textbox', { name: 'Marking', exact: true });
     await marking.fill('10R');
     await marking.press('Enter');
@@ -78,7 +80,16 @@ describe('parts, measurements and the pack at the bench', () => {
     const problems = page.getByRole('list', { name: 'Problems in the file' });
     await problems.waitFor();
     await expect.poll(() => problems.textContent(), { timeout: 10_000 }).toMatch(/Row 3, Category: Unknown category "gizmo"/);
-    await expect.poll(() => page.getByRole('button', { name: /^Import/ }).last().isDisabled(), { timeout: 10_000 }).toBe(true);
+    await expect
+      .poll(
+        () =>
+          page
+            .getByRole('button', { name: /^Import/ })
+            .last()
+            .isDisabled(),
+        { timeout: 10_000 },
+      )
+      .toBe(true);
 
     await paste.fill('Designators;Category;Description;Marking;Qty\nJ9;connector;E2E header 2 pins;;1\nC99;capacitor;E2E bulk capacitor;226;2\n');
     await page.getByRole('button', { name: 'Preview' }).click();

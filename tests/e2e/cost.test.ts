@@ -69,7 +69,10 @@ describe('the cost section of a demo teardown', () => {
     const partsText = await partsCell.textContent();
     const waterfall = page.getByRole('table', { name: 'From parts to retail price, data' });
     await waterfall.waitFor();
-    const partsRow = waterfall.getByRole('row').filter({ hasText: /^Parts/ }).first();
+    const partsRow = waterfall
+      .getByRole('row')
+      .filter({ hasText: /^Parts/ })
+      .first();
     const chartPartsBefore = await partsRow.textContent();
 
     // One break at 1 piece, far above the current price: the line's unit price changes at any volume.
@@ -77,7 +80,10 @@ describe('the cost section of a demo teardown', () => {
     const editor = page.getByRole('region', { name: `Price of ${line.designators ?? line.description}`, exact: true });
     await editor.waitFor();
     while ((await editor.getByRole('button', { name: /^Remove break / }).count()) > 1) {
-      await editor.getByRole('button', { name: /^Remove break / }).last().click();
+      await editor
+        .getByRole('button', { name: /^Remove break / })
+        .last()
+        .click();
     }
     await editor.getByLabel('Break 1 minimum quantity').fill('1');
     await editor.getByLabel('Break 1 unit price').fill('97.5');

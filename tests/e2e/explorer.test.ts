@@ -54,7 +54,9 @@ describe('findings explorer', () => {
     const all = await resultTitles(page);
     expect(all.length).toBeGreaterThan(3);
 
-    await facet(page, 'Device category').getByRole('checkbox', { name: /Pocket heater/ }).click();
+    await facet(page, 'Device category')
+      .getByRole('checkbox', { name: /Pocket heater/ })
+      .click();
     await page.waitForURL((u) => u.searchParams.getAll('category').join() === 'pocket-heater' && u.searchParams.get('q') === 'sensor');
     await expect.poll(async () => (await resultTitles(page)).length, { timeout: 10_000 }).toBeLessThan(all.length);
     titles = await resultTitles(page);
@@ -62,7 +64,11 @@ describe('findings explorer', () => {
     // Every row is a pocket heater now, and the hit is highlighted in its snippet.
     const devices = await results(page).locator('tbody tr td:nth-child(3)').allTextContents();
     expect(devices.every((d) => d.includes('Pocket heater'))).toBe(true);
-    await expect(results(page).locator('mark', { hasText: /^sensor$/i }).count()).resolves.toBeGreaterThan(0);
+    await expect(
+      results(page)
+        .locator('mark', { hasText: /^sensor$/i })
+        .count(),
+    ).resolves.toBeGreaterThan(0);
     explorerUrl = page.url();
   });
 
@@ -70,7 +76,15 @@ describe('findings explorer', () => {
     await page.reload();
     await results(page).waitFor();
     await expect.poll(() => page.getByRole('searchbox', { name: /Search findings/ }).inputValue(), { timeout: 10_000 }).toBe('sensor');
-    await expect.poll(() => facet(page, 'Device category').getByRole('checkbox', { name: /Pocket heater/ }).isChecked(), { timeout: 10_000 }).toBe(true);
+    await expect
+      .poll(
+        () =>
+          facet(page, 'Device category')
+            .getByRole('checkbox', { name: /Pocket heater/ })
+            .isChecked(),
+        { timeout: 10_000 },
+      )
+      .toBe(true);
     await expect.poll(() => resultTitles(page), { timeout: 10_000 }).toEqual(titles);
     // The same address opened afresh in another tab gives the same results.
     const other = await page.context().newPage();
@@ -83,8 +97,14 @@ describe('findings explorer', () => {
   it('opens a result on the teardown section that holds it; back returns to the same search', async () => {
     await results(page).getByRole('link', { name: 'No temperature sensor anywhere' }).click();
     await page.waitForURL((u) => /^\/teardowns\/\d+\/findings$/.test(u.pathname));
-    await page.getByRole('heading', { name: /HandGlow Duo 10/ }).first().waitFor();
-    await page.getByText(/No temperature sensor anywhere: not on the board/).first().waitFor();
+    await page
+      .getByRole('heading', { name: /HandGlow Duo 10/ })
+      .first()
+      .waitFor();
+    await page
+      .getByText(/No temperature sensor anywhere: not on the board/)
+      .first()
+      .waitFor();
     await page.goBack();
     await page.waitForURL((u) => u.pathname === '/findings' && u.searchParams.get('q') === 'sensor');
     await expect.poll(() => resultTitles(page), { timeout: 10_000 }).toEqual(titles);

@@ -83,7 +83,8 @@ describe('printable report: figures by operating mode', () => {
     // The whole-device figures once each, after the modes.
     const device = data.figures.filter((f) => f.modeId === null);
     await expect.poll(() => figures.locator('tr[data-figure][data-mode=""]').count(), { timeout: 10_000 }).toBe(device.length);
-    for (const f of device.slice(0, 6)) await expect.poll(() => figures.locator(`tr[data-figure="${f.key}"][data-mode=""] [data-testid="figure-source"]`).textContent(), { timeout: 10_000 }).toBe(f.source);
+    for (const f of device.slice(0, 6))
+      await expect.poll(() => figures.locator(`tr[data-figure="${f.key}"][data-mode=""] [data-testid="figure-source"]`).textContent(), { timeout: 10_000 }).toBe(f.source);
 
     // The power part lists the modes: name, note, loads at their duty, quiescent current.
     const modes = page.locator('[data-section="power"]').getByRole('table', { name: 'Operating modes' });

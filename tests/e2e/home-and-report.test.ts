@@ -40,7 +40,9 @@ describe('home for each role', () => {
     expect(ids).not.toContain('reviews');
     expect(ids).not.toContain('unpriced');
     // A draft links into its teardown.
-    await block(page, 'drafts').getByRole('link', { name: /Stackcell 20 PD/ }).click();
+    await block(page, 'drafts')
+      .getByRole('link', { name: /Stackcell 20 PD/ })
+      .click();
     await page.waitForURL(/\/teardowns\/\d+$/);
     await page.getByRole('heading', { name: /Stackcell 20 PD/ }).waitFor();
     await page.context().close();
@@ -55,7 +57,9 @@ describe('home for each role', () => {
     expect(pro).toBeGreaterThanOrEqual(0);
     expect(neck).toBeGreaterThan(pro);
     expect(rows[pro]).toContain('Tomas Reyne');
-    const severities = await block(page, 'severe-findings').locator('li[data-finding]').evaluateAll((lis) => lis.map((li) => li.textContent ?? ''));
+    const severities = await block(page, 'severe-findings')
+      .locator('li[data-finding]')
+      .evaluateAll((lis) => lis.map((li) => li.textContent ?? ''));
     expect(severities.length).toBeGreaterThan(0);
     for (const s of severities) expect(s).toMatch(/^(Major|Critical)/);
     await page.context().close();

@@ -63,7 +63,11 @@ describe('lineups', () => {
 
     // Ranked by pack energy: 37.2 Wh, 9.99 Wh, 4.44 Wh.
     await page.getByRole('list', { name: 'Ranking' }).waitFor();
-    expect(await rankingNames(page)).toEqual([expect.stringContaining('Pellam Works Stackcell 10'), expect.stringContaining('Halvix HandGlow Duo 10'), expect.stringContaining('Corvane Breeze Pocket')]);
+    expect(await rankingNames(page)).toEqual([
+      expect.stringContaining('Pellam Works Stackcell 10'),
+      expect.stringContaining('Halvix HandGlow Duo 10'),
+      expect.stringContaining('Corvane Breeze Pocket'),
+    ]);
     await page.getByRole('table', { name: 'Normalised comparison' }).waitFor();
     await page.getByTestId('pareto-chart').locator('svg').first().waitFor();
     await page.getByRole('table', { name: 'Scatter chart, data' }).waitFor();
@@ -73,9 +77,7 @@ describe('lineups', () => {
     await page.getByRole('slider', { name: 'Weight of Retail price' }).focus();
     await page.keyboard.press('End');
     expect((await preview).status()).toBe(200);
-    await expect
-      .poll(async () => (await rankingNames(page))[0], { timeout: 10_000 })
-      .toContain('Corvane Breeze Pocket');
+    await expect.poll(async () => (await rankingNames(page))[0], { timeout: 10_000 }).toContain('Corvane Breeze Pocket');
     await page.getByText('Unsaved weights').waitFor();
 
     // Save them; the saved comparison ranks the same way.

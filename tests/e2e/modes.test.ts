@@ -19,9 +19,7 @@ async function post(page: Page, path: string, data: unknown, method: 'post' | 'p
 }
 
 const modeFigure = (page: Page, mode: string, label: string) =>
-  page
-    .locator(`aside[aria-label="Figures"] section[data-mode-group="${mode}"] li`, { has: page.getByRole('button', { name: new RegExp(`^${label}`) }) })
-    .getByTestId('figure-value');
+  page.locator(`aside[aria-label="Figures"] section[data-mode-group="${mode}"] li`, { has: page.getByRole('button', { name: new RegExp(`^${label}`) }) }).getByTestId('figure-value');
 
 describe('operating modes', () => {
   it('an engineer records modes for a heater and sees a runtime per mode', async () => {
@@ -30,8 +28,19 @@ describe('operating modes', () => {
     const device = (await post(page, '/api/devices', { maker: 'Testwright', model: `Modes ${Date.now()}`, category: 'pocket-heater' })).device;
     const td = (await post(page, '/api/teardowns', { deviceId: device.id })).teardown;
     await post(page, `/api/teardowns/${td.id}/pack`, { chemistry: 'li-ion', nominalVolts: '3.7 V', capacityAh: '2700 mAh', protection: true }, 'put');
-    const boost = (await post(page, `/api/teardowns/${td.id}/converters`, { topology: 'boost', role: 'output', inputVolts: '3.7 V', outputVolts: '5 V', efficiency: '90 %', efficiencySource: 'measured' })).converter;
-    await post(page, `/api/teardowns/${td.id}/loads`, { kind: 'heater', label: 'Heater pads', resistanceOhms: '3R0', supplyVolts: '3.65 V', count: 2, connection: 'parallel', heatedAreaM2: '100 cm²', surfaceMaterial: 'plastic' });
+    const boost = (
+      await post(page, `/api/teardowns/${td.id}/converters`, { topology: 'boost', role: 'output', inputVolts: '3.7 V', outputVolts: '5 V', efficiency: '90 %', efficiencySource: 'measured' })
+    ).converter;
+    await post(page, `/api/teardowns/${td.id}/loads`, {
+      kind: 'heater',
+      label: 'Heater pads',
+      resistanceOhms: '3R0',
+      supplyVolts: '3.65 V',
+      count: 2,
+      connection: 'parallel',
+      heatedAreaM2: '100 cm²',
+      surfaceMaterial: 'plastic',
+    });
     await post(page, `/api/teardowns/${td.id}/loads`, { kind: 'usb-output', label: 'USB-A port', currentAmps: '1 A', converterId: boost.id });
 
     await page.goto(`/teardowns/${td.id}/power`);
@@ -53,7 +62,10 @@ describe('operating modes', () => {
     await card.getByRole('button', { name: 'Duty for 45 °C' }).click();
     // 3.196 W of loss at 45 °C over 100 cm² (convection + exact radiation) ÷ 8.881667 W = 36.0 % [C]
     await expect.poll(() => card.getByLabel('Duty of Heater pads in the new mode').inputValue(), { timeout: 10_000 }).toBe('36 %');
-    await card.getByRole('status').getByText(/holds about 45 °C/).waitFor();
+    await card
+      .getByRole('status')
+      .getByText(/holds about 45 °C/)
+      .waitFor();
     await card.getByLabel('Duty of Heater pads in the new mode').fill('100 %');
     await card.getByLabel('Note on the new mode').fill('button held 2 s');
     await card.getByRole('button', { name: 'Add', exact: true }).click();

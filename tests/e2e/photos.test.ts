@@ -38,7 +38,9 @@ async function benchJpeg(seed: number): Promise<Buffer> {
   const h = 1000;
   const raw = Buffer.alloc(w * h * 3);
   for (let i = 0; i < raw.length; i++) raw[i] = ((i * 2654435761 + seed * 97) >>> 24) & 0xff;
-  return sharp(raw, { raw: { width: w, height: h, channels: 3 } }).jpeg({ quality: 80 }).toBuffer();
+  return sharp(raw, { raw: { width: w, height: h, channels: 3 } })
+    .jpeg({ quality: 80 })
+    .toBuffer();
 }
 
 describe('photos and callouts in the browser', () => {
@@ -88,7 +90,7 @@ describe('photos and callouts in the browser', () => {
     const pin = page.getByTestId('stage-pin-1');
     await pin.waitFor();
 
-    const pinsOf = async () => ((await (await page.request.get(`/api/photos/${uploaded.id}/callouts`)).json()).callouts as { x: number; y: number; label: string; part: { id: number } | null }[]);
+    const pinsOf = async () => (await (await page.request.get(`/api/photos/${uploaded.id}/callouts`)).json()).callouts as { x: number; y: number; label: string; part: { id: number } | null }[];
     const placed = (await pinsOf())[0]!;
     expect(placed.label).toBe('Charger IC');
     expect(placed.x).toBeCloseTo(0.3, 1);

@@ -85,7 +85,9 @@ describe('bench runs', () => {
     await expect.poll(() => resistance.nth(1).textContent(), { timeout: 10_000 }).toMatch(/A at \d\.\d+ V → .*A at \d\.\d+ V/);
     const duration = page.locator('dt', { hasText: 'Duration' }).locator('xpath=following-sibling::dd[2]');
     await expect.poll(() => duration.textContent(), { timeout: 10_000 }).toMatch(/held 5 s \(workspace setting\)/);
-    await expect.poll(() => page.getByRole('region', { name: 'Comparison with the label' }).textContent(), { timeout: 10_000 }).toMatch(/of the label, in energy: .* Wh delivered, .* Wh claimed.*Basis:/);
+    await expect
+      .poll(() => page.getByRole('region', { name: 'Comparison with the label' }).textContent(), { timeout: 10_000 })
+      .toMatch(/of the label, in energy: .* Wh delivered, .* Wh claimed.*Basis:/);
 
     const charge = all.find((r) => r.kind === 'charge' && r.teardownId === pulsed.teardownId)!;
     await page.goto(`/teardowns/${charge.teardownId}/runs?run=${charge.id}`);

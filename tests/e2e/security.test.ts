@@ -25,7 +25,9 @@ function collectErrors(page: Page): string[] {
     if (m.type() === 'error') errors.push(m.text());
   });
   page.on('pageerror', (e) => errors.push(`${e.name}: ${e.message}`));
-  page.on('response', (r) => { if (r.status() === 401) errors.push('401 ' + r.url()); });
+  page.on('response', (r) => {
+    if (r.status() === 401) errors.push('401 ' + r.url());
+  });
   return errors;
 }
 

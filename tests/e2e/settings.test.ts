@@ -47,7 +47,10 @@ describe('settings on the Rates & cost model page (sourcing)', () => {
       expect(after.salesTaxByCurrency[code]).toBeCloseTo(0.125, 12);
       expect({ ...after, salesTaxByCurrency: before.salesTaxByCurrency }).toEqual({ ...before, reportingCurrency: other });
     } finally {
-      const res = await page.request.patch('/api/settings', { headers: { 'X-CSRF-Token': await csrf(page) }, data: { reportingCurrency: before.reportingCurrency, salesTaxByCurrency: before.salesTaxByCurrency } });
+      const res = await page.request.patch('/api/settings', {
+        headers: { 'X-CSRF-Token': await csrf(page) },
+        data: { reportingCurrency: before.reportingCurrency, salesTaxByCurrency: before.salesTaxByCurrency },
+      });
       expect(res.status()).toBe(200);
       await page.context().close();
     }

@@ -20,7 +20,9 @@ async function benchJpeg(seed: number): Promise<Buffer> {
   const h = 1000;
   const raw = Buffer.alloc(w * h * 3);
   for (let i = 0; i < raw.length; i++) raw[i] = ((i * 2654435761 + seed * 97) >>> 24) & 0xff;
-  return sharp(raw, { raw: { width: w, height: h, channels: 3 } }).jpeg({ quality: 80 }).toBuffer();
+  return sharp(raw, { raw: { width: w, height: h, channels: 3 } })
+    .jpeg({ quality: 80 })
+    .toBuffer();
 }
 
 const section = (page: Page, name: string) => page.getByRole('navigation', { name: 'Teardown sections' }).getByRole('link', { name, exact: true }).click();

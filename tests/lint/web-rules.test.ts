@@ -65,7 +65,7 @@ describe('query keys start from rootKeys', () => {
   it.each([
     ["qc.invalidateQueries({ queryKey: ['devices'] });", 'a literal root invalidated'],
     ["export const q = { queryKey: ['devices', 'list'] as const };", 'a literal queryKey with as const'],
-    ["export const q = { queryKey: [`devices`, 1] };", 'a template-literal root'],
+    ['export const q = { queryKey: [`devices`, 1] };', 'a template-literal root'],
     ["qc.setQueryData(['settings'], {});", 'a literal key of setQueryData'],
     ["export const devicesKey = ['devices', 'list'] as const;", 'a key constant'],
     ["export const lineupScope = (id: number) => ['lineups', id] as const;", 'a key factory'],

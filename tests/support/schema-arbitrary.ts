@@ -30,8 +30,7 @@ export type JsonSchema = {
   default?: unknown;
 };
 
-export const jsonSchemaOf = (schema: ZodType): JsonSchema =>
-  z.toJSONSchema(schema, { io: 'input', unrepresentable: 'any', cycles: 'ref', reused: 'inline' }) as JsonSchema;
+export const jsonSchemaOf = (schema: ZodType): JsonSchema => z.toJSONSchema(schema, { io: 'input', unrepresentable: 'any', cycles: 'ref', reused: 'inline' }) as JsonSchema;
 
 const typesOf = (s: JsonSchema): string[] => (Array.isArray(s.type) ? s.type : s.type ? [s.type] : []);
 
@@ -87,10 +86,9 @@ export function arbitraryOf(s: JsonSchema, depth = 0): fc.Arbitrary<unknown> {
     case 'object': {
       const props = s.properties ?? {};
       const required = new Set(s.required ?? []);
-      const known = fc.record(
-        Object.fromEntries(Object.entries(props).map(([k, v]) => [k, depth > 6 ? fc.constant(null) : arbitraryOf(v, depth + 1)])),
-        { requiredKeys: Object.keys(props).filter((k) => required.has(k)) },
-      );
+      const known = fc.record(Object.fromEntries(Object.entries(props).map(([k, v]) => [k, depth > 6 ? fc.constant(null) : arbitraryOf(v, depth + 1)])), {
+        requiredKeys: Object.keys(props).filter((k) => required.has(k)),
+      });
       if (typeof s.additionalProperties === 'object') {
         const keys = s.propertyNames ? stringArb(s.propertyNames) : fc.string({ minLength: 1, maxLength: 12 });
         const extra = fc.dictionary(keys, arbitraryOf(s.additionalProperties, depth + 1), { maxKeys: 4 });

@@ -49,9 +49,23 @@ async function makeAgent(app: TestApp['app']): Promise<Agent> {
     agent,
     csrf,
     get: (p) => agent.get(p),
-    post: (p, b) => (b === undefined ? agent.post(p).set('X-CSRF-Token', wrap.csrf) : agent.post(p).set('X-CSRF-Token', wrap.csrf).send(b as object)),
-    put: (p, b) => agent.put(p).set('X-CSRF-Token', wrap.csrf).send(b as object),
-    patch: (p, b) => agent.patch(p).set('X-CSRF-Token', wrap.csrf).send(b as object),
+    post: (p, b) =>
+      b === undefined
+        ? agent.post(p).set('X-CSRF-Token', wrap.csrf)
+        : agent
+            .post(p)
+            .set('X-CSRF-Token', wrap.csrf)
+            .send(b as object),
+    put: (p, b) =>
+      agent
+        .put(p)
+        .set('X-CSRF-Token', wrap.csrf)
+        .send(b as object),
+    patch: (p, b) =>
+      agent
+        .patch(p)
+        .set('X-CSRF-Token', wrap.csrf)
+        .send(b as object),
     delete: (p) => agent.delete(p).set('X-CSRF-Token', wrap.csrf),
     upload: (p) => agent.post(p).set('X-CSRF-Token', wrap.csrf),
   };

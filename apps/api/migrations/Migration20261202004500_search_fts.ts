@@ -20,7 +20,7 @@ const ROWS = {
   part: (r: string) =>
     `select ${r}.id * 4 + 1, ${clean(`${r}.description`)}, ${clean(`${r}.notes`)}, ${join(`${r}.designators`, `${r}.marking`, `${r}.maker_part_number`, `${r}.package`, `${r}.category`)}, '', 'part', ${r}.id, ${r}.teardown_id`,
   teardown: (r: string) =>
-    `select ${r}.id * 4 + 2, ${join('(select d.maker || \' \' || d.model from devices d where d.id = ' + r + '.device_id)', `${r}.unit_label`)}, ${clean(`${r}.summary`)}, ${clean(`${r}.safety_notes`)}, '', 'teardown', ${r}.id, ${r}.id`,
+    `select ${r}.id * 4 + 2, ${join("(select d.maker || ' ' || d.model from devices d where d.id = " + r + '.device_id)', `${r}.unit_label`)}, ${clean(`${r}.summary`)}, ${clean(`${r}.safety_notes`)}, '', 'teardown', ${r}.id, ${r}.id`,
   comment: (r: string) => `select ${r}.id * 4 + 3, '', ${clean(`${r}.body`)}, '', '', 'comment', ${r}.id, ${r}.teardown_id`,
 } as const;
 
@@ -32,7 +32,6 @@ const TABLES = [
 ] as const;
 
 export class Migration20261202004500_search_fts extends Migration {
-
   override async up(): Promise<void> {
     this.addSql(
       `create virtual table \`search_fts\` using fts5(title, body, detail, tags, type unindexed, record_id unindexed, teardown_id unindexed, tokenize = 'unicode61 remove_diacritics 2', prefix = '2 3 4');`,
@@ -60,5 +59,4 @@ export class Migration20261202004500_search_fts extends Migration {
     for (const t of TABLES) for (const s of ['ai', 'au', 'ad']) this.addSql(`drop trigger if exists \`${t.table}_search_fts_${s}\`;`);
     this.addSql('drop table if exists `search_fts`;');
   }
-
 }

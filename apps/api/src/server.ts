@@ -31,7 +31,8 @@ export async function startServer(env: Env, options: CreateAppOptions & { seed?:
   // Nothing is in flight yet: finish or undo uploads a crash interrupted.
   const swept = await sweepUploadLeftovers(orm.em.fork(), env.uploadsDir);
   for (const [what, r] of Object.entries(swept)) {
-    if (r.removed.length || r.restored.length) logger.warn({ removed: r.removed, restored: r.restored }, `Upload leftovers (${what}): removed ${r.removed.length}, moved into place ${r.restored.length}`);
+    if (r.removed.length || r.restored.length)
+      logger.warn({ removed: r.removed, restored: r.restored }, `Upload leftovers (${what}): removed ${r.removed.length}, moved into place ${r.restored.length}`);
   }
   const seeded = options.seed ? await seedIfEmpty(orm, env) : false;
   const capture = env.smtpUrl ? null : await startCaptureServer(orm, env.captureSmtpPort, log);

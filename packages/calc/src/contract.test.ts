@@ -73,9 +73,7 @@ describe('issue 3 contract', () => {
     expectTypeOf(calc.combineResistances).toEqualTypeOf<(ohms: number[], connection: 'series' | 'parallel') => number>();
     expectTypeOf(calc.pwmAveragePower).toEqualTypeOf<(peakWatts: number, duty: number) => number>();
     expectTypeOf(calc.dutyForTargetPower).toEqualTypeOf<(peakWatts: number, targetWatts: number) => number>();
-    expectTypeOf(calc.packEnergyWh).toEqualTypeOf<
-      (p: { cellNominalVolts: number; cellCapacityAh: number; series?: number; parallel?: number }) => number
-    >();
+    expectTypeOf(calc.packEnergyWh).toEqualTypeOf<(p: { cellNominalVolts: number; cellCapacityAh: number; series?: number; parallel?: number }) => number>();
     expectTypeOf(calc.runtimeHours).toEqualTypeOf<(p: { energyWh: number; loadWatts: number; efficiency?: number; usableFraction?: number }) => number>();
     expectTypeOf(calc.cRate).toEqualTypeOf<(currentAmps: number, capacityAh: number) => number>();
     expectTypeOf(calc.airTransportClass).toEqualTypeOf<(wattHours: number) => 'up-to-100-wh' | '100-to-160-wh' | 'over-160-wh'>();
@@ -96,14 +94,10 @@ describe('issue 3 contract', () => {
     expectTypeOf(calc.burnThresholdC).toExtend<(p: { material: 'metal' | 'glass' | 'plastic'; contactSeconds: number }) => number>();
     expectTypeOf(calc.surfaceTemperatureRiseC).toEqualTypeOf<(p: { watts: number; areaM2: number; hWPerM2K?: number }) => number>();
     // integrateRun also reports the time-weighted mean voltage.
-    expectTypeOf(calc.integrateRun).toExtend<
-      (samples: { t: number; v: number; i: number }[]) => { ampHours: number; wattHours: number; durationS: number; averageVolts: number }
-    >();
+    expectTypeOf(calc.integrateRun).toExtend<(samples: { t: number; v: number; i: number }[]) => { ampHours: number; wattHours: number; durationS: number; averageVolts: number }>();
     expectTypeOf(calc.integrateRun).parameters.toEqualTypeOf<[samples: { t: number; v: number; i: number }[]]>();
     expectTypeOf(calc.unitPriceAtQuantity).toEqualTypeOf<(breaks: { minQty: number; unitPrice: number }[], qty: number) => number>();
-    expectTypeOf(calc.convertCurrency).toEqualTypeOf<
-      (amount: number, from: string, to: string, table: { base: string; rates: Record<string, number> }) => number
-    >();
+    expectTypeOf(calc.convertCurrency).toEqualTypeOf<(amount: number, from: string, to: string, table: { base: string; rates: Record<string, number> }) => number>();
     expectTypeOf(calc.paretoFrontier).toEqualTypeOf<(points: { id: string; cost: number; benefit: number }[]) => string[]>();
     expect(Object.keys(CONTRACT)).toHaveLength(25);
   });

@@ -1,16 +1,7 @@
 // REFERENCES §11: facts of the trade a bench teardown of a pocket heater typically shows, used as
 // sanity checks. Every check here is common practice [CP]; the exact values are in the area tests [C].
 import { describe, it, expect } from 'vitest';
-import {
-  boostDutyCycle,
-  buckDutyCycle,
-  chargeVoltage,
-  combineResistances,
-  packEnergyWh,
-  powerFromVoltageAndResistance,
-  runtimeHours,
-  runtimeReport,
-} from './index';
+import { boostDutyCycle, buckDutyCycle, chargeVoltage, combineResistances, packEnergyWh, powerFromVoltageAndResistance, runtimeHours, runtimeReport } from './index';
 
 describe('facts of the trade [CP]', () => {
   it('a heater element of about 3 Ω across a cell at about 3.65 V dissipates about 4.4–4.5 W [CP]', () => {

@@ -21,12 +21,10 @@ export const UNKNOWN_CELL_NOTE = 'Treat the cell as lithium until you have read 
 
 /** Next to touch-temperature and surface-temperature figures. */
 export const HOT_SURFACE_CAUTION =
-  'Hot surface: measure the real surface temperature with a thermocouple before anyone holds the device, keep skin contact short, ' +
-  "and follow the lab's safety rules.";
+  'Hot surface: measure the real surface temperature with a thermocouple before anyone holds the device, keep skin contact short, ' + "and follow the lab's safety rules.";
 
 /** Mains chargers and adapters. */
 export const MAINS_CAUTION = 'Mains charger: unplug it and let the capacitors discharge before opening; work on mains only under licensed practice.';
 
 /** Shown with every set of derived figures. */
-export const ESTIMATES_NOTE =
-  "Engineering estimates, not certification results. Follow your lab's safety rules, local codes and licensed practice.";
+export const ESTIMATES_NOTE = "Engineering estimates, not certification results. Follow your lab's safety rules, local codes and licensed practice.";

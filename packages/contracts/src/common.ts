@@ -12,8 +12,7 @@ export const hasControlCharacters = (value: string) => CONTROL_CHARACTERS.test(v
  * The one string schema of contracts: every text a client sends goes through it, so NUL and other
  * control characters are a 400 naming the field instead of reaching the database.
  */
-export const safeString = (params?: Parameters<typeof z.string>[0]) =>
-  z.string(params).refine((v) => !CONTROL_CHARACTERS.test(v), { message: CONTROL_CHARACTERS_MESSAGE, abort: true });
+export const safeString = (params?: Parameters<typeof z.string>[0]) => z.string(params).refine((v) => !CONTROL_CHARACTERS.test(v), { message: CONTROL_CHARACTERS_MESSAGE, abort: true });
 
 /** Trimmed, non-empty text with a length cap. */
 export const text = (max = 200) => safeString().trim().min(1, 'Required').max(max, `At most ${max} characters`);
@@ -30,9 +29,7 @@ export const isoDateTime = safeString();
 /** The password rule as the forms show it; the server also checks it against a common-password list. */
 export const PASSWORD_MIN_LENGTH = 12;
 export const PASSWORD_RULE = `At least ${PASSWORD_MIN_LENGTH} characters, not your e-mail address or name, and not a common password. A phrase of a few unrelated words works well.`;
-export const password = safeString()
-  .min(PASSWORD_MIN_LENGTH, `At least ${PASSWORD_MIN_LENGTH} characters`)
-  .max(200, 'At most 200 characters');
+export const password = safeString().min(PASSWORD_MIN_LENGTH, `At least ${PASSWORD_MIN_LENGTH} characters`).max(200, 'At most 200 characters');
 
 /** A field without its `.default()`: in a PATCH, a field left out stays as it is, it is not reset. */
 const withoutDefault = (field: z.ZodType): z.ZodType => (field instanceof z.ZodDefault ? withoutDefault(field.unwrap() as z.ZodType) : field);

@@ -24,8 +24,7 @@ const form = (over: Partial<CostModelFormValues> = {}): CostModelFormValues => (
   confidenceBand: { high: '5', medium: '15', low: '30' },
   ...over,
 });
-const fields = (r: { success: boolean; error?: { issues: { path: PropertyKey[]; message: string }[] } }) =>
-  Object.fromEntries((r.error?.issues ?? []).map((i) => [i.path.join('.'), i.message]));
+const fields = (r: { success: boolean; error?: { issues: { path: PropertyKey[]; message: string }[] } }) => Object.fromEntries((r.error?.issues ?? []).map((i) => [i.path.join('.'), i.message]));
 
 describe('the cost-model form', () => {
   it('reads percentages as shares, volumes with k/M, a decimal comma; a blank category uses the default', () => {
@@ -51,7 +50,15 @@ describe('the cost-model form', () => {
 
 describe('the manual rates form', () => {
   it('becomes the rates by code, rows without a code left out, and names a rate by its code', () => {
-    const ok = manualRatesFormSchema.parse({ base: 'eur', date: '2026-11-27', source: 'By hand', rows: [{ code: 'usd', rate: '1,08' }, { code: ' ', rate: '' }] });
+    const ok = manualRatesFormSchema.parse({
+      base: 'eur',
+      date: '2026-11-27',
+      source: 'By hand',
+      rows: [
+        { code: 'usd', rate: '1,08' },
+        { code: ' ', rate: '' },
+      ],
+    });
     expect(ok).toMatchObject({ base: 'EUR', rates: { USD: 1.08 } });
     const bad = manualRatesFormSchema.safeParse({ base: 'EUR', date: '2026-02-30', source: 'By hand', rows: [{ code: 'GBP', rate: '' }] });
     expect(fields(bad)).toEqual({ date: 'Not a calendar date', 'rates.GBP': 'A rate must be a number' });

@@ -55,9 +55,16 @@ const typedNumber = z.union([z.number(), safeString()]).transform((v) => (typeof
 /** Largest amount of money, quantity or rate accepted anywhere in costing (1e9): sane bounds for any currency. */
 export const COST_MAX = 1_000_000_000;
 const AT_MOST = 'At most 1 000 000 000';
-const money = (what: string) => z.number({ error: `${what} must be a number` }).min(0, `${what} must not be negative`).max(COST_MAX, AT_MOST);
+const money = (what: string) =>
+  z
+    .number({ error: `${what} must be a number` })
+    .min(0, `${what} must not be negative`)
+    .max(COST_MAX, AT_MOST);
 const fraction = (what: string) =>
-  z.number({ error: `${what} must be a number` }).min(0, `${what} must not be below 0 %`).max(1, `${what} must not be above 100 %`);
+  z
+    .number({ error: `${what} must be a number` })
+    .min(0, `${what} must not be below 0 %`)
+    .max(1, `${what} must not be above 100 %`);
 
 export const priceBreakSchema = z.object({
   minQty: z.number({ error: 'Minimum quantity must be a number' }).gt(0, 'Minimum quantity must be greater than zero').max(COST_MAX, AT_MOST),
@@ -159,7 +166,10 @@ export const manualRatesBody = z
     date: isoDate,
     source: safeString().trim().min(1, 'Say where the rates come from').max(200, 'At most 200 characters'),
     rates: z.record(
-      safeString().trim().toUpperCase().regex(/^[A-Z]{3}$/, 'Currency codes have three letters'),
+      safeString()
+        .trim()
+        .toUpperCase()
+        .regex(/^[A-Z]{3}$/, 'Currency codes have three letters'),
       z.number({ error: 'A rate must be a number' }).gt(0, 'A rate must be greater than zero').max(COST_MAX, AT_MOST),
     ),
     note: optionalText(300),
@@ -233,7 +243,6 @@ export const costModelSchema = z.object({
 export type CostModelDto = z.output<typeof costModelSchema>;
 export type CostModelBody = z.input<typeof costModelSchema>;
 
-
 /** A volume as typed: 5000, 5k, 1.5k or 2M units (NaN when unreadable: the model's rule names it). */
 export function readVolume(typed: string): number {
   const m = typed.trim().match(/^([\d.]+)\s*([kKmM]?)$/);
@@ -277,7 +286,10 @@ export const costModelFormSchema = z
       // A blank field goes on as null (typed: a number) for the model's rule to name it.
       ({
         ...f,
-        volumes: f.volumes.split(/[,;\s]+/).filter(Boolean).map(readVolume),
+        volumes: f.volumes
+          .split(/[,;\s]+/)
+          .filter(Boolean)
+          .map(readVolume),
         attritionByCategory: Object.fromEntries(Object.entries(f.attritionByCategory).filter(([, v]) => v !== null && v !== undefined)),
       }) as CostModelBody,
   )

@@ -10,7 +10,16 @@ export const findingTag = safeString()
   .max(40, 'A tag has at most 40 characters')
   .regex(/^[\p{L}\p{N}][\p{L}\p{N} ._+-]*$/u, 'Tags use letters, digits, spaces and - . _ +');
 
-const ids = (what: string) => z.array(z.number({ error: `Give ${what} ids as numbers` }).int().positive(), { error: `Give a list of ${what} ids` }).max(200, `At most 200 ${what}s`);
+const ids = (what: string) =>
+  z
+    .array(
+      z
+        .number({ error: `Give ${what} ids as numbers` })
+        .int()
+        .positive(),
+      { error: `Give a list of ${what} ids` },
+    )
+    .max(200, `At most 200 ${what}s`);
 
 const tagList = z
   .array(findingTag, { error: 'Give the tags as a list' })

@@ -4,12 +4,21 @@ import { describe, expect, it } from 'vitest';
 import { createPartBody, partFormSchema } from './parts';
 import { converterFormSchema, loadFormSchema, packFormSchema } from './power';
 
-const messages = (r: { success: boolean; error?: { issues: { path: PropertyKey[]; message: string }[] } }) =>
-  Object.fromEntries((r.error?.issues ?? []).map((i) => [i.path.join('.'), i.message]));
+const messages = (r: { success: boolean; error?: { issues: { path: PropertyKey[]; message: string }[] } }) => Object.fromEntries((r.error?.issues ?? []).map((i) => [i.path.join('.'), i.message]));
 
 describe('partFormSchema', () => {
   it('gives a create body: blank text is none, the quantity is read as a whole number, spaces allowed', () => {
-    const out = partFormSchema.parse({ designators: ' R1 ', category: 'passive', description: 'Chip resistor', marking: '', makerPartNumber: '', package: '0402', quantity: '1 000', mount: 'smt', notes: '' });
+    const out = partFormSchema.parse({
+      designators: ' R1 ',
+      category: 'passive',
+      description: 'Chip resistor',
+      marking: '',
+      makerPartNumber: '',
+      package: '0402',
+      quantity: '1 000',
+      mount: 'smt',
+      notes: '',
+    });
     expect(out).toEqual({ designators: 'R1', category: 'passive', description: 'Chip resistor', marking: null, makerPartNumber: null, package: '0402', quantity: 1000, mount: 'smt', notes: null });
     expect(createPartBody.parse(out)).toMatchObject(out);
     // A CSV row without a quantity or a mount cell: 1, and the mount left to the category.
@@ -50,7 +59,16 @@ describe('power form schemas', () => {
   };
 
   it('pack: the text goes to the server as typed; blanks are none or the defaults', () => {
-    expect(packFormSchema.parse(pack)).toEqual({ ...pack, cellFormat: null, joining: null, maxVolts: null, measuredCapacityAh: null, series: '1', internalResistanceOhms: null, internalResistanceReadings: null });
+    expect(packFormSchema.parse(pack)).toEqual({
+      ...pack,
+      cellFormat: null,
+      joining: null,
+      maxVolts: null,
+      measuredCapacityAh: null,
+      series: '1',
+      internalResistanceOhms: null,
+      internalResistanceReadings: null,
+    });
   });
 
   it('pack: the required quantities and all four readings or none, named by field', () => {
@@ -59,9 +77,34 @@ describe('power form schemas', () => {
   });
 
   it('loads and converters: the converter id from the select, count and duty defaults, required voltages', () => {
-    const load = loadFormSchema.parse({ kind: 'heater', label: '', connection: 'parallel', converterId: '7', surfaceMaterial: '', elementMaterial: 'copper', resistanceOhms: '3R0', currentAmps: '', powerWatts: '', supplyVolts: '3.65 V', count: '', duty: '', heatedAreaM2: '', heatedMassKg: '' });
+    const load = loadFormSchema.parse({
+      kind: 'heater',
+      label: '',
+      connection: 'parallel',
+      converterId: '7',
+      surfaceMaterial: '',
+      elementMaterial: 'copper',
+      resistanceOhms: '3R0',
+      currentAmps: '',
+      powerWatts: '',
+      supplyVolts: '3.65 V',
+      count: '',
+      duty: '',
+      heatedAreaM2: '',
+      heatedMassKg: '',
+    });
     expect(load).toMatchObject({ label: null, converterId: 7, surfaceMaterial: null, elementMaterial: 'copper', resistanceOhms: '3R0', currentAmps: null, count: '1', duty: '100 %' });
-    const converter = converterFormSchema.safeParse({ label: '', topology: 'buck', role: 'charge', efficiencySource: 'assumed', inputVolts: '5 V', outputVolts: '', ratedCurrentAmps: '', chargeCurrentAmps: '1 A', efficiency: '' });
+    const converter = converterFormSchema.safeParse({
+      label: '',
+      topology: 'buck',
+      role: 'charge',
+      efficiencySource: 'assumed',
+      inputVolts: '5 V',
+      outputVolts: '',
+      ratedCurrentAmps: '',
+      chargeCurrentAmps: '1 A',
+      efficiency: '',
+    });
     expect(messages(converter)).toEqual({ outputVolts: 'Required' });
   });
 });

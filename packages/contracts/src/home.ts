@@ -91,9 +91,7 @@ export const adminHomeSchema = z.object({
   usersByRole: z.record(roleSchema, z.number().int()),
   inactiveUsers: z.number().int(),
   recentlyActive: z.array(person.extend({ role: roleSchema, lastSignInAt: safeString() })),
-  pendingInvitations: z.array(
-    z.object({ id: z.number().int(), email: safeString(), role: roleSchema, invitedBy: safeString().nullable(), createdAt: safeString(), expiresAt: safeString() }),
-  ),
+  pendingInvitations: z.array(z.object({ id: z.number().int(), email: safeString(), role: roleSchema, invitedBy: safeString().nullable(), createdAt: safeString(), expiresAt: safeString() })),
   /** The capture server's latest messages; `enabled` false when mail goes out through a real server. */
   outbox: z.object({
     enabled: z.boolean(),

@@ -113,7 +113,10 @@ const DURATION_UNITS: Record<string, number> = { s: 1, sec: 1, secs: 1, second: 
  * what to type.
  */
 export function readDurationSeconds(typed: string): number {
-  const text = typed.trim().toLowerCase().replace(/(\d),(\d)/g, '$1.$2');
+  const text = typed
+    .trim()
+    .toLowerCase()
+    .replace(/(\d),(\d)/g, '$1.$2');
   const part = /(\d+(?:\.\d+)?|\.\d+)\s*([a-z]+)\s*/gy;
   let seconds = 0;
   let read = 0;

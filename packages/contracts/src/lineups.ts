@@ -62,10 +62,7 @@ const KEYS = new Set<string>(LINEUP_METRIC_KEYS);
 
 /** Metric → weight 0..10; a metric left out weighs 0; at least one weight above 0. */
 export const lineupWeights = z
-  .record(
-    safeString(),
-    z.number({ error: 'Enter a number from 0 to 10' }).min(0, 'At least 0').max(LINEUP_WEIGHT_MAX, `At most ${LINEUP_WEIGHT_MAX}`),
-  )
+  .record(safeString(), z.number({ error: 'Enter a number from 0 to 10' }).min(0, 'At least 0').max(LINEUP_WEIGHT_MAX, `At most ${LINEUP_WEIGHT_MAX}`))
   .superRefine((w, ctx) => {
     for (const key of Object.keys(w)) {
       if (!KEYS.has(key)) ctx.addIssue({ code: 'custom', path: [key], message: `Unknown metric; use one of ${LINEUP_METRIC_KEYS.join(', ')}` });

@@ -30,7 +30,10 @@ export type UploadPhotoFields = z.input<typeof uploadPhotoFields>;
 
 export const updatePhotoBody = z
   .object({
-    caption: caption.nullable().optional().transform((v) => (v === '' ? null : v)),
+    caption: caption
+      .nullable()
+      .optional()
+      .transform((v) => (v === '' ? null : v)),
     layer: photoLayer.optional(),
     step: photoStep.optional(),
   })
@@ -132,7 +135,15 @@ export const calloutsResponse = z.object({ callouts: z.array(calloutSchema) });
 
 /** A pin together with the photo it sits on (pins of one part or finding across the teardown). */
 export const placedCalloutSchema = calloutSchema.extend({
-  photo: z.object({ id: z.number().int(), caption: safeString().nullable(), width: z.number().int(), height: z.number().int(), layer: z.number().int(), step: z.number().int(), urls: photoUrlsSchema }),
+  photo: z.object({
+    id: z.number().int(),
+    caption: safeString().nullable(),
+    width: z.number().int(),
+    height: z.number().int(),
+    layer: z.number().int(),
+    step: z.number().int(),
+    urls: photoUrlsSchema,
+  }),
 });
 export type PlacedCalloutDto = z.infer<typeof placedCalloutSchema>;
 export const placedCalloutsResponse = z.object({ callouts: z.array(placedCalloutSchema) });

@@ -49,10 +49,7 @@ export const packBody = z.object({
    * Or two readings of the DC method (IEC 61960-3): the cell voltage at a low and at a high current;
    * the server works out (U₁ − U₂) / (I₂ − I₁). Given, it replaces internalResistanceOhms.
    */
-  internalResistanceReadings: z
-    .object({ lowAmps: required, lowVolts: required, highAmps: required, highVolts: required })
-    .nullable()
-    .optional(),
+  internalResistanceReadings: z.object({ lowAmps: required, lowVolts: required, highAmps: required, highVolts: required }).nullable().optional(),
 });
 export type PackBody = z.input<typeof packBody>;
 

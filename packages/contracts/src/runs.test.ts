@@ -117,7 +117,12 @@ describe('the run forms', () => {
 describe('the chart window form', () => {
   it('reads a start and a later end, a decimal comma too; anything else asks for both', () => {
     expect(seriesWindowFormSchema.parse({ from: '1,5', to: ' 3 ' })).toEqual({ from: 1.5, to: 3 });
-    for (const bad of [{ from: '', to: '3' }, { from: '3', to: '3' }, { from: '-1', to: '2' }, { from: 'a', to: '2' }]) {
+    for (const bad of [
+      { from: '', to: '3' },
+      { from: '3', to: '3' },
+      { from: '-1', to: '2' },
+      { from: 'a', to: '2' },
+    ]) {
       const r = seriesWindowFormSchema.safeParse(bad);
       expect(r.error?.issues.map((i) => [i.path.join('.'), i.message])).toEqual([['to', 'Give a start and a later end']]);
     }

@@ -310,9 +310,7 @@ export const runAnalysisSchema = z.object({
       /** Termination in C of the rated capacity (or, without one, the fraction of the CC current). */
       terminationFraction: z.number(),
       /** What the fraction multiplied, in words and numbers. Absent on runs analysed before it existed. */
-      termination: z
-        .object({ basis: z.enum(['rated-capacity', 'cc-current']), ratedAh: z.number().nullable(), description: safeString() })
-        .optional(),
+      termination: z.object({ basis: z.enum(['rated-capacity', 'cc-current']), ratedAh: z.number().nullable(), description: safeString() }).optional(),
       terminated: z.boolean(),
       chargeTimeS: z.number(),
       plateauVolts: z.number(),
@@ -416,12 +414,7 @@ export const DEFAULT_SERIES_POINTS = 2000;
 
 export const runSeriesQuery = z
   .object({
-    maxPoints: z.coerce
-      .number()
-      .int('A whole number')
-      .min(10, 'At least 10')
-      .max(MAX_SERIES_POINTS, `At most ${MAX_SERIES_POINTS}`)
-      .default(DEFAULT_SERIES_POINTS),
+    maxPoints: z.coerce.number().int('A whole number').min(10, 'At least 10').max(MAX_SERIES_POINTS, `At most ${MAX_SERIES_POINTS}`).default(DEFAULT_SERIES_POINTS),
     from: z.coerce.number().min(0, 'At least 0 s').optional(),
     to: z.coerce.number().min(0, 'At least 0 s').optional(),
   })
@@ -429,18 +422,16 @@ export const runSeriesQuery = z
 export type RunSeriesQuery = z.infer<typeof runSeriesQuery>;
 
 /** The chart's window form: a start and a later end as typed ("1,5" reads as 1.5), in the unit of the time axis. */
-export const seriesWindowFormSchema = z
-  .object({ from: safeString(), to: safeString() })
-  .transform((w, ctx) => {
-    const read = (s: string) => (s.trim() === '' ? Number.NaN : Number(s.trim().replace(',', '.')));
-    const from = read(w.from);
-    const to = read(w.to);
-    if (!Number.isFinite(from) || !Number.isFinite(to) || from < 0 || to <= from) {
-      ctx.addIssue({ code: 'custom', path: ['to'], message: 'Give a start and a later end' });
-      return z.NEVER;
-    }
-    return { from, to };
-  });
+export const seriesWindowFormSchema = z.object({ from: safeString(), to: safeString() }).transform((w, ctx) => {
+  const read = (s: string) => (s.trim() === '' ? Number.NaN : Number(s.trim().replace(',', '.')));
+  const from = read(w.from);
+  const to = read(w.to);
+  if (!Number.isFinite(from) || !Number.isFinite(to) || from < 0 || to <= from) {
+    ctx.addIssue({ code: 'custom', path: ['to'], message: 'Give a start and a later end' });
+    return z.NEVER;
+  }
+  return { from, to };
+});
 export type SeriesWindowFormValues = z.input<typeof seriesWindowFormSchema>;
 export type SeriesWindowForm = z.output<typeof seriesWindowFormSchema>;
 

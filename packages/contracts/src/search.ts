@@ -60,7 +60,12 @@ export const SEARCH_PAGE_SIZE = 50;
  * by a user are words like any other. At most MAX_SEARCH_TERMS words.
  */
 export function searchTerms(q: string | null | undefined): string[] {
-  return (q ?? '').normalize('NFC').match(/[\p{L}\p{N}\p{M}\p{Co}]+/gu)?.slice(0, MAX_SEARCH_TERMS) ?? [];
+  return (
+    (q ?? '')
+      .normalize('NFC')
+      .match(/[\p{L}\p{N}\p{M}\p{Co}]+/gu)
+      ?.slice(0, MAX_SEARCH_TERMS) ?? []
+  );
 }
 
 // ── Snippets ───────────────────────────────────────────────────────────────────────────────────
@@ -105,7 +110,10 @@ const isoDate = z.preprocess(
 );
 
 const wholeNumber = (min: number, max: number, fallback: number) =>
-  z.preprocess((v) => (v === undefined || v === '' ? fallback : v), z.coerce.number({ error: 'Give a whole number' }).int('Give a whole number').min(min, `At least ${min}`).max(max, `At most ${max}`));
+  z.preprocess(
+    (v) => (v === undefined || v === '' ? fallback : v),
+    z.coerce.number({ error: 'Give a whole number' }).int('Give a whole number').min(min, `At least ${min}`).max(max, `At most ${max}`),
+  );
 
 /**
  * Query of GET /api/search and GET /api/search.csv. Every facet may be repeated: values of one facet

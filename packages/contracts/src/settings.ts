@@ -31,11 +31,11 @@ export const DEFAULT_SALES_TAX_BY_CURRENCY: Readonly<Record<string, number>> = {
 
 /** Sales tax in retail prices by currency: currency code → fraction 0..1. */
 export const salesTaxByCurrencySchema = z.record(
-  safeString().trim().toUpperCase().regex(/^[A-Z]{3}$/, 'Use a three-letter ISO 4217 code such as EUR'),
-  z
-    .number({ error: 'The sales tax must be a number' })
-    .min(0, 'The sales tax must not be below 0 %')
-    .max(1, 'The sales tax must not be above 100 %'),
+  safeString()
+    .trim()
+    .toUpperCase()
+    .regex(/^[A-Z]{3}$/, 'Use a three-letter ISO 4217 code such as EUR'),
+  z.number({ error: 'The sales tax must be a number' }).min(0, 'The sales tax must not be below 0 %').max(1, 'The sales tax must not be above 100 %'),
 );
 
 /** Workspace-wide settings, with their defaults. */

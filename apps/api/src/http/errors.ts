@@ -62,11 +62,7 @@ export function zodFields(err: ZodError, prefix?: string): Record<string, string
 
 export function validationError(fields: Record<string, string>, message?: string): AppError {
   const names = Object.keys(fields);
-  return new AppError(
-    'validation_failed',
-    message ?? `Check ${names.length === 1 ? 'the field' : 'these fields'}: ${names.join(', ')}.`,
-    fields,
-  );
+  return new AppError('validation_failed', message ?? `Check ${names.length === 1 ? 'the field' : 'these fields'}: ${names.join(', ')}.`, fields);
 }
 
 export const apiNotFound: RequestHandler = (req, _res, next) => {

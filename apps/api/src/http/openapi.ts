@@ -24,8 +24,7 @@ export function buildOpenApi(defs: RouteDef[], version: string) {
   for (const { spec } of defs) {
     const path = spec.path.replace(/:([A-Za-z_]+)/g, '{$1}');
     const stateChanging = spec.method !== 'get';
-    const access =
-      spec.access === 'public' ? 'Anyone (no sign-in)' : spec.access === 'signed-in' ? 'Any signed-in user' : `Roles: ${spec.access.join(', ')}`;
+    const access = spec.access === 'public' ? 'Anyone (no sign-in)' : spec.access === 'signed-in' ? 'Any signed-in user' : `Roles: ${spec.access.join(', ')}`;
     const errors = Object.fromEntries(
       Object.entries(ERROR_RESPONSES)
         .filter(([code]) => spec.access !== 'public' || (code !== '401' && code !== '403') || stateChanging)
@@ -53,11 +52,7 @@ export function buildOpenApi(defs: RouteDef[], version: string) {
               body: {
                 content: {
                   'multipart/form-data': {
-                    schema: z.object(
-                      Object.fromEntries(
-                        Object.entries(spec.multipart).map(([k, t]) => [k, t === 'file' ? z.string().meta({ format: 'binary' }) : z.string()]),
-                      ),
-                    ),
+                    schema: z.object(Object.fromEntries(Object.entries(spec.multipart).map(([k, t]) => [k, t === 'file' ? z.string().meta({ format: 'binary' }) : z.string()]))),
                   },
                 },
               },
@@ -72,8 +67,7 @@ export function buildOpenApi(defs: RouteDef[], version: string) {
     info: {
       title: 'Splitcase API',
       version,
-      description:
-        'JSON over /api with a session cookie. Every state-changing request carries the X-CSRF-Token header from GET /api/auth/csrf. Errors: { error: { code, message, fields? } }.',
+      description: 'JSON over /api with a session cookie. Every state-changing request carries the X-CSRF-Token header from GET /api/auth/csrf. Errors: { error: { code, message, fields? } }.',
     },
     servers: [{ url: '/' }],
   });

@@ -71,11 +71,7 @@ export interface RouteDef {
   handler: (ctx: RouteContext<unknown, unknown, unknown>) => unknown;
 }
 
-export function route<
-  B extends ZodType = ZodType<undefined>,
-  Q extends ZodType = ZodType<undefined>,
-  P extends ZodType = ZodType<undefined>,
->(
+export function route<B extends ZodType = ZodType<undefined>, Q extends ZodType = ZodType<undefined>, P extends ZodType = ZodType<undefined>>(
   spec: RouteSpec<B, Q, P>,
   handler: (ctx: RouteContext<z.output<B>, z.output<Q>, z.output<P>>) => unknown,
 ): RouteDef {

@@ -158,12 +158,7 @@ const UNITS: Record<QuantityKind, UnitSpelling[]> = {
 
 /** The unit text as a spelling key: µ → u, Ω → ohm, ° → deg, ² → 2, no spaces. */
 function unitKey(text: string): string {
-  return text
-    .replace(/[µμ]/g, 'u')
-    .replace(/[ΩΩ]/g, 'ohm')
-    .replace(/°/g, 'deg')
-    .replace(/\^2|²/g, '2')
-    .replace(/\s+/g, '');
+  return text.replace(/[µμ]/g, 'u').replace(/[ΩΩ]/g, 'ohm').replace(/°/g, 'deg').replace(/\^2|²/g, '2').replace(/\s+/g, '');
 }
 
 function resolveUnit(text: string, kind: QuantityKind): UnitSpelling {

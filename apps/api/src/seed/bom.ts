@@ -56,14 +56,37 @@ export function demoParts(d: DemoDevice): Line[] {
     makerPartNumber: `CV-${pouch ? 'P' : 'C'}${Math.round(cells.ratedAh * 1000)}${cells.protection && pouch ? 'P' : ''}`,
     package: cells.format,
     quantity: cellCount,
-    notes: cells.joining === 'welded-tab' ? 'Nickel tabs spot-welded' : cells.joining === 'soldered' ? 'Leads soldered straight to the cell' : cells.joining === 'holder' ? 'Sits in a spring holder' : 'On a two-pin plug',
+    notes:
+      cells.joining === 'welded-tab'
+        ? 'Nickel tabs spot-welded'
+        : cells.joining === 'soldered'
+          ? 'Leads soldered straight to the cell'
+          : cells.joining === 'holder'
+            ? 'Sits in a spring holder'
+            : 'On a two-pin plug',
   });
   if (cells.joining === 'holder') lines.push({ designators: 'BH1', category: 'connector', description: 'Spring cell holder, single 18650', makerPartNumber: 'QN-HLD18S', mount: 'tht' });
   if (cells.joining === 'welded-tab') lines.push({ category: 'wire', description: 'Nickel strip 0.15 mm × 5 mm', quantity: cellCount > 1 ? 2 : 1 });
   if (cells.protection) {
     const onBoard = 'On the protection board at the cell';
-    lines.push({ designators: 'PU1', category: 'ic', description: 'Single-cell protection IC (over-charge, over-discharge, over-current)', marking: 'PT1A', makerPartNumber: 'KV-PT61A', package: 'SOT-23-6', notes: onBoard });
-    lines.push({ designators: 'PQ1', category: 'semiconductor', description: 'Dual N-channel MOSFET, common drain, 20 V', marking: 'D20N', makerPartNumber: 'SNW-DN2006', package: 'TSSOP-8', notes: onBoard });
+    lines.push({
+      designators: 'PU1',
+      category: 'ic',
+      description: 'Single-cell protection IC (over-charge, over-discharge, over-current)',
+      marking: 'PT1A',
+      makerPartNumber: 'KV-PT61A',
+      package: 'SOT-23-6',
+      notes: onBoard,
+    });
+    lines.push({
+      designators: 'PQ1',
+      category: 'semiconductor',
+      description: 'Dual N-channel MOSFET, common drain, 20 V',
+      marking: 'D20N',
+      makerPartNumber: 'SNW-DN2006',
+      package: 'TSSOP-8',
+      notes: onBoard,
+    });
     lines.push({ designators: 'PR1', category: 'passive', description: 'Chip resistor, protection IC supply filter', marking: '331', package: '0402', notes: onBoard });
   }
 
@@ -75,7 +98,14 @@ export function demoParts(d: DemoDevice): Line[] {
     if (c.topology === 'buck-boost' && c.role === 'output' && converters.some((x) => x.topology === 'buck-boost' && x.role === 'charge')) continue;
     const ref = `U${u++}`;
     if (c.topology === 'buck-boost' && c.role === 'charge' && converters.some((x) => x.topology === 'buck-boost' && x.role === 'output')) {
-      lines.push({ designators: ref, category: 'ic', description: 'Bidirectional single-cell charger and 5 V boost, one inductor', marking: 'BB2103', makerPartNumber: 'HX-BB2103', package: 'QFN-24 4×4' });
+      lines.push({
+        designators: ref,
+        category: 'ic',
+        description: 'Bidirectional single-cell charger and 5 V boost, one inductor',
+        marking: 'BB2103',
+        makerPartNumber: 'HX-BB2103',
+        package: 'QFN-24 4×4',
+      });
     } else if (c.role === 'charge' && c.topology === 'buck-boost') {
       lines.push({ designators: ref, category: 'ic', description: 'Four-switch buck-boost charger controller', marking: 'FS4B', makerPartNumber: 'HX-FB4410', package: 'QFN-32 5×5' });
     } else if (c.role === 'charge' && c.efficiency <= 0.8) {
@@ -114,15 +144,41 @@ export function demoParts(d: DemoDevice): Line[] {
   // Loads.
   for (const l of loads) {
     if (l.kind === 'heater') {
-      lines.push({ designators: 'HT1, HT2'.split(', ').slice(0, l.count).join(', '), category: 'heater', description: `${l.label}, polyimide flex, ${l.ohms} Ω each`, makerPartNumber: 'QN-FH3060', quantity: l.count });
+      lines.push({
+        designators: 'HT1, HT2'.split(', ').slice(0, l.count).join(', '),
+        category: 'heater',
+        description: `${l.label}, polyimide flex, ${l.ohms} Ω each`,
+        makerPartNumber: 'QN-FH3060',
+        quantity: l.count,
+      });
     } else if (l.kind === 'motor') {
-      lines.push({ designators: l.count > 1 ? 'M1, M2' : 'M1', category: 'motor', description: l.label, makerPartNumber: l.label.includes('Brushless') ? 'VRN-BL2006' : 'VRN-DC1408', quantity: l.count });
+      lines.push({
+        designators: l.count > 1 ? 'M1, M2' : 'M1',
+        category: 'motor',
+        description: l.label,
+        makerPartNumber: l.label.includes('Brushless') ? 'VRN-BL2006' : 'VRN-DC1408',
+        quantity: l.count,
+      });
       lines.push({ category: 'enclosure', description: 'Fan impeller, PP', quantity: l.count });
     } else if (l.kind === 'led') {
-      lines.push({ designators: l.count > 1 ? 'LED1, LED2' : 'LED1', category: 'led', description: 'High-power white LED on aluminium star', marking: 'W35', makerPartNumber: 'LUX-W3535C', package: '3535', quantity: l.count });
+      lines.push({
+        designators: l.count > 1 ? 'LED1, LED2' : 'LED1',
+        category: 'led',
+        description: 'High-power white LED on aluminium star',
+        marking: 'W35',
+        makerPartNumber: 'LUX-W3535C',
+        package: '3535',
+        quantity: l.count,
+      });
       lines.push({ category: 'enclosure', description: 'TIR optic, PMMA', quantity: l.count });
     } else if (l.kind === 'usb-output') {
-      lines.push({ designators: 'J2', category: 'connector', description: l.label.includes('USB-C') ? 'USB-C receptacle, 16 pins, output' : 'USB-A receptacle, output', makerPartNumber: l.label.includes('USB-C') ? 'QN-UC16S' : 'QN-UA04S', mount: 'tht' });
+      lines.push({
+        designators: 'J2',
+        category: 'connector',
+        description: l.label.includes('USB-C') ? 'USB-C receptacle, 16 pins, output' : 'USB-A receptacle, output',
+        makerPartNumber: l.label.includes('USB-C') ? 'QN-UC16S' : 'QN-UA04S',
+        mount: 'tht',
+      });
     }
   }
   lines.push({ designators: 'J1', category: 'connector', description: 'USB-C receptacle, 6 pins, charge input', makerPartNumber: 'QN-UC06S', mount: 'smt' });
@@ -131,7 +187,14 @@ export function demoParts(d: DemoDevice): Line[] {
 
   if (d.design.hasTemperatureSensor) {
     const perHeater = d.key === 'halvix-pro' ? 2 : 1;
-    lines.push({ designators: perHeater > 1 ? 'RT1, RT2' : 'RT1', category: 'sensor', description: '10 kΩ NTC thermistor, B 3950, taped to the heat spreader', makerPartNumber: 'KV-NT103F', package: '0402', quantity: perHeater });
+    lines.push({
+      designators: perHeater > 1 ? 'RT1, RT2' : 'RT1',
+      category: 'sensor',
+      description: '10 kΩ NTC thermistor, B 3950, taped to the heat spreader',
+      makerPartNumber: 'KV-NT103F',
+      package: '0402',
+      quantity: perHeater,
+    });
   }
 
   // Mechanical.
@@ -161,9 +224,23 @@ const SCALE = 'Lab scale, 0.1 g (demo)';
 export function demoReadings(d: DemoDevice): Reading[] {
   const { cells, loads, converters } = d.design;
   const out: Reading[] = [
-    { quantity: 'voltage', text: `${(cells.nominalV + 0.12 + jitter(`${d.key}v`, 0.05)).toFixed(3)} V`, subject: 'Cell open-circuit voltage as received', conditions: '23 °C, rested 1 h', instrument: DMM, uncertainty: '±(0.05 % + 2 digits)' },
+    {
+      quantity: 'voltage',
+      text: `${(cells.nominalV + 0.12 + jitter(`${d.key}v`, 0.05)).toFixed(3)} V`,
+      subject: 'Cell open-circuit voltage as received',
+      conditions: '23 °C, rested 1 h',
+      instrument: DMM,
+      uncertainty: '±(0.05 % + 2 digits)',
+    },
     { quantity: 'mass', text: grams(cells.massKg + jitter(`${d.key}m`, 0.0004)), subject: `Pack mass (${cells.series}S${cells.parallel}P, with tabs)`, instrument: SCALE, uncertainty: '±0.1 g' },
-    { quantity: 'current', text: `${Math.round(40 + jitter(`${d.key}q`, 25))} µA`, subject: 'Standby current from the cell, switched off', conditions: 'Cell at 3.8 V', instrument: DMM, uncertainty: '±(0.5 % + 3 digits)' },
+    {
+      quantity: 'current',
+      text: `${Math.round(40 + jitter(`${d.key}q`, 25))} µA`,
+      subject: 'Standby current from the cell, switched off',
+      conditions: 'Cell at 3.8 V',
+      instrument: DMM,
+      uncertainty: '±(0.5 % + 3 digits)',
+    },
   ];
   for (const l of loads) {
     if (l.ohms) {
@@ -179,16 +256,37 @@ export function demoReadings(d: DemoDevice): Reading[] {
       }
     }
     if (l.amps) {
-      out.push({ quantity: 'current', text: `${Math.round(l.amps * 1000 * (1 + jitter(`${d.key}a`, 0.03)))} mA`, subject: `${l.label}, full setting`, conditions: 'Cell at 3.8 V', instrument: DMM, uncertainty: '±(0.5 % + 3 digits)' });
+      out.push({
+        quantity: 'current',
+        text: `${Math.round(l.amps * 1000 * (1 + jitter(`${d.key}a`, 0.03)))} mA`,
+        subject: `${l.label}, full setting`,
+        conditions: 'Cell at 3.8 V',
+        instrument: DMM,
+        uncertainty: '±(0.5 % + 3 digits)',
+      });
     }
   }
   const charge = converters.find((c) => c.role === 'charge');
   if (charge?.chargeA) {
-    out.push({ quantity: 'current', text: `${(charge.chargeA * 0.96).toFixed(2)} A`, subject: 'Charge current, constant-current phase', conditions: `${charge.vin} V USB supply, cell at 3.6 V`, instrument: 'USB power meter (demo)', uncertainty: '±1 %' });
+    out.push({
+      quantity: 'current',
+      text: `${(charge.chargeA * 0.96).toFixed(2)} A`,
+      subject: 'Charge current, constant-current phase',
+      conditions: `${charge.vin} V USB supply, cell at 3.6 V`,
+      instrument: 'USB power meter (demo)',
+      uncertainty: '±1 %',
+    });
   }
   if (loads.some((l) => l.kind === 'heater')) {
     const peak = d.key === 'halvix-duo' ? 55 : d.key === 'halvix-pro' ? 47.5 : 44;
-    out.push({ quantity: 'temperature', text: `${peak} °C`, subject: 'Heater surface, hottest point, highest level', conditions: '25 °C ambient, 10 min, lying on a wooden bench', instrument: 'Type K thermocouple and logger (demo)', uncertainty: '±1.5 °C' });
+    out.push({
+      quantity: 'temperature',
+      text: `${peak} °C`,
+      subject: 'Heater surface, hottest point, highest level',
+      conditions: '25 °C ambient, 10 min, lying on a wooden bench',
+      instrument: 'Type K thermocouple and logger (demo)',
+      uncertainty: '±1.5 °C',
+    });
   }
   return out;
 }
@@ -252,7 +350,7 @@ async function seedTeardownBom(ctx: SeedContext, d: DemoDevice, teardownId: numb
   const createdLoads: Load[] = [];
   for (const l of loads) {
     const via = l.via ? made.find((m) => m.spec.role !== 'charge' && (m.spec.topology === l.via || m.spec.topology === 'buck-boost')) : undefined;
-    const supplyVolts = via ? via.spec.vout : SUPPLY_VOLTS[d.key] ?? cells.nominalV;
+    const supplyVolts = via ? via.spec.vout : (SUPPLY_VOLTS[d.key] ?? cells.nominalV);
     const entered: Record<string, string> = { supplyVolts: `${supplyVolts} V` };
     if (l.ohms) entered.resistanceOhms = `${String(l.ohms.toFixed(1)).replace('.', 'R')}`;
     if (l.amps) entered.currentAmps = l.amps < 1 ? `${Math.round(l.amps * 1000)} mA` : `${l.amps} A`;

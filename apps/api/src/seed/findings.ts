@@ -53,7 +53,10 @@ const FINDINGS: Record<string, DemoFinding[]> = {
       severity: 'minor',
       text: 'Heat levels are open-loop PWM duties that are not corrected for cell voltage: the warmth you feel on a level falls as the cell discharges.',
       tags: ['pwm', 'heat-levels'],
-      parts: [{ category: 'ic', match: /micro|mcu|controller/i }, { category: 'semiconductor', match: /mosfet/i }],
+      parts: [
+        { category: 'ic', match: /micro|mcu|controller/i },
+        { category: 'semiconductor', match: /mosfet/i },
+      ],
     },
     {
       kind: 'compliance',
@@ -452,14 +455,16 @@ export async function seedFindings(ctx: SeedContext): Promise<void> {
       const c = em.create(CommentSchema, { teardown: t, author: actor, kind: e.kind, body: e.body, createdAt: at } as never);
       await em.flush();
       const summary =
-        e.kind === 'comment'
-          ? `Commented: ${e.body}`
-          : e.kind === 'submitted'
-            ? 'Submitted for review'
-            : e.kind === 'approved'
-              ? `Approved and published: ${e.body}`
-              : `Sent back to draft: ${e.body}`;
-      audit(at, actor, AUDIT_ACTION[e.kind], e.kind === 'comment' ? 'comment' : 'teardown', e.kind === 'comment' ? c.id : t.id, summary, e.kind === 'comment' ? undefined : { status: STATUS_CHANGE[e.kind] });
+        e.kind === 'comment' ? `Commented: ${e.body}` : e.kind === 'submitted' ? 'Submitted for review' : e.kind === 'approved' ? `Approved and published: ${e.body}` : `Sent back to draft: ${e.body}`;
+      audit(
+        at,
+        actor,
+        AUDIT_ACTION[e.kind],
+        e.kind === 'comment' ? 'comment' : 'teardown',
+        e.kind === 'comment' ? c.id : t.id,
+        summary,
+        e.kind === 'comment' ? undefined : { status: STATUS_CHANGE[e.kind] },
+      );
       if (e.kind === 'sent-back') lastNote = e.body;
       if (e.kind === 'approved' && e.body !== 'Approved.') lastNote = e.body;
     }

@@ -23,42 +23,15 @@ export const DEMO_MODES: Record<string, DemoMode[]> = {
     { name: 'Power bank', note: 'cable plugged into the USB-A port', duties: [0, 1] },
     STANDBY(20),
   ],
-  'zestora-pocketsun': [
-    { name: 'Low', note: 'thermistor holds the plate lower', duties: [0.4] },
-    { name: 'High', note: 'thermistor holds the plate at its set point', duties: [0.7] },
-    STANDBY(15),
-  ],
-  'halvix-pro': [
-    { name: 'Low', duties: [0.4] },
-    { name: 'Medium', duties: [0.6] },
-    { name: 'High', note: 'the highest of three levels', duties: [0.8] },
-    STANDBY(25),
-  ],
+  'zestora-pocketsun': [{ name: 'Low', note: 'thermistor holds the plate lower', duties: [0.4] }, { name: 'High', note: 'thermistor holds the plate at its set point', duties: [0.7] }, STANDBY(15)],
+  'halvix-pro': [{ name: 'Low', duties: [0.4] }, { name: 'Medium', duties: [0.6] }, { name: 'High', note: 'the highest of three levels', duties: [0.8] }, STANDBY(25)],
   'pellam-10': [{ name: 'USB-C output', note: '5 V at 3 A', duties: [1] }, STANDBY(30, 'no cable plugged in')],
   'pellam-20': [{ name: 'PD output', note: '9 V at 2.22 A to a PD sink', duties: [1] }, STANDBY(40, 'no cable plugged in')],
   'zestora-slimvolt': [{ name: 'USB-A output', note: '5 V at 1 A', duties: [1] }, STANDBY(25, 'no cable plugged in')],
-  'nordwick-ridgeline': [
-    { name: 'Low', note: 'driver dims by PWM', duties: [0.25] },
-    { name: 'High', duties: [1] },
-    STANDBY(10),
-  ],
-  'brightlark-trailbeam': [
-    { name: 'Low', duties: [0.3] },
-    { name: 'High', duties: [1] },
-    STANDBY(5),
-  ],
-  'corvane-pocket': [
-    { name: 'Speed 1', duties: [0.4] },
-    { name: 'Speed 2', duties: [0.6] },
-    { name: 'Speed 3', duties: [1] },
-    STANDBY(10),
-  ],
-  'corvane-neck': [
-    { name: 'Low', duties: [0.4] },
-    { name: 'High', duties: [0.7] },
-    { name: 'Boost', note: 'button held, one minute', duties: [1] },
-    STANDBY(12),
-  ],
+  'nordwick-ridgeline': [{ name: 'Low', note: 'driver dims by PWM', duties: [0.25] }, { name: 'High', duties: [1] }, STANDBY(10)],
+  'brightlark-trailbeam': [{ name: 'Low', duties: [0.3] }, { name: 'High', duties: [1] }, STANDBY(5)],
+  'corvane-pocket': [{ name: 'Speed 1', duties: [0.4] }, { name: 'Speed 2', duties: [0.6] }, { name: 'Speed 3', duties: [1] }, STANDBY(10)],
+  'corvane-neck': [{ name: 'Low', duties: [0.4] }, { name: 'High', duties: [0.7] }, { name: 'Boost', note: 'button held, one minute', duties: [1] }, STANDBY(12)],
 };
 
 /** The modes of one demo teardown, over the loads just created (in scenario order). */

@@ -51,8 +51,8 @@ function hash(key: string): number {
   return h;
 }
 
-const MONO = "font-family=\"DejaVu Sans Mono, Liberation Mono, monospace\"";
-const SANS = "font-family=\"DejaVu Sans, Liberation Sans, sans-serif\"";
+const MONO = 'font-family="DejaVu Sans Mono, Liberation Mono, monospace"';
+const SANS = 'font-family="DejaVu Sans, Liberation Sans, sans-serif"';
 const esc = (s: string) => s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;');
 const rel = (x: number, y: number) => ({ x: +(x / ILLUSTRATION_W).toFixed(4), y: +(y / ILLUSTRATION_H).toFixed(4) });
 
@@ -98,7 +98,10 @@ function chip(x: number, y: number, w: number, h: number, marking: string[], leg
     const pitch = w / (legsPerSide + 1);
     for (let i = 1; i <= legsPerSide; i++) {
       legs.push(`<rect x="${x + i * pitch - 3}" y="${y - 5}" width="6" height="7" fill="#c9cdd2"/>`, `<rect x="${x + i * pitch - 3}" y="${y + h - 2}" width="6" height="7" fill="#c9cdd2"/>`);
-      legs.push(`<rect x="${x - 5}" y="${y + i * (h / (legsPerSide + 1)) - 3}" width="7" height="6" fill="#c9cdd2"/>`, `<rect x="${x + w - 2}" y="${y + i * (h / (legsPerSide + 1)) - 3}" width="7" height="6" fill="#c9cdd2"/>`);
+      legs.push(
+        `<rect x="${x - 5}" y="${y + i * (h / (legsPerSide + 1)) - 3}" width="7" height="6" fill="#c9cdd2"/>`,
+        `<rect x="${x + w - 2}" y="${y + i * (h / (legsPerSide + 1)) - 3}" width="7" height="6" fill="#c9cdd2"/>`,
+      );
     }
   }
   const lines = marking.map((m, i) => `<text x="${x + w / 2}" y="${y + h / 2 + (i - (marking.length - 1) / 2) * 19 + 6}" text-anchor="middle" ${MONO} font-size="15" fill="#b9bcc0">${esc(m)}</text>`);
@@ -133,7 +136,10 @@ function traces(p: Palette, paths: string[]): string {
 /** Invented chip markings: a maker-like prefix from the device key, never a real part number. */
 function markings(d: DemoDevice) {
   const h = hash(d.key);
-  const pre = d.maker.replace(/[^A-Z]/g, '').slice(0, 2).padEnd(2, 'X');
+  const pre = d.maker
+    .replace(/[^A-Z]/g, '')
+    .slice(0, 2)
+    .padEnd(2, 'X');
   const n = (k: number) => String(((h >>> k) % 90) + 10);
   return {
     mcu: [`${pre}8F${n(3)}`, `Q${n(7)}A 26${n(11).slice(0, 1)}4`],
@@ -160,7 +166,12 @@ function enclosureScene(d: DemoDevice, p: Palette): Illustration {
       <rect x="700" y="210" width="300" height="250" rx="50" fill="${p.shellEdge}" opacity="0.45"/>
       <circle cx="730" cy="240" r="16" fill="${p.shellEdge}"/><circle cx="970" cy="240" r="16" fill="${p.shellEdge}"/><circle cx="730" cy="430" r="16" fill="${p.shellEdge}"/><circle cx="970" cy="430" r="16" fill="${p.shellEdge}"/>
       <rect x="810" y="470" width="80" height="26" rx="8" fill="#26292e"/><rect x="1020" y="300" width="30" height="70" rx="8" fill="${p.accent}"/>`;
-    pins.push({ ...rel(340, 335), label: 'Reflector and lens' }, { ...rel(970, 430), label: 'Screw boss (Phillips 1.7 mm)', match: { category: 'fastener' } }, { ...rel(850, 483), label: 'USB-C opening with rubber flap' }, { ...rel(1035, 335), label: 'Mode button', match: { category: 'switch' } });
+    pins.push(
+      { ...rel(340, 335), label: 'Reflector and lens' },
+      { ...rel(970, 430), label: 'Screw boss (Phillips 1.7 mm)', match: { category: 'fastener' } },
+      { ...rel(850, 483), label: 'USB-C opening with rubber flap' },
+      { ...rel(1035, 335), label: 'Mode button', match: { category: 'switch' } },
+    );
   } else if (c === 'usb-fan') {
     const neck = /neck/i.test(d.model);
     body = neck
@@ -170,7 +181,10 @@ function enclosureScene(d: DemoDevice, p: Palette): Illustration {
          ${[0, 1, 2, 3, 4, 5].map((i) => `<rect x="${160 + i * 20}" y="200" width="8" height="100" fill="#1f2226"/><rect x="${920 + i * 20}" y="200" width="8" height="100" fill="#1f2226"/>`).join('')}
          <rect x="560" y="600" width="80" height="30" rx="10" fill="#26292e"/>`
       : `<g filter="url(#shadow)"><circle cx="420" cy="330" r="220" fill="${p.shell}" stroke="${p.shellEdge}" stroke-width="8"/></g>
-         ${Array.from({ length: 16 }, (_, i) => { const a = (i * Math.PI) / 8; return `<line x1="${420 + Math.cos(a) * 60}" y1="${330 + Math.sin(a) * 60}" x2="${420 + Math.cos(a) * 210}" y2="${330 + Math.sin(a) * 210}" stroke="${p.shellEdge}" stroke-width="6"/>`; }).join('')}
+         ${Array.from({ length: 16 }, (_, i) => {
+           const a = (i * Math.PI) / 8;
+           return `<line x1="${420 + Math.cos(a) * 60}" y1="${330 + Math.sin(a) * 60}" x2="${420 + Math.cos(a) * 210}" y2="${330 + Math.sin(a) * 210}" stroke="${p.shellEdge}" stroke-width="6"/>`;
+         }).join('')}
          <circle cx="420" cy="330" r="150" fill="none" stroke="${p.shellEdge}" stroke-width="6"/><circle cx="420" cy="330" r="58" fill="${p.shellEdge}"/>
          <g filter="url(#shadow)"><rect x="740" y="180" width="150" height="520" rx="60" fill="${p.shell}" stroke="${p.shellEdge}" stroke-width="6"/></g>
          <rect x="770" y="220" width="90" height="420" rx="40" fill="${p.shellEdge}" opacity="0.5"/><circle cx="815" cy="300" r="26" fill="${p.accent}"/><rect x="785" y="650" width="60" height="22" rx="8" fill="#26292e"/>`;
@@ -197,7 +211,9 @@ function enclosureScene(d: DemoDevice, p: Palette): Illustration {
     pins.push(
       { ...rel(660 + w - 60, 450 + h / 2 - 60), label: 'Screw boss, self-tapping screw', match: { category: 'fastener' } },
       { ...rel(660 + w / 2, 450 - h / 2 + 17), label: 'Snap clip (moulded)', match: { category: 'enclosure' } },
-      bank ? { ...rel(160 + w / 2 - 20, 450 + h / 2 - 70), label: 'Charge-level LEDs window', match: { category: 'led' } } : { ...rel(160 + w / 2, 450 + h / 2 - 90), label: 'Heat-level button', match: { category: 'switch' } },
+      bank
+        ? { ...rel(160 + w / 2 - 20, 450 + h / 2 - 70), label: 'Charge-level LEDs window', match: { category: 'led' } }
+        : { ...rel(160 + w / 2, 450 + h / 2 - 90), label: 'Heat-level button', match: { category: 'switch' } },
     );
   }
   return { layer: 1, step: 1, caption: `Enclosure opened: both halves, inside faces up (demo illustration)`, svg: bench(body, title), pins };
@@ -241,13 +257,17 @@ function boardScene(d: DemoDevice, p: Palette): Illustration {
         `M${bx + 70} ${by + bh - 70} H${bx + bw * 0.6}`,
         `M${bx + bw * 0.3} ${by + bh - 70} V${by + bh * 0.45}`,
       ])}
-      ${[0, 1, 2, 3, 4, 5].map((i) => `<circle cx="${bx + 120 + i * (bw - 240) / 5}" cy="${by + bh * 0.5 + ((i % 2) * 2 - 1) * 30}" r="6" fill="#c9a548"/>`).join('')}
+      ${[0, 1, 2, 3, 4, 5].map((i) => `<circle cx="${bx + 120 + (i * (bw - 240)) / 5}" cy="${by + bh * 0.5 + ((i % 2) * 2 - 1) * 30}" r="6" fill="#c9a548"/>`).join('')}
       ${hole(bx + 40, by + 40)}${hole(bx + bw - 40, by + bh - 40)}`;
     // Power IC and inductor.
     const px = bx + bw * 0.45;
     const py = by + 60;
     body += chip(px, py, 170, 120, m.power, bank ? 6 : 4, bank ? 'qfn' : 'sop') + silk(px, py - 18, 'U2', p) + inductor(px + 210, py + 4, 110, bank ? '1R0' : '4R7') + silk(px + 210, py - 10, 'L1', p);
-    pins.push({ ...rel(px + 164, py + 8), label: `${bank ? 'Charge and boost' : fan ? 'Linear charger' : 'Buck-boost charger / output'} IC, marked ${m.power[0]}`, match: { category: 'ic', pattern: /charger|boost|buck|pmic/i } });
+    pins.push({
+      ...rel(px + 164, py + 8),
+      label: `${bank ? 'Charge and boost' : fan ? 'Linear charger' : 'Buck-boost charger / output'} IC, marked ${m.power[0]}`,
+      match: { category: 'ic', pattern: /charger|boost|buck|pmic/i },
+    });
     pins.push({ ...rel(px + 312, py + 12), label: `Power inductor ${bank ? '1R0' : '4R7'}`, match: { category: 'inductor' } });
     // MCU (heaters, fans) or fuel-gauge LEDs (banks).
     const mx = bx + 90;
@@ -256,7 +276,8 @@ function boardScene(d: DemoDevice, p: Palette): Illustration {
       body += chip(mx, my, 120, 90, [m.mcu[0]!], 4) + silk(mx, my - 18, 'U1', p);
       pins.push({ ...rel(mx + 114, my + 6), label: `8-bit microcontroller, marked ${m.mcu[0]}`, match: { category: 'ic', pattern: /micro|mcu|controller/i } });
     } else {
-      body += [0, 1, 2, 3].map((i) => `<rect x="${mx + i * 46}" y="${my + 20}" width="28" height="18" rx="3" fill="#e8f6ff" stroke="#6fb6e2" stroke-width="3"/>`).join('') + silk(mx, my + 6, 'D1–D4', p);
+      body +=
+        [0, 1, 2, 3].map((i) => `<rect x="${mx + i * 46}" y="${my + 20}" width="28" height="18" rx="3" fill="#e8f6ff" stroke="#6fb6e2" stroke-width="3"/>`).join('') + silk(mx, my + 6, 'D1–D4', p);
       pins.push({ ...rel(mx + 80, my + 29), label: 'Charge-level LEDs D1–D4', match: { category: 'led' } });
     }
     // MOSFET for heaters and fans.
@@ -267,12 +288,19 @@ function boardScene(d: DemoDevice, p: Palette): Illustration {
       pins.push({ ...rel(qx + 58, qy + 2), label: `${fan ? 'Motor' : 'Heater'} switch MOSFET, marked ${m.mos}`, match: { category: 'semiconductor', pattern: /mosfet|transistor|fet/i } });
     }
     // Passives with codes.
-    body += smd(bx + bw * 0.62, by + bh - 120, 'r', '103') + smd(bx + bw * 0.62 + 50, by + bh - 120, 'r', '4R7') + smd(bx + bw * 0.62 + 100, by + bh - 120, 'c', '') + smd(bx + bw * 0.62 + 140, by + bh - 128, 'c', '', true);
+    body +=
+      smd(bx + bw * 0.62, by + bh - 120, 'r', '103') +
+      smd(bx + bw * 0.62 + 50, by + bh - 120, 'r', '4R7') +
+      smd(bx + bw * 0.62 + 100, by + bh - 120, 'c', '') +
+      smd(bx + bw * 0.62 + 140, by + bh - 128, 'c', '', true);
     pins.push({ ...rel(bx + bw * 0.62 + 67, by + bh - 111), label: 'Current-sense resistor 4R7 (marking as read)', match: { category: 'passive', pattern: /sense|4R7|resistor/i } });
     // Connectors.
     if (bank) {
       body += usbA(bx + bw - 150, by + bh - 110) + usbC(bx + bw - 270, by + bh - 100) + silk(bx + bw - 150, by + bh - 120, 'J2', p) + silk(bx + bw - 270, by + bh - 110, 'J1', p);
-      pins.push({ ...rel(bx + bw - 90, by + bh - 83), label: 'USB-A output', match: { category: 'connector', pattern: /usb-?a|output/i } }, { ...rel(bx + bw - 224, by + bh - 78), label: 'USB-C input/output', match: { category: 'connector', pattern: /usb-?c/i } });
+      pins.push(
+        { ...rel(bx + bw - 90, by + bh - 83), label: 'USB-A output', match: { category: 'connector', pattern: /usb-?a|output/i } },
+        { ...rel(bx + bw - 224, by + bh - 78), label: 'USB-C input/output', match: { category: 'connector', pattern: /usb-?c/i } },
+      );
     } else {
       body += usbC(bx + bw - 140, by + bh - 90) + silk(bx + bw - 140, by + bh - 100, 'J1', p);
       pins.push({ ...rel(bx + bw - 94, by + bh - 68), label: 'USB-C receptacle', match: { category: 'connector' } });
@@ -316,7 +344,8 @@ function cellScene(d: DemoDevice, p: Palette): Illustration {
     }
     if (cell.joining === 'welded-tab') {
       body += `<rect x="214" y="${top - 10}" width="24" height="${rows * pitch}" fill="#d9dde1" stroke="#a8aeb4" stroke-width="2"/><rect x="912" y="${top - 10}" width="24" height="${rows * pitch}" fill="#d9dde1" stroke="#a8aeb4" stroke-width="2"/>`;
-      for (let i = 0; i < rows; i++) body += `<circle cx="226" cy="${top + i * pitch + mid - 10}" r="4" fill="#8d949b"/><circle cx="226" cy="${top + i * pitch + mid + 10}" r="4" fill="#8d949b"/><circle cx="924" cy="${top + i * pitch + mid - 10}" r="4" fill="#8d949b"/><circle cx="924" cy="${top + i * pitch + mid + 10}" r="4" fill="#8d949b"/>`;
+      for (let i = 0; i < rows; i++)
+        body += `<circle cx="226" cy="${top + i * pitch + mid - 10}" r="4" fill="#8d949b"/><circle cx="226" cy="${top + i * pitch + mid + 10}" r="4" fill="#8d949b"/><circle cx="924" cy="${top + i * pitch + mid - 10}" r="4" fill="#8d949b"/><circle cx="924" cy="${top + i * pitch + mid + 10}" r="4" fill="#8d949b"/>`;
       pins.push({ ...rel(924, top + mid), label: 'Spot-welded nickel strip', match: { category: 'wire', pattern: /nickel|strip|tab/i } });
     } else if (cell.joining === 'soldered') {
       body += `<path d="M918 ${top + mid} C1000 ${top + mid} 1000 ${top - 60} 1080 ${top - 80}" stroke="#c43a2f" stroke-width="10" fill="none"/><path d="M236 ${top + mid} C150 ${top + mid} 150 ${top - 60} 90 ${top - 80}" stroke="#1b1c1f" stroke-width="10" fill="none"/>
@@ -326,7 +355,11 @@ function cellScene(d: DemoDevice, p: Palette): Illustration {
       body += `<rect x="200" y="${top - 20}" width="760" height="${rows * pitch + 30}" rx="12" fill="none" stroke="#1d1f22" stroke-width="14"/><path d="M940 ${top + 20} l12 8 l-12 8 l12 8 l-12 8 l12 8" stroke="#cfd3d8" stroke-width="5" fill="none"/>`;
       pins.push({ ...rel(946, top + mid), label: 'Spring contact of the cell holder', match: { category: 'connector', pattern: /holder|spring/i } });
     }
-    pins.unshift({ ...rel(575, top + mid), label: `${cell.format} cell${rows > 1 ? ` 1 of ${rows} (${cell.series}S${cell.parallel}P)` : ''}, label ${cell.ratedAh.toFixed(2)} Ah`, match: { category: 'cell' } });
+    pins.unshift({
+      ...rel(575, top + mid),
+      label: `${cell.format} cell${rows > 1 ? ` 1 of ${rows} (${cell.series}S${cell.parallel}P)` : ''}, label ${cell.ratedAh.toFixed(2)} Ah`,
+      match: { category: 'cell' },
+    });
     if (cell.protection) {
       body += `<g filter="url(#shadow)"><rect x="960" y="${450 - 60}" width="150" height="120" rx="8" fill="${p.board}"/></g>${chip(990, 450 - 30, 90, 50, [markings(d).prot[0]!], 3)}`;
       pins.push({ ...rel(1035, 450), label: 'Protection IC board', match: { category: 'ic', pattern: /protect/i } });
@@ -356,7 +389,11 @@ function heaterScene(d: DemoDevice): Illustration {
       <path d="${meander}" fill="none" stroke="#d9b07a" stroke-width="14" stroke-linejoin="round"/><path d="${meander}" fill="none" stroke="#b3672a" stroke-width="6" stroke-linejoin="round"/>
       <rect x="${x + w / 2 - 70}" y="${y + h - 4}" width="140" height="70" rx="6" fill="#c98a2b"/><rect x="${x + w / 2 - 50}" y="${y + h + 30}" width="30" height="30" fill="#e0c28a"/><rect x="${x + w / 2 + 20}" y="${y + h + 30}" width="30" height="30" fill="#e0c28a"/>
       ${d.design.hasTemperatureSensor ? `<rect x="${x + w - 110}" y="${y + 20}" width="46" height="24" rx="3" fill="#2e3338"/>` : ''}`;
-    pins.push({ ...rel(x + w / 2, y + h / 2), label: `Flexible heater element ${count > 1 ? (i === 0 ? 'A (front)' : 'B (back)') : ''}, about ${heater?.ohms ?? '?'} Ω`.replace(' ,', ','), match: { category: 'heater' } });
+    pins.push({
+      ...rel(x + w / 2, y + h / 2),
+      label: `Flexible heater element ${count > 1 ? (i === 0 ? 'A (front)' : 'B (back)') : ''}, about ${heater?.ohms ?? '?'} Ω`.replace(' ,', ','),
+      match: { category: 'heater' },
+    });
     if (d.design.hasTemperatureSensor) pins.push({ ...rel(x + w - 87, y + 32), label: 'NTC on the heater flex', match: { category: 'sensor' } });
   }
   pins.push({ ...rel(count > 1 ? 140 + w / 2 - 35 : 320 + w / 2 - 35, 705), label: 'Solder pads (heater leads)' });
@@ -373,12 +410,21 @@ function motorScene(d: DemoDevice, p: Palette): Illustration {
   for (let i = 0; i < count; i++) {
     const cx = count > 1 ? 330 + i * 540 : 560;
     body += `<g filter="url(#shadow)"><circle cx="${cx}" cy="420" r="200" fill="${p.shell}" stroke="${p.shellEdge}" stroke-width="6"/></g>
-      ${Array.from({ length: brushless ? 11 : 5 }, (_, k) => { const a = (k * 2 * Math.PI) / (brushless ? 11 : 5); return `<path d="M${cx} 420 Q${cx + Math.cos(a + 0.5) * 140} ${420 + Math.sin(a + 0.5) * 140} ${cx + Math.cos(a) * 185} ${420 + Math.sin(a) * 185}" stroke="${p.accent}" stroke-width="${brushless ? 16 : 40}" fill="none" stroke-linecap="round" opacity="0.9"/>`; }).join('')}
+      ${Array.from({ length: brushless ? 11 : 5 }, (_, k) => {
+        const a = (k * 2 * Math.PI) / (brushless ? 11 : 5);
+        return `<path d="M${cx} 420 Q${cx + Math.cos(a + 0.5) * 140} ${420 + Math.sin(a + 0.5) * 140} ${cx + Math.cos(a) * 185} ${420 + Math.sin(a) * 185}" stroke="${p.accent}" stroke-width="${brushless ? 16 : 40}" fill="none" stroke-linecap="round" opacity="0.9"/>`;
+      }).join('')}
       <circle cx="${cx}" cy="420" r="62" fill="#9aa1a8" stroke="#6d747b" stroke-width="5"/><circle cx="${cx}" cy="420" r="14" fill="#3a3f45"/>`;
     pins.push({ ...rel(cx, 420), label: `${brushless ? 'Brushless blower' : 'Brushed DC motor'}${count > 1 ? (i === 0 ? ' (left)' : ' (right)') : ''}`, match: { category: 'motor' } });
   }
   body += `<path d="M${count > 1 ? 330 : 560} 620 C${count > 1 ? 330 : 560} 720 760 760 900 700" stroke="#c43a2f" stroke-width="8" fill="none"/><path d="M${count > 1 ? 350 : 580} 620 C${count > 1 ? 350 : 580} 700 760 740 900 720" stroke="#1b1c1f" stroke-width="8" fill="none"/>`;
-  return { layer: 3, step: 2, caption: `${brushless ? 'Blower' : 'Fan'} motor${count > 1 ? 's' : ''} with the impeller on (demo illustration)`, svg: bench(body, `${d.maker} ${d.model} — motor`), pins };
+  return {
+    layer: 3,
+    step: 2,
+    caption: `${brushless ? 'Blower' : 'Fan'} motor${count > 1 ? 's' : ''} with the impeller on (demo illustration)`,
+    svg: bench(body, `${d.maker} ${d.model} — motor`),
+    pins,
+  };
 }
 
 /** 3–4 illustrations per device: enclosure, board, cells, plus the heater flex or the motor. */

@@ -42,7 +42,14 @@ function electricalLog(key: string, kind: RunMapping['kind'], layout: Layout, s:
     case 'tsv-s':
       lines.push('Elapsed (s)\tVoltage (V)\tCurrent (A)\tPower (W)');
       for (let k = 0; k < n; k++) lines.push(`${s.t[k]!.toFixed(1)}\t${s.v[k]!.toFixed(4)}\t${s.i[k]!.toFixed(4)}\t${(s.v[k]! * s.i[k]!).toFixed(4)}`);
-      mapping = { kind, time: { column: 'Elapsed (s)', unit: 's' }, voltage: { column: 'Voltage (V)', unit: 'V' }, current: { column: 'Current (A)', unit: 'A' }, power: { column: 'Power (W)', unit: 'W' }, delimiter: '\t' };
+      mapping = {
+        kind,
+        time: { column: 'Elapsed (s)', unit: 's' },
+        voltage: { column: 'Voltage (V)', unit: 'V' },
+        current: { column: 'Current (A)', unit: 'A' },
+        power: { column: 'Power (W)', unit: 'W' },
+        delimiter: '\t',
+      };
       return { fileName: `${base}.tsv`, text: lines.join('\n') + '\n', mapping };
     case 'iso-semicolon-comma':
       // A logger with a preamble, ISO timestamps, semicolons and decimal commas.
@@ -51,7 +58,15 @@ function electricalLog(key: string, kind: RunMapping['kind'], layout: Layout, s:
         const iso = new Date(START + Math.round(s.t[k]! * 1000)).toISOString();
         lines.push(`${iso};${s.v[k]!.toFixed(4).replace('.', ',')};${s.i[k]!.toFixed(4).replace('.', ',')}`);
       }
-      mapping = { kind, time: { column: 'timestamp', unit: 'iso' }, voltage: { column: 'voltage', unit: 'V' }, current: { column: 'current', unit: 'A' }, delimiter: ';', decimalComma: true, headerRow: 3 };
+      mapping = {
+        kind,
+        time: { column: 'timestamp', unit: 'iso' },
+        voltage: { column: 'voltage', unit: 'V' },
+        current: { column: 'current', unit: 'A' },
+        delimiter: ';',
+        decimalComma: true,
+        headerRow: 3,
+      };
       return { fileName: `${base}.csv`, text: lines.join('\n') + '\n', mapping };
     case 'csv-min':
       lines.push('time_min,volts,amps');
@@ -155,7 +170,7 @@ function thermalLog(d: DemoDevice): { log: DemoLog; options: RunOptions; label: 
   const heaters = d.design.loads.filter((l) => l.kind === 'heater' && l.ohms);
   if (!h || heaters.length === 0) return null;
   // Element power at the cell's nominal voltage, V²/R per element × count × duty [C].
-  const watts = heaters.reduce((sum, l) => sum + ((d.design.cells.nominalV ** 2) / l.ohms!) * l.count * l.duty, 0);
+  const watts = heaters.reduce((sum, l) => sum + (d.design.cells.nominalV ** 2 / l.ohms!) * l.count * l.duty, 0);
   const ambientC = 25;
   const { series } = simulateHeater({
     watts,

@@ -15,8 +15,32 @@ export interface DemoDevice {
   claims: { capacityAh?: number; capacityWh?: number; outputText?: string; outputWatts?: number; runtimeH?: number; powerW?: number };
   /** The design as found at the bench, in words: what the parts, power and runs steps model. */
   design: {
-    cells: { chemistry: Chemistry; format: string; nominalV: number; maxV: number; ratedAh: number; measuredAh: number; series: number; parallel: number; massKg: number; protection: boolean; joining: 'welded-tab' | 'soldered' | 'holder' | 'connector' };
-    loads: { kind: 'heater' | 'motor' | 'led' | 'usb-output'; label: string; ohms?: number; amps?: number; watts?: number; count: number; connection: 'series' | 'parallel'; duty: number; areaCm2?: number; heatedMassG?: number; via?: 'boost' | 'buck' }[];
+    cells: {
+      chemistry: Chemistry;
+      format: string;
+      nominalV: number;
+      maxV: number;
+      ratedAh: number;
+      measuredAh: number;
+      series: number;
+      parallel: number;
+      massKg: number;
+      protection: boolean;
+      joining: 'welded-tab' | 'soldered' | 'holder' | 'connector';
+    };
+    loads: {
+      kind: 'heater' | 'motor' | 'led' | 'usb-output';
+      label: string;
+      ohms?: number;
+      amps?: number;
+      watts?: number;
+      count: number;
+      connection: 'series' | 'parallel';
+      duty: number;
+      areaCm2?: number;
+      heatedMassG?: number;
+      via?: 'boost' | 'buck';
+    }[];
     converters: { topology: 'buck' | 'boost' | 'buck-boost'; role: 'charge' | 'output' | 'load'; vin: number; vout: number; efficiency: number; source: 'measured' | 'assumed'; chargeA?: number }[];
     hasTemperatureSensor: boolean;
     notes: string;
@@ -34,7 +58,10 @@ export const DEMO_DEVICES: DemoDevice[] = [
     claims: { capacityAh: 5.2, outputText: 'USB-A 5 V 1 A', outputWatts: 5, runtimeH: 6, powerW: 9 },
     design: {
       cells: { chemistry: 'li-ion', format: '18650', nominalV: 3.7, maxV: 4.2, ratedAh: 2.7, measuredAh: 2.62, series: 1, parallel: 1, massKg: 0.046, protection: false, joining: 'welded-tab' },
-      loads: [{ kind: 'heater', label: 'Flexible PCB heater elements (front and back)', ohms: 3.0, count: 2, connection: 'parallel', duty: 1, areaCm2: 2 * 6 * 4.5, heatedMassG: 30 }, { kind: 'usb-output', label: 'USB-A power-bank output', amps: 1, count: 1, connection: 'parallel', duty: 1, via: 'boost' }],
+      loads: [
+        { kind: 'heater', label: 'Flexible PCB heater elements (front and back)', ohms: 3.0, count: 2, connection: 'parallel', duty: 1, areaCm2: 2 * 6 * 4.5, heatedMassG: 30 },
+        { kind: 'usb-output', label: 'USB-A power-bank output', amps: 1, count: 1, connection: 'parallel', duty: 1, via: 'boost' },
+      ],
       converters: [
         { topology: 'buck-boost', role: 'charge', vin: 5, vout: 4.2, efficiency: 0.9, source: 'assumed', chargeA: 1 },
         { topology: 'buck-boost', role: 'output', vin: 3.7, vout: 5, efficiency: 0.88, source: 'measured' },
@@ -48,7 +75,8 @@ export const DEMO_DEVICES: DemoDevice[] = [
       engineer: 'engineer',
       date: '2026-10-12',
       unitLabel: 'Unit A',
-      summary: 'Single-cell pocket heater with a power-bank output. Two ≈3 Ω flexible heaters in parallel across the cell give about 9 W at full duty; the cell lasts a little over an hour at that level. No temperature sensing: heat levels are open-loop PWM.',
+      summary:
+        'Single-cell pocket heater with a power-bank output. Two ≈3 Ω flexible heaters in parallel across the cell give about 9 W at full duty; the cell lasts a little over an hour at that level. No temperature sensing: heat levels are open-loop PWM.',
       safetyNotes: 'Cell discharged to 3.0 V before opening. Heater surface reached 55 °C on the highest level within 10 minutes at 25 °C ambient.',
     },
   },

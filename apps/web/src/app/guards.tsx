@@ -11,7 +11,12 @@ export function RequireAuth({ children }: { children: ReactNode }) {
   const me = useMe();
   const location = useLocation();
   if (me.isPending) return <Spinner label="Opening the workspace…" />;
-  if (me.isError) return <div className="p-8"><ErrorPanel error={me.error} onRetry={() => me.refetch()} /></div>;
+  if (me.isError)
+    return (
+      <div className="p-8">
+        <ErrorPanel error={me.error} onRetry={() => me.refetch()} />
+      </div>
+    );
   if (!me.data) return <Navigate to={paths.signIn(location.pathname + location.search)} replace />;
   return <>{children}</>;
 }

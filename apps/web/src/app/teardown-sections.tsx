@@ -30,9 +30,7 @@ const PartsWithPins = lazy(async () => {
 const FindingsWithPins = lazy(async () => {
   const [{ FindingsSection }, { PinsFor }] = await Promise.all([import('@/features/findings/components/findings-section'), import('@/features/photos/components/pins-for')]);
   return {
-    default: ({ teardown }: SectionProps) => (
-      <FindingsSection teardown={teardown} renderFindingExtras={(findingId) => <PinsFor teardownId={teardown.id} findingId={findingId} />} />
-    ),
+    default: ({ teardown }: SectionProps) => <FindingsSection teardown={teardown} renderFindingExtras={(findingId) => <PinsFor teardownId={teardown.id} findingId={findingId} />} />,
   };
 });
 

@@ -34,8 +34,7 @@ export interface Column<T> {
 }
 
 /** Classes of a cell of a column pinned to the right edge, on the background of its row. */
-const pinned = (col: { pinRight?: boolean }, background: string) =>
-  col.pinRight ? `sticky right-0 ${background} shadow-[-6px_0_6px_-6px_rgb(0_0_0/0.18)]` : '';
+const pinned = (col: { pinRight?: boolean }, background: string) => (col.pinRight ? `sticky right-0 ${background} shadow-[-6px_0_6px_-6px_rgb(0_0_0/0.18)]` : '');
 
 const features = tableFeatures({
   columnFilteringFeature,
@@ -197,7 +196,10 @@ export function DataTable<T extends RowData>({
                   {row.getAllCells().map((cell) => {
                     const col = byId.get(cell.column.id)!;
                     return (
-                      <td key={cell.id} className={`${dense ? 'px-1.5 py-0.5' : 'px-3 py-1'} align-middle ${col.align === 'right' ? 'num text-right' : ''} ${col.className ?? ''} ${pinned(col, 'bg-white')}`}>
+                      <td
+                        key={cell.id}
+                        className={`${dense ? 'px-1.5 py-0.5' : 'px-3 py-1'} align-middle ${col.align === 'right' ? 'num text-right' : ''} ${col.className ?? ''} ${pinned(col, 'bg-white')}`}
+                      >
                         {col.cell ? col.cell(row.original) : (col.value(row.original) ?? <span className="text-graphite-400">—</span>)}
                       </td>
                     );

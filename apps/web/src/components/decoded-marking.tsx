@@ -5,7 +5,11 @@ import { formatQuantity } from '@/lib/format';
 export const readingText = (r: DecodedReadingDto) => `${formatQuantity(r.value, r.unit)}${r.tolerance ? ` ${r.tolerance.text}` : ''}`;
 
 /** The readings after the first, with their rule: "1.24 Ω (EIA-96)". */
-export const otherReadingsText = (readings: DecodedReadingDto[]) => readings.slice(1).map((r) => `${readingText(r)} (${r.schemeShortLabel})`).join(', ');
+export const otherReadingsText = (readings: DecodedReadingDto[]) =>
+  readings
+    .slice(1)
+    .map((r) => `${readingText(r)} (${r.schemeShortLabel})`)
+    .join(', ');
 
 /**
  * A part's decoded marking as the server read it: the first reading and, when the code reads another way
@@ -13,17 +17,7 @@ export const otherReadingsText = (readings: DecodedReadingDto[]) => readings.sli
  * alternative is a button (keyboard and screen-reader reachable) that opens where every reading is listed
  * with its rule; its title gives the ranking rule.
  */
-export function DecodedMarking({
-  readings,
-  onShowAll,
-  expanded,
-  className = '',
-}: {
-  readings: DecodedReadingDto[];
-  onShowAll?: () => void;
-  expanded?: boolean;
-  className?: string;
-}) {
+export function DecodedMarking({ readings, onShowAll, expanded, className = '' }: { readings: DecodedReadingDto[]; onShowAll?: () => void; expanded?: boolean; className?: string }) {
   const first = readings[0];
   if (!first) return null;
   const others = otherReadingsText(readings);

@@ -13,7 +13,13 @@ export interface ConflictField {
 }
 
 /** Fields someone else changed, or that you changed, with both sides. */
-export function conflictFields<T extends Record<string, unknown>>(labels: Record<string, string>, base: T, theirs: T, yours: T, show: (key: string, v: unknown) => string = (_k, v) => (v === null || v === undefined ? '' : String(v))): ConflictField[] {
+export function conflictFields<T extends Record<string, unknown>>(
+  labels: Record<string, string>,
+  base: T,
+  theirs: T,
+  yours: T,
+  show: (key: string, v: unknown) => string = (_k, v) => (v === null || v === undefined ? '' : String(v)),
+): ConflictField[] {
   return Object.entries(labels)
     .map(([key, label]) => ({ key, label, base: show(key, base[key]), theirs: show(key, theirs[key]), yours: show(key, yours[key]) }))
     .filter((f) => f.theirs !== f.base || f.yours !== f.base);
@@ -43,9 +49,15 @@ export function VersionConflict({
           <table className="mt-3 w-full table-fixed border-collapse overflow-hidden rounded bg-white text-left text-graphite-900 ring-1 ring-amber-100">
             <thead className="bg-graphite-50 text-xs uppercase tracking-wide text-graphite-600">
               <tr>
-                <th scope="col" className="w-40 px-2 py-1.5">Field</th>
-                <th scope="col" className="px-2 py-1.5">Theirs (saved now)</th>
-                <th scope="col" className="px-2 py-1.5">Yours</th>
+                <th scope="col" className="w-40 px-2 py-1.5">
+                  Field
+                </th>
+                <th scope="col" className="px-2 py-1.5">
+                  Theirs (saved now)
+                </th>
+                <th scope="col" className="px-2 py-1.5">
+                  Yours
+                </th>
               </tr>
             </thead>
             <tbody>

@@ -1,18 +1,7 @@
 // The explorer's URL round trip: the query string written for a search state reads back as the same
 // state, and the API query made from it parses (with the API's own schema) to the same filters.
 import { describe, expect, it } from 'vitest';
-import {
-  EMPTY_SEARCH,
-  SNIPPET_HIT_END,
-  SNIPPET_HIT_START,
-  searchApiQuery,
-  searchQuery,
-  searchStateToQuery,
-  searchTerms,
-  snippetParts,
-  snippetText,
-  type SearchState,
-} from '@splitcase/contracts';
+import { EMPTY_SEARCH, SNIPPET_HIT_END, SNIPPET_HIT_START, searchApiQuery, searchQuery, searchStateToQuery, searchTerms, snippetParts, snippetText, type SearchState } from '@splitcase/contracts';
 import { changeSearch, readSearchState, searchHref, toggleValue } from './search-url';
 
 /** What Express's query parser makes of a query string: a repeated key becomes a list. */

@@ -30,15 +30,11 @@ describe('CC-CV charge-time estimate', () => {
   });
   it('is never shorter than capacity ÷ current × ccFraction and rises as current falls (property)', () => {
     fc.assert(
-      fc.property(
-        fc.double({ min: 0.1, max: 100, noNaN: true }),
-        fc.double({ min: 0.06, max: 3, noNaN: true }),
-        (cap, c) => {
-          const t = chargeTimeHours({ capacityAh: cap, chargeCurrentA: c * cap });
-          expect(t).toBeGreaterThanOrEqual((0.8 * cap) / (c * cap) - 1e-12);
-          expect(chargeTimeHours({ capacityAh: cap, chargeCurrentA: 0.9 * c * cap })).toBeGreaterThan(t);
-        },
-      ),
+      fc.property(fc.double({ min: 0.1, max: 100, noNaN: true }), fc.double({ min: 0.06, max: 3, noNaN: true }), (cap, c) => {
+        const t = chargeTimeHours({ capacityAh: cap, chargeCurrentA: c * cap });
+        expect(t).toBeGreaterThanOrEqual((0.8 * cap) / (c * cap) - 1e-12);
+        expect(chargeTimeHours({ capacityAh: cap, chargeCurrentA: 0.9 * c * cap })).toBeGreaterThan(t);
+      }),
     );
   });
   it('rejects bad inputs', () => {

@@ -19,12 +19,7 @@ export interface ChargeTimeEstimate {
  * If I is at or below I_t the whole capacity is taken at constant current.
  * Charger and cell losses are ignored: real times are longer.
  */
-export function chargeTimeEstimate(p: {
-  capacityAh: number;
-  chargeCurrentA: number;
-  ccFraction?: number;
-  terminationC?: number;
-}): ChargeTimeEstimate {
+export function chargeTimeEstimate(p: { capacityAh: number; chargeCurrentA: number; ccFraction?: number; terminationC?: number }): ChargeTimeEstimate {
   const capacity = requirePositive(p.capacityAh, 'Capacity (Ah)');
   const current = requirePositive(p.chargeCurrentA, 'Charge current (A)');
   const ccFraction = requireFraction(p.ccFraction ?? 0.8, 'Constant-current fraction');

@@ -1,12 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import {
-  CELL_CHEMISTRIES,
-  SPECIFIC_ENERGY_LIMITS,
-  chargeVoltage,
-  isLithiumChemistry,
-  labelCapacityPlausibility,
-  typicalCellVoltages,
-} from './chemistry';
+import { CELL_CHEMISTRIES, SPECIFIC_ENERGY_LIMITS, chargeVoltage, isLithiumChemistry, labelCapacityPlausibility, typicalCellVoltages } from './chemistry';
 
 describe('typical cell voltages (REFERENCES §4)', () => {
   it('li-ion 3.6–3.7 V nominal, 4.2 V charge [S; CP]', () => {

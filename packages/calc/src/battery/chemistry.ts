@@ -119,13 +119,7 @@ export interface PlausibilityResult {
  * Checks a label capacity against the cell mass: the claimed Wh (or Ah × nominal V)
  * divided by the mass must not exceed the chemistry's believable specific energy.
  */
-export function labelCapacityPlausibility(p: {
-  claimedWh?: number;
-  claimedAh?: number;
-  nominalV?: number;
-  cellMassKg: number;
-  chemistry: CellChemistry;
-}): PlausibilityResult {
+export function labelCapacityPlausibility(p: { claimedWh?: number; claimedAh?: number; nominalV?: number; cellMassKg: number; chemistry: CellChemistry }): PlausibilityResult {
   const chemistry = requireChemistry(p.chemistry);
   let claimedWh: number;
   if (p.claimedWh !== undefined) {

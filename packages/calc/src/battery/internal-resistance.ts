@@ -22,9 +22,7 @@ export function internalResistanceDc(r: DcResistanceReadings): number {
   const u2 = requirePositive(r.highVolts, 'Voltage at the high current U₂ (V)');
   if (!(i2 > i1)) throw new RangeError(`High current I₂ (A) must be above the low current I₁ (got ${i2} A against ${i1} A).`);
   if (!(u1 > u2)) {
-    throw new RangeError(
-      `Voltage at the high current U₂ (V) must be below the voltage at the low current U₁ (got ${u2} V against ${u1} V): a discharging cell sags under more load.`,
-    );
+    throw new RangeError(`Voltage at the high current U₂ (V) must be below the voltage at the low current U₁ (got ${u2} V against ${u1} V): a discharging cell sags under more load.`);
   }
   return (u1 - u2) / (i2 - i1);
 }

@@ -39,8 +39,7 @@ export function airTransportClass(wattHours: number): AirTransportClass {
 /** Plain words for each air-transport class, for warnings and reports. */
 export const AIR_TRANSPORT_CLASS_TEXT: Record<AirTransportClass, string> = {
   'up-to-100-wh': 'Not exceeding 100 Wh: allowed in passenger baggage; spares and power banks in carry-on only, terminals protected.',
-  '100-to-160-wh':
-    'Over 100 Wh, not exceeding 160 Wh: airline approval needed, at most 2 spares, carry-on only.',
+  '100-to-160-wh': 'Over 100 Wh, not exceeding 160 Wh: airline approval needed, at most 2 spares, carry-on only.',
   'over-160-wh': 'Over 160 Wh: forbidden in passenger baggage; ships as dangerous goods (UN 38.3 test summary required).',
 };
 

@@ -91,7 +91,7 @@ describe('heater-trace calculator (REFERENCES §2)', () => {
   it('3 W from both faces of a 150 × 75 mm slab (2 × 0.01125 = 0.0225 m²) at h 10 plus radiation rises 8.52 K [C] (13.333 K by convection alone, REFERENCES §7): no burn warning', () => {
     // P = I²·R: choose I for exactly 3 W through a 3.0 Ω trace.
     const lengthM = (3 * TEN_MIL * OZ) / COPPER_RESISTIVITY_IACS;
-    const r = heaterTraceReport({ lengthM, widthM: TEN_MIL, thicknessM: OZ, currentA: 1, layer: 'external', areaM2: 0.150 * 0.075 });
+    const r = heaterTraceReport({ lengthM, widthM: TEN_MIL, thicknessM: OZ, currentA: 1, layer: 'external', areaM2: 0.15 * 0.075 });
     expect(fig(r, 'power').value as number).toBeCloseTo(3, 9);
     expect(fig(r, 'power').formula).toBe('P = I² · R');
     expect(fig(r, 'voltage').value as number).toBeCloseTo(3, 9);

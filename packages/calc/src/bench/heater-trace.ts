@@ -206,9 +206,7 @@ export function heaterTraceReport(p: HeaterTraceInput): HeaterTraceReport {
   if (areaM2 !== undefined && watts !== undefined) {
     const areaWarnings: string[] = [];
     if (areaM2 < lengthM * widthM) {
-      areaWarnings.push(
-        `The heated area (${plain(areaM2 * 1e4)} cm²) is smaller than the trace's own copper (${plain(lengthM * widthM * 1e4)} cm²): check the area.`,
-      );
+      areaWarnings.push(`The heated area (${plain(areaM2 * 1e4)} cm²) is smaller than the trace's own copper (${plain(lengthM * widthM * 1e4)} cm²): check the area.`);
     }
     const areaInputs = [
       { label: 'Power', value: watts, unit: 'W' },

@@ -10,10 +10,7 @@ import { benchFigure, type BenchFigure } from './figure';
 import type { FormulaKey } from '../figures/formulas';
 import type { FigureInput } from '../shared/explained';
 
-export type RuntimeLoad =
-  | { kind: 'power'; watts: number }
-  | { kind: 'resistance'; ohms: number; supplyVolts: number }
-  | { kind: 'current'; amps: number };
+export type RuntimeLoad = { kind: 'power'; watts: number } | { kind: 'resistance'; ohms: number; supplyVolts: number } | { kind: 'current'; amps: number };
 
 export interface RuntimeInput {
   cellNominalVolts: number;
@@ -99,10 +96,15 @@ export function runtimeReport(p: RuntimeInput): RuntimeReport {
       );
     }
     figures.push(
-      loadPowerFigure('Load power', 'electrical.power', [
-        { label: 'Supply voltage', value: supply, unit: 'V' },
-        { label: 'Load resistance', value: ohms, unit: 'Ω' },
-      ], 'Resistance constant (a heater element warms up and changes a little).'),
+      loadPowerFigure(
+        'Load power',
+        'electrical.power',
+        [
+          { label: 'Supply voltage', value: supply, unit: 'V' },
+          { label: 'Load resistance', value: ohms, unit: 'Ω' },
+        ],
+        'Resistance constant (a heater element warms up and changes a little).',
+      ),
     );
   } else if (load.kind === 'current') {
     const amps = requirePositive(load.amps, 'Load current (A)');
@@ -112,10 +114,15 @@ export function runtimeReport(p: RuntimeInput): RuntimeReport {
       loadWarnings.push('Efficiency is not applied to a current drawn from the pack: the converter losses are already in that current.');
     }
     figures.push(
-      loadPowerFigure('Power drawn from the pack', 'pack.loadFromCurrent', [
-        { label: 'Current from the pack', value: amps, unit: 'A' },
-        { label: 'Pack nominal voltage', value: packV, unit: 'V' },
-      ], 'The current is drawn from the pack at its nominal voltage.'),
+      loadPowerFigure(
+        'Power drawn from the pack',
+        'pack.loadFromCurrent',
+        [
+          { label: 'Current from the pack', value: amps, unit: 'A' },
+          { label: 'Pack nominal voltage', value: packV, unit: 'V' },
+        ],
+        'The current is drawn from the pack at its nominal voltage.',
+      ),
     );
   } else {
     throw new RangeError('The load needs its power (W), its resistance (Ω) with a supply voltage (V), or its current (A).');
@@ -168,9 +175,7 @@ export function runtimeReport(p: RuntimeInput): RuntimeReport {
   const rate = cRate(packAmpsPeak, packAh);
   const rateWarnings: string[] = [];
   if (rate > 1) {
-    rateWarnings.push(
-      `${plain(rate, 3)} C is a heavy discharge for small cells: check the maker's rated continuous current; capacity delivered at high rates is lower than rated.`,
-    );
+    rateWarnings.push(`${plain(rate, 3)} C is a heavy discharge for small cells: check the maker's rated continuous current; capacity delivered at high rates is lower than rated.`);
   }
   figures.push(
     benchFigure({
@@ -202,10 +207,7 @@ export function runtimeReport(p: RuntimeInput): RuntimeReport {
         unit: '',
         formulaKey: 'pack.transportClass',
         inputs: [{ label: 'Pack energy', value: energyWh, unit: 'Wh' }],
-        assumptions: [
-          AIR_TRANSPORT_CLASS_TEXT[cls],
-          'Lithium cells and batteries must pass UN Manual of Tests and Criteria 38.3 to ship [S]; airline and local rules prevail.',
-        ],
+        assumptions: [AIR_TRANSPORT_CLASS_TEXT[cls], 'Lithium cells and batteries must pass UN Manual of Tests and Criteria 38.3 to ship [S]; airline and local rules prevail.'],
         warnings: cls === 'up-to-100-wh' ? [] : [AIR_TRANSPORT_CLASS_TEXT[cls]],
       }),
     );

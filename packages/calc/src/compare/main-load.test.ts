@@ -10,7 +10,12 @@ describe('mainLoads', () => {
       { id: '3', kind: 'heater', fullDutyWatts: 2 },
     ]);
     expect(heater).toEqual({ ids: ['1', '3'], basis: 'category' });
-    expect(mainLoads('power-bank', [{ id: 'u', kind: 'usb-output' }, { id: 'l', kind: 'led', fullDutyWatts: 0.1 }])).toEqual({ ids: ['u'], basis: 'category' });
+    expect(
+      mainLoads('power-bank', [
+        { id: 'u', kind: 'usb-output' },
+        { id: 'l', kind: 'led', fullDutyWatts: 0.1 },
+      ]),
+    ).toEqual({ ids: ['u'], basis: 'category' });
     expect(MAIN_LOAD_KIND.headlamp).toBe('led');
     expect(MAIN_LOAD_KIND['usb-fan']).toBe('motor');
   });
@@ -23,7 +28,12 @@ describe('mainLoads', () => {
         { id: 'c', kind: 'motor', fullDutyWatts: 3 }, // tie with a: the first given stays
       ]),
     ).toEqual({ ids: ['a'], basis: 'largest' });
-    expect(mainLoads('pocket-heater', [{ id: 'm', kind: 'motor', fullDutyWatts: 1 }, { id: 'n', kind: 'led', fullDutyWatts: null }])).toEqual({ ids: ['m'], basis: 'largest' });
+    expect(
+      mainLoads('pocket-heater', [
+        { id: 'm', kind: 'motor', fullDutyWatts: 1 },
+        { id: 'n', kind: 'led', fullDutyWatts: null },
+      ]),
+    ).toEqual({ ids: ['m'], basis: 'largest' });
   });
 
   it('chooses nothing when no load has a power', () => {

@@ -133,10 +133,7 @@ export interface ScoredRow {
  * rank first (by score, ties by id); rows missing one rank after them, so a
  * missing metric is never rewarded (issue 10 §2.9).
  */
-export function weightedScores(
-  rows: { id: string; metrics: Partial<Record<string, number | null>> }[],
-  weights: Record<string, number>,
-): ScoredRow[] {
+export function weightedScores(rows: { id: string; metrics: Partial<Record<string, number | null>> }[], weights: Record<string, number>): ScoredRow[] {
   if (!Array.isArray(rows)) throw new RangeError('rows must be a list of { id, metrics }.');
   if (weights === null || typeof weights !== 'object') throw new RangeError('weights must map metric names to numbers.');
   const used: [MetricKey, number][] = [];

@@ -34,7 +34,11 @@ export function chooseMode(modes: ModeCandidate[], rule: { rule: ModeRule; name?
       `the mode named "${rule.name!.trim()}"`,
     );
   }
-  if (rule.rule === 'power-bank') return pick(modes.find((m) => m.usbOutput), 'the mode in which the USB output runs');
+  if (rule.rule === 'power-bank')
+    return pick(
+      modes.find((m) => m.usbOutput),
+      'the mode in which the USB output runs',
+    );
   const on = modes.filter((m) => m.mainLoadWatts > 0);
   if (on.length === 0) return null;
   const best = on.reduce((a, b) => ((rule.rule === 'highest' ? b.mainLoadWatts > a.mainLoadWatts : b.mainLoadWatts < a.mainLoadWatts) ? b : a));

@@ -37,13 +37,10 @@ describe('paretoFrontier', () => {
 
   it('matches the definition on random lineups (property) [C]', () => {
     fc.assert(
-      fc.property(
-        fc.array(fc.record({ cost: fc.integer({ min: 0, max: 12 }), benefit: fc.integer({ min: 0, max: 12 }) }), { maxLength: 30 }),
-        (raw) => {
-          const points = raw.map((p, k) => ({ id: `d${String(k).padStart(2, '0')}`, ...p }));
-          expect(paretoFrontier(points)).toEqual(bruteForce(points));
-        },
-      ),
+      fc.property(fc.array(fc.record({ cost: fc.integer({ min: 0, max: 12 }), benefit: fc.integer({ min: 0, max: 12 }) }), { maxLength: 30 }), (raw) => {
+        const points = raw.map((p, k) => ({ id: `d${String(k).padStart(2, '0')}`, ...p }));
+        expect(paretoFrontier(points)).toEqual(bruteForce(points));
+      }),
     );
   });
 

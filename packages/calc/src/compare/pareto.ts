@@ -27,7 +27,7 @@ export function paretoFrontier(points: { id: string; cost: number; benefit: numb
   const sorted = [...points].sort((a, b) => a.cost - b.cost || b.benefit - a.benefit || (a.id < b.id ? -1 : 1));
   const frontier: string[] = [];
   let bestCheaper = -Infinity;
-  for (let start = 0; start < sorted.length; ) {
+  for (let start = 0; start < sorted.length;) {
     const cost = sorted[start]!.cost;
     const groupBest = sorted[start]!.benefit; // the group is sorted by benefit, best first
     let end = start;
@@ -47,10 +47,7 @@ export type Better = 'low' | 'high';
  * Frontier for a scatter chart whose axes may be better low or high: ids of
  * the non-dominated points in ascending x (then id), ready to join as a line.
  */
-export function paretoFrontierXY(
-  points: { id: string; x: number; y: number }[],
-  directions: { xBetter: Better; yBetter: Better },
-): string[] {
+export function paretoFrontierXY(points: { id: string; x: number; y: number }[], directions: { xBetter: Better; yBetter: Better }): string[] {
   checkIds(points, 'points');
   for (const key of ['xBetter', 'yBetter'] as const) {
     if (directions?.[key] !== 'low' && directions?.[key] !== 'high') {

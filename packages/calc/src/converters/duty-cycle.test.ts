@@ -1,13 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
-import {
-  boostDutyCycle,
-  boostDutyCycleWithLosses,
-  buckDutyCycle,
-  buckDutyCycleWithLosses,
-  conversionLossWatts,
-  converterInputWatts,
-} from './duty-cycle';
+import { boostDutyCycle, boostDutyCycleWithLosses, buckDutyCycle, buckDutyCycleWithLosses, conversionLossWatts, converterInputWatts } from './duty-cycle';
 
 describe('duty cycle in continuous conduction (REFERENCES §5)', () => {
   it('buck 3.7 → 1.8 V: 0.486486, or 0.540541 with η 0.9 [C; S: Erickson & Maksimović]', () => {

@@ -22,10 +22,7 @@ export function buckDutyCycleWithLosses(vin: number, vout: number, efficiency: n
   const eta = requireEfficiency(efficiency);
   const d = vout / (vin * eta);
   if (d > 1) {
-    throw new RangeError(
-      `Output voltage (V) ${vout} V cannot be reached by a buck (step-down) stage from ${vin} V` +
-        (eta < 1 ? ` at efficiency ${eta}.` : '.'),
-    );
+    throw new RangeError(`Output voltage (V) ${vout} V cannot be reached by a buck (step-down) stage from ${vin} V` + (eta < 1 ? ` at efficiency ${eta}.` : '.'));
   }
   return d;
 }
@@ -37,10 +34,7 @@ export function boostDutyCycleWithLosses(vin: number, vout: number, efficiency: 
   const eta = requireEfficiency(efficiency);
   const d = 1 - (vin * eta) / vout;
   if (d < 0) {
-    throw new RangeError(
-      `Output voltage (V) ${vout} V is below what a boost (step-up) stage gives from ${vin} V` +
-        (eta < 1 ? ` at efficiency ${eta}.` : '.'),
-    );
+    throw new RangeError(`Output voltage (V) ${vout} V is below what a boost (step-up) stage gives from ${vin} V` + (eta < 1 ? ` at efficiency ${eta}.` : '.'));
   }
   return d;
 }

@@ -18,9 +18,7 @@ describe('convertCurrency', () => {
     expect(convertCurrency(10, 'EUR', 'USD', table)).toBeCloseTo(10.856, 12);
     const listed = { base: 'EUR', rates: { ...table.rates, EUR: 1 } };
     expect(convertCurrency(10, 'EUR', 'USD', listed)).toBeCloseTo(10.856, 12);
-    expect(() => convertCurrency(10, 'EUR', 'USD', { base: 'EUR', rates: { EUR: 1.1, USD: 1.0856 } })).toThrow(
-      /base currency EUR must have rate 1/,
-    );
+    expect(() => convertCurrency(10, 'EUR', 'USD', { base: 'EUR', rates: { EUR: 1.1, USD: 1.0856 } })).toThrow(/base currency EUR must have rate 1/);
   });
 
   it('accepts codes in any case and with spaces, and needs no rate to stay in one currency', () => {
@@ -32,19 +30,13 @@ describe('convertCurrency', () => {
   it('round-trips and is consistent through any intermediate currency (property) [C]', () => {
     const codes = ['EUR', 'USD', 'CNY', 'GBP'] as const;
     fc.assert(
-      fc.property(
-        fc.double({ min: -1e6, max: 1e6, noNaN: true }),
-        fc.constantFrom(...codes),
-        fc.constantFrom(...codes),
-        fc.constantFrom(...codes),
-        (amount, a, b, c) => {
-          const direct = convertCurrency(amount, a, c, table);
-          const viaB = convertCurrency(convertCurrency(amount, a, b, table), b, c, table);
-          expect(Math.abs(viaB - direct)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(direct)));
-          const back = convertCurrency(direct, c, a, table);
-          expect(Math.abs(back - amount)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(amount)));
-        },
-      ),
+      fc.property(fc.double({ min: -1e6, max: 1e6, noNaN: true }), fc.constantFrom(...codes), fc.constantFrom(...codes), fc.constantFrom(...codes), (amount, a, b, c) => {
+        const direct = convertCurrency(amount, a, c, table);
+        const viaB = convertCurrency(convertCurrency(amount, a, b, table), b, c, table);
+        expect(Math.abs(viaB - direct)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(direct)));
+        const back = convertCurrency(direct, c, a, table);
+        expect(Math.abs(back - amount)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(amount)));
+      }),
     );
   });
 

@@ -2,12 +2,7 @@
 export { convertCurrency, crossRate, rateFor, normaliseCurrency, type RateTable } from './currency';
 export { referenceRatesFromTree, type ReferenceRates } from './reference-rates';
 export { costWaterfall, type WaterfallBar } from './waterfall';
-export {
-  unitPriceAtQuantity,
-  validatePriceBreaks,
-  type PriceBreak,
-  type PriceBreakProblem,
-} from './price-breaks';
+export { unitPriceAtQuantity, validatePriceBreaks, type PriceBreak, type PriceBreakProblem } from './price-breaks';
 export { landedCost, marginFromMarkup, markupFromMargin, type LandedCostInput, type LandedCostResult } from './landed';
 export {
   rollUpCost,

@@ -22,27 +22,21 @@ describe('unitPriceAtQuantity', () => {
 
   it('agrees with a brute-force search (property) [C]', () => {
     fc.assert(
-      fc.property(
-        fc.uniqueArray(fc.integer({ min: 1, max: 100_000 }), { minLength: 1, maxLength: 8 }),
-        fc.integer({ min: 1, max: 200_000 }),
-        (qtys, qty) => {
-          const sorted = [...qtys].sort((a, b) => a - b);
-          const list = sorted.map((minQty, k) => ({ minQty, unitPrice: 10 - k }));
-          const eligible = list.filter((b) => b.minQty <= qty);
-          if (eligible.length === 0) {
-            expect(() => unitPriceAtQuantity(list, qty)).toThrow(/below the smallest price break/);
-          } else {
-            expect(unitPriceAtQuantity(list, qty)).toBe(eligible[eligible.length - 1]!.unitPrice);
-          }
-        },
-      ),
+      fc.property(fc.uniqueArray(fc.integer({ min: 1, max: 100_000 }), { minLength: 1, maxLength: 8 }), fc.integer({ min: 1, max: 200_000 }), (qtys, qty) => {
+        const sorted = [...qtys].sort((a, b) => a - b);
+        const list = sorted.map((minQty, k) => ({ minQty, unitPrice: 10 - k }));
+        const eligible = list.filter((b) => b.minQty <= qty);
+        if (eligible.length === 0) {
+          expect(() => unitPriceAtQuantity(list, qty)).toThrow(/below the smallest price break/);
+        } else {
+          expect(unitPriceAtQuantity(list, qty)).toBe(eligible[eligible.length - 1]!.unitPrice);
+        }
+      }),
     );
   });
 
   it('rejects a quantity below the first break or not positive', () => {
-    expect(() => unitPriceAtQuantity([{ minQty: 10, unitPrice: 1 }], 9)).toThrow(
-      /quantity 9 is below the smallest price break \(minQty 10\)/,
-    );
+    expect(() => unitPriceAtQuantity([{ minQty: 10, unitPrice: 1 }], 9)).toThrow(/quantity 9 is below the smallest price break \(minQty 10\)/);
     expect(() => unitPriceAtQuantity(breaks, 0)).toThrow(/quantity must be greater than zero/);
   });
 
@@ -73,13 +67,7 @@ describe('unitPriceAtQuantity', () => {
 
 describe('validatePriceBreaks', () => {
   it('lists every problem with its index and field', () => {
-    const problems = validatePriceBreaks([
-      { minQty: 10, unitPrice: 1 },
-      { minQty: 0, unitPrice: 1 },
-      { minQty: 5, unitPrice: -2 },
-      null as never,
-      { minQty: 20, unitPrice: Number.NaN },
-    ]);
+    const problems = validatePriceBreaks([{ minQty: 10, unitPrice: 1 }, { minQty: 0, unitPrice: 1 }, { minQty: 5, unitPrice: -2 }, null as never, { minQty: 20, unitPrice: Number.NaN }]);
     expect(problems.map(({ index, field }) => ({ index, field }))).toEqual([
       { index: 1, field: 'minQty' },
       { index: 2, field: 'minQty' },

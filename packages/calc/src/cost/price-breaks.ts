@@ -84,9 +84,7 @@ export function unitPriceAtQuantity(breaks: { minQty: number; unitPrice: number 
   requirePositive(qty, 'quantity');
   const k = breakIndexAt(breaks, qty);
   if (k === -1) {
-    throw new RangeError(
-      `quantity ${qty} is below the smallest price break (minQty ${(breaks[0] as PriceBreak).minQty}); no price applies.`,
-    );
+    throw new RangeError(`quantity ${qty} is below the smallest price break (minQty ${(breaks[0] as PriceBreak).minQty}); no price applies.`);
   }
   return (breaks[k] as PriceBreak).unitPrice;
 }

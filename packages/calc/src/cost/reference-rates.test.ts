@@ -6,8 +6,7 @@ import { convertCurrency, crossRate } from './currency';
 import { referenceRatesFromTree } from './reference-rates';
 
 // The parser settings the API uses: attributes as '@_name', every value kept as text.
-const parse = (xml: string) =>
-  new XMLParser({ ignoreAttributes: false, attributeNamePrefix: '@_', parseAttributeValue: false, parseTagValue: false, processEntities: false }).parse(xml);
+const parse = (xml: string) => new XMLParser({ ignoreAttributes: false, attributeNamePrefix: '@_', parseAttributeValue: false, parseTagValue: false, processEntities: false }).parse(xml);
 
 describe('referenceRatesFromTree — the fixture in the published daily-file structure [S: ECB rate page; published sample files]', () => {
   const table = referenceRatesFromTree(parse(demoXml));
@@ -67,8 +66,7 @@ describe('referenceRatesFromTree — the fixture in the published daily-file str
 });
 
 describe('referenceRatesFromTree — anything else is refused, naming the element or attribute', () => {
-  const envelope = (inner: string) =>
-    `<gesmes:Envelope xmlns:gesmes="http://www.gesmes.org/xml/2002-08-01" xmlns="http://www.ecb.int/vocabulary/2002-08-01/eurofxref">${inner}</gesmes:Envelope>`;
+  const envelope = (inner: string) => `<gesmes:Envelope xmlns:gesmes="http://www.gesmes.org/xml/2002-08-01" xmlns="http://www.ecb.int/vocabulary/2002-08-01/eurofxref">${inner}</gesmes:Envelope>`;
   const read = (xml: string) => () => referenceRatesFromTree(parse(xml));
 
   it('refuses other XML documents', () => {
@@ -83,25 +81,15 @@ describe('referenceRatesFromTree — anything else is refused, naming the elemen
   it('names the missing or wrong part', () => {
     expect(read(envelope('<gesmes:subject>Reference rates</gesmes:subject>'))).toThrow(/gesmes:Envelope has no Cube element/);
     expect(read(envelope('<Cube></Cube>'))).toThrow(/the Cube element has no Cube time="YYYY-MM-DD" children/);
-    expect(read(envelope('<Cube><Cube time="27/11/2026"><Cube currency="USD" rate="1.08"/></Cube></Cube>'))).toThrow(
-      /Cube\[1\]@time must be a date YYYY-MM-DD \(got "27\/11\/2026"\)/,
-    );
+    expect(read(envelope('<Cube><Cube time="27/11/2026"><Cube currency="USD" rate="1.08"/></Cube></Cube>'))).toThrow(/Cube\[1\]@time must be a date YYYY-MM-DD \(got "27\/11\/2026"\)/);
     expect(read(envelope('<Cube><Cube time="2026-02-30"><Cube currency="USD" rate="1.08"/></Cube></Cube>'))).toThrow(/Cube\[1\]@time must be a date/);
     expect(read(envelope('<Cube><Cube><Cube currency="USD" rate="1.08"/></Cube></Cube>'))).toThrow(/Cube\[1\]@time must be a date YYYY-MM-DD \(got null\)/);
     expect(read(envelope('<Cube><Cube time="2026-11-27"></Cube></Cube>'))).toThrow(/Cube time="2026-11-27" has no Cube currency\/rate entries/);
-    expect(read(envelope('<Cube><Cube time="2026-11-27"><Cube currency="US Dollar" rate="1.08"/></Cube></Cube>'))).toThrow(
-      /Cube time="2026-11-27" › Cube\[1\]@currency must be a three-letter code/,
-    );
-    expect(read(envelope('<Cube><Cube time="2026-11-27"><Cube currency="USD" rate="1,08"/></Cube></Cube>'))).toThrow(
-      /Cube\[1\]@rate for USD must be a decimal number \(got "1,08"\)/,
-    );
+    expect(read(envelope('<Cube><Cube time="2026-11-27"><Cube currency="US Dollar" rate="1.08"/></Cube></Cube>'))).toThrow(/Cube time="2026-11-27" › Cube\[1\]@currency must be a three-letter code/);
+    expect(read(envelope('<Cube><Cube time="2026-11-27"><Cube currency="USD" rate="1,08"/></Cube></Cube>'))).toThrow(/Cube\[1\]@rate for USD must be a decimal number \(got "1,08"\)/);
     expect(read(envelope('<Cube><Cube time="2026-11-27"><Cube currency="USD"/></Cube></Cube>'))).toThrow(/@rate for USD must be a decimal number \(got null\)/);
-    expect(read(envelope('<Cube><Cube time="2026-11-27"><Cube currency="USD" rate="0.000"/></Cube></Cube>'))).toThrow(
-      /@rate for USD must be greater than zero/,
-    );
-    expect(read(envelope('<Cube><Cube time="2026-11-27"><Cube currency="USD" rate="1.08"/><Cube currency="USD" rate="1.09"/></Cube></Cube>'))).toThrow(
-      /Cube\[2\]: USD is listed twice for 2026-11-27/,
-    );
+    expect(read(envelope('<Cube><Cube time="2026-11-27"><Cube currency="USD" rate="0.000"/></Cube></Cube>'))).toThrow(/@rate for USD must be greater than zero/);
+    expect(read(envelope('<Cube><Cube time="2026-11-27"><Cube currency="USD" rate="1.08"/><Cube currency="USD" rate="1.09"/></Cube></Cube>'))).toThrow(/Cube\[2\]: USD is listed twice for 2026-11-27/);
     expect(read(envelope('<Cube><Cube time="2026-11-27"><Cube currency="EUR" rate="1.2"/></Cube></Cube>'))).toThrow(/EUR is the base/);
     // EUR listed at 1 is harmless and left out.
     expect(referenceRatesFromTree(parse(envelope('<Cube><Cube time="2026-11-27"><Cube currency="EUR" rate="1"/><Cube currency="USD" rate="1.08"/></Cube></Cube>'))).rates).toEqual({

@@ -348,9 +348,7 @@ describe('rollUpCost — errors name the field', () => {
     expect(() => rollUpCost({ ...input, model: { ...model, currency: 'CHF' } })).toThrow(/^model\.currency: no exchange rate for CHF/);
     expect(() => rollUpCost({ ...input, retail: { amount: 10, currency: 'SEK' } })).toThrow(/^retail\.currency: no exchange rate for SEK/);
     expect(() => rollUpCost({ ...input, retail: { amount: 0, currency: 'USD' } })).toThrow(/retail\.amount/);
-    expect(() => rollUpCost(withLine({ price: { currency: 'JPY', confidence: 'high', breaks: [{ minQty: 1, unitPrice: 1 }] } }))).toThrow(
-      /^lines\[0\]\.price\.currency: no exchange rate for JPY/,
-    );
+    expect(() => rollUpCost(withLine({ price: { currency: 'JPY', confidence: 'high', breaks: [{ minQty: 1, unitPrice: 1 }] } }))).toThrow(/^lines\[0\]\.price\.currency: no exchange rate for JPY/);
     expect(() => rollUpCost(null as never)).toThrow(/needs \{ volume/);
   });
 
@@ -470,8 +468,7 @@ describe('rollUpCost — sales tax in the retail price (REFERENCES §12 "Sales t
 describe('rollUpCost — a margin with unpriced lines is incomplete, not a number', () => {
   const model0: CostModel = { ...model, currency: 'USD', packagingCost: 0, manualOperations: [], testMinutes: 0 };
   const unpriced = (n: number) => Array.from({ length: n }, (_, k) => ({ partId: `P${k + 1}`, category: 'passive', quantity: 1, mount: 'smt' as const }));
-  const priced = (n: number) =>
-    unpriced(n).map((l) => ({ ...l, price: { currency: 'USD', confidence: 'high' as const, breaks: [{ minQty: 1, unitPrice: 0.1 }] } }));
+  const priced = (n: number) => unpriced(n).map((l) => ({ ...l, price: { currency: 'USD', confidence: 'high' as const, breaks: [{ minQty: 1, unitPrice: 0.1 }] } }));
 
   it('0 of 13 lines priced: no margin figure, the reason and the count instead', () => {
     const r = rollUpCost({ volume: 1000, currency: 'USD', rates, model: model0, lines: unpriced(13), retail: { amount: 24.99, currency: 'USD', salesTaxRate: 0 } });

@@ -284,8 +284,7 @@ export function rollUpCost(p: RollUpInput): CostRollUp {
   const currency = normaliseCurrency(p.currency, 'currency');
   const m = checkModel(p.model);
   // Amounts already in the reporting currency need no rate; others go through the table's base.
-  const toReport = (amount: number, from: string, field: string) =>
-    from === currency ? amount : (amount / rateFor(p.rates, from, field)) * rateFor(p.rates, currency, 'currency');
+  const toReport = (amount: number, from: string, field: string) => (from === currency ? amount : (amount / rateFor(p.rates, from, field)) * rateFor(p.rates, currency, 'currency'));
   const modelFactor = toReport(1, m.currency, 'model.currency');
 
   if (!Array.isArray(p.lines)) throw new RangeError('lines must be a list of BOM lines (it may be empty).');
@@ -340,9 +339,7 @@ export function rollUpCost(p: RollUpInput): CostRollUp {
     const belowMinimumOrder = index === -1;
     if (belowMinimumOrder) {
       index = 0;
-      warnings.push(
-        `${partId}: ${fmt(buyQuantity)} pieces is below the smallest price break (${(price.breaks[0] as PriceBreak).minQty}); priced at that break.`,
-      );
+      warnings.push(`${partId}: ${fmt(buyQuantity)} pieces is below the smallest price break (${(price.breaks[0] as PriceBreak).minQty}); priced at that break.`);
     }
     const unitPrice = toReport((price.breaks[index] as PriceBreak).unitPrice, priceCurrency, `${path}.price.currency`);
     const extended = quantity * unitPrice * (1 + attrition);
@@ -484,13 +481,9 @@ export function rollUpCost(p: RollUpInput): CostRollUp {
       label: m.insuranceBasis === 'cif' ? 'Insurance (CIF basis)' : 'Insurance (goods only)',
       value: mid.insurance,
       formula:
-        m.insuranceBasis === 'cif'
-          ? `${fmt(m.insurance)} × (${fmt(mid.exWorks)} + ${fmt(mid.freight)}) = ${fmt(mid.insurance)}`
-          : `${fmt(m.insurance)} × ${fmt(mid.exWorks)} = ${fmt(mid.insurance)}`,
+        m.insuranceBasis === 'cif' ? `${fmt(m.insurance)} × (${fmt(mid.exWorks)} + ${fmt(mid.freight)}) = ${fmt(mid.insurance)}` : `${fmt(m.insurance)} × ${fmt(mid.exWorks)} = ${fmt(mid.insurance)}`,
       inputs: [
-        m.insuranceBasis === 'cif'
-          ? { label: 'Goods + freight (CIF basis)', value: insured, unit: cur }
-          : { label: 'Ex-works cost (goods only)', value: insured, unit: cur },
+        m.insuranceBasis === 'cif' ? { label: 'Goods + freight (CIF basis)', value: insured, unit: cur } : { label: 'Ex-works cost (goods only)', value: insured, unit: cur },
         { label: 'Insurance', value: pct(m.insurance), unit: '%' },
       ],
     },
@@ -593,9 +586,7 @@ export function rollUpCost(p: RollUpInput): CostRollUp {
         key: 'impliedMargin',
         label: 'Implied margin',
         value: marginAmount,
-        formula: `${fmt(netToMaker)} − ${fmt(mid.landed)} = ${fmt(marginAmount)}${
-          impliedMargin.fraction === null ? '' : ` (${fmt(impliedMargin.fraction * 100)} % of net)`
-        }`,
+        formula: `${fmt(netToMaker)} − ${fmt(mid.landed)} = ${fmt(marginAmount)}${impliedMargin.fraction === null ? '' : ` (${fmt(impliedMargin.fraction * 100)} % of net)`}`,
         inputs: [
           { label: 'Net to maker', value: netToMaker, unit: cur },
           { label: 'Landed cost', value: mid.landed, unit: cur },

@@ -42,8 +42,23 @@ describe('costWaterfall — from parts to retail [C]', () => {
     // test 0; packaging 0.50; yield loss 0; overhead = 0.10 × (4 + 1.01 + 0.5 + 0.5) = 0.601
     // ex-works = 6.611; freight = 0.05 × 6.611 = 0.33055; insurance 0; duty 0; landed = 6.94155
     expect(bars.map((b) => b.key)).toEqual([
-      'parts', 'assembly', 'labour', 'test', 'packaging', 'yieldLoss', 'overhead', 'exWorks',
-      'freight', 'insurance', 'duty', 'landed', 'impliedMargin', 'netToMaker', 'platform', 'retailer', 'retail',
+      'parts',
+      'assembly',
+      'labour',
+      'test',
+      'packaging',
+      'yieldLoss',
+      'overhead',
+      'exWorks',
+      'freight',
+      'insurance',
+      'duty',
+      'landed',
+      'impliedMargin',
+      'netToMaker',
+      'platform',
+      'retailer',
+      'retail',
     ]);
     expect(bar.parts).toMatchObject({ kind: 'step', start: 0, end: 4 });
     expect(bar.assembly!.start).toBeCloseTo(4, 12);
@@ -69,7 +84,16 @@ describe('costWaterfall — from parts to retail [C]', () => {
   });
 
   it('shows a loss as a step down, and stops at landed cost without a retail price', () => {
-    const loss = costWaterfall(rollUpCost({ ...r, volume: 100, rates: { base: 'USD', rates: {} }, model, lines: [{ partId: 'A', category: 'ic', quantity: 1, mount: 'manual', price: price(9) }], retail: { amount: 10, currency: 'USD' } }));
+    const loss = costWaterfall(
+      rollUpCost({
+        ...r,
+        volume: 100,
+        rates: { base: 'USD', rates: {} },
+        model,
+        lines: [{ partId: 'A', category: 'ic', quantity: 1, mount: 'manual', price: price(9) }],
+        retail: { amount: 10, currency: 'USD' },
+      }),
+    );
     const margin = loss.find((b) => b.key === 'impliedMargin')!;
     expect(margin.value).toBeLessThan(0);
     expect(margin.end).toBeLessThan(margin.start);

@@ -1,14 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
-import {
-  combineResistances,
-  currentFromVoltageAndResistance,
-  dutyForTargetPower,
-  powerFromVoltageAndResistance,
-  pwmAveragePower,
-  requireConnection,
-  rmsVoltage,
-} from './ohms-law';
+import { combineResistances, currentFromVoltageAndResistance, dutyForTargetPower, powerFromVoltageAndResistance, pwmAveragePower, requireConnection, rmsVoltage } from './ohms-law';
 
 const resistance = fc.double({ min: 1e-3, max: 1e6, noNaN: true });
 
@@ -97,17 +89,13 @@ describe('properties', () => {
 
   it('duty for a target power is within 0..1 and round-trips through pwmAveragePower', () => {
     fc.assert(
-      fc.property(
-        fc.double({ min: 1e-3, max: 1e4, noNaN: true }),
-        fc.double({ min: 0, max: 1, noNaN: true }),
-        (peak, share) => {
-          const target = peak * share;
-          const d = dutyForTargetPower(peak, target);
-          expect(d).toBeGreaterThanOrEqual(0);
-          expect(d).toBeLessThanOrEqual(1);
-          expect(pwmAveragePower(peak, d)).toBeCloseTo(target, 6);
-        },
-      ),
+      fc.property(fc.double({ min: 1e-3, max: 1e4, noNaN: true }), fc.double({ min: 0, max: 1, noNaN: true }), (peak, share) => {
+        const target = peak * share;
+        const d = dutyForTargetPower(peak, target);
+        expect(d).toBeGreaterThanOrEqual(0);
+        expect(d).toBeLessThanOrEqual(1);
+        expect(pwmAveragePower(peak, d)).toBeCloseTo(target, 6);
+      }),
     );
   });
 

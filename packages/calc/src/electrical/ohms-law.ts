@@ -49,9 +49,7 @@ export function dutyForTargetPower(peakWatts: number, targetWatts: number): numb
   requirePositive(peakWatts, 'Peak power (W)');
   requireNonNegative(targetWatts, 'Target power (W)');
   if (targetWatts > peakWatts) {
-    throw new RangeError(
-      `Target power (W) must not exceed the peak power: ${targetWatts} W asked, ${peakWatts} W available at full duty.`,
-    );
+    throw new RangeError(`Target power (W) must not exceed the peak power: ${targetWatts} W asked, ${peakWatts} W available at full duty.`);
   }
   return targetWatts / peakWatts;
 }

@@ -28,7 +28,11 @@ export function powerBankFigures(ctx: FigureContext, loads: LoadSet): void {
       value: powerBankOutputAh({ energyWh: pack.energyWh, outputVolts: usbOut.c.vout, efficiency: eta }),
       unit: 'Ah',
       family: 'powerbank.outputAh',
-      inputs: [inp('packWh', 'Pack energy', pack.energyWh, 'Wh'), inp('outputVolts', 'Output voltage', usbOut.c.vout, 'V'), inp('efficiency', runUsable ? 'Efficiency (measured in a bench run)' : 'Converter efficiency', eta)],
+      inputs: [
+        inp('packWh', 'Pack energy', pack.energyWh, 'Wh'),
+        inp('outputVolts', 'Output voltage', usbOut.c.vout, 'V'),
+        inp('efficiency', runUsable ? 'Efficiency (measured in a bench run)' : 'Converter efficiency', eta),
+      ],
       assumptions: ['Rated capacity is quoted at cell voltage; the output figure is what reaches the USB port.', etaNote],
       warnings: run && !runUsable ? [`The power-bank run's efficiency ${num(run.efficiency)} is above 1: check the run's columns and the cell energy it was set against.`] : [],
       implausible: run !== undefined && !runUsable,
@@ -47,7 +51,12 @@ export function powerBankFigures(ctx: FigureContext, loads: LoadSet): void {
           family: 'powerbank.deliveredVsLabel',
           inputs: [inp('deliveredWh', 'Delivered at the output', run.deliveredWh, 'Wh'), inp('labelWh', 'Label energy', label.wh, 'Wh'), inp('run', 'Bench run', run.basis)],
           assumptions: [`Label energy: ${label.basis}.`, 'A power bank delivers 80–90 % of its cell energy at 5 V (REFERENCES §5 [CP]).'],
-          warnings: share < 0.8 ? [`${num(share * 100)} % of the label reaches the output, below the 80 % a sound conversion gives [CP].`] : share > 1 ? ['More energy delivered than the label holds: check the run.'] : [],
+          warnings:
+            share < 0.8
+              ? [`${num(share * 100)} % of the label reaches the output, below the 80 % a sound conversion gives [CP].`]
+              : share > 1
+                ? ['More energy delivered than the label holds: check the run.']
+                : [],
           implausible: share > 1.05,
         }),
       );
@@ -98,8 +107,10 @@ export function chargeFigures(ctx: FigureContext, loads: LoadSet): void {
     const atNominal = usbChargeInput({ packVolts: pack.volts, chargeAmps: current, efficiency: charger.eta, busVolts: charger.c.vin });
     const atMax = cellLimit ? usbChargeInput({ packVolts: cellLimit * pack.p.series, chargeAmps: current, efficiency: charger.eta, busVolts: charger.c.vin }) : atNominal;
     const portWarnings: string[] = [];
-    if (!atMax.port) portWarnings.push(`${num(atMax.amps)} A at the end of the constant-current phase is more than a 5 V port supplies (${USB_PORT_LEVELS.at(-1)!.amps} A at most without USB Power Delivery).`);
-    else if (atMax.amps > USB_PORT_LEVELS[0]!.amps) portWarnings.push(`Above 500 mA: a plain USB 2.0 port cannot supply it; it needs a ${atMax.port.label}. On a weaker port the charger must limit its input or the port voltage sags.`);
+    if (!atMax.port)
+      portWarnings.push(`${num(atMax.amps)} A at the end of the constant-current phase is more than a 5 V port supplies (${USB_PORT_LEVELS.at(-1)!.amps} A at most without USB Power Delivery).`);
+    else if (atMax.amps > USB_PORT_LEVELS[0]!.amps)
+      portWarnings.push(`Above 500 mA: a plain USB 2.0 port cannot supply it; it needs a ${atMax.port.label}. On a weaker port the charger must limit its input or the port voltage sags.`);
     ctx.figures.push(
       figure({
         key: 'charge.inputCurrent',
@@ -116,7 +127,10 @@ export function chargeFigures(ctx: FigureContext, loads: LoadSet): void {
           inp('peakAmps', 'At the end of constant current (cell at its charge voltage)', atMax.amps, 'A'),
           inp('port', 'Smallest port that covers it', atMax.port?.label ?? 'none without USB Power Delivery'),
         ],
-        assumptions: [...(charger.note ? [charger.note] : []), 'Average over the constant-current phase at the pack nominal voltage; the draw rises to the peak figure as the cells reach their charge voltage.'],
+        assumptions: [
+          ...(charger.note ? [charger.note] : []),
+          'Average over the constant-current phase at the pack nominal voltage; the draw rises to the peak figure as the cells reach their charge voltage.',
+        ],
         warnings: portWarnings,
       }),
     );

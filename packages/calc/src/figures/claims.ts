@@ -52,5 +52,12 @@ export function claimFigures(ctx: FigureContext, loads: LoadSet, modes: ModesOut
     const hasUsb = loads.computed.some(isUsb);
     emit('claim.outputWatts', 'Computed output against the claimed', outputWatts, hasUsb ? highest(loads, modes, isUsb) : highest(loads, modes, () => true), hasUsb ? 'the USB output' : 'the loads');
   }
-  if (powerWatts !== undefined) emit('claim.powerWatts', 'Computed power against the claimed', powerWatts, highest(loads, modes, (l) => !isUsb(l)), 'the loads other than USB outputs');
+  if (powerWatts !== undefined)
+    emit(
+      'claim.powerWatts',
+      'Computed power against the claimed',
+      powerWatts,
+      highest(loads, modes, (l) => !isUsb(l)),
+      'the loads other than USB outputs',
+    );
 }

@@ -190,7 +190,12 @@ export function surfaceTemperatureFigure(ctx: FigureContext, h: HeaterState, key
     unit: '°C',
     family: h.measured ? 'heater.surfaceMeasured' : 'heater.surfaceTemperature',
     inputs: h.measured
-      ? [inp('measuredSurfaceC', 'Measured surface temperature', h.measured.temperatureC, '°C'), inp('measuredIn', 'Measured in', h.measured.basis), inp('estimatedSurfaceC', 'Estimated surface temperature (for comparison)', h.estimatedSurface, '°C'), ...estimateInputs(h)]
+      ? [
+          inp('measuredSurfaceC', 'Measured surface temperature', h.measured.temperatureC, '°C'),
+          inp('measuredIn', 'Measured in', h.measured.basis),
+          inp('estimatedSurfaceC', 'Estimated surface temperature (for comparison)', h.estimatedSurface, '°C'),
+          ...estimateInputs(h),
+        ]
       : [...estimateInputs(h), inp('surfaceRise', 'Surface rise', h.rise, '°C')],
     assumptions: estimateAssumptions(ctx, h),
     warnings: disagreement(h),
@@ -293,7 +298,8 @@ export function heaterExtraFigures(ctx: FigureContext, h: HeaterState, prefix: s
           inp('thresholdRise', 'Rise to the burn threshold', h.threshold.thresholdC - ctx.ambientC, '°C'),
         ],
         assumptions: ['Starts at ambient; first-order rise T(t) = T_a + ΔT_ss·(1 − e^(−t/τ)).'],
-        warnings: t.toThresholdSeconds !== null ? [`The surface passes the ${h.threshold.thresholdC} °C threshold after about ${num(t.toThresholdSeconds / 60, 2)} min of use.`, HOT_SURFACE_CAUTION] : [],
+        warnings:
+          t.toThresholdSeconds !== null ? [`The surface passes the ${h.threshold.thresholdC} °C threshold after about ${num(t.toThresholdSeconds / 60, 2)} min of use.`, HOT_SURFACE_CAUTION] : [],
         modeId,
       }),
     );
@@ -333,6 +339,11 @@ export function dutyForTargetFigure(ctx: FigureContext, info: LoadInfo, key: str
       'Steady state: the PWM period is much shorter than the thermal time constant, so the average power sets the temperature.',
       'Holding the target in use needs a temperature sensor and feedback; a fixed duty holds it only at this ambient and with nothing covering the heater.',
     ],
-    warnings: raw > 1 ? [`Out of reach: at full duty the surface reaches only about ${num(ctx.ambientC + steadySurfaceRiseC({ watts: full, areaM2: area, ambientC: ctx.ambientC, emissivity: emissivity.value }))} °C.`] : [],
+    warnings:
+      raw > 1
+        ? [
+            `Out of reach: at full duty the surface reaches only about ${num(ctx.ambientC + steadySurfaceRiseC({ watts: full, areaM2: area, ambientC: ctx.ambientC, emissivity: emissivity.value }))} °C.`,
+          ]
+        : [],
   });
 }

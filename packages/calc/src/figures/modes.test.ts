@@ -91,11 +91,27 @@ describe('per-mode figures (issue 10 §1)', () => {
   it('refuses a mode that names an unknown load, lists a load twice or has a duty above 1', () => {
     const bad = (m: NonNullable<TeardownFigureInput['modes']>) => () => teardownFigures({ ...base, modes: m });
     expect(bad([{ id: 'x', name: 'X', loads: [{ loadId: 'nope', duty: 1 }] }])).toThrow(/refers to load "nope"/);
-    expect(bad([{ id: 'x', name: 'X', loads: [{ loadId: 'h', duty: 1 }, { loadId: 'h', duty: 0.5 }] }])).toThrow(/twice/);
+    expect(
+      bad([
+        {
+          id: 'x',
+          name: 'X',
+          loads: [
+            { loadId: 'h', duty: 1 },
+            { loadId: 'h', duty: 0.5 },
+          ],
+        },
+      ]),
+    ).toThrow(/twice/);
     expect(bad([{ id: 'x', name: 'X', loads: [{ loadId: 'h', duty: 1.5 }] }])).toThrow(/duty of load "h"/);
     expect(bad([{ id: 'x', name: '', loads: [] }])).toThrow(/needs a name/);
     expect(bad([{ id: 'x', name: 'X', loads: [], quiescentAmps: -1 }])).toThrow(/quiescent current/);
-    expect(bad([{ id: 'x', name: 'X', loads: [] }, { id: 'x', name: 'Y', loads: [] }])).toThrow(/used twice/);
+    expect(
+      bad([
+        { id: 'x', name: 'X', loads: [] },
+        { id: 'x', name: 'Y', loads: [] },
+      ]),
+    ).toThrow(/used twice/);
   });
 });
 
@@ -184,7 +200,12 @@ describe('shipping, charge side, power bank run, discharge power (§3)', () => {
     expect(v(r.figures, 'charge.cRate')).toBeCloseTo(1 / 2.7, 9);
   });
   it('a power-bank run measures η 0.82: the 5 V capacity uses it; 30 Wh delivered against a 37 Wh label is 81.08 % [C; CP]', () => {
-    const r = teardownFigures({ ...base, pack: { ...base.pack!, cellRatedAh: 10 }, claims: { capacityAh: 10 }, powerBankRun: { efficiency: 0.82, deliveredWh: 30, basis: 'power-bank run "5 V 1 A"' } });
+    const r = teardownFigures({
+      ...base,
+      pack: { ...base.pack!, cellRatedAh: 10 },
+      claims: { capacityAh: 10 },
+      powerBankRun: { efficiency: 0.82, deliveredWh: 30, basis: 'power-bank run "5 V 1 A"' },
+    });
     expect(v(r.figures, 'powerbank.outputAh')).toBeCloseTo((37 * 0.82) / 5, 9);
     expect(v(r.figures, 'powerbank.deliveredVsLabel')).toBeCloseTo((30 / 37) * 100, 6);
     const bad = teardownFigures({ ...base, powerBankRun: { efficiency: 1.2, deliveredWh: 12, basis: 'power-bank run "x"' } });

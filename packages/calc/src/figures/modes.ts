@@ -211,7 +211,9 @@ function standbyFigures(ctx: FigureContext, run: ModeRun): Figure[] {
         inp('quiescentAhPerMonth', 'Quiescent draw per month', run.quiescentAmps * 730, 'Ah'),
       ],
       assumptions: [
-        lithium ? 'Li-ion self-discharge about 2–3 % a month at room temperature; 2.5 % taken [CP; M for the figure].' : `Self-discharge of ${pack.p.chemistry} cells not known here: the quiescent current alone.`,
+        lithium
+          ? 'Li-ion self-discharge about 2–3 % a month at room temperature; 2.5 % taken [CP; M for the figure].'
+          : `Self-discharge of ${pack.p.chemistry} cells not known here: the quiescent current alone.`,
         '730 h in an average month; a protection circuit cutting off at its under-voltage level stops the drain before empty.',
       ],
       modeId: run.id,
@@ -232,7 +234,11 @@ function loadedCellFigures(ctx: FigureContext, run: ModeRun, prefix: 'mode' | 'p
   // Mean of i² over a period with the PWM pulses starting together (the worst case): Σ D·I² + Σ_{j≠k} min(D_j, D_k)·I_j·I_k.
   let meanSquare = 0;
   for (const a of currents) for (const b of currents) meanSquare += Math.min(a.d, b.d) * a.i * b.i;
-  const irInputs = [inp('cellOhms', 'Cell internal resistance', ir.ohms, 'Ω'), inp('packOhms', `Pack resistance (${pack.p.series}S${pack.p.parallel}P)`, rPack, 'Ω'), inp('source', 'Internal resistance from', ir.basis)];
+  const irInputs = [
+    inp('cellOhms', 'Cell internal resistance', ir.ohms, 'Ω'),
+    inp('packOhms', `Pack resistance (${pack.p.series}S${pack.p.parallel}P)`, rPack, 'Ω'),
+    inp('source', 'Internal resistance from', ir.basis),
+  ];
   const terminal = loadedTerminalVolts({ openCircuitVolts: pack.volts, currentAmps: peak, resistanceOhms: rPack });
   const out: Figure[] = [
     figure({
@@ -268,7 +274,12 @@ function loadedCellFigures(ctx: FigureContext, run: ModeRun, prefix: 'mode' | 'p
         value: watts,
         unit: 'W',
         family: 'pack.loadedPower',
-        inputs: [inp('openCircuitVolts', 'Pack nominal voltage', pack.volts, 'V'), inp('loadOhms', 'Direct loads in parallel', rParallel, 'Ω'), inp('terminalVolts', 'Terminal voltage with them on', on.terminalVolts, 'V'), ...irInputs],
+        inputs: [
+          inp('openCircuitVolts', 'Pack nominal voltage', pack.volts, 'V'),
+          inp('loadOhms', 'Direct loads in parallel', rParallel, 'Ω'),
+          inp('terminalVolts', 'Terminal voltage with them on', on.terminalVolts, 'V'),
+          ...irInputs,
+        ],
         assumptions: ['I = U_oc / (R_load + R_int); each load at its duty at that terminal voltage (all on together, the worst case).'],
         modeId,
       }),
@@ -420,7 +431,12 @@ function heaterWholeDevice(ctx: FigureContext, loads: LoadSet, recorded: boolean
     if (many) for (const h of heaters) ctx.figures.push(powerDensityFigure(area(h), `heater.${h.load.id}.powerDensity`, `${h.load.label} power density (full duty)`));
   }
   for (const h of heaters) {
-    const f = dutyForTargetFigure(ctx, h, many ? `heater.${h.load.id}.dutyForTarget` : 'heater.dutyForTarget', `${many ? `${h.load.label}: ` : ''}duty for ${num(ctx.targetSurfaceC)} °C at the surface`);
+    const f = dutyForTargetFigure(
+      ctx,
+      h,
+      many ? `heater.${h.load.id}.dutyForTarget` : 'heater.dutyForTarget',
+      `${many ? `${h.load.label}: ` : ''}duty for ${num(ctx.targetSurfaceC)} °C at the surface`,
+    );
     if (f) ctx.figures.push(f);
   }
 }

@@ -46,10 +46,7 @@ describe('runtime on usable energy (issue 10 §2.6; REFERENCES Decisions: runtim
     expect(num(teardownFigures({ ...pocketHeater, usableFraction: 0.95 }).figures, 'runtime.hours')).toBeCloseTo((9.99 * 0.95) / 8.881667, 5);
   });
   it('with a discharge run its measured Wh is the usable energy: 9.2 Wh ÷ 8.881667 W = 1.035842 h [C]', () => {
-    const f = byKey(
-      teardownFigures({ ...pocketHeater, measuredDischarge: { ampHours: 2.5, wattHours: 9.2, basis: 'discharge run "Full"' } }).figures,
-      'runtime.hours',
-    );
+    const f = byKey(teardownFigures({ ...pocketHeater, measuredDischarge: { ampHours: 2.5, wattHours: 9.2, basis: 'discharge run "Full"' } }).figures, 'runtime.hours');
     expect(f.value as number).toBeCloseTo(9.2 / 8.881667, 5);
     expect(f.assumptions.join(' ')).toMatch(/discharge run "Full"/);
   });
@@ -116,7 +113,13 @@ describe('claimed output and power (issue 10 §2.14)', () => {
     expect(num(figures, 'claim.powerWatts')).toBeCloseTo(88.81667, 4);
   });
   it('with modes, the highest mode counts', () => {
-    const { figures } = teardownFigures({ ...withUsb, modes: [{ id: 'low', name: 'Low', loads: [{ loadId: 'heater', duty: 0.5 }] }, { id: 'high', name: 'High', loads: [{ loadId: 'heater', duty: 1 }] }] });
+    const { figures } = teardownFigures({
+      ...withUsb,
+      modes: [
+        { id: 'low', name: 'Low', loads: [{ loadId: 'heater', duty: 0.5 }] },
+        { id: 'high', name: 'High', loads: [{ loadId: 'heater', duty: 1 }] },
+      ],
+    });
     expect(num(figures, 'claim.powerWatts')).toBeCloseTo(88.81667, 4);
     expect(byKey(figures, 'claim.powerWatts').inputs.find((i) => i.key === 'computedWatts')!.label).toMatch(/mode "High"/);
     expect(figures.find((f) => f.key === 'claim.outputWatts')).toBeUndefined(); // the USB output runs in no mode

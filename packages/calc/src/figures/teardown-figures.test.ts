@@ -1,14 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import { FORMULAS } from './formulas';
-import {
-  HOT_SURFACE_CAUTION,
-  labelClaimCheck,
-  teardownFigures,
-  type Figure,
-  type TeardownFigureInput,
-  type TeardownLoad,
-  type TeardownPack,
-} from './teardown-figures';
+import { HOT_SURFACE_CAUTION, labelClaimCheck, teardownFigures, type Figure, type TeardownFigureInput, type TeardownLoad, type TeardownPack } from './teardown-figures';
 
 const byKey = (figures: Figure[], key: string): Figure => {
   const f = figures.find((x) => x.key === key);

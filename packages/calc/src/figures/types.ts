@@ -8,14 +8,7 @@ import type { SurfaceMaterial } from '../thermal/index';
 export type LoadKind = 'heater' | 'motor' | 'led' | 'usb-output' | 'other';
 export type ConverterTopology = 'buck' | 'boost' | 'buck-boost';
 export type ConverterRole = 'charge' | 'output' | 'load';
-export type SuggestionKind =
-  | 'cost-down'
-  | 'safety'
-  | 'reliability'
-  | 'manufacturability'
-  | 'user-experience'
-  | 'compliance'
-  | 'clever-idea';
+export type SuggestionKind = 'cost-down' | 'safety' | 'reliability' | 'manufacturability' | 'user-experience' | 'compliance' | 'clever-idea';
 export type SuggestionSeverity = 'note' | 'minor' | 'major' | 'critical';
 
 export interface TeardownPack {

@@ -77,9 +77,7 @@ function readValues(s: string, code: string, errors: string[]): Value[] {
       toleranceLetter: null,
       meaning: [
         `"${unitLetter === 'r' ? 'R' : unitLetter}" stands for the decimal point and means ${UNIT_WORD[unitLetter]}${unitLetter === 'r' ? ' on a capacitor' : ''}.`,
-        unitLetter === 'p' || unitLetter === 'r'
-          ? `Read as ${plain(value, 6)} pF.`
-          : `${plain(value, 6)} ${UNIT_WORD[unitLetter]} = ${plain(value * 1e3, 6)} ${unitLetter === 'n' ? 'pF' : 'nF'}.`,
+        unitLetter === 'p' || unitLetter === 'r' ? `Read as ${plain(value, 6)} pF.` : `${plain(value, 6)} ${UNIT_WORD[unitLetter]} = ${plain(value * 1e3, 6)} ${unitLetter === 'n' ? 'pF' : 'nF'}.`,
       ],
     });
   }
@@ -127,8 +125,7 @@ export function readCapacitorMarkings(code: string): CapacitorMarkingReading[] {
   });
   if (candidates.length === 0) {
     throw new RangeError(
-      errors[0] ??
-        `Capacitor marking "${code}" is not a capacitor code the decoder knows: use a 3-digit pF code (104, 104K) or a value with p, n, u or R as the decimal point (4p7, 2n2, 4R7).`,
+      errors[0] ?? `Capacitor marking "${code}" is not a capacitor code the decoder knows: use a 3-digit pF code (104, 104K) or a value with p, n, u or R as the decimal point (4p7, 2n2, 4R7).`,
     );
   }
   const { readings, reason } = rankCandidates(candidates);

@@ -30,9 +30,7 @@ describe('IEC 60062 colour code (REFERENCES §1)', () => {
   });
   it('tolerance bands: brown 1, red 2, orange 0.05, yellow 0.02, green 0.5, blue 0.25, violet 0.1, grey 0.01 [S; W, L M]', () => {
     const tol = (c: string) => decodeColorBands(['brown', 'black', 'black', 'brown', c]).tolerancePercent;
-    expect(['brown', 'red', 'orange', 'yellow', 'green', 'blue', 'violet', 'grey', 'gold', 'silver'].map(tol)).toEqual([
-      1, 2, 0.05, 0.02, 0.5, 0.25, 0.1, 0.01, 5, 10,
-    ]);
+    expect(['brown', 'red', 'orange', 'yellow', 'green', 'blue', 'violet', 'grey', 'gold', 'silver'].map(tol)).toEqual([1, 2, 0.05, 0.02, 0.5, 0.25, 0.1, 0.01, 5, 10]);
   });
   it('6 bands add the temperature coefficient: brown-black-black-red-brown-brown is 10 kΩ ±1 % 100 ppm/K [C; M for tempco colours]', () => {
     expect(decodeColorBands(['brown', 'black', 'black', 'red', 'brown', 'brown'])).toEqual({
@@ -77,11 +75,7 @@ describe('the colour code band by band', () => {
   it('yellow-violet-red-gold: digits 4 7, × 100 = 4700 Ω, gold ±5 % (J) [C; S: IEC 60062]', () => {
     const r = readColorBands(['Yellow', 'violet', 'red', 'gold']);
     expect(r).toMatchObject({ ohms: 4700, tolerancePercent: 5, toleranceLetter: 'J', bands: ['yellow', 'violet', 'red', 'gold'] });
-    expect(r.meaning).toEqual([
-      'Bands 1–2 (yellow, violet) are the digits 4 7.',
-      'Band 3 (red) is the multiplier × 100: 47 × 100 = 4700 Ω.',
-      'Band 4 (gold) is the tolerance ±5 % (J).',
-    ]);
+    expect(r.meaning).toEqual(['Bands 1–2 (yellow, violet) are the digits 4 7.', 'Band 3 (red) is the multiplier × 100: 47 × 100 = 4700 Ω.', 'Band 4 (gold) is the tolerance ±5 % (J).']);
   });
   it('brown-black-orange has no tolerance band: ±20 % (M) [C; S]', () => {
     const r = readColorBands(['brown', 'black', 'orange']);

@@ -2,17 +2,43 @@ import { plain } from '../shared/text';
 
 /** Colour-code digits [S: IEC 60062:2016 summary pages]. */
 export const COLOUR_DIGITS: Record<string, number> = {
-  black: 0, brown: 1, red: 2, orange: 3, yellow: 4, green: 5, blue: 6, violet: 7, grey: 8, white: 9,
+  black: 0,
+  brown: 1,
+  red: 2,
+  orange: 3,
+  yellow: 4,
+  green: 5,
+  blue: 6,
+  violet: 7,
+  grey: 8,
+  white: 9,
 };
 /** Multiplier band as a power of ten: the digit colours, gold −1, silver −2, pink −3 [S]. */
 export const COLOUR_MULTIPLIER_EXPONENT: Record<string, number> = { ...COLOUR_DIGITS, gold: -1, silver: -2, pink: -3 };
 /** Tolerance band (±%) [S; W (orange) and L (grey) are M]. */
 export const COLOUR_TOLERANCE_PERCENT: Record<string, number> = {
-  brown: 1, red: 2, orange: 0.05, yellow: 0.02, green: 0.5, blue: 0.25, violet: 0.1, grey: 0.01, gold: 5, silver: 10,
+  brown: 1,
+  red: 2,
+  orange: 0.05,
+  yellow: 0.02,
+  green: 0.5,
+  blue: 0.25,
+  violet: 0.1,
+  grey: 0.01,
+  gold: 5,
+  silver: 10,
 };
 /** Temperature-coefficient band of 6-band parts (ppm/K) [M: IEC 60062]. */
 export const COLOUR_TEMPCO_PPM_PER_K: Record<string, number> = {
-  black: 250, brown: 100, red: 50, orange: 15, yellow: 25, green: 20, blue: 10, violet: 5, grey: 1,
+  black: 250,
+  brown: 100,
+  red: 50,
+  orange: 15,
+  yellow: 25,
+  green: 20,
+  blue: 10,
+  violet: 5,
+  grey: 1,
 };
 
 export interface ColourCodeResult {
@@ -72,7 +98,16 @@ export function decodeColorBands(colors: string[]): ColourCodeResult {
 
 /** IEC 60062 letter that each tolerance colour stands for (no band: M). */
 export const COLOUR_TOLERANCE_LETTER: Record<string, string> = {
-  brown: 'F', red: 'G', orange: 'W', yellow: 'P', green: 'D', blue: 'C', violet: 'B', grey: 'L', gold: 'J', silver: 'K',
+  brown: 'F',
+  red: 'G',
+  orange: 'W',
+  yellow: 'P',
+  green: 'D',
+  blue: 'C',
+  violet: 'B',
+  grey: 'L',
+  gold: 'J',
+  silver: 'K',
 };
 
 /** A colour code decoded, with the colour names as read and the reading band by band in words. */

@@ -1,24 +1,15 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
-import {
-  E_SERIES,
-  E_SERIES_TOLERANCE_PERCENT,
-  isPreferredValue,
-  nearestPreferredValue,
-  nextPreferredAtOrAbove,
-  preferredValues,
-  type ESeries,
-} from './e-series';
+import { E_SERIES, E_SERIES_TOLERANCE_PERCENT, isPreferredValue, nearestPreferredValue, nextPreferredAtOrAbove, preferredValues, type ESeries } from './e-series';
 
 // Lists as printed in REFERENCES §1 [S: IEC 60063:2015].
 const E6 = [10, 15, 22, 33, 47, 68];
 const E12 = [10, 12, 15, 18, 22, 27, 33, 39, 47, 56, 68, 82];
 const E24 = [10, 11, 12, 13, 15, 16, 18, 20, 22, 24, 27, 30, 33, 36, 39, 43, 47, 51, 56, 62, 68, 75, 82, 91];
 const E96 = [
-  100, 102, 105, 107, 110, 113, 115, 118, 121, 124, 127, 130, 133, 137, 140, 143, 147, 150, 154, 158, 162, 165, 169, 174,
-  178, 182, 187, 191, 196, 200, 205, 210, 215, 221, 226, 232, 237, 243, 249, 255, 261, 267, 274, 280, 287, 294, 301, 309,
-  316, 324, 332, 340, 348, 357, 365, 374, 383, 392, 402, 412, 422, 432, 442, 453, 464, 475, 487, 499, 511, 523, 536, 549,
-  562, 576, 590, 604, 619, 634, 649, 665, 681, 698, 715, 732, 750, 768, 787, 806, 825, 845, 866, 887, 909, 931, 953, 976,
+  100, 102, 105, 107, 110, 113, 115, 118, 121, 124, 127, 130, 133, 137, 140, 143, 147, 150, 154, 158, 162, 165, 169, 174, 178, 182, 187, 191, 196, 200, 205, 210, 215, 221, 226, 232, 237, 243, 249,
+  255, 261, 267, 274, 280, 287, 294, 301, 309, 316, 324, 332, 340, 348, 357, 365, 374, 383, 392, 402, 412, 422, 432, 442, 453, 464, 475, 487, 499, 511, 523, 536, 549, 562, 576, 590, 604, 619, 634,
+  649, 665, 681, 698, 715, 732, 750, 768, 787, 806, 825, 845, 866, 887, 909, 931, 953, 976,
 ];
 const asDigits = (series: ESeries, digits: number) => preferredValues(series).map((v) => Math.round(v * 10 ** (digits - 1)));
 
@@ -52,7 +43,16 @@ describe('IEC 60063 E-series values (REFERENCES §1)', () => {
   it('E24 departs from 10^(i/24) at 27, 30, 33, 36, 39, 43, 47, 82 (formula 26, 29, 32, 35, 38, 42, 46, 83) [C; S]', () => {
     const formula = Array.from({ length: 24 }, (_, i) => Math.round(10 * 10 ** (i / 24)));
     const differences = E24.map((v, i) => [formula[i], v]).filter(([f, v]) => f !== v);
-    expect(differences).toEqual([[26, 27], [29, 30], [32, 33], [35, 36], [38, 39], [42, 43], [46, 47], [83, 82]]);
+    expect(differences).toEqual([
+      [26, 27],
+      [29, 30],
+      [32, 33],
+      [35, 36],
+      [38, 39],
+      [42, 43],
+      [46, 47],
+      [83, 82],
+    ]);
     expect(asDigits('E24', 2)).toEqual(E24);
   });
   it('values are given in one decade as 1.0 … 9.x, exactly as decimal numbers', () => {
@@ -64,7 +64,7 @@ describe('IEC 60063 E-series values (REFERENCES §1)', () => {
 });
 
 describe('nearest preferred value, log rule (REFERENCES §1)', () => {
-  it('E24 319 Ω gives 330 Ω (boundary 314.64) [C; S: a library\'s documentation]', () => {
+  it("E24 319 Ω gives 330 Ω (boundary 314.64) [C; S: a library's documentation]", () => {
     expect(nearestPreferredValue(319, 'E24')).toBe(330);
     expect(Math.sqrt(300 * 330)).toBeCloseTo(314.64, 2);
     expect(nearestPreferredValue(314.6, 'E24')).toBe(300);

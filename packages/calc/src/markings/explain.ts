@@ -133,9 +133,7 @@ function reading(p: {
   const warnings: string[] = [];
   const preferred = p.value > 0 ? preferredValueRows(p.value) : [];
   if (p.value > 0 && !preferred.some((r) => r.member)) {
-    warnings.push(
-      `${withPrefix(p.value, unit)} is in no IEC 60063 series up to E192: check the reading (a rubbed or misread character is common).`,
-    );
+    warnings.push(`${withPrefix(p.value, unit)} is in no IEC 60063 series up to E192: check the reading (a rubbed or misread character is common).`);
   }
   const assumptions = [...(p.assumptions ?? [])];
   if (preferred.length > 0) {

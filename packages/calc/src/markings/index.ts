@@ -1,28 +1,6 @@
-export {
-  type ESeries,
-  E_SERIES,
-  E_SERIES_TOLERANCE_PERCENT,
-  preferredValues,
-  nearestPreferredValue,
-  nextPreferredAtOrAbove,
-  isPreferredValue,
-} from './e-series';
-export {
-  type ResistorScheme,
-  type ResistorMarkingReading,
-  EIA96_MULTIPLIER_EXPONENT,
-  eia96Significand,
-  readResistorMarking,
-  readResistorMarkings,
-  decodeResistorMarking,
-} from './resistor-marking';
-export {
-  type CapacitorScheme,
-  type CapacitorMarkingReading,
-  readCapacitorMarking,
-  readCapacitorMarkings,
-  decodeCapacitorMarking,
-} from './capacitor-marking';
+export { type ESeries, E_SERIES, E_SERIES_TOLERANCE_PERCENT, preferredValues, nearestPreferredValue, nextPreferredAtOrAbove, isPreferredValue } from './e-series';
+export { type ResistorScheme, type ResistorMarkingReading, EIA96_MULTIPLIER_EXPONENT, eia96Significand, readResistorMarking, readResistorMarkings, decodeResistorMarking } from './resistor-marking';
+export { type CapacitorScheme, type CapacitorMarkingReading, readCapacitorMarking, readCapacitorMarkings, decodeCapacitorMarking } from './capacitor-marking';
 export { coarsestSeries } from './ranking';
 export {
   type ColourCodeResult,
@@ -35,15 +13,7 @@ export {
   decodeColorBands,
   readColorBands,
 } from './color-bands';
-export {
-  type MarkedComponent,
-  type Tolerance,
-  TOLERANCE_LETTERS,
-  SMALL_CAPACITOR_LETTERS_PF,
-  decodeToleranceLetter,
-  percentTolerance,
-  toleranceRange,
-} from './letter-codes';
+export { type MarkedComponent, type Tolerance, TOLERANCE_LETTERS, SMALL_CAPACITOR_LETTERS_PF, decodeToleranceLetter, percentTolerance, toleranceRange } from './letter-codes';
 export {
   type MarkingKind,
   type MarkingScheme,

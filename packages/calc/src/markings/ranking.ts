@@ -66,8 +66,7 @@ function compare(a: Candidate, b: Candidate): number {
   return a.order - b.order;
 }
 
-const sameReading = (a: Candidate, b: Candidate) =>
-  a.toleranceLetter === b.toleranceLetter && Math.abs(a.value - b.value) <= 1e-12 * Math.max(Math.abs(a.value), Math.abs(b.value));
+const sameReading = (a: Candidate, b: Candidate) => a.toleranceLetter === b.toleranceLetter && Math.abs(a.value - b.value) <= 1e-12 * Math.max(Math.abs(a.value), Math.abs(b.value));
 
 const seriesText = (value: number) => {
   const s = coarsestSeries(value);

@@ -109,11 +109,7 @@ describe('the reading in words', () => {
   it('"68X": index 68 → 499, X = × 0.1, 49.9 Ω [S]', () => {
     const r = readResistorMarking('68X');
     expect(r.scheme).toBe('eia-96');
-    expect(r.meaning).toEqual([
-      'EIA-96 code: "68" is the index into the E96 list, value 499.',
-      '"X" is the multiplier × 0.1.',
-      '499 × 0.1 = 49.9 Ω.',
-    ]);
+    expect(r.meaning).toEqual(['EIA-96 code: "68" is the index into the E96 list, value 499.', '"X" is the multiplier × 0.1.', '499 × 0.1 = 49.9 Ω.']);
   });
   it('"4R7": R is the decimal point, 4.7 Ω [S]; "000" is a jumper [M]', () => {
     expect(readResistorMarking('4R7').meaning.join(' ')).toMatch(/"R" stands for the decimal point.*4\.7 Ω/);

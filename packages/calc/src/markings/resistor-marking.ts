@@ -5,7 +5,18 @@ import { rankCandidates, type Candidate } from './ranking';
 
 /** EIA-96 multiplier letters as powers of ten [S: several decoders agree]. */
 export const EIA96_MULTIPLIER_EXPONENT: Record<string, number> = {
-  Z: -3, Y: -2, R: -2, X: -1, S: -1, A: 0, B: 1, H: 1, C: 2, D: 3, E: 4, F: 5,
+  Z: -3,
+  Y: -2,
+  R: -2,
+  X: -1,
+  S: -1,
+  A: 0,
+  B: 1,
+  H: 1,
+  C: 2,
+  D: 3,
+  E: 4,
+  F: 5,
 };
 
 /** Letters of the IEC 60062 letter-and-digit code that stand for the decimal point and a multiplier. */
@@ -38,8 +49,7 @@ export interface ResistorMarkingReading {
   rankReason: string | null;
 }
 
-const ACCEPTED =
-  'a 3- or 4-digit code (472, 4991), R, K or M as the decimal point (4R7, R010, 4K7, 2M2) or an EIA-96 code (68X), optionally followed by a tolerance letter (472J)';
+const ACCEPTED = 'a 3- or 4-digit code (472, 4991), R, K or M as the decimal point (4R7, R010, 4K7, 2M2) or an EIA-96 code (68X), optionally followed by a tolerance letter (472J)';
 
 type Value = { ohms: number; scheme: ResistorScheme; meaning: string[] };
 

@@ -70,19 +70,13 @@ describe('analyseCharge', () => {
 
   it('finds a known transition within ±1 sample with small noise (property) [C]', () => {
     fc.assert(
-      fc.property(
-        fc.double({ min: 2000, max: 6000, noNaN: true }),
-        fc.double({ min: 300, max: 900, noNaN: true }),
-        fc.integer({ min: 1, max: 1_000_000 }),
-        fc.boolean(),
-        (tx, tau, seed, giveCv) => {
-          // Noise: 2 mV on the voltage, 2 mA (0.13 %) on the current.
-          const s = ccCv(tx, tau, { seed, voltsSd: 0.002, ampsSd: 0.002 });
-          const r = analyseCharge(s, giveCv ? { cvVolts: 4.2 } : {});
-          expect(r.transitionIndex).not.toBeNull();
-          expect(Math.abs(s.t[r.transitionIndex!]! - tx)).toBeLessThanOrEqual(s.stepS);
-        },
-      ),
+      fc.property(fc.double({ min: 2000, max: 6000, noNaN: true }), fc.double({ min: 300, max: 900, noNaN: true }), fc.integer({ min: 1, max: 1_000_000 }), fc.boolean(), (tx, tau, seed, giveCv) => {
+        // Noise: 2 mV on the voltage, 2 mA (0.13 %) on the current.
+        const s = ccCv(tx, tau, { seed, voltsSd: 0.002, ampsSd: 0.002 });
+        const r = analyseCharge(s, giveCv ? { cvVolts: 4.2 } : {});
+        expect(r.transitionIndex).not.toBeNull();
+        expect(Math.abs(s.t[r.transitionIndex!]! - tx)).toBeLessThanOrEqual(s.stepS);
+      }),
       { numRuns: 150 },
     );
   });
@@ -153,14 +147,10 @@ describe('analyseCharge', () => {
 
   it('rejects logs it cannot analyse, naming the field', () => {
     expect(() => analyseCharge({ t: [0, 1], v: [4, 4] })).toThrow(/series\.i \(current\) is required/);
-    expect(() => analyseCharge({ t: [0, 1, 2], v: [3.9, 4.0, 4.2], i: [-1, -1, -0.5] }, { cvVolts: 4.2 })).toThrow(
-      /series\.i \(current\) must be positive while charging/,
-    );
+    expect(() => analyseCharge({ t: [0, 1, 2], v: [3.9, 4.0, 4.2], i: [-1, -1, -0.5] }, { cvVolts: 4.2 })).toThrow(/series\.i \(current\) must be positive while charging/);
     expect(() => analyseCharge({ t: [0, 1], v: [4, 4], i: [1, 1] }, { cvVolts: 0 })).toThrow(/cvVolts/);
     expect(() => analyseCharge({ t: [0, 1], v: [4, 4], i: [1, 1] }, { terminationFraction: 2 })).toThrow(/terminationFraction/);
     expect(() => analyseCharge({ t: [0, 1], v: [4, 4], i: [1, 1] }, { voltageToleranceV: 0 })).toThrow(/voltageToleranceV/);
-    expect(() => analyseCharge({ t: [0, 1], v: [4, 4], i: [1, 1] }, { currentToleranceFraction: -1 })).toThrow(
-      /currentToleranceFraction/,
-    );
+    expect(() => analyseCharge({ t: [0, 1], v: [4, 4], i: [1, 1] }, { currentToleranceFraction: -1 })).toThrow(/currentToleranceFraction/);
   });
 });

@@ -82,17 +82,11 @@ export function analyseCharge(series: RunSeries, opts: ChargeRunOptions = {}): C
   const t = series.t;
   const givenCv = optionalFinite(opts.cvVolts, 'cvVolts');
   if (givenCv !== undefined) requirePositive(givenCv, 'cvVolts');
-  const terminationFraction = requireFraction(
-    optionalFinite(opts.terminationFraction, 'terminationFraction') ?? DEFAULT_TERMINATION_FRACTION,
-    'terminationFraction',
-  );
+  const terminationFraction = requireFraction(optionalFinite(opts.terminationFraction, 'terminationFraction') ?? DEFAULT_TERMINATION_FRACTION, 'terminationFraction');
   const ratedAh = optionalFinite(opts.ratedCapacityAh, 'ratedCapacityAh');
   if (ratedAh !== undefined) requirePositive(ratedAh, 'ratedCapacityAh');
   const tolV = requirePositive(optionalFinite(opts.voltageToleranceV, 'voltageToleranceV') ?? DEFAULT_CV_TOLERANCE_V, 'voltageToleranceV');
-  const tolI = requireFraction(
-    optionalFinite(opts.currentToleranceFraction, 'currentToleranceFraction') ?? DEFAULT_CURRENT_TOLERANCE_FRACTION,
-    'currentToleranceFraction',
-  );
+  const tolI = requireFraction(optionalFinite(opts.currentToleranceFraction, 'currentToleranceFraction') ?? DEFAULT_CURRENT_TOLERANCE_FRACTION, 'currentToleranceFraction');
 
   // Plateau voltage: given, or the median of the samples within tolV of the highest voltage.
   let plateauVolts = givenCv;
@@ -121,9 +115,7 @@ export function analyseCharge(series: RunSeries, opts: ChargeRunOptions = {}): C
   const ccSamples = segment(i, 0, ccEnd);
   const ccCurrent = median(ccSamples);
   if (!(ccCurrent > 0)) {
-    throw new RangeError(
-      `series.i (current) must be positive while charging (median ${ccCurrent} A); if your logger records charge as negative, flip the sign of the current column.`,
-    );
+    throw new RangeError(`series.i (current) must be positive while charging (median ${ccCurrent} A); if your logger records charge as negative, flip the sign of the current column.`);
   }
   for (let k = 0; k < ccSamples.length; k++) ccSamples[k] = Math.abs((ccSamples[k] as number) - ccCurrent);
   const noiseSd = MAD_TO_SD * median(ccSamples);

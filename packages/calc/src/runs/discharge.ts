@@ -101,9 +101,7 @@ function findCutoff(series: RunSeries, n: number, o: CheckedCutoffOptions): { po
       if (isOff(j)) stopped = true;
       const lengthS = at(t, j) - at(t, k);
       if (stopped || lengthS >= o.debounceS) return { point: point(k, 'cutoff-voltage'), ignored };
-      ignored = ignored
-        ? { count: ignored.count + 1, firstAtS: ignored.firstAtS, longestS: Math.max(ignored.longestS, lengthS) }
-        : { count: 1, firstAtS: at(t, k), longestS: lengthS };
+      ignored = ignored ? { count: ignored.count + 1, firstAtS: ignored.firstAtS, longestS: Math.max(ignored.longestS, lengthS) } : { count: 1, firstAtS: at(t, k), longestS: lengthS };
       k = j - 1;
     }
     return { point: null, ignored };
@@ -229,9 +227,7 @@ export function analysePowerBank(series: RunSeries, opts: { cellEnergyWh: number
   const efficiency = wattHours / cellEnergyWh;
   const warnings: string[] = [];
   if (efficiency > 1) {
-    warnings.push(
-      `The output energy (${plain(wattHours, 4)} Wh) exceeds the cell energy (${cellEnergyWh} Wh); check the cell capacity and voltage.`,
-    );
+    warnings.push(`The output energy (${plain(wattHours, 4)} Wh) exceeds the cell energy (${cellEnergyWh} Wh); check the cell capacity and voltage.`);
   }
   return {
     wattHours,
@@ -246,11 +242,7 @@ export function analysePowerBank(series: RunSeries, opts: { cellEnergyWh: number
 }
 
 /** Measured capacity as a percentage of the label, with a warning below warnFraction of it. */
-export function capacityVersusLabel(
-  measuredAh: number,
-  claimedAh: number,
-  warnFraction = 0.9,
-): { percent: number; warning: boolean } {
+export function capacityVersusLabel(measuredAh: number, claimedAh: number, warnFraction = 0.9): { percent: number; warning: boolean } {
   requireNonNegative(measuredAh, 'measuredAh');
   requirePositive(claimedAh, 'claimedAh');
   requireFraction(warnFraction, 'warnFraction');

@@ -10,18 +10,14 @@ describe('lttbIndices', () => {
 
   it('keeps first and last, stays within maxPoints, and increases (property)', () => {
     fc.assert(
-      fc.property(
-        fc.array(fc.double({ min: -1e3, max: 1e3, noNaN: true }), { minLength: 2, maxLength: 400 }),
-        fc.integer({ min: 3, max: 120 }),
-        (y, maxPoints) => {
-          const t = y.map((_, k) => k * 0.5);
-          const kept = lttbIndices(t, y, maxPoints);
-          expect(kept.length).toBe(Math.min(y.length, maxPoints));
-          expect(kept[0]).toBe(0);
-          expect(kept[kept.length - 1]).toBe(y.length - 1);
-          for (let k = 1; k < kept.length; k++) expect(kept[k]!).toBeGreaterThan(kept[k - 1]!);
-        },
-      ),
+      fc.property(fc.array(fc.double({ min: -1e3, max: 1e3, noNaN: true }), { minLength: 2, maxLength: 400 }), fc.integer({ min: 3, max: 120 }), (y, maxPoints) => {
+        const t = y.map((_, k) => k * 0.5);
+        const kept = lttbIndices(t, y, maxPoints);
+        expect(kept.length).toBe(Math.min(y.length, maxPoints));
+        expect(kept[0]).toBe(0);
+        expect(kept[kept.length - 1]).toBe(y.length - 1);
+        for (let k = 1; k < kept.length; k++) expect(kept[k]!).toBeGreaterThan(kept[k - 1]!);
+      }),
     );
   });
 

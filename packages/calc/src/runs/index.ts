@@ -14,27 +14,9 @@ export {
   type DischargeRunAnalysis,
   type PowerBankRunAnalysis,
 } from './discharge';
-export {
-  detectCurrentPulse,
-  DEFAULT_PULSE_STEP_RATIO,
-  DEFAULT_PULSE_READ_AFTER_S,
-  DEFAULT_PULSE_LEVEL_TOLERANCE,
-  type CurrentPulse,
-  type PulseOptions,
-} from './pulse';
-export {
-  analyseCharge,
-  DEFAULT_TERMINATION_FRACTION,
-  type TerminationBasis,
-  type ChargeRunOptions,
-  type ChargeRunAnalysis,
-} from './charge';
-export {
-  analyseThermal,
-  type ThermalRunOptions,
-  type ThermalRunAnalysis,
-  type RunSteadyState,
-} from './thermal-run';
+export { detectCurrentPulse, DEFAULT_PULSE_STEP_RATIO, DEFAULT_PULSE_READ_AFTER_S, DEFAULT_PULSE_LEVEL_TOLERANCE, type CurrentPulse, type PulseOptions } from './pulse';
+export { analyseCharge, DEFAULT_TERMINATION_FRACTION, type TerminationBasis, type ChargeRunOptions, type ChargeRunAnalysis } from './charge';
+export { analyseThermal, type ThermalRunOptions, type ThermalRunAnalysis, type RunSteadyState } from './thermal-run';
 export { downsample, lttbIndices, type DownsampledTrace } from './downsample';
 export {
   createSeededRandom,

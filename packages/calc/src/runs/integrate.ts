@@ -56,9 +56,7 @@ export function integrateRun(samples: { t: number; v: number; i: number }[]): Ru
     v[k] = requireFinite(s.v, `samples[${k}].v`);
     i[k] = requireFinite(s.i, `samples[${k}].i`);
     if (k > 0 && !(t[k]! > t[k - 1]!)) {
-      throw new RangeError(
-        `samples[${k}].t must be later than samples[${k - 1}].t (got ${t[k]} after ${t[k - 1]}); time must increase strictly.`,
-      );
+      throw new RangeError(`samples[${k}].t must be later than samples[${k - 1}].t (got ${t[k]} after ${t[k - 1]}); time must increase strictly.`);
     }
   }
   const totals = integrateRange({ t, v, i }, 0, n - 1);

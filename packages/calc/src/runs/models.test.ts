@@ -1,14 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import {
-  createSeededRandom,
-  firstOrderThermal,
-  lithiumIonOcv,
-  MAX_SIMULATED_SAMPLES,
-  simulateCharge,
-  simulateDischarge,
-  simulateHeater,
-} from './models';
+import { createSeededRandom, firstOrderThermal, lithiumIonOcv, MAX_SIMULATED_SAMPLES, simulateCharge, simulateDischarge, simulateHeater } from './models';
 
 describe('createSeededRandom', () => {
   it('repeats for a seed, differs between seeds, and stays in [0, 1)', () => {
@@ -152,9 +144,7 @@ describe('simulateDischarge', () => {
     expect(() => simulateDischarge({ ...base, currentA: 1, powerW: 3 })).toThrow(/exactly one/);
     expect(() => simulateDischarge({ ...base, currentA: -1 })).toThrow(/currentA/);
     expect(() => simulateDischarge({ ...base, powerW: 0 })).toThrow(/powerW/);
-    expect(() => simulateDischarge({ ...base, currentA: 1, stepS: 1e-6 })).toThrow(
-      new RegExp(`more than ${MAX_SIMULATED_SAMPLES} samples`),
-    );
+    expect(() => simulateDischarge({ ...base, currentA: 1, stepS: 1e-6 })).toThrow(new RegExp(`more than ${MAX_SIMULATED_SAMPLES} samples`));
     expect(() => simulateDischarge({ ...base, currentA: 1, noise: { seed: 1, voltsSd: -1 } })).toThrow(/noise\.voltsSd/);
   });
 });

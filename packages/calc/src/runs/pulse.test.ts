@@ -54,7 +54,12 @@ describe('detectCurrentPulse', () => {
     expect(detectCurrentPulse(log(seconds(20), (x) => (x === 9 ? 0.3 : x === 10 ? 3 : 0.6)))).toBeNull();
     // Too small a step for the ratio.
     expect(detectCurrentPulse(log(seconds(20), (s) => (s === 10 ? 0.8 : 0.6)))).toBeNull();
-    expect(detectCurrentPulse(log(seconds(20), (s) => (s === 10 ? 0.8 : 0.6)), { minStepRatio: 1.2 })!.ohms).toBeCloseTo(0.05, 9);
+    expect(
+      detectCurrentPulse(
+        log(seconds(20), (s) => (s === 10 ? 0.8 : 0.6)),
+        { minStepRatio: 1.2 },
+      )!.ohms,
+    ).toBeCloseTo(0.05, 9);
   });
 
   it('works from a power column (I = P/V) and finds the pulse of the model discharge [C]', () => {

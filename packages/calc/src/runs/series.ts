@@ -54,9 +54,7 @@ export function notFinite(name: ValueColumn | 't', k: number, value: number): ne
 
 /** Throws the message used for time that does not increase. */
 export function notIncreasing(k: number, prev: number, value: number): never {
-  throw new RangeError(
-    `series.t[${k}] must be later than series.t[${k - 1}] (got ${value} after ${prev}); time must increase strictly.`,
-  );
+  throw new RangeError(`series.t[${k}] must be later than series.t[${k - 1}] (got ${value} after ${prev}); time must increase strictly.`);
 }
 
 /**

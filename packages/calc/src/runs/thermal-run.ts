@@ -136,10 +136,7 @@ export function analyseThermal(series: RunSeries, opts: ThermalRunOptions = {}):
   const contactSeconds = optionalFinite(opts.contactSeconds, 'contactSeconds');
   if (contactSeconds !== undefined) requirePositive(contactSeconds, 'contactSeconds');
   const windowS = requirePositive(optionalFinite(opts.windowS, 'windowS') ?? DEFAULT_PLATEAU_WINDOW_S, 'windowS');
-  const tolCPerMin = requirePositive(
-    optionalFinite(opts.slopeToleranceCPerMin, 'slopeToleranceCPerMin') ?? DEFAULT_PLATEAU_SLOPE_C_PER_MIN,
-    'slopeToleranceCPerMin',
-  );
+  const tolCPerMin = requirePositive(optionalFinite(opts.slopeToleranceCPerMin, 'slopeToleranceCPerMin') ?? DEFAULT_PLATEAU_SLOPE_C_PER_MIN, 'slopeToleranceCPerMin');
   const holdS = optionalFinite(opts.holdS, 'holdS') ?? windowS / 2;
   if (holdS < 0) throw new RangeError(`holdS must not be negative (got ${holdS}).`);
   if (opts.material !== undefined && opts.material !== null && typeof opts.material !== 'string') {
@@ -192,9 +189,6 @@ export function analyseThermal(series: RunSeries, opts: ThermalRunOptions = {}):
     timeToThresholdS: crossing,
     steadyState,
     marginC: burnThresholdC === undefined ? null : burnThresholdC - maxC,
-    burnThreshold:
-      burnThresholdC === undefined
-        ? null
-        : { temperatureC: burnThresholdC, material: opts.material ?? null, contactSeconds: contactSeconds ?? null },
+    burnThreshold: burnThresholdC === undefined ? null : { temperatureC: burnThresholdC, material: opts.material ?? null, contactSeconds: contactSeconds ?? null },
   };
 }

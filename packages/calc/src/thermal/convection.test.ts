@@ -47,18 +47,13 @@ describe('duty for a target temperature rise', () => {
   });
   it('round-trips with the surface rise at average power (property)', () => {
     fc.assert(
-      fc.property(
-        fc.double({ min: 0.1, max: 100, noNaN: true }),
-        fc.double({ min: 1e-4, max: 1, noNaN: true }),
-        fc.double({ min: 0, max: 1, noNaN: true }),
-        (peak, area, share) => {
-          const fullRise = surfaceTemperatureRiseC({ watts: peak, areaM2: area });
-          const d = dutyForTargetTemperatureRise({ peakWatts: peak, areaM2: area, targetRiseC: fullRise * share }).value;
-          expect(d).toBeGreaterThanOrEqual(0);
-          expect(d).toBeLessThanOrEqual(1);
-          expect(surfaceTemperatureRiseC({ watts: peak * d, areaM2: area }) / fullRise).toBeCloseTo(share, 9);
-        },
-      ),
+      fc.property(fc.double({ min: 0.1, max: 100, noNaN: true }), fc.double({ min: 1e-4, max: 1, noNaN: true }), fc.double({ min: 0, max: 1, noNaN: true }), (peak, area, share) => {
+        const fullRise = surfaceTemperatureRiseC({ watts: peak, areaM2: area });
+        const d = dutyForTargetTemperatureRise({ peakWatts: peak, areaM2: area, targetRiseC: fullRise * share }).value;
+        expect(d).toBeGreaterThanOrEqual(0);
+        expect(d).toBeLessThanOrEqual(1);
+        expect(surfaceTemperatureRiseC({ watts: peak * d, areaM2: area }) / fullRise).toBeCloseTo(share, 9);
+      }),
     );
   });
   it('rejects bad inputs', () => {

@@ -7,8 +7,7 @@ export const DEFAULT_CONVECTION_H = 10;
 /** Stefan–Boltzmann constant (W/m²K⁴). */
 export const STEFAN_BOLTZMANN = 5.670374419e-8;
 
-const H_ASSUMPTION =
-  'Heat-transfer coefficient h = 10 W/m²K assumed (free convection in air is 2–25 W/m²K; radiation adds about 5.5 W/m²K).';
+const H_ASSUMPTION = 'Heat-transfer coefficient h = 10 W/m²K assumed (free convection in air is 2–25 W/m²K; radiation adds about 5.5 W/m²K).';
 
 /** Steady surface temperature rise ΔT = P / (h · A) (°C, i.e. K); h defaults to 10 W/m²K. */
 export function surfaceTemperatureRiseC(p: { watts: number; areaM2: number; hWPerM2K?: number }): number {
@@ -30,12 +29,7 @@ export function radiativeHeatTransferCoefficient(emissivity: number, temperature
  * PWM duty that holds a target steady surface rise: D = ΔT · h · A / P_peak, clamped to 0..1;
  * when even full duty falls short the result is 1 with a warning.
  */
-export function dutyForTargetTemperatureRise(p: {
-  peakWatts: number;
-  areaM2: number;
-  hWPerM2K?: number;
-  targetRiseC: number;
-}): Explained<number> {
+export function dutyForTargetTemperatureRise(p: { peakWatts: number; areaM2: number; hWPerM2K?: number; targetRiseC: number }): Explained<number> {
   const peak = requirePositive(p.peakWatts, 'Peak power (W)');
   const area = requirePositive(p.areaM2, 'Surface area (m²)');
   const h = requirePositive(p.hWPerM2K ?? DEFAULT_CONVECTION_H, 'Heat-transfer coefficient (W/m²K)');
@@ -45,9 +39,7 @@ export function dutyForTargetTemperatureRise(p: {
   const warnings: string[] = [];
   if (raw > 1) {
     const reachable = peak / (h * area);
-    warnings.push(
-      `The target rise of ${target} °C is out of reach: at full power the surface rises only about ${reachable.toFixed(1)} °C. Duty set to 1.`,
-    );
+    warnings.push(`The target rise of ${target} °C is out of reach: at full power the surface rises only about ${reachable.toFixed(1)} °C. Duty set to 1.`);
   }
   return {
     value: Math.min(1, raw),
@@ -60,10 +52,7 @@ export function dutyForTargetTemperatureRise(p: {
       { label: 'Heat-transfer coefficient', value: h, unit: 'W/m²K' },
       { label: 'Target rise', value: target, unit: '°C' },
     ],
-    assumptions: [
-      ...(p.hWPerM2K === undefined ? [H_ASSUMPTION] : []),
-      'Steady state: the PWM period is much shorter than the thermal time constant, so the average power sets the temperature.',
-    ],
+    assumptions: [...(p.hWPerM2K === undefined ? [H_ASSUMPTION] : []), 'Steady state: the PWM period is much shorter than the thermal time constant, so the average power sets the temperature.'],
     warnings,
   };
 }

@@ -1,13 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
-import {
-  effectiveHeatTransferCoefficient,
-  emissivityOf,
-  steadySurfaceRiseC,
-  surfaceHeatLossWatts,
-  thermalTimeConstantSeconds,
-  timeToRiseSeconds,
-} from './surface';
+import { effectiveHeatTransferCoefficient, emissivityOf, steadySurfaceRiseC, surfaceHeatLossWatts, thermalTimeConstantSeconds, timeToRiseSeconds } from './surface';
 import { radiativeHeatTransferCoefficient } from './convection';
 
 describe('heated surface with exact radiation (REFERENCES §7, §12)', () => {

@@ -1,15 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
 import { ipc2221ThicknessMil } from './ipc2221';
-import {
-  COPPER_ALPHA_20,
-  COPPER_RESISTIVITY_IACS,
-  COPPER_RESISTIVITY_PURE,
-  METRES_PER_MIL,
-  copperSheetResistance,
-  copperTraceResistance,
-  ozToMetres,
-} from './copper';
+import { COPPER_ALPHA_20, COPPER_RESISTIVITY_IACS, COPPER_RESISTIVITY_PURE, METRES_PER_MIL, copperSheetResistance, copperTraceResistance, ozToMetres } from './copper';
 
 const trace = { lengthM: 0.1, widthM: 0.254e-3, thicknessM: 35e-6 };
 

@@ -18,13 +18,7 @@ export function ozToMetres(oz: number): number {
 
 // Defaults: IACS ρ = 1.7241e-8 Ω·m with α = 0.00393 /K (a consistent pair), T = 20 °C.
 /** Resistance of a copper trace R = ρ·L / (w·t) · [1 + α·(T − 20 °C)] (Ω), IACS copper unless ρ is given. */
-export function copperTraceResistance(p: {
-  lengthM: number;
-  widthM: number;
-  thicknessM: number;
-  temperatureC?: number;
-  resistivityOhmM?: number;
-}): number {
+export function copperTraceResistance(p: { lengthM: number; widthM: number; thicknessM: number; temperatureC?: number; resistivityOhmM?: number }): number {
   const length = requireNonNegative(p.lengthM, 'Trace length (m)');
   const width = requirePositive(p.widthM, 'Trace width (m)');
   const thickness = requirePositive(p.thicknessM, 'Copper thickness (m)');

@@ -69,8 +69,7 @@ export function authRoutes(deps: AppDeps): RouteDef[] {
         method: 'post',
         path: '/api/auth/login',
         tag: 'Auth',
-        summary:
-          'Sign in with e-mail and password. Failed attempts are limited per client address (429); an account under attack is slowed down (each attempt waits longer), never locked',
+        summary: 'Sign in with e-mail and password. Failed attempts are limited per client address (429); an account under attack is slowed down (each attempt waits longer), never locked',
         access: 'public',
         body: loginBody,
         response: userResponse,
@@ -95,18 +94,12 @@ export function authRoutes(deps: AppDeps): RouteDef[] {
         return { user: toUserDto(user) };
       },
     ),
-    route(
-      { method: 'post', path: '/api/auth/logout', tag: 'Auth', summary: 'Sign out (ends the session)', access: 'public' },
-      async ({ req, res }) => {
-        await new Promise<void>((resolve) => req.session.destroy(() => resolve()));
-        res.clearCookie('splitcase.sid');
-        return undefined;
-      },
-    ),
-    route(
-      { method: 'get', path: '/api/auth/me', tag: 'Auth', summary: 'The signed-in user (401 when signed out)', access: 'signed-in', response: userResponse },
-      ({ user }) => ({ user }),
-    ),
+    route({ method: 'post', path: '/api/auth/logout', tag: 'Auth', summary: 'Sign out (ends the session)', access: 'public' }, async ({ req, res }) => {
+      await new Promise<void>((resolve) => req.session.destroy(() => resolve()));
+      res.clearCookie('splitcase.sid');
+      return undefined;
+    }),
+    route({ method: 'get', path: '/api/auth/me', tag: 'Auth', summary: 'The signed-in user (401 when signed out)', access: 'signed-in', response: userResponse }, ({ user }) => ({ user })),
     route(
       {
         method: 'get',
@@ -150,12 +143,16 @@ export function authRoutes(deps: AppDeps): RouteDef[] {
           });
           inv.acceptedAt = new Date();
           await tx.flush();
-          recordAudit(tx, { id: created.id, email: created.email, name: created.name, role: created.role }, {
-            action: 'invitation.accepted',
-            entityType: 'user',
-            entityId: created.id,
-            summary: `${created.name} accepted an invitation as ${created.role}`,
-          });
+          recordAudit(
+            tx,
+            { id: created.id, email: created.email, name: created.name, role: created.role },
+            {
+              action: 'invitation.accepted',
+              entityType: 'user',
+              entityId: created.id,
+              summary: `${created.name} accepted an invitation as ${created.role}`,
+            },
+          );
           return created;
         });
         await signIn(req, em, user);
@@ -217,7 +214,11 @@ export function authRoutes(deps: AppDeps): RouteDef[] {
               linkMail({
                 to: user.email,
                 subject: 'Reset your Splitcase password',
-                lines: [`Hello ${user.name},`, 'Someone (we hope you) asked to reset the password of your Splitcase account. The link works once, for one hour.', 'If it was not you, ignore this message; your password stays as it is.'],
+                lines: [
+                  `Hello ${user.name},`,
+                  'Someone (we hope you) asked to reset the password of your Splitcase account. The link works once, for one hour.',
+                  'If it was not you, ignore this message; your password stays as it is.',
+                ],
                 linkLabel: 'Choose a new password',
                 url: `${deps.env.publicUrl}/reset-password?token=${token}`,
               }),

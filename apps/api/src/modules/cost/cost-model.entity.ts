@@ -16,7 +16,10 @@ export const CostModelSchema = defineEntity({
     teardown: () => p.oneToOne(TeardownSchema).owner().nullable().unique().deleteRule('cascade'),
     model: p.json<CostModelDto>(),
     updatedBy: () => p.manyToOne(UserSchema).nullable().deleteRule('set null'),
-    updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
+    updatedAt: p
+      .datetime()
+      .onCreate(() => new Date())
+      .onUpdate(() => new Date()),
   },
 });
 export type CostModelRow = InferEntity<typeof CostModelSchema>;

@@ -1,15 +1,17 @@
 import type { EntityManager } from '@mikro-orm/sqlite';
+import { costAtVolumes, costWaterfall, crossRate, rateFor, rollUpCost, type CostLineInput, type CostModel, type RateTable as CalcRateTable } from '@splitcase/calc';
 import {
-  costAtVolumes,
-  costWaterfall,
-  crossRate,
-  rateFor,
-  rollUpCost,
-  type CostLineInput,
-  type CostModel,
-  type RateTable as CalcRateTable,
-} from '@splitcase/calc';
-import { SALES_TAX_SOURCE, type CostModelDto, type CostRollUpDto, type ImpliedMarginDto, type PartCategory, type PartPriceDto, type PriceView, type SalesTaxSource, type TeardownCostModel, type WorkspaceSettings } from '@splitcase/contracts';
+  SALES_TAX_SOURCE,
+  type CostModelDto,
+  type CostRollUpDto,
+  type ImpliedMarginDto,
+  type PartCategory,
+  type PartPriceDto,
+  type PriceView,
+  type SalesTaxSource,
+  type TeardownCostModel,
+  type WorkspaceSettings,
+} from '@splitcase/contracts';
 import { AppError, validationError } from '../../http/errors';
 import { PartSchema, type Part } from '../parts/part.entity';
 import { getSettings } from '../settings/settings.service';
@@ -65,7 +67,10 @@ export function toCalcModel(m: CostModelDto): CostModel {
  * The share of sales tax in a device's retail price: the device's own rate, else the workspace
  * default for the price's currency; null when neither is set.
  */
-export function salesTaxFor(device: Pick<Device, 'salesTaxRate' | 'retailCurrency'>, settings: Pick<WorkspaceSettings, 'salesTaxByCurrency'>): { rate: number; source: SalesTaxSource; currency: string } | null {
+export function salesTaxFor(
+  device: Pick<Device, 'salesTaxRate' | 'retailCurrency'>,
+  settings: Pick<WorkspaceSettings, 'salesTaxByCurrency'>,
+): { rate: number; source: SalesTaxSource; currency: string } | null {
   const currency = device.retailCurrency;
   if (!currency) return null;
   if (device.salesTaxRate !== null && device.salesTaxRate !== undefined) return { rate: Number(device.salesTaxRate), source: 'device', currency };
@@ -122,12 +127,7 @@ export async function costReads(em: EntityManager, teardowns: readonly Teardown[
  * Every currency it needs must have a rate: otherwise an error names each one. A 'totals' view
  * (price-visibility.ts) leaves out each line's price detail and the warnings about single lines.
  */
-export async function teardownCost(
-  em: EntityManager,
-  teardown: Teardown,
-  query: { volume?: number | undefined; currency?: string | undefined },
-  view: PriceView,
-): Promise<CostRollUpDto> {
+export async function teardownCost(em: EntityManager, teardown: Teardown, query: { volume?: number | undefined; currency?: string | undefined }, view: PriceView): Promise<CostRollUpDto> {
   return costOf(await costReads(em, [teardown]), teardown, query, view);
 }
 
@@ -212,7 +212,9 @@ export function costOf(reads: CostReads, teardown: Teardown, query: { volume?: n
   };
   // Say where the sales-tax rate came from beside the step that uses it.
   const steps = r.steps.map((s) =>
-    s.key === 'retailBeforeTax' && tax ? { ...s, inputs: [...s.inputs, { label: 'Rate from', value: tax.source === 'device' ? SALES_TAX_SOURCE.labels.device : `Workspace default for ${tax.currency}` }] } : s,
+    s.key === 'retailBeforeTax' && tax
+      ? { ...s, inputs: [...s.inputs, { label: 'Rate from', value: tax.source === 'device' ? SALES_TAX_SOURCE.labels.device : `Workspace default for ${tax.currency}` }] }
+      : s,
   );
 
   const categories = Object.entries(r.byCategory)

@@ -1,15 +1,6 @@
 // The costed BOM as CSV, and prices read back from a CSV with the same columns.
 import Papa from 'papaparse';
-import {
-  COSTED_BOM_COLUMNS,
-  PRICE_CONFIDENCE,
-  PRICE_SOURCE,
-  partPriceBody,
-  type CostRollUpDto,
-  type PriceBreakDto,
-  type PriceConfidence,
-  type PriceSource,
-} from '@splitcase/contracts';
+import { COSTED_BOM_COLUMNS, PRICE_CONFIDENCE, PRICE_SOURCE, partPriceBody, type CostRollUpDto, type PriceBreakDto, type PriceConfidence, type PriceSource } from '@splitcase/contracts';
 import { toCsv, unguardCell } from '../../lib/csv';
 import type { Part } from '../parts/part.entity';
 import { readBreaks, type TypedBreak } from './price-input';
@@ -73,7 +64,10 @@ const ALIASES: Record<string, string> = {
   price_breaks: 'breaks',
 };
 const header = (h: string) => {
-  const k = h.trim().toLowerCase().replace(/[\s-]+/g, '_');
+  const k = h
+    .trim()
+    .toLowerCase()
+    .replace(/[\s-]+/g, '_');
   return ALIASES[k] ?? k;
 };
 const designatorKey = (s: string) =>
@@ -167,7 +161,11 @@ export function readPriceCsv(text: string, parts: Part[], opts: { hasRate: (code
       } else if (hits.length > 1) say('description', `${hits.length} parts have the description "${description}"; give designators or a maker part number.`);
     }
     if (!part) {
-      if (designators || mpn) say(designators ? 'designators' : 'maker_part_number', `no part of this teardown has ${[designators && `designators "${designators}"`, mpn && `maker part number "${mpn}"`].filter(Boolean).join(' or ')}.`);
+      if (designators || mpn)
+        say(
+          designators ? 'designators' : 'maker_part_number',
+          `no part of this teardown has ${[designators && `designators "${designators}"`, mpn && `maker part number "${mpn}"`].filter(Boolean).join(' or ')}.`,
+        );
       else if (!description) say('designators', 'give designators or a maker part number to say which part this price is for.');
       else if (!errors[at('description')]) say('description', `no part of this teardown is described as "${description}".`);
       continue;
@@ -183,7 +181,11 @@ export function readPriceCsv(text: string, parts: Part[], opts: { hasRate: (code
     // Each pair through the one reader, against the line's currency ("5k@$0.12", "1000@0,12 €").
     const typed: TypedBreak[] = [];
     let breaksOk = true;
-    for (const [j, pair] of cell('breaks').split(/[;|]/).map((s) => s.trim()).filter(Boolean).entries()) {
+    for (const [j, pair] of cell('breaks')
+      .split(/[;|]/)
+      .map((s) => s.trim())
+      .filter(Boolean)
+      .entries()) {
       const m = pair.match(/^([^@]+)@([^@]+)$/);
       if (!m) {
         say('breaks', `break ${j + 1} "${pair}" is not minQty@unitPrice (e.g. 1000@0.12; 5000@0.10).`);

@@ -19,7 +19,10 @@ export const PartPriceSchema = defineEntity({
     priceDate: p.string().length(10),
     note: p.string().length(300).nullable(),
     updatedBy: () => p.manyToOne(UserSchema).nullable().deleteRule('set null'),
-    updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
+    updatedAt: p
+      .datetime()
+      .onCreate(() => new Date())
+      .onUpdate(() => new Date()),
   },
 });
 export type PartPrice = InferEntity<typeof PartPriceSchema>;

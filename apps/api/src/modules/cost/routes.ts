@@ -127,9 +127,8 @@ export const costRoutes: RouteDef[] = [
   ),
 
   // ---- Rates ----
-  route(
-    { method: 'get', path: '/api/rates', tag: TAG, summary: 'The current rate table (the latest saved) and the history', access: 'signed-in', response: ratesListResponse },
-    async ({ em }) => listRateTables(em),
+  route({ method: 'get', path: '/api/rates', tag: TAG, summary: 'The current rate table (the latest saved) and the history', access: 'signed-in', response: ratesListResponse }, async ({ em }) =>
+    listRateTables(em),
   ),
   route(
     {
@@ -153,8 +152,7 @@ export const costRoutes: RouteDef[] = [
       method: 'post',
       path: '/api/rates/import',
       tag: TAG,
-      summary:
-        'Import the euro reference-rate XML file (gesmes:Envelope › Cube › Cube@time › Cube@currency/@rate) as the new current table, base EUR. Admin and sourcing (sourcing owns currencies).',
+      summary: 'Import the euro reference-rate XML file (gesmes:Envelope › Cube › Cube@time › Cube@currency/@rate) as the new current table, base EUR. Admin and sourcing (sourcing owns currencies).',
       access: PRICE_EDITORS,
       multipart: { file: 'file' },
       before: [upload(5 * 1024 * 1024)],
@@ -185,9 +183,8 @@ export const costRoutes: RouteDef[] = [
   ),
 
   // ---- Cost models ----
-  route(
-    { method: 'get', path: '/api/cost-model', tag: TAG, summary: 'The workspace cost model (defaults for every teardown)', access: 'signed-in', response: costModelResponse },
-    async ({ em }) => getWorkspaceModel(em),
+  route({ method: 'get', path: '/api/cost-model', tag: TAG, summary: 'The workspace cost model (defaults for every teardown)', access: 'signed-in', response: costModelResponse }, async ({ em }) =>
+    getWorkspaceModel(em),
   ),
   route(
     {
@@ -206,7 +203,7 @@ export const costRoutes: RouteDef[] = [
       method: 'get',
       path: '/api/teardowns/:id/cost-model',
       tag: TAG,
-      summary: "The cost model a teardown is costed with (its own, or the workspace default) and the defaults",
+      summary: 'The cost model a teardown is costed with (its own, or the workspace default) and the defaults',
       access: 'signed-in',
       params: idParam,
       response: teardownCostModelResponse,
@@ -270,7 +267,10 @@ export const costRoutes: RouteDef[] = [
     async ({ em, user, params, query, res, priceView }) => {
       const teardown = await readableTeardown(em, user, params.id);
       const cost = await teardownCost(em, teardown, query, priceView);
-      const slug = `${teardown.device.maker}-${teardown.device.model}`.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '');
+      const slug = `${teardown.device.maker}-${teardown.device.model}`
+        .toLowerCase()
+        .replace(/[^a-z0-9]+/g, '-')
+        .replace(/^-|-$/g, '');
       res.setHeader('Content-Type', 'text/csv; charset=utf-8');
       res.setHeader('Content-Disposition', `attachment; filename="costed-bom-${slug}-${cost.volume}-${cost.currency}.csv"`);
       res.send(costedBomCsv(cost));
@@ -282,8 +282,7 @@ export const costRoutes: RouteDef[] = [
       method: 'post',
       path: '/api/teardowns/:id/prices/import',
       tag: TAG,
-      summary:
-        'Import prices from CSV (columns of the costed-BOM export; lines matched by designators or maker part number). mode=preview saves nothing; mode=apply saves every line or none.',
+      summary: 'Import prices from CSV (columns of the costed-BOM export; lines matched by designators or maker part number). mode=preview saves nothing; mode=apply saves every line or none.',
       access: PRICE_EDITORS,
       params: idParam,
       query: priceImportQuery,
@@ -298,7 +297,11 @@ export const costRoutes: RouteDef[] = [
       const items = await pricedParts(em, teardown.id);
       if (items.length === 0) throw validationError({ file: 'This teardown has no parts yet: add the BOM before importing prices.' });
       const table = await currentRateTable(em);
-      const result = readPriceCsv(file.buffer.toString('utf8'), items.map((i) => i.part), { hasRate: (code) => hasRate(table, code), today: today() });
+      const result = readPriceCsv(
+        file.buffer.toString('utf8'),
+        items.map((i) => i.part),
+        { hasRate: (code) => hasRate(table, code), today: today() },
+      );
       const count = Object.keys(result.errors).length;
       if (count) {
         throw validationError(result.errors, `The file has ${count === 50 ? '50 or more' : count} problem${count === 1 ? '' : 's'}; nothing was saved. ${Object.values(result.errors)[0]}`);

@@ -30,7 +30,10 @@ export const DeviceSchema = defineEntity({
     notes: p.text().nullable(),
     createdBy: () => p.manyToOne(UserSchema).nullable().deleteRule('set null'),
     createdAt: p.datetime().onCreate(() => new Date()),
-    updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
+    updatedAt: p
+      .datetime()
+      .onCreate(() => new Date())
+      .onUpdate(() => new Date()),
   },
 });
 export type Device = InferEntity<typeof DeviceSchema>;

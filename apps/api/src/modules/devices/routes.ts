@@ -1,15 +1,5 @@
 import type { FilterQuery } from '@mikro-orm/core';
-import {
-  createDeviceBody,
-  DEVICE_CATEGORY,
-  deviceDetailResponse,
-  deviceListQuery,
-  deviceResponse,
-  devicesResponse,
-  idParam,
-  updateDeviceBody,
-  type DeviceClaimField,
-} from '@splitcase/contracts';
+import { createDeviceBody, DEVICE_CATEGORY, deviceDetailResponse, deviceListQuery, deviceResponse, devicesResponse, idParam, updateDeviceBody, type DeviceClaimField } from '@splitcase/contracts';
 import { AppError, notFound, validationError } from '../../http/errors';
 import { route, type AuthUser, type RouteDef } from '../../http/route';
 import { diffChanges, recordAudit } from '../audit/audit.service';
@@ -66,7 +56,11 @@ export const deviceRoutes: RouteDef[] = [
       if (query.maker) where.maker = { $like: `%${query.maker}%` };
       if (query.q) where.$or = [{ maker: { $like: `%${query.q}%` } }, { model: { $like: `%${query.q}%` } }];
       const devices = await em.find(DeviceSchema, where, { orderBy: { maker: 'asc', model: 'asc' } });
-      const byDevice = await visibleTeardownsByDevice(em, user, devices.map((d) => d.id));
+      const byDevice = await visibleTeardownsByDevice(
+        em,
+        user,
+        devices.map((d) => d.id),
+      );
       const shown = DRAFT_READERS.includes(user.role) ? devices : devices.filter((d) => (byDevice.get(d.id) ?? []).length > 0);
       return { devices: shown.map((d) => toDeviceDto(d, byDevice.get(d.id) ?? [])) };
     },

@@ -14,7 +14,4 @@ export type FigureInputContributor = (em: EntityManager, teardowns: Teardown[]) 
  * Modules that contribute to the figures. The figures service builds the base input from the
  * power system and parts, then merges each contribution over it in this order.
  */
-export const FIGURE_CONTRIBUTORS: FigureInputContributor[] = [
-  benchRunFigureInputs,
-  readingFigureInputs,
-];
+export const FIGURE_CONTRIBUTORS: FigureInputContributor[] = [benchRunFigureInputs, readingFigureInputs];

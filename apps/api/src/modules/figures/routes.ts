@@ -85,31 +85,25 @@ export const figureRoutes: RouteDef[] = [
       return { finding: toFindingDto(finding) };
     },
   ),
-  route(
-    suggestionStep('dismiss', 'Dismiss a suggested finding (remembered; reopen undoes it)'),
-    async (ctx) => {
-      const { em, user } = ctx;
-      const { t, s } = await notAcceptedSuggestion(ctx);
-      if (s.status === 'open') {
-        em.create(SuggestionDecisionSchema, { teardown: t, key: s.key, status: 'dismissed', decidedBy: em.getReference(UserSchema, user.id) });
-        suggestionAudit(em, user, t.id, s.key, 'suggestion.dismissed', `Dismissed the suggestion "${s.title}"`);
-      }
-      await em.flush();
-      return { suggestion: { ...s, status: 'dismissed' as const, decidedBy: s.decidedBy ?? user.name, decidedAt: s.decidedAt ?? new Date().toISOString() } };
-    },
-  ),
-  route(
-    suggestionStep('reopen', 'Reopen a dismissed suggestion'),
-    async (ctx) => {
-      const { em, user } = ctx;
-      const { t, s } = await notAcceptedSuggestion(ctx);
-      if (s.status === 'dismissed') {
-        await em.transactional(async (tx) => {
-          await tx.nativeDelete(SuggestionDecisionSchema, { teardown: t.id, key: s.key });
-          suggestionAudit(tx, user, t.id, s.key, 'suggestion.reopened', `Reopened the suggestion "${s.title}"`);
-        });
-      } else await em.flush();
-      return { suggestion: { ...s, status: 'open' as const, decidedBy: null, decidedAt: null, findingId: null } };
-    },
-  ),
+  route(suggestionStep('dismiss', 'Dismiss a suggested finding (remembered; reopen undoes it)'), async (ctx) => {
+    const { em, user } = ctx;
+    const { t, s } = await notAcceptedSuggestion(ctx);
+    if (s.status === 'open') {
+      em.create(SuggestionDecisionSchema, { teardown: t, key: s.key, status: 'dismissed', decidedBy: em.getReference(UserSchema, user.id) });
+      suggestionAudit(em, user, t.id, s.key, 'suggestion.dismissed', `Dismissed the suggestion "${s.title}"`);
+    }
+    await em.flush();
+    return { suggestion: { ...s, status: 'dismissed' as const, decidedBy: s.decidedBy ?? user.name, decidedAt: s.decidedAt ?? new Date().toISOString() } };
+  }),
+  route(suggestionStep('reopen', 'Reopen a dismissed suggestion'), async (ctx) => {
+    const { em, user } = ctx;
+    const { t, s } = await notAcceptedSuggestion(ctx);
+    if (s.status === 'dismissed') {
+      await em.transactional(async (tx) => {
+        await tx.nativeDelete(SuggestionDecisionSchema, { teardown: t.id, key: s.key });
+        suggestionAudit(tx, user, t.id, s.key, 'suggestion.reopened', `Reopened the suggestion "${s.title}"`);
+      });
+    } else await em.flush();
+    return { suggestion: { ...s, status: 'open' as const, decidedBy: null, decidedAt: null, findingId: null } };
+  }),
 ];

@@ -23,7 +23,10 @@ export const FindingSchema = defineEntity({
     photos: () => p.manyToMany(PhotoSchema).pivotTable('finding_photos'),
     createdBy: () => p.manyToOne(UserSchema).nullable().deleteRule('set null'),
     createdAt: p.datetime().onCreate(() => new Date()),
-    updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
+    updatedAt: p
+      .datetime()
+      .onCreate(() => new Date())
+      .onUpdate(() => new Date()),
   },
 });
 export type Finding = InferEntity<typeof FindingSchema>;

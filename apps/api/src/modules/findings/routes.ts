@@ -73,8 +73,14 @@ export const findingRoutes: RouteDef[] = [
         severity: f.severity,
         text: f.text,
         tags: f.tags,
-        partIds: f.parts.getItems().map((p) => p.id).sort((a, b) => a - b),
-        photoIds: f.photos.getItems().map((p) => p.id).sort((a, b) => a - b),
+        partIds: f.parts
+          .getItems()
+          .map((p) => p.id)
+          .sort((a, b) => a - b),
+        photoIds: f.photos
+          .getItems()
+          .map((p) => p.id)
+          .sort((a, b) => a - b),
       });
       const before = snap();
       if (body.kind !== undefined) f.kind = body.kind;

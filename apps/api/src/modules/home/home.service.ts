@@ -77,11 +77,7 @@ async function lastReviewSteps(em: EntityManager, teardownIds: number[]): Promis
 }
 
 async function engineerHome(em: EntityManager, user: AuthUser): Promise<EngineerHome> {
-  const mine = await em.find(
-    TeardownSchema,
-    { engineer: user.id, status: { $in: ['draft', 'in_review'] } },
-    { populate: [...TEARDOWN_POPULATE], orderBy: { updatedAt: 'desc', id: 'desc' } },
-  );
+  const mine = await em.find(TeardownSchema, { engineer: user.id, status: { $in: ['draft', 'in_review'] } }, { populate: [...TEARDOWN_POPULATE], orderBy: { updatedAt: 'desc', id: 'desc' } });
   const drafts = mine.filter((t) => t.status === 'draft');
   const steps = await lastReviewSteps(
     em,
@@ -107,11 +103,7 @@ async function leadHome(em: EntityManager): Promise<LeadHome> {
     em,
     inReview.map((t) => t.id),
   );
-  const severe = await em.find(
-    FindingSchema,
-    { severity: { $in: ['major', 'critical'] } },
-    { populate: ['teardown.device'], orderBy: { createdAt: 'desc', id: 'desc' }, limit: HOME_LIST_LIMIT },
-  );
+  const severe = await em.find(FindingSchema, { severity: { $in: ['major', 'critical'] } }, { populate: ['teardown.device'], orderBy: { createdAt: 'desc', id: 'desc' }, limit: HOME_LIST_LIMIT });
   return {
     waiting: inReview.map((t) => {
       const step = steps.get(t.id);
@@ -137,9 +129,11 @@ export function daysSince(day: string, now = new Date()): number {
 export async function partPriceCounts(em: EntityManager): Promise<Map<number, { parts: number; unpriced: number }>> {
   const rows = (await em
     .getConnection()
-    .execute(
-      'select p.teardown_id as teardown, count(p.id) as parts, count(pp.id) as priced from parts p left join part_prices pp on pp.part_id = p.id group by p.teardown_id',
-    )) as { teardown: number; parts: number; priced: number }[];
+    .execute('select p.teardown_id as teardown, count(p.id) as parts, count(pp.id) as priced from parts p left join part_prices pp on pp.part_id = p.id group by p.teardown_id')) as {
+    teardown: number;
+    parts: number;
+    priced: number;
+  }[];
   return new Map(rows.map((r) => [Number(r.teardown), { parts: Number(r.parts), unpriced: Number(r.parts) - Number(r.priced) }]));
 }
 
@@ -147,9 +141,7 @@ async function sourcingHome(em: EntityManager): Promise<SourcingHome> {
   const counts = await partPriceCounts(em);
   const ids = [...counts.entries()].filter(([, c]) => c.unpriced > 0).map(([id]) => id);
   const teardowns = ids.length ? await em.find(TeardownSchema, { id: { $in: ids } }, { populate: [...TEARDOWN_POPULATE] }) : [];
-  const unpriced = teardowns
-    .map((t) => ({ ...toHomeTeardown(t), ...counts.get(t.id)! }))
-    .sort((a, b) => b.unpriced - a.unpriced || b.unpriced / b.parts - a.unpriced / a.parts || a.id - b.id);
+  const unpriced = teardowns.map((t) => ({ ...toHomeTeardown(t), ...counts.get(t.id)! })).sort((a, b) => b.unpriced - a.unpriced || b.unpriced / b.parts - a.unpriced / a.parts || a.id - b.id);
   const table = await currentRateTable(em);
   let rates: RatesAge | null = null;
   if (table) {
@@ -168,11 +160,7 @@ async function adminHome(em: EntityManager, deps: AppDeps): Promise<AdminHome> {
     .sort((a, b) => b.lastSignInAt!.getTime() - a.lastSignInAt!.getTime() || a.id - b.id)
     .slice(0, 5)
     .map((u) => ({ id: u.id, name: u.name, role: u.role, lastSignInAt: u.lastSignInAt!.toISOString() }));
-  const pending = await em.find(
-    InvitationSchema,
-    { acceptedAt: null, revokedAt: null, expiresAt: { $gt: new Date() } },
-    { populate: ['invitedBy'], orderBy: { createdAt: 'desc', id: 'desc' } },
-  );
+  const pending = await em.find(InvitationSchema, { acceptedAt: null, revokedAt: null, expiresAt: { $gt: new Date() } }, { populate: ['invitedBy'], orderBy: { createdAt: 'desc', id: 'desc' } });
   const messages = deps.outboxEnabled ? await em.find(OutboxMessageSchema, {}, { orderBy: { id: 'desc' }, limit: 5 }) : [];
   return {
     usersByRole,
@@ -221,11 +209,7 @@ export async function homeFor(em: EntityManager, user: AuthUser, deps: AppDeps):
     admin: user.role === 'admin' ? await adminHome(em, deps) : null,
   };
   const readsDrafts = DRAFT_READERS.includes(user.role);
-  const published = await em.find(
-    TeardownSchema,
-    { status: 'published' },
-    { populate: [...TEARDOWN_POPULATE], orderBy: { publishedAt: 'desc', id: 'desc' }, limit: HOME_LIST_LIMIT },
-  );
+  const published = await em.find(TeardownSchema, { status: 'published' }, { populate: [...TEARDOWN_POPULATE], orderBy: { publishedAt: 'desc', id: 'desc' }, limit: HOME_LIST_LIMIT });
   const findingsWhere: FilterQuery<Finding> = readsDrafts ? {} : { teardown: { status: 'published' } };
   const findings = await em.find(FindingSchema, findingsWhere, { populate: ['teardown.device'], orderBy: { createdAt: 'desc', id: 'desc' }, limit: HOME_LIST_LIMIT });
   return {

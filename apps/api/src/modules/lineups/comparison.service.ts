@@ -207,15 +207,7 @@ async function findingCounts(em: EntityManager, teardownIds: readonly number[]):
 }
 
 /** Everything known about one device for the lineup, in the lineup currency. */
-function deviceRow(
-  reads: LineupReads,
-  device: Device,
-  teardown: Teardown | null,
-  currency: string,
-  table: RateTable | null,
-  viewer: boolean,
-  modeChoice: LineupModeChoice,
-): DeviceRow {
+function deviceRow(reads: LineupReads, device: Device, teardown: Teardown | null, currency: string, table: RateTable | null, viewer: boolean, modeChoice: LineupModeChoice): DeviceRow {
   let mode: DeviceRow['mode'] = null;
   const missing: DeviceRow['missing'] = {};
   const sources: DeviceRow['sources'] = {};

@@ -23,7 +23,10 @@ export const LineupSchema = defineEntity({
     status: p.enum([...LINEUP_STATUS.values]).default('draft'),
     createdBy: () => p.manyToOne(UserSchema).nullable().deleteRule('set null'),
     createdAt: p.datetime().onCreate(() => new Date()),
-    updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
+    updatedAt: p
+      .datetime()
+      .onCreate(() => new Date())
+      .onUpdate(() => new Date()),
     publishedAt: p.datetime().nullable(),
     publishedBy: () => p.manyToOne(UserSchema).nullable().deleteRule('set null'),
     version: p.integer().version(),

@@ -18,7 +18,6 @@ export const LINEUP_EDITORS: readonly Role[] = ['admin', 'engineer', 'sourcing',
 /** Leads and admins publish (and change a published lineup), as they approve teardowns. */
 export const LINEUP_PUBLISHERS: readonly Role[] = REVIEWERS;
 
-
 export function lineupPermissions(user: AuthUser, l: Pick<Lineup, 'status' | 'createdBy'>): LineupDto['permissions'] {
   const publisher = LINEUP_PUBLISHERS.includes(user.role);
   const editor = LINEUP_EDITORS.includes(user.role);

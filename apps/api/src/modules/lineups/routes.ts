@@ -23,24 +23,21 @@ import { getSettings } from '../settings/settings.service';
 import { UserSchema } from '../users/user.entity';
 import { lineupComparison, metricCatalogue } from './comparison.service';
 import { LineupSchema, type Lineup } from './lineup.entity';
-import {
-  checkLineupCurrency,
-  devicesByIds,
-  fullWeights,
-  LINEUP_EDITORS,
-  lineupDevices,
-  lineupPermissions,
-  readableLineup,
-  setLineupDevices,
-  toLineupDto,
-  toLineupDtos,
-} from './lineups.service';
+import { checkLineupCurrency, devicesByIds, fullWeights, LINEUP_EDITORS, lineupDevices, lineupPermissions, readableLineup, setLineupDevices, toLineupDto, toLineupDtos } from './lineups.service';
 
 const TAG = 'Lineups';
 
 async function snapshot(em: Parameters<typeof lineupDevices>[0], l: Lineup) {
   const devices = (await lineupDevices(em, [l.id])).get(l.id) ?? [];
-  return { name: l.name, description: l.description ?? null, currency: l.currency, weights: fullWeights(l.weights), mode: l.modeChoice ?? DEFAULT_LINEUP_MODE, status: l.status, deviceIds: devices.map((d) => d.id) };
+  return {
+    name: l.name,
+    description: l.description ?? null,
+    currency: l.currency,
+    weights: fullWeights(l.weights),
+    mode: l.modeChoice ?? DEFAULT_LINEUP_MODE,
+    status: l.status,
+    deviceIds: devices.map((d) => d.id),
+  };
 }
 
 export const lineupRoutes: RouteDef[] = [
@@ -171,7 +168,16 @@ export const lineupRoutes: RouteDef[] = [
         if (devices) await setLineupDevices(tx, l, devices);
         // Every change bumps the version, a change of devices too.
         l.updatedAt = new Date();
-        const after = { ...before, ...(devices ? { deviceIds: devices.map((d) => d.id) } : {}), name: l.name, description: l.description ?? null, currency: l.currency, weights: fullWeights(l.weights), mode: l.modeChoice ?? DEFAULT_LINEUP_MODE, status: l.status };
+        const after = {
+          ...before,
+          ...(devices ? { deviceIds: devices.map((d) => d.id) } : {}),
+          name: l.name,
+          description: l.description ?? null,
+          currency: l.currency,
+          weights: fullWeights(l.weights),
+          mode: l.modeChoice ?? DEFAULT_LINEUP_MODE,
+          status: l.status,
+        };
         const changes = diffChanges(before, after);
         if (Object.keys(changes).length) {
           const published = changes.status ? (l.status === 'published' ? 'published' : 'back to draft') : null;
@@ -204,9 +210,7 @@ export const lineupRoutes: RouteDef[] = [
     async ({ em, user, params }) => {
       const lineup = await readableLineup(em, user, params.id);
       if (!lineupPermissions(user, lineup).delete) {
-        throw forbidden(
-          lineup.status === 'published' ? 'This lineup is published: a lead or an admin deletes it.' : 'Only the maker of a draft lineup, a lead or an admin deletes it.',
-        );
+        throw forbidden(lineup.status === 'published' ? 'This lineup is published: a lead or an admin deletes it.' : 'Only the maker of a draft lineup, a lead or an admin deletes it.');
       }
       recordAudit(em, user, {
         action: 'lineup.deleted',

@@ -13,9 +13,7 @@ export const mailRoutes = [
       response: outboxResponse,
     },
     async ({ em, deps }) => {
-      const rows = deps.outboxEnabled
-        ? await em.find(OutboxMessageSchema, {}, { orderBy: { id: 'desc' }, limit: 200 })
-        : [];
+      const rows = deps.outboxEnabled ? await em.find(OutboxMessageSchema, {}, { orderBy: { id: 'desc' }, limit: 200 }) : [];
       return {
         enabled: deps.outboxEnabled,
         messages: rows.map((m) => ({

@@ -1,7 +1,6 @@
 import type { OutgoingMail } from './mailer';
 
-const escape = (s: string) =>
-  s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
+const escape = (s: string) => s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
 
 /** A plain, readable message with one link; text and HTML parts say the same thing. */
 export function linkMail(p: { to: string; subject: string; lines: string[]; linkLabel: string; url: string; footer?: string }): OutgoingMail {

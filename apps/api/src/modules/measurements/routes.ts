@@ -1,10 +1,4 @@
-import {
-  createMeasurementBody,
-  measurementResponse,
-  measurementsResponse,
-  updateMeasurementBody,
-  MEASURED_QUANTITY,
-} from '@splitcase/contracts';
+import { createMeasurementBody, measurementResponse, measurementsResponse, updateMeasurementBody, MEASURED_QUANTITY } from '@splitcase/contracts';
 
 import type { RouteDef } from '../../http/route';
 import { diffChanges, recordAudit } from '../audit/audit.service';
@@ -28,13 +22,10 @@ const snapshot = (m: Measurement) => ({
 const describe = (m: Measurement) => `${MEASURED_QUANTITY.labels[m.quantity].toLowerCase()} of ${m.subject}: ${m.entered}`;
 
 export const measurementRoutes: RouteDef[] = [
-  teardownRead(
-    { path: '/api/teardowns/:id/measurements', tag: TAG, summary: 'Readings of a teardown, newest first', response: measurementsResponse },
-    async ({ em, params }) => {
-      const rows = await em.find(MeasurementSchema, { teardown: params.id }, { orderBy: { takenAt: 'desc', id: 'desc' }, populate: ['takenBy'] });
-      return { measurements: rows.map(toMeasurementDto) };
-    },
-  ),
+  teardownRead({ path: '/api/teardowns/:id/measurements', tag: TAG, summary: 'Readings of a teardown, newest first', response: measurementsResponse }, async ({ em, params }) => {
+    const rows = await em.find(MeasurementSchema, { teardown: params.id }, { orderBy: { takenAt: 'desc', id: 'desc' }, populate: ['takenBy'] });
+    return { measurements: rows.map(toMeasurementDto) };
+  }),
   teardownRead(
     {
       path: '/api/teardowns/:id/measurements.csv',
@@ -113,12 +104,8 @@ export const measurementRoutes: RouteDef[] = [
       return { measurement: toMeasurementDto(m) };
     },
   ),
-  recordWrite(
-    { method: 'delete', path: '/api/measurements/:id', tag: TAG, summary: 'Remove a reading' },
-    { entity: MeasurementSchema, what: 'The measurement' },
-    async (ctx, tx, t, m) => {
-      recordAudit(tx, ctx.user, { action: 'measurement.deleted', entityType: 'measurement', entityId: m.id, scope: scope(t.id), summary: `Removed the ${describe(m)}` });
-      tx.remove(m);
-    },
-  ),
+  recordWrite({ method: 'delete', path: '/api/measurements/:id', tag: TAG, summary: 'Remove a reading' }, { entity: MeasurementSchema, what: 'The measurement' }, async (ctx, tx, t, m) => {
+    recordAudit(tx, ctx.user, { action: 'measurement.deleted', entityType: 'measurement', entityId: m.id, scope: scope(t.id), summary: `Removed the ${describe(m)}` });
+    tx.remove(m);
+  }),
 ];

@@ -17,7 +17,11 @@ type PartLike = { category: PartCategory; designators?: string | null; descripti
 
 const NOTHING: DecodedMarking = { value: null, unit: null, readings: [], note: null };
 
-const firstDesignator = (designators?: string | null) => (designators ?? '').trim().split(/[\s,;]+/)[0]?.toUpperCase() ?? '';
+const firstDesignator = (designators?: string | null) =>
+  (designators ?? '')
+    .trim()
+    .split(/[\s,;]+/)[0]
+    ?.toUpperCase() ?? '';
 
 /** What kind of two-terminal passive a line is, from its designator (R…, C…) or its description. */
 export function passiveKind(part: Omit<PartLike, 'marking'>): 'resistor' | 'capacitor' | null {
@@ -40,18 +44,16 @@ export function decodePartMarking(part: PartLike): DecodedMarking {
   const kind = passiveKind(part);
   if (!marking || !kind) return NOTHING;
   try {
-    const readings = readMarkingCode(marking, kind).map(
-      (r): DecodedReadingDto => ({
-        rank: r.rank,
-        value: r.value,
-        unit: r.unit,
-        scheme: r.scheme,
-        schemeLabel: r.schemeLabel,
-        schemeShortLabel: r.schemeShortLabel,
-        tolerance: r.tolerance,
-        rankReason: r.rankReason,
-      }),
-    );
+    const readings = readMarkingCode(marking, kind).map((r): DecodedReadingDto => ({
+      rank: r.rank,
+      value: r.value,
+      unit: r.unit,
+      scheme: r.scheme,
+      schemeLabel: r.schemeLabel,
+      schemeShortLabel: r.schemeShortLabel,
+      tolerance: r.tolerance,
+      rankReason: r.rankReason,
+    }));
     const first = readings[0]!;
     return { value: first.value, unit: first.unit, readings, note: null };
   } catch (err) {

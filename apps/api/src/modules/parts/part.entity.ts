@@ -24,7 +24,10 @@ export const PartSchema = defineEntity({
     mount: p.enum([...MOUNT_TYPE.values]).default('smt'),
     notes: p.text().nullable(),
     createdAt: p.datetime().onCreate(() => new Date()),
-    updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
+    updatedAt: p
+      .datetime()
+      .onCreate(() => new Date())
+      .onUpdate(() => new Date()),
   },
 });
 export type Part = InferEntity<typeof PartSchema>;

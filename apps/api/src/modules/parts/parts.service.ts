@@ -66,8 +66,7 @@ export function applyPartValues(part: Part, values: Partial<PartValues>): void {
 }
 
 /** A new part line at `position` with its values and the decoded columns of its marking. */
-export const newPart = (em: EntityManager, teardown: Teardown, position: number, values: PartValues): Part =>
-  em.create(PartSchema, { teardown, position, ...values, ...decodedColumns(values) });
+export const newPart = (em: EntityManager, teardown: Teardown, position: number, values: PartValues): Part => em.create(PartSchema, { teardown, position, ...values, ...decodedColumns(values) });
 
 const decodedColumns = (part: Parameters<typeof decodePartMarking>[0]) => {
   const decoded = decodePartMarking(part);
@@ -192,8 +191,7 @@ export function planPartsImport(csv: string): ImportPlan {
   const values: PartValues[] = [];
   for (const { line, cells } of parsed.rows.slice(0, MAX_IMPORT_ROWS)) {
     const rowErrors: CsvRowError[] = [];
-    const fail = (key: PartCsvKey | '(row)', message: string) =>
-      rowErrors.push({ row: line, column: key === '(row)' ? key : headerName(key), message });
+    const fail = (key: PartCsvKey | '(row)', message: string) => rowErrors.push({ row: line, column: key === '(row)' ? key : headerName(key), message });
     const cell = (key: PartCsvKey): string | undefined => {
       if (PART_CSV_COMPUTED.includes(key)) return undefined;
       const i = columnOf.get(key);

@@ -1,14 +1,4 @@
-import {
-  createPartBody,
-  idParam,
-  importPartsBody,
-  importPartsQuery,
-  importPartsResponse,
-  partResponse,
-  partsResponse,
-  reorderPartsBody,
-  updatePartBody,
-} from '@splitcase/contracts';
+import { createPartBody, idParam, importPartsBody, importPartsQuery, importPartsResponse, partResponse, partsResponse, reorderPartsBody, updatePartBody } from '@splitcase/contracts';
 import { AppError, validationError } from '../../http/errors';
 import { route, type RouteDef } from '../../http/route';
 import { diffChanges, recordAudit } from '../audit/audit.service';
@@ -171,8 +161,7 @@ export const partRoutes: RouteDef[] = [
       method: 'post',
       path: '/api/teardowns/:id/parts/import',
       tag: TAG,
-      summary:
-        'Import parts from CSV. dryRun=1 returns the preview with row-level errors and saves nothing; otherwise every row is saved in one transaction, or none (400 naming row and column)',
+      summary: 'Import parts from CSV. dryRun=1 returns the preview with row-level errors and saves nothing; otherwise every row is saved in one transaction, or none (400 naming row and column)',
       access: CONTENT_EDITORS,
       params: idParam,
       query: importPartsQuery,
@@ -220,9 +209,7 @@ export const partRoutes: RouteDef[] = [
           entityId: t.id,
           scope: scope(t.id),
           summary:
-            body.mode === 'replace'
-              ? `Replaced the parts list from CSV: ${removed} removed, ${created.length} imported`
-              : `Imported ${created.length} part${created.length === 1 ? '' : 's'} from CSV`,
+            body.mode === 'replace' ? `Replaced the parts list from CSV: ${removed} removed, ${created.length} imported` : `Imported ${created.length} part${created.length === 1 ? '' : 's'} from CSV`,
         });
         return created;
       });

@@ -42,7 +42,10 @@ export function uploadLimits(maxBytes: number): UploadLimits {
   };
 }
 
-const acceptedList = () => acceptedTypes().map((t) => t.label).join(', ');
+const acceptedList = () =>
+  acceptedTypes()
+    .map((t) => t.label)
+    .join(', ');
 
 /** The real type from the file's first bytes, whatever its name or declared type says; 415 otherwise. */
 export async function sniffImage(buffer: Buffer): Promise<Accepted> {
@@ -96,12 +99,7 @@ export async function processImage(buffer: Buffer, type: Accepted): Promise<Proc
   const base = sharp(buffer, { limitInputPixels: MAX_INPUT_PIXELS, failOn: 'error', autoOrient: true });
   try {
     const fit = (px: number) => ({ width: px, height: px, fit: 'inside' as const, withoutEnlargement: true });
-    const originalPipeline =
-      type.ext === 'png'
-        ? base.clone().png({ compressionLevel: 8 })
-        : type.ext === 'webp'
-          ? base.clone().webp({ quality: 92 })
-          : base.clone().jpeg({ quality: 92 });
+    const originalPipeline = type.ext === 'png' ? base.clone().png({ compressionLevel: 8 }) : type.ext === 'webp' ? base.clone().webp({ quality: 92 }) : base.clone().jpeg({ quality: 92 });
     const [original, display, thumb] = await Promise.all([
       originalPipeline.toBuffer({ resolveWithObject: true }),
       base.clone().resize(fit(PHOTO_DISPLAY_PX)).webp({ quality: 82, effort: 2 }).toBuffer(),
@@ -138,8 +136,7 @@ function folderOf(uploadsDir: string, storageKey: string, staged = false): strin
   return dir;
 }
 
-export const variantPath = (uploadsDir: string, storageKey: string, variant: PhotoVariant, originalExt: string) =>
-  join(folderOf(uploadsDir, storageKey), VARIANT_FILES[variant](originalExt));
+export const variantPath = (uploadsDir: string, storageKey: string, variant: PhotoVariant, originalExt: string) => join(folderOf(uploadsDir, storageKey), VARIANT_FILES[variant](originalExt));
 
 /** Write the three files into a new staging folder; if any write fails, remove the folder and rethrow. */
 export async function writePhotoFiles(uploadsDir: string, storageKey: string, p: ProcessedPhoto): Promise<void> {

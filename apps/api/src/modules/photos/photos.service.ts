@@ -10,18 +10,7 @@ import { UserSchema } from '../users/user.entity';
 import { CalloutSchema, type Callout } from './callout.entity';
 import { sweepFolders, type SweepResult } from '../../lib/leftovers';
 import { AuditEntrySchema } from '../audit/audit-entry.entity';
-import {
-  newStorageKey,
-  photosRoot,
-  photosStaging,
-  processImage,
-  publishPhotoFiles,
-  removeStagedPhotoFiles,
-  sanitiseFileName,
-  sniffImage,
-  STORAGE_KEY,
-  writePhotoFiles,
-} from './photo-files';
+import { newStorageKey, photosRoot, photosStaging, processImage, publishPhotoFiles, removeStagedPhotoFiles, sanitiseFileName, sniffImage, STORAGE_KEY, writePhotoFiles } from './photo-files';
 import { PhotoSchema, type Photo } from './photo.entity';
 
 export const photoUrl = (id: number, variant: PhotoVariant) => `/api/photos/${id}/${variant}`;
@@ -62,7 +51,10 @@ export function toPhotoDto(p: Photo, callouts: Callout[]): PhotoDto {
     uploadedBy: p.uploadedBy ? { id: p.uploadedBy.id, name: p.uploadedBy.name } : null,
     createdAt: p.createdAt.toISOString(),
     urls: photoUrls(p.id),
-    callouts: callouts.filter((c) => c.photo.id === p.id).sort((a, b) => a.number - b.number).map(toCalloutDto),
+    callouts: callouts
+      .filter((c) => c.photo.id === p.id)
+      .sort((a, b) => a.number - b.number)
+      .map(toCalloutDto),
   };
 }
 
@@ -73,13 +65,8 @@ export async function teardownPhotos(em: EntityManager, teardownId: number): Pro
   return photos.map((p) => toPhotoDto(p, callouts));
 }
 
-
 /** Check that a part / finding to link belongs to this teardown (400 naming the field otherwise). */
-export async function resolveLinks(
-  em: EntityManager,
-  teardownId: number,
-  body: { partId?: number | null; findingId?: number | null },
-): Promise<{ part?: Part | null; finding?: Finding | null }> {
+export async function resolveLinks(em: EntityManager, teardownId: number, body: { partId?: number | null; findingId?: number | null }): Promise<{ part?: Part | null; finding?: Finding | null }> {
   const out: { part?: Part | null; finding?: Finding | null } = {};
   const fields: Record<string, string> = {};
   if (body.partId !== undefined) {

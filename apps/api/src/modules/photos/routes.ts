@@ -29,17 +29,7 @@ import { assertWritable, CONTENT_EDITORS, canSee, editableTeardown, readableTear
 import { CalloutSchema, type Callout } from './callout.entity';
 import { removePhotoFiles, uploadLimits, variantMime, variantPath } from './photo-files';
 import { PhotoSchema, type Photo } from './photo.entity';
-import {
-  findingLabel,
-  nextCalloutNumber,
-  partLabel,
-  photoUrls,
-  resolveLinks,
-  savePhoto,
-  teardownPhotos,
-  toCalloutDto,
-  toPhotoDto,
-} from './photos.service';
+import { findingLabel, nextCalloutNumber, partLabel, photoUrls, resolveLinks, savePhoto, teardownPhotos, toCalloutDto, toPhotoDto } from './photos.service';
 
 const TAG = 'Photos';
 const getEm = () => RequestContext.getEntityManager() as EntityManager;
@@ -146,31 +136,28 @@ export function photoRoutes(deps: AppDeps): RouteDef[] {
         return { photo: toPhotoDto(photo, []) };
       },
     ),
-    route(
-      editSpec('/api/photos/:id', "Change a photo's caption, layer or step", updatePhotoBody, photoResponse),
-      async (ctx) => {
-        const { em, params, body, user } = ctx;
-        const photo = await readablePhoto(em, user, params.id);
-        await editableTeardown(ctx, photo.teardown.id);
-        const changes = diffChanges({ caption: photo.caption ?? null, layer: photo.layer, step: photo.step }, body);
-        if (body.caption !== undefined) photo.caption = body.caption;
-        if (body.layer !== undefined) photo.layer = body.layer;
-        if (body.step !== undefined) photo.step = body.step;
-        if (Object.keys(changes).length) {
-          recordAudit(em, user, {
-            action: 'photo.updated',
-            entityType: 'photo',
-            entityId: photo.id,
-            scope: { type: 'teardown', id: photo.teardown.id },
-            summary: `Photo "${photo.originalName}": changed ${Object.keys(changes).join(', ')}`,
-            changes,
-          });
-        }
-        await em.flush();
-        const callouts = await em.find(CalloutSchema, { photo: photo.id }, { populate: ['part', 'finding'] });
-        return { photo: toPhotoDto(photo, callouts) };
-      },
-    ),
+    route(editSpec('/api/photos/:id', "Change a photo's caption, layer or step", updatePhotoBody, photoResponse), async (ctx) => {
+      const { em, params, body, user } = ctx;
+      const photo = await readablePhoto(em, user, params.id);
+      await editableTeardown(ctx, photo.teardown.id);
+      const changes = diffChanges({ caption: photo.caption ?? null, layer: photo.layer, step: photo.step }, body);
+      if (body.caption !== undefined) photo.caption = body.caption;
+      if (body.layer !== undefined) photo.layer = body.layer;
+      if (body.step !== undefined) photo.step = body.step;
+      if (Object.keys(changes).length) {
+        recordAudit(em, user, {
+          action: 'photo.updated',
+          entityType: 'photo',
+          entityId: photo.id,
+          scope: { type: 'teardown', id: photo.teardown.id },
+          summary: `Photo "${photo.originalName}": changed ${Object.keys(changes).join(', ')}`,
+          changes,
+        });
+      }
+      await em.flush();
+      const callouts = await em.find(CalloutSchema, { photo: photo.id }, { populate: ['part', 'finding'] });
+      return { photo: toPhotoDto(photo, callouts) };
+    }),
     route(
       {
         method: 'delete',
@@ -257,53 +244,47 @@ export function photoRoutes(deps: AppDeps): RouteDef[] {
         return { callout: toCalloutDto(callout) };
       },
     ),
-    route(
-      editSpec('/api/callouts/:id', 'Move a pin, change its label, or link/unlink a part or finding of the same teardown', updateCalloutBody, calloutResponse),
-      async (ctx) => {
-        const { em, params, body, user } = ctx;
-        const callout = await readableCallout(em, user, params.id);
-        const teardownId = callout.photo.teardown.id;
-        await editableTeardown(ctx, teardownId);
-        const links = await resolveLinks(em, teardownId, body);
-        const before = { x: callout.x, y: callout.y, label: callout.label, partId: callout.part?.id ?? null, findingId: callout.finding?.id ?? null };
-        const changes = diffChanges(before, body);
-        if (body.x !== undefined) callout.x = body.x;
-        if (body.y !== undefined) callout.y = body.y;
-        if (body.label !== undefined) callout.label = body.label;
-        if (links.part !== undefined) callout.part = links.part;
-        if (links.finding !== undefined) callout.finding = links.finding;
-        if (Object.keys(changes).length) {
-          recordAudit(em, user, {
-            action: 'callout.updated',
-            entityType: 'callout',
-            entityId: callout.id,
-            scope: { type: 'teardown', id: teardownId },
-            summary: `Pin ${pinSummary(callout)}: ${describeCalloutChanges(Object.keys(changes))}`,
-            changes,
-          });
-        }
-        await em.flush();
-        return { callout: toCalloutDto(callout) };
-      },
-    ),
-    route(
-      { method: 'delete', path: '/api/callouts/:id', tag: TAG, summary: 'Remove a pin', access: CONTENT_EDITORS, params: idParam },
-      async (ctx) => {
-        const { em, params, user } = ctx;
-        const callout = await readableCallout(em, user, params.id);
-        await editableTeardown(ctx, callout.photo.teardown.id);
+    route(editSpec('/api/callouts/:id', 'Move a pin, change its label, or link/unlink a part or finding of the same teardown', updateCalloutBody, calloutResponse), async (ctx) => {
+      const { em, params, body, user } = ctx;
+      const callout = await readableCallout(em, user, params.id);
+      const teardownId = callout.photo.teardown.id;
+      await editableTeardown(ctx, teardownId);
+      const links = await resolveLinks(em, teardownId, body);
+      const before = { x: callout.x, y: callout.y, label: callout.label, partId: callout.part?.id ?? null, findingId: callout.finding?.id ?? null };
+      const changes = diffChanges(before, body);
+      if (body.x !== undefined) callout.x = body.x;
+      if (body.y !== undefined) callout.y = body.y;
+      if (body.label !== undefined) callout.label = body.label;
+      if (links.part !== undefined) callout.part = links.part;
+      if (links.finding !== undefined) callout.finding = links.finding;
+      if (Object.keys(changes).length) {
         recordAudit(em, user, {
-          action: 'callout.deleted',
+          action: 'callout.updated',
           entityType: 'callout',
           entityId: callout.id,
-          scope: { type: 'teardown', id: callout.photo.teardown.id },
-          summary: `Pin ${pinSummary(callout)} removed from photo "${callout.photo.originalName}"`,
+          scope: { type: 'teardown', id: teardownId },
+          summary: `Pin ${pinSummary(callout)}: ${describeCalloutChanges(Object.keys(changes))}`,
+          changes,
         });
-        em.remove(callout);
-        await em.flush();
-        return undefined;
-      },
-    ),
+      }
+      await em.flush();
+      return { callout: toCalloutDto(callout) };
+    }),
+    route({ method: 'delete', path: '/api/callouts/:id', tag: TAG, summary: 'Remove a pin', access: CONTENT_EDITORS, params: idParam }, async (ctx) => {
+      const { em, params, user } = ctx;
+      const callout = await readableCallout(em, user, params.id);
+      await editableTeardown(ctx, callout.photo.teardown.id);
+      recordAudit(em, user, {
+        action: 'callout.deleted',
+        entityType: 'callout',
+        entityId: callout.id,
+        scope: { type: 'teardown', id: callout.photo.teardown.id },
+        summary: `Pin ${pinSummary(callout)} removed from photo "${callout.photo.originalName}"`,
+      });
+      em.remove(callout);
+      await em.flush();
+      return undefined;
+    }),
     route(
       {
         method: 'get',

@@ -105,7 +105,15 @@ export const modeRoutes: RouteDef[] = [
     },
   ),
   teardownWrite(
-    { method: 'patch', path: '/api/teardowns/:id/modes/:modeId', tag: TAG, summary: 'Change a mode: only the fields sent (the loads list, when sent, replaces the old one)', params: modeParams, body: updateModeBody, response: modeResponse },
+    {
+      method: 'patch',
+      path: '/api/teardowns/:id/modes/:modeId',
+      tag: TAG,
+      summary: 'Change a mode: only the fields sent (the loads list, when sent, replaces the old one)',
+      params: modeParams,
+      body: updateModeBody,
+      response: modeResponse,
+    },
     async (ctx, tx, t) => {
       const mode = await recordOf(tx, OperatingModeSchema, ctx.params.modeId, t, 'The mode');
       const before = snapshot(await modeDto(tx, mode));
@@ -125,20 +133,24 @@ export const modeRoutes: RouteDef[] = [
       const dto = await modeDto(tx, mode);
       const changes = diffChanges(before, snapshot(dto));
       if (Object.keys(changes).length) {
-        recordAudit(tx, ctx.user, { action: 'mode.updated', entityType: 'mode', entityId: mode.id, scope: scope(t.id), summary: `Changed mode "${mode.name}": ${Object.keys(changes).join(', ')}`, changes });
+        recordAudit(tx, ctx.user, {
+          action: 'mode.updated',
+          entityType: 'mode',
+          entityId: mode.id,
+          scope: scope(t.id),
+          summary: `Changed mode "${mode.name}": ${Object.keys(changes).join(', ')}`,
+          changes,
+        });
       }
       return { mode: dto };
     },
   ),
-  teardownWrite(
-    { method: 'delete', path: '/api/teardowns/:id/modes/:modeId', tag: TAG, summary: 'Remove a mode', params: modeParams },
-    async (ctx, tx, t) => {
-      const mode = await recordOf(tx, OperatingModeSchema, ctx.params.modeId, t, 'The mode');
-      recordAudit(tx, ctx.user, { action: 'mode.deleted', entityType: 'mode', entityId: mode.id, scope: scope(t.id), summary: `Removed mode "${mode.name}"` });
-      await tx.nativeDelete(ModeLoadSchema, { mode: mode.id });
-      tx.remove(mode);
-    },
-  ),
+  teardownWrite({ method: 'delete', path: '/api/teardowns/:id/modes/:modeId', tag: TAG, summary: 'Remove a mode', params: modeParams }, async (ctx, tx, t) => {
+    const mode = await recordOf(tx, OperatingModeSchema, ctx.params.modeId, t, 'The mode');
+    recordAudit(tx, ctx.user, { action: 'mode.deleted', entityType: 'mode', entityId: mode.id, scope: scope(t.id), summary: `Removed mode "${mode.name}"` });
+    await tx.nativeDelete(ModeLoadSchema, { mode: mode.id });
+    tx.remove(mode);
+  }),
   teardownRead(
     {
       path: '/api/teardowns/:id/loads/:loadId/duty-for-target',

@@ -25,7 +25,10 @@ export const PackSchema = defineEntity({
     /** The two DC-method readings it was worked out from (SI), when it was. */
     internalReadings: p.json<{ lowAmps: number; lowVolts: number; highAmps: number; highVolts: number }>().nullable(),
     entered: p.json<Record<string, string>>().nullable(),
-    updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
+    updatedAt: p
+      .datetime()
+      .onCreate(() => new Date())
+      .onUpdate(() => new Date()),
   },
 });
 export type Pack = InferEntity<typeof PackSchema>;

@@ -124,8 +124,21 @@ export function toConverterDto(c: Converter): ConverterDto {
 export const PACK_RULES = {
   nominalVolts: { field: PACK_FIELDS.nominalVolts, min: 0, above: true, max: 10, maxMessage: "at most 10 V: give one cell's voltage and the series count", required: true },
   maxVolts: { field: PACK_FIELDS.maxVolts, min: 0, above: true, max: 10, maxMessage: "at most 10 V: give one cell's charge voltage" },
-  capacityAh: { field: PACK_FIELDS.capacityAh, min: 0, above: true, max: 1000, maxMessage: 'at most 1000 Ah for one cell — a number sent without a unit is in Ah; type "2700 mAh" for milliamp-hours', required: true },
-  measuredCapacityAh: { field: PACK_FIELDS.measuredCapacityAh, min: 0, above: true, max: 1000, maxMessage: 'at most 1000 Ah for one cell — a number sent without a unit is in Ah; type "2620 mAh" for milliamp-hours' },
+  capacityAh: {
+    field: PACK_FIELDS.capacityAh,
+    min: 0,
+    above: true,
+    max: 1000,
+    maxMessage: 'at most 1000 Ah for one cell — a number sent without a unit is in Ah; type "2700 mAh" for milliamp-hours',
+    required: true,
+  },
+  measuredCapacityAh: {
+    field: PACK_FIELDS.measuredCapacityAh,
+    min: 0,
+    above: true,
+    max: 1000,
+    maxMessage: 'at most 1000 Ah for one cell — a number sent without a unit is in Ah; type "2620 mAh" for milliamp-hours',
+  },
   series: { field: PACK_FIELDS.series, min: 1, max: 1000 },
   parallel: { field: PACK_FIELDS.parallel, min: 1, max: 1000 },
   massKg: { field: PACK_FIELDS.massKg, min: 0, above: true, max: 100, maxMessage: 'at most 100 kg — type the mass with its unit, e.g. "46 g"' },
@@ -165,8 +178,7 @@ export const CONVERTER_RULES = {
 } satisfies Record<string, FieldRule>;
 
 export const defaultLoadLabel = (kind: Load['kind']) => LOAD_KIND.labels[kind];
-export const defaultConverterLabel = (topology: Converter['topology'], role: Converter['role']) =>
-  `${CONVERTER_TOPOLOGY.labels[topology]} — ${CONVERTER_ROLE.labels[role].toLowerCase()}`;
+export const defaultConverterLabel = (topology: Converter['topology'], role: Converter['role']) => `${CONVERTER_TOPOLOGY.labels[topology]} — ${CONVERTER_ROLE.labels[role].toLowerCase()}`;
 
 export async function powerSystem(em: EntityManager, teardownId: number) {
   const pack = await em.findOne(PackSchema, { teardown: teardownId });

@@ -170,7 +170,22 @@ function checkLoad(load: Load) {
 }
 
 const loadSnapshot = (l: Load) => toLoadDto(l) as unknown as Record<string, unknown>;
-const LOAD_AUDIT_KEYS = ['kind', 'label', 'resistanceOhms', 'currentAmps', 'powerWatts', 'supplyVolts', 'count', 'connection', 'duty', 'converterId', 'heatedAreaM2', 'surfaceMaterial', 'elementMaterial', 'heatedMassKg'];
+const LOAD_AUDIT_KEYS = [
+  'kind',
+  'label',
+  'resistanceOhms',
+  'currentAmps',
+  'powerWatts',
+  'supplyVolts',
+  'count',
+  'connection',
+  'duty',
+  'converterId',
+  'heatedAreaM2',
+  'surfaceMaterial',
+  'elementMaterial',
+  'heatedMassKg',
+];
 
 // ---- converters ----
 
@@ -201,13 +216,10 @@ export const powerRoutes: RouteDef[] = [
       return powerSystem(em, params.id);
     },
   ),
-  teardownRead(
-    { path: '/api/teardowns/:id/pack', tag: TAG, summary: 'The pack of a teardown (null when not recorded)', response: packResponse },
-    async ({ em, params }) => {
-      const pack = await em.findOne(PackSchema, { teardown: params.id });
-      return { pack: pack ? toPackDto(pack) : null };
-    },
-  ),
+  teardownRead({ path: '/api/teardowns/:id/pack', tag: TAG, summary: 'The pack of a teardown (null when not recorded)', response: packResponse }, async ({ em, params }) => {
+    const pack = await em.findOne(PackSchema, { teardown: params.id });
+    return { pack: pack ? toPackDto(pack) : null };
+  }),
   route(
     {
       method: 'put',
@@ -235,23 +247,17 @@ export const powerRoutes: RouteDef[] = [
     },
     (ctx) => putPack(ctx as never),
   ),
-  teardownWrite(
-    { method: 'delete', path: '/api/teardowns/:id/pack', tag: TAG, summary: 'Remove the pack record' },
-    async (ctx, tx, t) => {
-      const pack = await tx.findOne(PackSchema, { teardown: t.id });
-      if (!pack) throw notFound('The pack');
-      recordAudit(tx, ctx.user, { action: 'pack.deleted', entityType: 'pack', entityId: pack.id, scope: scope(t.id), summary: 'Removed the pack record' });
-      tx.remove(pack);
-    },
-  ),
+  teardownWrite({ method: 'delete', path: '/api/teardowns/:id/pack', tag: TAG, summary: 'Remove the pack record' }, async (ctx, tx, t) => {
+    const pack = await tx.findOne(PackSchema, { teardown: t.id });
+    if (!pack) throw notFound('The pack');
+    recordAudit(tx, ctx.user, { action: 'pack.deleted', entityType: 'pack', entityId: pack.id, scope: scope(t.id), summary: 'Removed the pack record' });
+    tx.remove(pack);
+  }),
 
   // loads
-  teardownRead(
-    { path: '/api/teardowns/:id/loads', tag: TAG, summary: 'Loads of a teardown', response: loadsResponse },
-    async ({ em, params }) => {
-      return { loads: (await em.find(LoadSchema, { teardown: params.id }, { orderBy: { id: 'asc' } })).map(toLoadDto) };
-    },
-  ),
+  teardownRead({ path: '/api/teardowns/:id/loads', tag: TAG, summary: 'Loads of a teardown', response: loadsResponse }, async ({ em, params }) => {
+    return { loads: (await em.find(LoadSchema, { teardown: params.id }, { orderBy: { id: 'asc' } })).map(toLoadDto) };
+  }),
   teardownWrite(
     {
       method: 'post',
@@ -308,28 +314,29 @@ export const powerRoutes: RouteDef[] = [
       checkLoad(load);
       const changes = diffChanges(before, loadSnapshot(load), LOAD_AUDIT_KEYS);
       if (Object.keys(changes).length) {
-        recordAudit(tx, ctx.user, { action: 'load.updated', entityType: 'load', entityId: load.id, scope: scope(t.id), summary: `Changed load ${load.label}: ${Object.keys(changes).join(', ')}`, changes });
+        recordAudit(tx, ctx.user, {
+          action: 'load.updated',
+          entityType: 'load',
+          entityId: load.id,
+          scope: scope(t.id),
+          summary: `Changed load ${load.label}: ${Object.keys(changes).join(', ')}`,
+          changes,
+        });
       }
       await tx.flush();
       return { load: toLoadDto(load) };
     },
   ),
-  teardownWrite(
-    { method: 'delete', path: '/api/teardowns/:id/loads/:loadId', tag: TAG, summary: 'Remove a load', params: loadParams },
-    async (ctx, tx, t) => {
-      const load = await recordOf(tx, LoadSchema, ctx.params.loadId, t, 'The load');
-      recordAudit(tx, ctx.user, { action: 'load.deleted', entityType: 'load', entityId: load.id, scope: scope(t.id), summary: `Removed load ${load.label}` });
-      tx.remove(load);
-    },
-  ),
+  teardownWrite({ method: 'delete', path: '/api/teardowns/:id/loads/:loadId', tag: TAG, summary: 'Remove a load', params: loadParams }, async (ctx, tx, t) => {
+    const load = await recordOf(tx, LoadSchema, ctx.params.loadId, t, 'The load');
+    recordAudit(tx, ctx.user, { action: 'load.deleted', entityType: 'load', entityId: load.id, scope: scope(t.id), summary: `Removed load ${load.label}` });
+    tx.remove(load);
+  }),
 
   // converters
-  teardownRead(
-    { path: '/api/teardowns/:id/converters', tag: TAG, summary: 'Converters of a teardown', response: convertersResponse },
-    async ({ em, params }) => {
-      return { converters: (await em.find(ConverterSchema, { teardown: params.id }, { orderBy: { id: 'asc' } })).map(toConverterDto) };
-    },
-  ),
+  teardownRead({ path: '/api/teardowns/:id/converters', tag: TAG, summary: 'Converters of a teardown', response: convertersResponse }, async ({ em, params }) => {
+    return { converters: (await em.find(ConverterSchema, { teardown: params.id }, { orderBy: { id: 'asc' } })).map(toConverterDto) };
+  }),
   teardownWrite(
     {
       method: 'post',
@@ -376,7 +383,11 @@ export const powerRoutes: RouteDef[] = [
       const converter = await recordOf(tx, ConverterSchema, ctx.params.converterId, t, 'The converter');
       const before = converterSnapshot(converter);
       const body = ctx.body;
-      const read = readQuantities(converterRaw(body), { ...CONVERTER_RULES, inputVolts: { ...CONVERTER_RULES.inputVolts, required: false }, outputVolts: { ...CONVERTER_RULES.outputVolts, required: false } });
+      const read = readQuantities(converterRaw(body), {
+        ...CONVERTER_RULES,
+        inputVolts: { ...CONVERTER_RULES.inputVolts, required: false },
+        outputVolts: { ...CONVERTER_RULES.outputVolts, required: false },
+      });
       for (const key of read.present) {
         const value = read.values[key];
         if ((key === 'inputVolts' || key === 'outputVolts') && value == null) throw validationError({ [key]: 'Required' });
@@ -403,7 +414,13 @@ export const powerRoutes: RouteDef[] = [
     },
   ),
   teardownWrite(
-    { method: 'delete', path: '/api/teardowns/:id/converters/:converterId', tag: TAG, summary: 'Remove a converter (loads fed through it are then fed straight from the pack)', params: converterParams },
+    {
+      method: 'delete',
+      path: '/api/teardowns/:id/converters/:converterId',
+      tag: TAG,
+      summary: 'Remove a converter (loads fed through it are then fed straight from the pack)',
+      params: converterParams,
+    },
     async (ctx, tx, t) => {
       const converter = await recordOf(tx, ConverterSchema, ctx.params.converterId, t, 'The converter');
       const fed = await tx.find(LoadSchema, { converter: converter.id });

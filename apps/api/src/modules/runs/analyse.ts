@@ -164,8 +164,7 @@ export function analyseRun(kind: RunKind, series: StoredSeries, options: RunOpti
       throw err;
     }
     if (options.cvVolts === undefined || options.cvVolts === null) notes.push(`Charge voltage estimated from the top of the log: ${fmt(r.plateauVolts, 4)} V.`);
-    const ratedWords =
-      ctx.pack && ctx.pack.parallel > 1 ? `${ctx.pack.parallel} cells of ${fmt(ctx.pack.cellRatedAh)} Ah in parallel, pack record` : 'pack record';
+    const ratedWords = ctx.pack && ctx.pack.parallel > 1 ? `${ctx.pack.parallel} cells of ${fmt(ctx.pack.cellRatedAh)} Ah in parallel, pack record` : 'pack record';
     const description =
       r.terminationBasis === 'rated-capacity'
         ? `${fmt(terminationFraction)} C of the rated ${fmt(ratedAh!)} Ah (${ratedWords}) = ${fmt(r.terminationCurrentA)} A`
@@ -218,9 +217,7 @@ export function analyseRun(kind: RunKind, series: StoredSeries, options: RunOpti
     const toBurn = timeToTemperature(series, burn.thresholdC);
     const marginC = r.marginC as number;
     if (marginC < 0) {
-      warnings.push(
-        `The surface reached ${fmt(r.maxC)} °C, ${fmt(-marginC, 2)} °C above the ${burn.thresholdC} °C burn threshold for ${contactSeconds} s contact with ${material}.`,
-      );
+      warnings.push(`The surface reached ${fmt(r.maxC)} °C, ${fmt(-marginC, 2)} °C above the ${burn.thresholdC} °C burn threshold for ${contactSeconds} s contact with ${material}.`);
     }
     if (!r.steadyState.reached) notes.push('No steady state within the log: the surface was still warming or cooling at the end.');
     const hasEnergy = Boolean(series.i || series.p);
@@ -304,8 +301,7 @@ export function compareRun(kind: RunKind, analysis: RunAnalysis, ctx: AnalysisCo
       // Cells in series add voltage, not charge: the pack delivers the Ah of one string.
       const ratedAh = ctx.pack.cellRatedAh * ctx.pack.parallel;
       const r = capacityVersusLabel(measuredAh, ratedAh, warnFraction);
-      const basis =
-        ctx.pack.parallel > 1 ? `${ctx.pack.parallel} cells of ${fmt(ctx.pack.cellRatedAh)} Ah in parallel (pack record)` : `cell rated ${fmt(ctx.pack.cellRatedAh)} Ah (pack record)`;
+      const basis = ctx.pack.parallel > 1 ? `${ctx.pack.parallel} cells of ${fmt(ctx.pack.cellRatedAh)} Ah in parallel (pack record)` : `cell rated ${fmt(ctx.pack.cellRatedAh)} Ah (pack record)`;
       out.rated = { ratedAh, measuredAh, percent: r.percent, warning: r.warning, basis };
     }
   }

@@ -36,7 +36,10 @@ export const BenchRunSchema = defineEntity({
     analysis: p.json<RunAnalysis>(),
     createdBy: () => p.manyToOne(UserSchema).nullable().deleteRule('set null'),
     createdAt: p.datetime().onCreate(() => new Date()),
-    updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
+    updatedAt: p
+      .datetime()
+      .onCreate(() => new Date())
+      .onUpdate(() => new Date()),
   },
 });
 export type BenchRun = InferEntity<typeof BenchRunSchema>;

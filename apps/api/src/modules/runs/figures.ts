@@ -31,9 +31,7 @@ export async function benchRunFigureInputs(em: EntityManager, teardowns: Teardow
     ),
   );
   const withPulse = runs.some((r) => r.kind === 'discharge' && r.analysis.discharge?.internalResistance);
-  const packs = withPulse
-    ? await findInChunks(ids, (chunk) => em.find(PackSchema, { teardown: { $in: chunk } }, { fields: ['teardown', 'series', 'parallel'] as never }))
-    : [];
+  const packs = withPulse ? await findInChunks(ids, (chunk) => em.find(PackSchema, { teardown: { $in: chunk } }, { fields: ['teardown', 'series', 'parallel'] as never })) : [];
   const packOf = new Map(packs.map((p) => [refId(p.teardown), p]));
   // Newest first: the first run of a kind seen for a teardown is its latest.
   const latest = new Map<string, BenchRun>();

@@ -82,7 +82,12 @@ const CELL_UNITS: Record<RunQuantityName, Record<string, string>> = {
 };
 
 export function cellUnit(quantity: RunQuantityName, suffix: string): string | undefined {
-  return CELL_UNITS[quantity][suffix.trim().toLowerCase().replace(/^deg\s+/, 'deg')];
+  return CELL_UNITS[quantity][
+    suffix
+      .trim()
+      .toLowerCase()
+      .replace(/^deg\s+/, 'deg')
+  ];
 }
 
 const quote = (text: string) => `"${text.length > 40 ? `${text.slice(0, 40)}…` : text}"`;

@@ -150,18 +150,15 @@ export function previewLog(head: Buffer, complete: boolean): RunPreview {
   const { delimiter, fields } = detectDelimiter(text);
   const lines = Papa.parse<string[]>(text, { delimiter, skipEmptyLines: 'greedy', preview: 200 }).data;
   if (fields <= 1) {
-    throw new LogError(
-      'No delimiter splits the rows of this file into columns (tried comma, semicolon, tab and vertical bar). A bench log needs one column per quantity.',
-      { row: 1, column: (lines[0]?.[0] ?? '').slice(0, 60) },
-    );
+    throw new LogError('No delimiter splits the rows of this file into columns (tried comma, semicolon, tab and vertical bar). A bench log needs one column per quantity.', {
+      row: 1,
+      column: (lines[0]?.[0] ?? '').slice(0, 60),
+    });
   }
   const headerRow = findHeaderRow(lines, fields);
   const header = (lines[headerRow - 1] ?? []).map((c) => c.trim());
   const rows = lines.slice(headerRow, headerRow + PREVIEW_ROWS);
-  const decimalComma =
-    delimiter !== ',' &&
-    rows.some((r) => r.some((c) => /^[-+]?\d+,\d+$/.test(c.trim()))) &&
-    !rows.some((r) => r.some((c) => /^[-+]?\d+\.\d+$/.test(c.trim())));
+  const decimalComma = delimiter !== ',' && rows.some((r) => r.some((c) => /^[-+]?\d+,\d+$/.test(c.trim()))) && !rows.some((r) => r.some((c) => /^[-+]?\d+\.\d+$/.test(c.trim())));
   if (rows.length === 0) throw new LogError(`No numeric rows: the file has a header (row ${headerRow}) but no data rows under it.`, { row: headerRow + 1 });
   return {
     delimiter: delimiter as RunDelimiter,

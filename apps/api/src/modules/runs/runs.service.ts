@@ -51,13 +51,9 @@ export async function analysisContexts(em: EntityManager, teardowns: Teardown[])
   await em.populate(teardowns, ['device']);
   const ids = [...new Set(teardowns.map((t) => t.id))];
   const packs = await findInChunks(ids, (chunk) => em.find(PackSchema, { teardown: { $in: chunk } }));
-  const heaters = await findInChunks(ids, (chunk) =>
-    em.find(LoadSchema, { teardown: { $in: chunk }, kind: 'heater', surfaceMaterial: { $ne: null } }, { orderBy: { id: 'asc' } }),
-  );
+  const heaters = await findInChunks(ids, (chunk) => em.find(LoadSchema, { teardown: { $in: chunk }, kind: 'heater', surfaceMaterial: { $ne: null } }, { orderBy: { id: 'asc' } }));
   const settings = await getSettings(em);
-  const discharges = await findInChunks(ids, (chunk) =>
-    em.find(BenchRunSchema, { teardown: { $in: chunk }, kind: 'discharge' }, { orderBy: { createdAt: 'desc', id: 'desc' } }),
-  );
+  const discharges = await findInChunks(ids, (chunk) => em.find(BenchRunSchema, { teardown: { $in: chunk }, kind: 'discharge' }, { orderBy: { createdAt: 'desc', id: 'desc' } }));
   const packOf = new Map(packs.map((p) => [refId(p.teardown), p]));
   // In their order (first heater by id, latest discharge run): the first row seen for a teardown counts.
   const firstOf = <T extends { teardown: unknown }>(rows: T[]) => {
@@ -74,9 +70,7 @@ export async function analysisContexts(em: EntityManager, teardowns: Teardown[])
     const dischargeWh = discharge?.analysis.wattHours;
     out.set(teardown.id, {
       device: { claimCapacityAh: numberOrNull(device.claimCapacityAh), claimCapacityWh: numberOrNull(device.claimCapacityWh) },
-      pack: pack
-        ? { cellNominalVolts: Number(pack.cellNominalVolts), cellRatedAh: Number(pack.cellRatedAh), series: pack.series, parallel: pack.parallel }
-        : null,
+      pack: pack ? { cellNominalVolts: Number(pack.cellNominalVolts), cellRatedAh: Number(pack.cellRatedAh), series: pack.series, parallel: pack.parallel } : null,
       heaterMaterial: heaterOf.get(teardown.id)?.surfaceMaterial ?? null,
       measuredCells: discharge && typeof dischargeWh === 'number' ? { wattHours: dischargeWh, label: discharge.label } : null,
       teardownContactSeconds: teardown.contactSeconds ?? null,
@@ -194,13 +188,7 @@ export async function editableRun(ctx: TeardownWriter, id: number): Promise<Benc
   return run;
 }
 
-export async function updateRun(
-  em: EntityManager,
-  env: Env,
-  user: AuthUser,
-  run: BenchRun,
-  body: { label?: string | undefined; options?: RunOptions | undefined },
-): Promise<BenchRun> {
+export async function updateRun(em: EntityManager, env: Env, user: AuthUser, run: BenchRun, body: { label?: string | undefined; options?: RunOptions | undefined }): Promise<BenchRun> {
   const before = { label: run.label, options: run.options };
   if (body.label !== undefined) run.label = body.label.trim();
   if (body.options !== undefined) {

@@ -91,7 +91,8 @@ function rules(warnFraction: number): PatternRule[] {
       key: 'label.beyond-cell-mass',
       title: 'Label capacity beyond the cell mass',
       sentence: (c, of) => `${c} of ${of} ${plural(of, 'device', 'devices')} ${verb(c, 'claims', 'claim')} more capacity than ${verb(c, 'its', 'their')} cell mass allows`,
-      basis: "Devices with a weighed pack and a capacity on the label: the label energy per kilogram of pack against the chemistry's specific-energy limit (the mass reason of the figures rule \"Label capacity not supported\").",
+      basis:
+        'Devices with a weighed pack and a capacity on the label: the label energy per kilogram of pack against the chemistry\'s specific-energy limit (the mass reason of the figures rule "Label capacity not supported").',
       safety: false,
       judge: (j) => {
         if (!j.input || !j.figures || !hasLabel(j.input)) return undefined;

@@ -282,8 +282,7 @@ export function sortHits(hits: Hit[], sort: SearchSort, dir: SortDir): Hit[] {
   const key = KEY_OF[sort];
   const sign = dir === 'asc' ? 1 : -1;
   const cmp = (a: number | string, b: number | string) => (typeof a === 'number' && typeof b === 'number' ? a - b : text(String(a), String(b)));
-  const tie = (a: Hit, b: Hit) =>
-    b.date.localeCompare(a.date) || b.createdAt.getTime() - a.createdAt.getTime() || TYPE_ORDER[a.type] - TYPE_ORDER[b.type] || a.id - b.id;
+  const tie = (a: Hit, b: Hit) => b.date.localeCompare(a.date) || b.createdAt.getTime() - a.createdAt.getTime() || TYPE_ORDER[a.type] - TYPE_ORDER[b.type] || a.id - b.id;
   return [...hits].sort((a, b) => {
     const ka = key(a);
     const kb = key(b);
@@ -343,11 +342,7 @@ export async function searchHits(em: EntityManager, user: AuthUser, query: Searc
   const sort: SearchSort = query.sort ?? (terms.length ? 'relevance' : 'date');
   const effectiveSort: SearchSort = sort === 'relevance' && !terms.length ? 'date' : sort;
   const dir: SortDir = query.dir ?? SEARCH_SORT_DIR[sort];
-  const hits = sortHits(
-    await withText(em, passing, text),
-    effectiveSort,
-    effectiveSort === sort ? dir : SEARCH_SORT_DIR[effectiveSort],
-  );
+  const hits = sortHits(await withText(em, passing, text), effectiveSort, effectiveSort === sort ? dir : SEARCH_SORT_DIR[effectiveSort]);
   return { terms, types, sort, dir, hits, facets };
 }
 
@@ -360,10 +355,10 @@ export async function snippetsFor(em: EntityManager, terms: string[], hits: Hit[
     const chunk = hits.slice(i, i + 500);
     const rows = (await em
       .getConnection()
-      .execute(`select rowid, ${SNIPPET} as snippet from search_fts where search_fts match ? and rowid in (${chunk.map(() => '?').join(', ')})`, [
-        match,
-        ...chunk.map((h) => h.rowid),
-      ])) as { rowid: number; snippet: string }[];
+      .execute(`select rowid, ${SNIPPET} as snippet from search_fts where search_fts match ? and rowid in (${chunk.map(() => '?').join(', ')})`, [match, ...chunk.map((h) => h.rowid)])) as {
+      rowid: number;
+      snippet: string;
+    }[];
     for (const r of rows) out.set(Number(r.rowid), r.snippet);
   }
   return out;

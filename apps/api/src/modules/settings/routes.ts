@@ -7,10 +7,9 @@ import { getSettings, updateSettings } from './settings.service';
 const SOURCING_SETTINGS: readonly string[] = ['reportingCurrency', 'salesTaxByCurrency'];
 
 export const settingsRoutes: RouteDef[] = [
-  route(
-    { method: 'get', path: '/api/settings', tag: 'Settings', summary: 'Workspace settings', access: 'signed-in', response: settingsResponse },
-    async ({ em }) => ({ settings: await getSettings(em) }),
-  ),
+  route({ method: 'get', path: '/api/settings', tag: 'Settings', summary: 'Workspace settings', access: 'signed-in', response: settingsResponse }, async ({ em }) => ({
+    settings: await getSettings(em),
+  })),
   route(
     {
       method: 'patch',
@@ -22,7 +21,8 @@ export const settingsRoutes: RouteDef[] = [
       response: settingsResponse,
     },
     async ({ em, user, body }) => {
-      if (user.role === 'sourcing' && Object.entries(body).some(([k, v]) => v !== undefined && !SOURCING_SETTINGS.includes(k))) throw forbidden('Sourcing may change only the reporting currency and the sales tax by currency.');
+      if (user.role === 'sourcing' && Object.entries(body).some(([k, v]) => v !== undefined && !SOURCING_SETTINGS.includes(k)))
+        throw forbidden('Sourcing may change only the reporting currency and the sales tax by currency.');
       return { settings: await updateSettings(em, user, body) };
     },
   ),

@@ -9,7 +9,10 @@ export const SettingSchema = defineEntity({
     key: p.string().length(80).primary(),
     value: p.json<unknown>(),
     updatedBy: () => p.manyToOne(UserSchema).nullable().deleteRule('set null'),
-    updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
+    updatedAt: p
+      .datetime()
+      .onCreate(() => new Date())
+      .onUpdate(() => new Date()),
   },
 });
 export type Setting = InferEntity<typeof SettingSchema>;

@@ -120,7 +120,11 @@ function walk(dir: string, root = dir): string[] {
   });
 }
 
-const folderName = (at: Date) => at.toISOString().replace(/\.\d+Z$/, 'Z').replace(/:/g, '-');
+const folderName = (at: Date) =>
+  at
+    .toISOString()
+    .replace(/\.\d+Z$/, 'Z')
+    .replace(/:/g, '-');
 
 export interface BackupResult {
   folder: string;
@@ -256,7 +260,8 @@ export async function restoreBackup(env: Env, folder: string): Promise<RestoreRe
   for (const f of manifest.files) {
     const path = join(folder, ...f.path.split('/'));
     if (!existsSync(path)) throw new RestoreRefused(`The backup is incomplete: ${f.path} is missing. Nothing was changed.`);
-    if (statSync(path).size !== f.bytes || (await sha256(path)) !== f.sha256) throw new RestoreRefused(`The backup is damaged: ${f.path} does not match its SHA-256 in the manifest. Nothing was changed.`);
+    if (statSync(path).size !== f.bytes || (await sha256(path)) !== f.sha256)
+      throw new RestoreRefused(`The backup is damaged: ${f.path} does not match its SHA-256 in the manifest. Nothing was changed.`);
   }
   if (!manifest.files.some((f) => f.path === DB_FILE)) throw new RestoreRefused('The backup has no database. Nothing was changed.');
 

@@ -6,13 +6,10 @@ import { latestBackup } from './backup';
 export const healthResponse = z.object({ ok: z.literal(true), version: z.string(), time: z.string() });
 
 export const systemRoutes = (version: string) => [
-  route(
-    { method: 'get', path: '/api/health', tag: 'System', summary: 'Liveness check (no sign-in)', access: 'public', response: healthResponse },
-    async ({ em }) => {
-      await em.getConnection().execute('select 1');
-      return { ok: true as const, version, time: new Date().toISOString() };
-    },
-  ),
+  route({ method: 'get', path: '/api/health', tag: 'System', summary: 'Liveness check (no sign-in)', access: 'public', response: healthResponse }, async ({ em }) => {
+    await em.getConnection().execute('select 1');
+    return { ok: true as const, version, time: new Date().toISOString() };
+  }),
   route(
     {
       method: 'get',

@@ -8,12 +8,7 @@ import type { Teardown } from './teardown.entity';
  * back to draft of a published teardown, with the confirm header), the change and its audit entries
  * commit together or not at all. `fn` may flush to get ids; the transaction flushes at the end.
  */
-export function changeTeardownContent<T>(
-  ctx: TeardownWriter,
-  teardownId: number,
-  fn: (tx: EntityManager, teardown: Teardown) => Promise<T>,
-  roles: readonly Role[] = CONTENT_EDITORS,
-): Promise<T> {
+export function changeTeardownContent<T>(ctx: TeardownWriter, teardownId: number, fn: (tx: EntityManager, teardown: Teardown) => Promise<T>, roles: readonly Role[] = CONTENT_EDITORS): Promise<T> {
   return ctx.em.transactional(async (tx) => {
     const teardown = await editableTeardown({ em: tx as EntityManager, user: ctx.user, confirmUnpublish: ctx.confirmUnpublish }, teardownId, roles);
     return fn(tx as EntityManager, teardown);

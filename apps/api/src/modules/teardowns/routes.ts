@@ -70,8 +70,7 @@ const crudRoutes: RouteDef[] = [
       method: 'patch',
       path: '/api/teardowns/:id',
       tag: 'Teardowns',
-      summary:
-        'Change a teardown. Send the version you edited: a stale one gets 409 stale_version with details.current. A published teardown needs X-Confirm-Unpublish: yes and goes back to draft.',
+      summary: 'Change a teardown. Send the version you edited: a stale one gets 409 stale_version with details.current. A published teardown needs X-Confirm-Unpublish: yes and goes back to draft.',
       access: CONTENT_EDITORS,
       params: idParam,
       body: updateTeardownBody,

@@ -21,9 +21,7 @@ export function teardownRead<Q extends ZodType = None, P extends TeardownParams 
   spec: Omit<Spec<None, Q, P>, 'method'>,
   handler: (ctx: RouteContext<undefined, z.output<Q>, z.output<P>>, t: Teardown) => unknown,
 ): RouteDef {
-  return route<None, Q, P>({ method: 'get', access: 'signed-in', params: idParam as unknown as P, ...spec }, async (ctx) =>
-    handler(ctx, await readableTeardown(ctx.em, ctx.user, ctx.params.id)),
-  );
+  return route<None, Q, P>({ method: 'get', access: 'signed-in', params: idParam as unknown as P, ...spec }, async (ctx) => handler(ctx, await readableTeardown(ctx.em, ctx.user, ctx.params.id)));
 }
 
 /** A change to the content of the teardown `:id` (content editors unless `access` says otherwise); `undefined` answers 204. */
@@ -50,9 +48,7 @@ export function recordWrite<T extends { teardown: { id: number } }, B extends Zo
     const where = { id: ctx.params.id } as FilterQuery<T>;
     const found = await ctx.em.findOne(record.entity, where);
     if (!found) throw notFound(record.what);
-    return changeTeardownContent(ctx, found.teardown.id, async (tx, t) =>
-      handler(ctx, tx, t, (await tx.findOneOrFail(record.entity, where, { populate: (record.populate ?? []) as never })) as T),
-    );
+    return changeTeardownContent(ctx, found.teardown.id, async (tx, t) => handler(ctx, tx, t, (await tx.findOneOrFail(record.entity, where, { populate: (record.populate ?? []) as never })) as T));
   });
 }
 

@@ -25,7 +25,10 @@ export const TeardownSchema = defineEntity({
     publishedBy: () => p.manyToOne(UserSchema).nullable().deleteRule('set null'),
     lastReviewNote: p.text().nullable(),
     createdAt: p.datetime().onCreate(() => new Date()),
-    updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
+    updatedAt: p
+      .datetime()
+      .onCreate(() => new Date())
+      .onUpdate(() => new Date()),
   },
 });
 export type Teardown = InferEntity<typeof TeardownSchema>;

@@ -1,10 +1,4 @@
-import {
-  figuresToolResponse,
-  heaterTraceToolBody,
-  markingToolBody,
-  markingToolResponse,
-  runtimeToolBody,
-} from '@splitcase/contracts';
+import { figuresToolResponse, heaterTraceToolBody, markingToolBody, markingToolResponse, runtimeToolBody } from '@splitcase/contracts';
 import { route, type RouteDef } from '../../http/route';
 import { decodeMarking, heaterTrace, runtime } from './tools.service';
 

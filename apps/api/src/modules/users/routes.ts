@@ -1,13 +1,4 @@
-import {
-  adminUserResponse,
-  createInvitationBody,
-  idParam,
-  invitationResponse,
-  invitationsResponse,
-  updateUserBody,
-  usersResponse,
-  ROLE_LABELS,
-} from '@splitcase/contracts';
+import { adminUserResponse, createInvitationBody, idParam, invitationResponse, invitationsResponse, updateUserBody, usersResponse, ROLE_LABELS } from '@splitcase/contracts';
 import { AppError, notFound } from '../../http/errors';
 import { route, type RouteDef } from '../../http/route';
 import { diffChanges, recordAudit } from '../audit/audit.service';
@@ -45,10 +36,9 @@ export const toInvitationDto = (i: Invitation) => ({
 });
 
 export const userRoutes: RouteDef[] = [
-  route(
-    { method: 'get', path: '/api/users', tag: 'Admin', summary: 'All users', access: ['admin'], response: usersResponse },
-    async ({ em }) => ({ users: (await em.find(UserSchema, {}, { orderBy: { name: 'asc' } })).map(toAdminUserDto) }),
-  ),
+  route({ method: 'get', path: '/api/users', tag: 'Admin', summary: 'All users', access: ['admin'], response: usersResponse }, async ({ em }) => ({
+    users: (await em.find(UserSchema, {}, { orderBy: { name: 'asc' } })).map(toAdminUserDto),
+  })),
   route(
     {
       method: 'patch',
@@ -95,12 +85,9 @@ export const userRoutes: RouteDef[] = [
       return { user: toAdminUserDto(user) };
     },
   ),
-  route(
-    { method: 'get', path: '/api/invitations', tag: 'Admin', summary: 'Invitations, newest first', access: ['admin'], response: invitationsResponse },
-    async ({ em }) => ({
-      invitations: (await em.find(InvitationSchema, {}, { orderBy: { id: 'desc' }, populate: ['invitedBy'] })).map(toInvitationDto),
-    }),
-  ),
+  route({ method: 'get', path: '/api/invitations', tag: 'Admin', summary: 'Invitations, newest first', access: ['admin'], response: invitationsResponse }, async ({ em }) => ({
+    invitations: (await em.find(InvitationSchema, {}, { orderBy: { id: 'desc' }, populate: ['invitedBy'] })).map(toInvitationDto),
+  })),
   route(
     {
       method: 'post',
@@ -155,18 +142,15 @@ export const userRoutes: RouteDef[] = [
       return { invitation: toInvitationDto(invitation) };
     },
   ),
-  route(
-    { method: 'delete', path: '/api/invitations/:id', tag: 'Admin', summary: 'Revoke a pending invitation', access: ['admin'], params: idParam },
-    async ({ em, params, user: me }) => {
-      const inv = await em.findOne(InvitationSchema, { id: params.id });
-      if (!inv) throw notFound('The invitation');
-      if (inv.acceptedAt) throw new AppError('conflict', 'This invitation has already been accepted.');
-      if (!inv.revokedAt) {
-        inv.revokedAt = new Date();
-        recordAudit(em, me, { action: 'invitation.revoked', entityType: 'invitation', entityId: inv.id, summary: `Revoked the invitation of ${inv.email}` });
-        await em.flush();
-      }
-      return undefined;
-    },
-  ),
+  route({ method: 'delete', path: '/api/invitations/:id', tag: 'Admin', summary: 'Revoke a pending invitation', access: ['admin'], params: idParam }, async ({ em, params, user: me }) => {
+    const inv = await em.findOne(InvitationSchema, { id: params.id });
+    if (!inv) throw notFound('The invitation');
+    if (inv.acceptedAt) throw new AppError('conflict', 'This invitation has already been accepted.');
+    if (!inv.revokedAt) {
+      inv.revokedAt = new Date();
+      recordAudit(em, me, { action: 'invitation.revoked', entityType: 'invitation', entityId: inv.id, summary: `Revoked the invitation of ${inv.email}` });
+      await em.flush();
+    }
+    return undefined;
+  }),
 ];

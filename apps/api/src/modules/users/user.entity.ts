@@ -12,7 +12,10 @@ export const UserSchema = defineEntity({
     passwordHash: p.string().length(200).hidden(),
     active: p.boolean().default(true),
     createdAt: p.datetime().onCreate(() => new Date()),
-    updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
+    updatedAt: p
+      .datetime()
+      .onCreate(() => new Date())
+      .onUpdate(() => new Date()),
     lastSignInAt: p.datetime().nullable(),
     /** Raised to end every session of the user at once (password reset or change, deactivation). */
     sessionEpoch: p.integer().default(0),

@@ -30,7 +30,12 @@ export function Component() {
   const { device: d, teardowns } = device.data;
   const canEdit = me.role === 'engineer' || me.role === 'admin';
   const onDelete = async () => {
-    const ok = await confirmDialog({ title: `Delete ${d.maker} ${d.model}?`, message: 'The device has no teardown; it is removed from the list. The audit log keeps a line saying it was deleted.', confirmLabel: 'Delete device', tone: 'danger' });
+    const ok = await confirmDialog({
+      title: `Delete ${d.maker} ${d.model}?`,
+      message: 'The device has no teardown; it is removed from the list. The audit log keeps a line saying it was deleted.',
+      confirmLabel: 'Delete device',
+      tone: 'danger',
+    });
     if (!ok) return;
     remove.mutate(d.id, {
       onSuccess: () => {

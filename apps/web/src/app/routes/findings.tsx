@@ -38,8 +38,8 @@ export function Component() {
         title="Findings explorer"
         subtitle={
           <>
-            Search findings, parts, teardown summaries and comments across every teardown you can read{me.role === 'viewer' ? ' (published ones)' : ''} and see which
-            patterns recur across devices. The address holds the whole search: copy it to share exactly this view.
+            Search findings, parts, teardown summaries and comments across every teardown you can read{me.role === 'viewer' ? ' (published ones)' : ''} and see which patterns recur across devices. The
+            address holds the whole search: copy it to share exactly this view.
           </>
         }
       />
@@ -121,7 +121,11 @@ export function Component() {
                     {data!.total === 1 ? 'hit' : 'hits'} for <span className="font-medium text-graphite-900">{data!.terms.join(' ')}</span>
                   </>
                 ) : data!.types.length === 1 && data!.types[0] === 'finding' ? (
-                  data!.total === 1 ? 'finding' : 'findings'
+                  data!.total === 1 ? (
+                    'finding'
+                  ) : (
+                    'findings'
+                  )
                 ) : data!.total === 1 ? (
                   'record'
                 ) : (
@@ -139,7 +143,10 @@ export function Component() {
                         : 'Nothing matches these filters. Remove one, or record findings in a teardown’s Findings section.'
                     }
                     action={
-                      <Button variant="secondary" onClick={() => update({ ...state, type: [], kind: [], severity: [], category: [], maker: [], tag: [], status: [], device: [], from: null, to: null, page: 1 })}>
+                      <Button
+                        variant="secondary"
+                        onClick={() => update({ ...state, type: [], kind: [], severity: [], category: [], maker: [], tag: [], status: [], device: [], from: null, to: null, page: 1 })}
+                      >
                         Clear filters
                       </Button>
                     }

@@ -88,9 +88,7 @@ export function Component() {
   const queries = [photos, parts, cost, power, figures, runs, findings];
   const ready = queries.every((q) => !q.isPending);
   const photoList = photos.data?.photos ?? [];
-  const hot = Boolean(
-    power.data?.loads.some((l) => l.kind === 'heater') || figures.data?.figures.some((f) => f.caution) || runs.data?.some((r) => r.analysis.thermal),
-  );
+  const hot = Boolean(power.data?.loads.some((l) => l.kind === 'heater') || figures.data?.figures.some((f) => f.caution) || runs.data?.some((r) => r.analysis.thermal));
 
   const sections: { id: string; title: string; body: ReactNode; aside?: ReactNode }[] = [
     {

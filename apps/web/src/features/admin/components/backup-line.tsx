@@ -16,8 +16,11 @@ export function BackupLine() {
         <span>The date of the last backup could not be read.</span>
       ) : last ? (
         <span>
-          Last backup: <time dateTime={last.at} className="font-medium text-graphite-900">{formatDateTime(last.at)}</time> ({last.files} files, {size(last.bytes)}, folder{' '}
-          <span className="font-mono text-xs">{last.folder}</span>)
+          Last backup:{' '}
+          <time dateTime={last.at} className="font-medium text-graphite-900">
+            {formatDateTime(last.at)}
+          </time>{' '}
+          ({last.files} files, {size(last.bytes)}, folder <span className="font-mono text-xs">{last.folder}</span>)
         </span>
       ) : (
         <span>

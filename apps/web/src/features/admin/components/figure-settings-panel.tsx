@@ -2,14 +2,7 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { toast } from 'sonner';
-import {
-  DEVICE_CATEGORY,
-  durationText,
-  figureSettingsFormSchema,
-  type FigureSettingsForm,
-  type FigureSettingsFormValues,
-  type WorkspaceSettings,
-} from '@splitcase/contracts';
+import { DEVICE_CATEGORY, durationText, figureSettingsFormSchema, type FigureSettingsForm, type FigureSettingsFormValues, type WorkspaceSettings } from '@splitcase/contracts';
 import { Button } from '@/components/button';
 import { ErrorPanel } from '@/components/error-boundary';
 import { Field, FormError, Input } from '@/components/field';
@@ -85,14 +78,14 @@ function FigureSettingsEditor({ settings }: { settings: WorkspaceSettings }) {
         <div className="space-y-4 p-4 text-sm">
           <div className="space-y-2 text-graphite-700">
             <p>
-              The touch margin compares a heated surface with the burn threshold: the temperature at which skin burns after a given time of contact (ISO 13732-1, values from memory
-              [M]). For 1 min of contact the threshold depends on the material: bare or coated metal 51 °C, ceramics and glass 56 °C, plastics 60 °C, wood 60 °C. For 10 min it is 48 °C and for 8 h or
-              longer 43 °C, whatever the material. A time between two listed ones is judged at the next longer one.
+              The touch margin compares a heated surface with the burn threshold: the temperature at which skin burns after a given time of contact (ISO 13732-1, values from memory [M]). For 1 min of
+              contact the threshold depends on the material: bare or coated metal 51 °C, ceramics and glass 56 °C, plastics 60 °C, wood 60 °C. For 10 min it is 48 °C and for 8 h or longer 43 °C,
+              whatever the material. A time between two listed ones is judged at the next longer one.
             </p>
             <p>
-              Which time applies follows how the device is used, not its surface: what is held or worn for long — a pocket heater in the hand, a headlamp on the forehead — is judged at
-              10 min or 8 h, not at 1 min [CP]. A teardown can set its own contact time (its Overview); otherwise its device’s category below decides; a blank category uses the
-              workspace default. Each touch figure says which time it used and why.
+              Which time applies follows how the device is used, not its surface: what is held or worn for long — a pocket heater in the hand, a headlamp on the forehead — is judged at 10 min or 8 h,
+              not at 1 min [CP]. A teardown can set its own contact time (its Overview); otherwise its device’s category below decides; a blank category uses the workspace default. Each touch figure
+              says which time it used and why.
             </p>
           </div>
           <Field label="Workspace default contact time" error={errors.defaultContact?.message} hint="For categories left blank, e.g. 1 min, 10 min or 8 h; from 1 s to 8 h">
@@ -153,8 +146,8 @@ function FigureSettingsEditor({ settings }: { settings: WorkspaceSettings }) {
       <Card title="Usable energy for runtimes">
         <div className="space-y-4 p-4 text-sm">
           <p className="text-graphite-700">
-            A runtime uses the energy a discharge bench run actually delivered, when the teardown has one. Without a run it takes the rated energy times this share: a device stops at its
-            own cut-off, usually before the cell’s rated capacity is spent [CP]. The runtime figure states which of the two it used.
+            A runtime uses the energy a discharge bench run actually delivered, when the teardown has one. Without a run it takes the rated energy times this share: a device stops at its own cut-off,
+            usually before the cell’s rated capacity is spent [CP]. The runtime figure states which of the two it used.
           </p>
           <Field label="Usable share of the rated energy (%)" error={errors.usablePercent?.message} hint="From 50 % to 100 %; 90 % is usual">
             {(f) => (

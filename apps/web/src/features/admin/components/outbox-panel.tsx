@@ -40,9 +40,7 @@ export function OutboxPanel() {
   const open: OutboxMessage | undefined = messages.find((m) => m.id === openId) ?? messages[0];
   return (
     <div className="space-y-3">
-      <p className="text-sm text-graphite-600">
-        No mail server is configured, so Splitcase keeps every message it sends here instead of delivering it. Set SPLITCASE_SMTP_URL to send real e-mail.
-      </p>
+      <p className="text-sm text-graphite-600">No mail server is configured, so Splitcase keeps every message it sends here instead of delivering it. Set SPLITCASE_SMTP_URL to send real e-mail.</p>
       {messages.length === 0 ? (
         <Card>
           <EmptyState icon={<Mail className="size-8" />} message="Nothing sent yet. Invitations, password resets and review requests appear here." />
@@ -52,11 +50,7 @@ export function OutboxPanel() {
           <ul className="max-h-[70vh] divide-y divide-graphite-100 overflow-auto rounded-lg border border-graphite-150 bg-white">
             {messages.map((m) => (
               <li key={m.id}>
-                <button
-                  type="button"
-                  onClick={() => setOpenId(m.id)}
-                  className={`block w-full px-3 py-2 text-left text-sm hover:bg-graphite-50 ${open?.id === m.id ? 'bg-copper-50' : ''}`}
-                >
+                <button type="button" onClick={() => setOpenId(m.id)} className={`block w-full px-3 py-2 text-left text-sm hover:bg-graphite-50 ${open?.id === m.id ? 'bg-copper-50' : ''}`}>
                   <span className="block truncate font-medium">{m.subject}</span>
                   <span className="block truncate text-xs text-graphite-500">
                     to {m.to} · {formatDateTime(m.receivedAt)}

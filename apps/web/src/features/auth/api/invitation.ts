@@ -10,8 +10,7 @@ export interface InvitationPreview {
   expiresAt: string;
 }
 
-export const getInvitationPreview = (token: string) =>
-  api.get<{ invitation: InvitationPreview }>('/api/auth/invitations/preview', { query: { token } }).then((r) => r.invitation);
+export const getInvitationPreview = (token: string) => api.get<{ invitation: InvitationPreview }>('/api/auth/invitations/preview', { query: { token } }).then((r) => r.invitation);
 
 export const invitationPreviewQuery = (token: string) =>
   queryOptions({ queryKey: [...rootKeys.auth, 'invitation', token], queryFn: () => getInvitationPreview(token), retry: false, enabled: token.length > 0 });

@@ -12,7 +12,6 @@ import { applyServerErrors } from '@/lib/form-errors';
 import { formatDate } from '@/lib/format';
 import { useAcceptInvitation, useInvitationPreview } from '../api/invitation';
 
-
 export function AcceptInvitationForm({ token }: { token: string }) {
   const preview = useInvitationPreview(token);
   const accept = useAcceptInvitation();

@@ -9,8 +9,7 @@ export function AuthLayout({ title, children, footer }: { title: string; childre
         <div className="max-w-md space-y-4">
           <p className="text-3xl font-semibold leading-tight tracking-tight">Open it up. Measure it. Know what it costs.</p>
           <p className="text-graphite-300">
-            Teardown notes, power figures, should-cost and side-by-side comparisons of battery-powered devices, in one workspace for the bench, sourcing and
-            product leads.
+            Teardown notes, power figures, should-cost and side-by-side comparisons of battery-powered devices, in one workspace for the bench, sourcing and product leads.
           </p>
         </div>
         <svg className="absolute -right-24 bottom-10 w-[420px] text-graphite-800" viewBox="0 0 32 32" aria-hidden>

@@ -9,7 +9,6 @@ import { paths } from '@/config/paths';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useConfirmReset, useRequestReset } from '../api/password-reset';
 
-
 export function RequestResetForm() {
   const request = useRequestReset();
   const [formError, setFormError] = useState<string | null>(null);

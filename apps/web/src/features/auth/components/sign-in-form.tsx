@@ -9,7 +9,6 @@ import { paths } from '@/config/paths';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useLogin } from '../api/login';
 
-
 /** Only same-site paths are followed after sign-in. */
 export function safeNext(next: string | null): string {
   return next && next.startsWith('/') && !next.startsWith('//') ? next : paths.home();

@@ -52,7 +52,10 @@ export function CostBomTable({ cost, canEdit, editingId, onEdit }: { cost: CostR
           if (!p || l.breakMinQty === null) return <span className="text-graphite-400">—</span>;
           const used = p.breaks.find((b) => b.minQty === l.breakMinQty);
           return (
-            <div title={`${l.buyQuantity.toLocaleString('en-GB')} pieces bought at this volume, attrition included${l.belowMinimumOrder ? ': below the smallest break' : ''}`} className={`leading-tight ${l.belowMinimumOrder ? 'text-amber-800' : ''}`}>
+            <div
+              title={`${l.buyQuantity.toLocaleString('en-GB')} pieces bought at this volume, attrition included${l.belowMinimumOrder ? ': below the smallest break' : ''}`}
+              className={`leading-tight ${l.belowMinimumOrder ? 'text-amber-800' : ''}`}
+            >
               <div>
                 {used ? plain(used.unitPrice) : ''} <span className="text-xs text-graphite-500">{p.currency}</span>
               </div>
@@ -75,7 +78,9 @@ export function CostBomTable({ cost, canEdit, editingId, onEdit }: { cost: CostR
           l.priced ? (
             <div className="leading-tight">
               <div className="font-medium">{amount(l.extended)}</div>
-              <div className="text-2xs text-graphite-500" title="Attrition of this line's category">+{formatPercent(l.attrition)} attrition</div>
+              <div className="text-2xs text-graphite-500" title="Attrition of this line's category">
+                +{formatPercent(l.attrition)} attrition
+              </div>
             </div>
           ) : (
             <span className="text-xs text-graphite-500">not priced</span>

@@ -42,7 +42,10 @@ export default function CostCharts({ cost }: { cost: CostRollUpDto }) {
       {cost.priceView === 'detail' && (
         <figure className="rounded-lg border border-graphite-150 bg-white p-4 shadow-card" aria-labelledby="cost-by-category">
           <figcaption id="cost-by-category" className="mb-2 text-sm font-semibold text-graphite-900">
-            Parts by category <span className="font-normal text-graphite-500">· {cur} per unit at {cost.volume.toLocaleString('en-GB')} units, {ratesOf(cost.rateDate)}</span>
+            Parts by category{' '}
+            <span className="font-normal text-graphite-500">
+              · {cur} per unit at {cost.volume.toLocaleString('en-GB')} units, {ratesOf(cost.rateDate)}
+            </span>
           </figcaption>
           {categoryData.length === 0 ? (
             <p className="py-8 text-center text-sm text-graphite-500">No priced parts yet: the chart fills in as lines get prices.</p>
@@ -86,7 +89,10 @@ export default function CostCharts({ cost }: { cost: CostRollUpDto }) {
 
       <figure className="rounded-lg border border-graphite-150 bg-white p-4 shadow-card" aria-labelledby="cost-waterfall">
         <figcaption id="cost-waterfall" className="mb-2 text-sm font-semibold text-graphite-900">
-          From parts to retail price <span className="font-normal text-graphite-500">· {cur} per unit, {ratesOf(cost.rateDate)}</span>
+          From parts to retail price{' '}
+          <span className="font-normal text-graphite-500">
+            · {cur} per unit, {ratesOf(cost.rateDate)}
+          </span>
         </figcaption>
         <div className="h-80" data-testid="chart-waterfall">
           <ResponsiveContainer width="100%" height="100%">
@@ -110,9 +116,7 @@ export default function CostCharts({ cost }: { cost: CostRollUpDto }) {
             </li>
           ))}
         </ul>
-        {cost.impliedMargin && !cost.impliedMargin.complete && (
-          <p className="mt-2 text-xs text-graphite-600">Stops at landed cost: the implied margin is incomplete ({cost.impliedMargin.reason})</p>
-        )}
+        {cost.impliedMargin && !cost.impliedMargin.complete && <p className="mt-2 text-xs text-graphite-600">Stops at landed cost: the implied margin is incomplete ({cost.impliedMargin.reason})</p>}
         <table className="mt-3 w-full text-sm" aria-label="From parts to retail price, data">
           <thead>
             <tr className="border-b border-graphite-150 text-left text-xs uppercase tracking-wide text-graphite-500">

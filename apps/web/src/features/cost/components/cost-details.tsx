@@ -46,7 +46,10 @@ export function VolumeTable({ cost, onPick }: { cost: CostRollUpDto; onPick: (vo
                   <td className="num px-3 py-1.5 text-right">
                     {v.impliedMargin && !v.impliedMargin.complete ? (
                       <span className="text-graphite-600" title={v.impliedMargin.reason ?? undefined}>
-                        incomplete <span className="text-xs text-graphite-600">({v.impliedMargin.pricedLines} of {v.impliedMargin.totalLines} lines priced)</span>
+                        incomplete{' '}
+                        <span className="text-xs text-graphite-600">
+                          ({v.impliedMargin.pricedLines} of {v.impliedMargin.totalLines} lines priced)
+                        </span>
                       </span>
                     ) : v.impliedMargin ? (
                       <>
@@ -84,7 +87,14 @@ export function CostSteps({ cost }: { cost: CostRollUpDto }) {
                 <ul className="flex flex-wrap gap-x-4 gap-y-0.5">
                   {s.inputs.map((i) => (
                     <li key={i.label}>
-                      {i.label}: <span className="num text-graphite-900">{typeof i.value === 'number' ? (i.unit && i.unit.length === 3 ? money(i.value, i.unit) : `${plain(Number(i.value.toPrecision(4)))}${i.unit ? ` ${i.unit}` : ''}`) : String(i.value)}</span>
+                      {i.label}:{' '}
+                      <span className="num text-graphite-900">
+                        {typeof i.value === 'number'
+                          ? i.unit && i.unit.length === 3
+                            ? money(i.value, i.unit)
+                            : `${plain(Number(i.value.toPrecision(4)))}${i.unit ? ` ${i.unit}` : ''}`
+                          : String(i.value)}
+                      </span>
                     </li>
                   ))}
                 </ul>

@@ -63,8 +63,18 @@ function Summary({ cost }: { cost: CostRollUpDto }) {
   const cur = cost.currency;
   return (
     <div className="grid gap-3 sm:grid-cols-2 2xl:grid-cols-4">
-      <Figure label="Parts with attrition" value={money(cost.partsTotal, cur)} testId="cost-parts-total" sub={`${cost.lines.length - cost.unpricedPartIds.length} of ${cost.lines.length} lines priced · ${ratesOf(cost.rateDate)}`} />
-      <Figure label="Ex-works" value={money(cost.exWorks, cur)} testId="cost-ex-works" sub={`Assembly ${money(cost.assembly, cur)} · labour and test ${money(cost.labour, cur)} + ${money(cost.test, cur)}`} />
+      <Figure
+        label="Parts with attrition"
+        value={money(cost.partsTotal, cur)}
+        testId="cost-parts-total"
+        sub={`${cost.lines.length - cost.unpricedPartIds.length} of ${cost.lines.length} lines priced · ${ratesOf(cost.rateDate)}`}
+      />
+      <Figure
+        label="Ex-works"
+        value={money(cost.exWorks, cur)}
+        testId="cost-ex-works"
+        sub={`Assembly ${money(cost.assembly, cur)} · labour and test ${money(cost.labour, cur)} + ${money(cost.test, cur)}`}
+      />
       <Figure
         label="Landed cost"
         strong
@@ -193,7 +203,11 @@ export function CostSection({ teardown }: { teardown: TeardownDto }) {
           )}
         </div>
         <div className="ml-auto flex flex-wrap items-center gap-2">
-          {cost.isFetching && <span className="text-xs text-graphite-500" role="status">Recalculating…</span>}
+          {cost.isFetching && (
+            <span className="text-xs text-graphite-500" role="status">
+              Recalculating…
+            </span>
+          )}
           {!empty && (
             <a
               href={costCsvUrl(id, { volume: data.volume, currency: data.currency })}

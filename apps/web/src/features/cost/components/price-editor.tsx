@@ -111,9 +111,7 @@ export function PriceEditor({ teardownId, line, currencies, onClose }: { teardow
           <h3 className="text-sm font-semibold text-graphite-900">
             Price of <span className="font-mono">{line.designators ?? '—'}</span> · {line.description}
           </h3>
-          <p className="text-xs text-graphite-600">
-            {line.quantity} per unit; breaks are by pieces bought (quantity × volume). List them by increasing minimum quantity.
-          </p>
+          <p className="text-xs text-graphite-600">{line.quantity} per unit; breaks are by pieces bought (quantity × volume). List them by increasing minimum quantity.</p>
         </div>
         <Button size="sm" variant="ghost" onClick={onClose} aria-label="Close the price editor">
           <X className="size-4" aria-hidden />

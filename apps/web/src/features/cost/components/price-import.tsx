@@ -9,7 +9,9 @@ import { plain } from './display';
 
 type Price = PriceImportRow['after'];
 const show = (p: Price | null) =>
-  p ? `${p.currency} ${p.breaks.map((b) => `${plain(b.minQty)}@${plain(b.unitPrice)}`).join('; ')} · ${PRICE_SOURCE.labels[p.source]} · ${PRICE_CONFIDENCE.labels[p.confidence]} · ${p.priceDate}` : 'no price';
+  p
+    ? `${p.currency} ${p.breaks.map((b) => `${plain(b.minQty)}@${plain(b.unitPrice)}`).join('; ')} · ${PRICE_SOURCE.labels[p.source]} · ${PRICE_CONFIDENCE.labels[p.confidence]} · ${p.priceDate}`
+    : 'no price';
 const same = (a: Price | null, b: Price) => a !== null && JSON.stringify(a) === JSON.stringify(b);
 
 /** Prices from a CSV with the export's columns: check first (nothing saved), then save every line or none. */
@@ -49,8 +51,8 @@ export function PriceImport({ teardownId, onClose }: { teardownId: number; onClo
           <h3 className="text-sm font-semibold">Import prices from CSV</h3>
           <p className="max-w-3xl text-xs text-graphite-500">
             Use the columns of the costed-BOM export (<span className="font-mono">{COSTED_BOM_COLUMNS.slice(0, 2).join(', ')}, currency, breaks, source, confidence, price_date</span>); breaks as{' '}
-            <span className="font-mono">minQty@unitPrice</span> separated by <span className="font-mono">;</span>. Lines are matched by designators, else by maker part number. Nothing is saved until you
-            apply, and then every line or none.
+            <span className="font-mono">minQty@unitPrice</span> separated by <span className="font-mono">;</span>. Lines are matched by designators, else by maker part number. Nothing is saved until
+            you apply, and then every line or none.
           </p>
         </div>
         <Button size="sm" variant="ghost" aria-label="Close the price import" onClick={onClose}>

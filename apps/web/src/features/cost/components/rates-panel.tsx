@@ -178,10 +178,13 @@ function ReportingCurrency({ currencies }: { currencies: string[] }) {
         value={value}
         disabled={set.isPending}
         onChange={(e) =>
-          set.mutate({ reportingCurrency: e.target.value }, {
-            onSuccess: (s) => toast.success(`Cost figures are now reported in ${s.reportingCurrency}.`),
-            onError: (err) => toast.error(err.message),
-          })
+          set.mutate(
+            { reportingCurrency: e.target.value },
+            {
+              onSuccess: (s) => toast.success(`Cost figures are now reported in ${s.reportingCurrency}.`),
+              onError: (err) => toast.error(err.message),
+            },
+          )
         }
         className="h-8 rounded-md border border-graphite-200 bg-white px-2 text-sm"
       >
@@ -227,7 +230,9 @@ export function RatesPanel() {
                 </span>
               </div>
               {current.note && <p className="text-sm text-graphite-600">{current.note}</p>}
-              <p className="text-xs text-graphite-500">Units of each currency per 1 {current.base}; other pairs are crossed through {current.base}.</p>
+              <p className="text-xs text-graphite-500">
+                Units of each currency per 1 {current.base}; other pairs are crossed through {current.base}.
+              </p>
               <RateList table={current} />
             </>
           ) : (
@@ -238,7 +243,13 @@ export function RatesPanel() {
         </div>
       </Card>
 
-      <Card title={<span className="inline-flex items-center gap-2"><History className="size-4 text-graphite-400" aria-hidden /> History</span>}>
+      <Card
+        title={
+          <span className="inline-flex items-center gap-2">
+            <History className="size-4 text-graphite-400" aria-hidden /> History
+          </span>
+        }
+      >
         {history.length === 0 ? (
           <p className="p-4 text-sm text-graphite-500">Nothing saved yet.</p>
         ) : (

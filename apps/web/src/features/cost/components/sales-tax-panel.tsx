@@ -70,12 +70,11 @@ function SalesTaxForm({ initial }: { initial: Record<string, number> }) {
   return (
     <form noValidate onSubmit={submit} className="space-y-3 p-4 text-sm">
       <p className="text-graphite-700">
-        The implied margin takes the sales tax out of a retail price first: net = price ÷ (1 + rate). A device can set its own rate (Sales tax in the price, on the device form); otherwise
-        the rate for its price's currency below applies. Use 0 % where prices are quoted before tax, as is usual in the US.
+        The implied margin takes the sales tax out of a retail price first: net = price ÷ (1 + rate). A device can set its own rate (Sales tax in the price, on the device form); otherwise the rate for
+        its price's currency below applies. Use 0 % where prices are quoted before tax, as is usual in the US.
       </p>
       <p className="text-xs text-graphite-500">
-        Rates differ by country, even within one currency, and they change: set the ones of the markets you compare. The starting values are common standard rates, not advice on any
-        country's tax.
+        Rates differ by country, even within one currency, and they change: set the ones of the markets you compare. The starting values are common standard rates, not advice on any country's tax.
       </p>
       <table className="w-full max-w-md" aria-label="Sales tax by currency">
         <thead className="text-left text-xs uppercase tracking-wide text-graphite-500">

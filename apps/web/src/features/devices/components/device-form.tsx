@@ -1,7 +1,17 @@
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { bareHint, createDeviceBody, DEVICE_CATEGORY, DEVICE_CLAIM_FIELDS, PRICE_FIELDS, type CreateDeviceBody, type DeviceClaimField, type DeviceDto, type DeviceFormValues } from '@splitcase/contracts';
+import {
+  bareHint,
+  createDeviceBody,
+  DEVICE_CATEGORY,
+  DEVICE_CLAIM_FIELDS,
+  PRICE_FIELDS,
+  type CreateDeviceBody,
+  type DeviceClaimField,
+  type DeviceDto,
+  type DeviceFormValues,
+} from '@splitcase/contracts';
 import { Button } from '@/components/button';
 import { Field, Input, Select, Textarea, FormError } from '@/components/field';
 import { Card } from '@/components/page';
@@ -13,7 +23,23 @@ const KNOWN = ['maker', 'model', 'category', 'retailPrice', 'currency', 'salesTa
 /** Form values for an existing device: each claim as typed (or its stored value with its unit). */
 export function deviceFormValues(d?: DeviceDto): DeviceFormValues {
   if (!d) {
-    return { maker: '', model: '', category: 'pocket-heater', retailPrice: '', currency: '', salesTaxRate: '', priceSeenOn: '', whereBought: '', claimCapacityAh: '', claimCapacityWh: '', claimOutputWatts: '', claimRuntimeH: '', claimPowerW: '', claimOutputText: '', notes: '' };
+    return {
+      maker: '',
+      model: '',
+      category: 'pocket-heater',
+      retailPrice: '',
+      currency: '',
+      salesTaxRate: '',
+      priceSeenOn: '',
+      whereBought: '',
+      claimCapacityAh: '',
+      claimCapacityWh: '',
+      claimOutputWatts: '',
+      claimRuntimeH: '',
+      claimPowerW: '',
+      claimOutputText: '',
+      notes: '',
+    };
   }
   return {
     maker: d.maker,

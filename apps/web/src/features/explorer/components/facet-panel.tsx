@@ -70,9 +70,7 @@ function FacetList({
   const chosen: string[] = state[spec.facet];
   // Browse mode lists findings when no type is chosen: show that as the choice.
   const shownChosen = spec.facet === 'type' && chosen.length === 0 ? effectiveTypes : chosen;
-  const values = spec.values
-    ? [...spec.values]
-    : Object.keys(counts).sort((a, b) => (counts[b] ?? 0) - (counts[a] ?? 0) || a.localeCompare(b, 'en', { sensitivity: 'base' }));
+  const values = spec.values ? [...spec.values] : Object.keys(counts).sort((a, b) => (counts[b] ?? 0) - (counts[a] ?? 0) || a.localeCompare(b, 'en', { sensitivity: 'base' }));
   const folded = spec.fold && !open ? values.filter((v, i) => i < spec.fold! || chosen.includes(v)) : values;
   const toggle = (v: string) => {
     const base = spec.facet === 'type' && chosen.length === 0 ? effectiveTypes : chosen;

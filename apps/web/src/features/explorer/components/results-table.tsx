@@ -34,19 +34,7 @@ export const hitHref = (item: SearchItem) => paths.teardown(item.teardownId, ite
  * The results, sorted on the server (the sort applies to every page, not just this one): a click
  * on a column header sorts by it, a second click reverses.
  */
-export function ResultsTable({
-  items,
-  sort,
-  dir,
-  onSort,
-  busy,
-}: {
-  items: SearchItem[];
-  sort: SearchSort;
-  dir: SortDir;
-  onSort: (sort: SearchSort, dir: SortDir) => void;
-  busy: boolean;
-}) {
+export function ResultsTable({ items, sort, dir, onSort, busy }: { items: SearchItem[]; sort: SearchSort; dir: SortDir; onSort: (sort: SearchSort, dir: SortDir) => void; busy: boolean }) {
   return (
     <div className={`overflow-auto rounded-lg border border-graphite-150 bg-white transition-opacity ${busy ? 'opacity-60' : ''}`} style={{ maxHeight: 'calc(100vh - 13rem)' }} aria-busy={busy}>
       <table className="w-full min-w-[52rem] table-fixed border-collapse text-sm">
@@ -64,7 +52,12 @@ export function ResultsTable({
                 >
                   {c.id === 'status' ? (
                     <span className="inline-flex items-center gap-2">
-                      <SortButton label="Teardown" active={sort === 'status'} dir={dir} onClick={() => onSort('status', sort === 'status' ? (dir === 'asc' ? 'desc' : 'asc') : SEARCH_SORT_DIR.status)} />
+                      <SortButton
+                        label="Teardown"
+                        active={sort === 'status'}
+                        dir={dir}
+                        onClick={() => onSort('status', sort === 'status' ? (dir === 'asc' ? 'desc' : 'asc') : SEARCH_SORT_DIR.status)}
+                      />
                       <SortButton label="Date" active={sort === 'date'} dir={dir} onClick={() => onSort('date', sort === 'date' ? (dir === 'asc' ? 'desc' : 'asc') : SEARCH_SORT_DIR.date)} />
                     </span>
                   ) : c.sort ? (

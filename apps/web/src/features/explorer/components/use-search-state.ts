@@ -10,9 +10,6 @@ import { searchStateFromParams, searchStateToQuery, type SearchState } from '@sp
 export function useSearchState(): [SearchState, (next: SearchState, options?: { replace?: boolean }) => void] {
   const [params, setParams] = useSearchParams();
   const state = useMemo(() => searchStateFromParams(params), [params]);
-  const set = useCallback(
-    (next: SearchState, options?: { replace?: boolean }) => setParams(new URLSearchParams(searchStateToQuery(next)), { replace: options?.replace ?? false }),
-    [setParams],
-  );
+  const set = useCallback((next: SearchState, options?: { replace?: boolean }) => setParams(new URLSearchParams(searchStateToQuery(next)), { replace: options?.replace ?? false }), [setParams]);
   return [state, set];
 }

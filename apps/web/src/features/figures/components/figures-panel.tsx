@@ -132,12 +132,7 @@ function SuggestionItem({ s, teardownId, canEdit }: { s: SuggestionDto; teardown
       {s.status === 'dismissed' && s.decidedBy && <p className="text-xs text-graphite-500">Dismissed by {s.decidedBy}.</p>}
       {canEdit && s.status === 'open' && (
         <div className="flex gap-2 pt-0.5">
-          <Button
-            size="sm"
-            variant="primary"
-            busy={accept.isPending}
-            onClick={() => accept.mutate(s.key, { onSuccess: (f) => toast.success(`Finding #${f.id} added from the suggestion.`), onError })}
-          >
+          <Button size="sm" variant="primary" busy={accept.isPending} onClick={() => accept.mutate(s.key, { onSuccess: (f) => toast.success(`Finding #${f.id} added from the suggestion.`), onError })}>
             <Check className="size-3.5" aria-hidden /> Accept
           </Button>
           <Button size="sm" busy={dismiss.isPending} onClick={() => dismiss.mutate(s.key, { onError })}>

@@ -11,7 +11,21 @@ import { isUnpublishCancelled } from '@/lib/unpublish-confirm';
 
 const KNOWN = ['kind', 'severity', 'text', 'tags', 'partIds', 'photoIds'] as const;
 
-function Checklist<T extends { id: number }>({ items, value, onChange, label, describe, empty }: { items: T[]; value: number[]; onChange: (ids: number[]) => void; label: string; describe: (item: T) => React.ReactNode; empty: string }) {
+function Checklist<T extends { id: number }>({
+  items,
+  value,
+  onChange,
+  label,
+  describe,
+  empty,
+}: {
+  items: T[];
+  value: number[];
+  onChange: (ids: number[]) => void;
+  label: string;
+  describe: (item: T) => React.ReactNode;
+  empty: string;
+}) {
   if (items.length === 0) return <p className="text-xs text-graphite-500">{empty}</p>;
   return (
     <fieldset className="max-h-44 overflow-auto rounded-md border border-graphite-200 bg-white">
@@ -126,7 +140,14 @@ export function FindingForm({
             control={control}
             name="photoIds"
             render={({ field }) => (
-              <Checklist label="Linked photos" items={photos} value={field.value ?? []} onChange={field.onChange} empty="No photos uploaded for this teardown yet." describe={(p) => `${p.caption ?? `Photo ${p.id}`} · layer ${p.layer}`} />
+              <Checklist
+                label="Linked photos"
+                items={photos}
+                value={field.value ?? []}
+                onChange={field.onChange}
+                empty="No photos uploaded for this teardown yet."
+                describe={(p) => `${p.caption ?? `Photo ${p.id}`} · layer ${p.layer}`}
+              />
             )}
           />
           {errors.photoIds?.message && <p className="text-sm text-brick-700">{errors.photoIds.message}</p>}

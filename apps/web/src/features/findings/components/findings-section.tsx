@@ -196,7 +196,11 @@ function FindingList({
   const shown = data.findings.filter((f) => (!kind || f.kind === kind) && (!tag || f.tags.includes(tag)));
   if (shown.length === 0) return <p className="px-4 py-6 text-center text-sm text-graphite-500">No findings match the filters.</p>;
   const sorted = [...shown].sort((a, b) =>
-    order === 'newest' ? b.createdAt.localeCompare(a.createdAt) || b.id - a.id : order === 'mild-first' ? RANK[b.severity] - RANK[a.severity] || a.id - b.id : RANK[a.severity] - RANK[b.severity] || a.id - b.id,
+    order === 'newest'
+      ? b.createdAt.localeCompare(a.createdAt) || b.id - a.id
+      : order === 'mild-first'
+        ? RANK[b.severity] - RANK[a.severity] || a.id - b.id
+        : RANK[a.severity] - RANK[b.severity] || a.id - b.id,
   );
   const item = (f: FindingDto) => (
     <FindingItem key={f.id} f={f} data={data} teardown={teardown} editing={editing === f.id} setEditing={setEditing} onTag={onTag} extras={renderFindingExtras?.(f.id)} />
@@ -263,7 +267,9 @@ function FindingItem({
   const onDelete = async () => {
     const ok = await confirmDialog({
       title: 'Delete this finding?',
-      message: f.suggestionKey ? 'It was accepted from a suggestion; the suggestion becomes open again in the figures panel.' : 'The finding and its links to parts and photos are removed. The history keeps a line saying it was deleted.',
+      message: f.suggestionKey
+        ? 'It was accepted from a suggestion; the suggestion becomes open again in the figures panel.'
+        : 'The finding and its links to parts and photos are removed. The history keeps a line saying it was deleted.',
       confirmLabel: 'Delete finding',
       tone: 'danger',
     });
@@ -307,7 +313,13 @@ function FindingItem({
               {f.photos.length} photo{f.photos.length === 1 ? '' : 's'}
             </span>
             {f.tags.map((t) => (
-              <button key={t} type="button" onClick={() => onTag(t)} className="rounded-full bg-copper-50 px-2 py-0.5 text-copper-800 ring-1 ring-inset ring-copper-100 hover:bg-copper-100" title={`Show findings tagged ${t}`}>
+              <button
+                key={t}
+                type="button"
+                onClick={() => onTag(t)}
+                className="rounded-full bg-copper-50 px-2 py-0.5 text-copper-800 ring-1 ring-inset ring-copper-100 hover:bg-copper-100"
+                title={`Show findings tagged ${t}`}
+              >
                 #{t}
               </button>
             ))}

@@ -26,13 +26,7 @@ export function EngineerMain({ data }: { data: EngineerHome }) {
           </ul>
         </Block>
       )}
-      <Block
-        id="drafts"
-        title="Your drafts"
-        icon={<PencilLine className="size-4" aria-hidden />}
-        count={data.drafts.length}
-        action={<ActionLink to={paths.devices()}>Start another</ActionLink>}
-      >
+      <Block id="drafts" title="Your drafts" icon={<PencilLine className="size-4" aria-hidden />} count={data.drafts.length} action={<ActionLink to={paths.devices()}>Start another</ActionLink>}>
         {data.drafts.length === 0 ? (
           <EmptyLine action={<ActionLink to={paths.devices()}>Open devices</ActionLink>}>No drafts on your bench. Pick a device to start the next teardown.</EmptyLine>
         ) : (

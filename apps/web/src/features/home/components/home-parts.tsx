@@ -30,21 +30,7 @@ export function ActionLink({ to, children }: { to: string; children: ReactNode }
 }
 
 /** One home block: a titled card with an optional count, its rows, and one action in the header. */
-export function Block({
-  id,
-  title,
-  icon,
-  count,
-  action,
-  children,
-}: {
-  id: string;
-  title: string;
-  icon: ReactNode;
-  count?: number;
-  action?: ReactNode;
-  children: ReactNode;
-}) {
+export function Block({ id, title, icon, count, action, children }: { id: string; title: string; icon: ReactNode; count?: number; action?: ReactNode; children: ReactNode }) {
   return (
     <section id={id} aria-labelledby={`${id}-title`} className="scroll-mt-6 rounded-lg border border-graphite-150 bg-white shadow-card" data-block={id}>
       <header className="flex items-center justify-between gap-3 border-b border-graphite-100 px-4 py-2.5">

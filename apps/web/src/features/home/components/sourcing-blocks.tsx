@@ -60,10 +60,7 @@ export function SourcingSide({ data }: { data: SourcingHome }) {
           <div className="flex flex-wrap items-center justify-between gap-2">
             <p>
               <span className="num font-semibold text-graphite-950">{formatDate(rates.date)}</span>
-              <span className="text-graphite-600">
-                {' '}
-                · {rates.ageDays === 0 ? 'today' : `${rates.ageDays} day${rates.ageDays === 1 ? '' : 's'} old`}
-              </span>
+              <span className="text-graphite-600"> · {rates.ageDays === 0 ? 'today' : `${rates.ageDays} day${rates.ageDays === 1 ? '' : 's'} old`}</span>
             </p>
             {rates.stale ? (
               <Badge tone="amber" icon={TriangleAlert} title={`Older than ${rates.staleAfterDays} days`}>

@@ -24,20 +24,20 @@ export function ComparisonTable({ comparison }: { comparison: ComparisonDto }) {
   const metricColumns: Column<ComparisonRowDto>[] = comparison.metrics
     .filter((m) => m.applies)
     .map((m) => ({
-    id: m.key,
-    header: shortHeader(m),
-    align: 'right',
-    value: (r) => r.metrics[m.key] ?? undefined,
-    cell: (r) => {
-      const v = r.metrics[m.key];
-      if (v === null || v === undefined) return <Missing reason={r.missing[m.key] ?? 'Not recorded.'} />;
-      return (
-        <span title={r.sources[m.key]} className="whitespace-nowrap">
-          {metricText(v, m)}
-        </span>
-      );
-    },
-  }));
+      id: m.key,
+      header: shortHeader(m),
+      align: 'right',
+      value: (r) => r.metrics[m.key] ?? undefined,
+      cell: (r) => {
+        const v = r.metrics[m.key];
+        if (v === null || v === undefined) return <Missing reason={r.missing[m.key] ?? 'Not recorded.'} />;
+        return (
+          <span title={r.sources[m.key]} className="whitespace-nowrap">
+            {metricText(v, m)}
+          </span>
+        );
+      },
+    }));
   const columns: Column<ComparisonRowDto>[] = [
     { id: 'rank', header: 'Rank', align: 'right', value: (r) => r.rank, cell: (r) => <span className="font-semibold">{r.rank}</span> },
     {

@@ -47,14 +47,7 @@ export function DevicePicker({
         <label className="relative block">
           <span className="sr-only">Search devices</span>
           <Search className="pointer-events-none absolute left-2.5 top-2.5 size-4 text-graphite-400" aria-hidden />
-          <input
-            type="search"
-            value={q}
-            onChange={(e) => setQ(e.target.value)}
-            placeholder="Search maker, model or category"
-            aria-label="Search devices"
-            className={`${inputClass} h-9 pl-8`}
-          />
+          <input type="search" value={q} onChange={(e) => setQ(e.target.value)} placeholder="Search maker, model or category" aria-label="Search devices" className={`${inputClass} h-9 pl-8`} />
         </label>
         <ul className="mt-2 max-h-80 divide-y divide-graphite-100 overflow-auto rounded-md border border-graphite-150 bg-white" aria-label="Devices to pick from">
           {shown.length === 0 && <li className="p-4 text-sm text-graphite-500">No device matches “{q}”.</li>}
@@ -91,10 +84,22 @@ export function DevicePicker({
                   <div className="flex items-center gap-2">
                     <span className="num w-5 text-right text-xs text-graphite-500">{k + 1}</span>
                     <span className="min-w-0 flex-1 truncate">{name}</span>
-                    <button type="button" className="rounded p-1 text-graphite-500 hover:bg-graphite-100 disabled:opacity-30" onClick={() => move(k, -1)} disabled={k === 0} aria-label={`Move ${name} up`}>
+                    <button
+                      type="button"
+                      className="rounded p-1 text-graphite-500 hover:bg-graphite-100 disabled:opacity-30"
+                      onClick={() => move(k, -1)}
+                      disabled={k === 0}
+                      aria-label={`Move ${name} up`}
+                    >
                       <ArrowUp className="size-3.5" aria-hidden />
                     </button>
-                    <button type="button" className="rounded p-1 text-graphite-500 hover:bg-graphite-100 disabled:opacity-30" onClick={() => move(k, 1)} disabled={k === value.length - 1} aria-label={`Move ${name} down`}>
+                    <button
+                      type="button"
+                      className="rounded p-1 text-graphite-500 hover:bg-graphite-100 disabled:opacity-30"
+                      onClick={() => move(k, 1)}
+                      disabled={k === value.length - 1}
+                      aria-label={`Move ${name} down`}
+                    >
                       <ArrowDown className="size-3.5" aria-hidden />
                     </button>
                     <button type="button" className="rounded p-1 text-graphite-500 hover:bg-brick-50 hover:text-brick-700" onClick={() => toggle(id)} aria-label={`Take ${name} out`}>

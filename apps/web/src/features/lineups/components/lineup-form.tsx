@@ -118,8 +118,8 @@ export function LineupForm({
       <Card title="Operating mode compared">
         <div className="space-y-3 p-4">
           <p className="text-sm text-graphite-600">
-            Each device’s runtime comes from one of the operating modes recorded in its teardown; the lineup says which and why. A device without a matching mode has no runtime, and a device
-            without recorded modes is taken at its main load.
+            Each device’s runtime comes from one of the operating modes recorded in its teardown; the lineup says which and why. A device without a matching mode has no runtime, and a device without
+            recorded modes is taken at its main load.
           </p>
           <ModeChoice value={mode} onChange={setMode} error={errors['mode.name'] ?? errors.mode} hideLegend />
         </div>
@@ -127,8 +127,8 @@ export function LineupForm({
       <Card title="Weights of the ranking">
         <div className="space-y-3 p-4">
           <p className="text-sm text-graphite-600">
-            How much each metric counts in the ranking, from off to {metrics.weightMax}. A device missing a weighted metric is scored on the others and ranked after every device that has them all. You can also move these on the lineup page and watch the
-            ranking change before saving.
+            How much each metric counts in the ranking, from off to {metrics.weightMax}. A device missing a weighted metric is scored on the others and ranked after every device that has them all. You
+            can also move these on the lineup page and watch the ranking change before saving.
           </p>
           <WeightSliders metrics={metrics.metrics} weights={weights} max={metrics.weightMax} onChange={(k, v) => setWeights((w) => ({ ...w, [k]: v }))} errors={weightErrors} columns={2} />
           <InlineError message={errors.weights} />

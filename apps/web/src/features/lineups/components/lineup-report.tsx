@@ -115,7 +115,9 @@ export function LineupReport({ lineup, comparison, printedBy }: { lineup: Lineup
                 <td className={`${td} font-medium`}>{r.device.label}</td>
                 <td className={td}>{DEVICE_CATEGORY.labels[r.device.category]}</td>
                 <td className={td}>
-                  {r.teardown ? `Teardown #${r.teardown.id}, ${formatDate(r.teardown.date)}${r.teardown.unitLabel ? `, ${r.teardown.unitLabel}` : ''} (${TEARDOWN_STATUS.labels[r.teardown.status].toLowerCase()})` : 'No teardown yet'}
+                  {r.teardown
+                    ? `Teardown #${r.teardown.id}, ${formatDate(r.teardown.date)}${r.teardown.unitLabel ? `, ${r.teardown.unitLabel}` : ''} (${TEARDOWN_STATUS.labels[r.teardown.status].toLowerCase()})`
+                    : 'No teardown yet'}
                 </td>
                 <td className={td} data-testid="report-row-mode">
                   {r.mode ? (
@@ -137,7 +139,10 @@ export function LineupReport({ lineup, comparison, printedBy }: { lineup: Lineup
                   )}
                 </td>
                 <td className={`${td} num text-right`}>
-                  {metricText(r.metrics.retailPrice, c.metrics.find((m) => m.key === 'retailPrice')!)}
+                  {metricText(
+                    r.metrics.retailPrice,
+                    c.metrics.find((m) => m.key === 'retailPrice')!,
+                  )}
                   {r.retail?.rate && (
                     <span className="block text-[0.7rem] text-graphite-500">
                       × {r.retail.rate.toPrecision(4)} {c.currency}/{r.retail.currency}
@@ -286,9 +291,8 @@ export function LineupReport({ lineup, comparison, printedBy }: { lineup: Lineup
           </div>
         </div>
         <p className="mt-2 text-[0.7rem] text-graphite-600">
-          Each weighted metric is scaled 0–1 across the lineup (min–max, 1 = best in its better direction); a device's score is the weighted mean of the metrics it has × 100, the
-          weights renormalised over those [C]. A device that lacks a weighted metric is marked incomplete and ranks after every complete device, whatever its score: a missing figure
-          is never rewarded.
+          Each weighted metric is scaled 0–1 across the lineup (min–max, 1 = best in its better direction); a device's score is the weighted mean of the metrics it has × 100, the weights renormalised
+          over those [C]. A device that lacks a weighted metric is marked incomplete and ranks after every complete device, whatever its score: a missing figure is never rewarded.
         </p>
       </Section>
 

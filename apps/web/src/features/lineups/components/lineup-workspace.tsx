@@ -179,8 +179,8 @@ export function LineupWorkspace({ lineup, axes, onAxes }: { lineup: LineupDto; a
       >
         <div className="space-y-3 p-4">
           <p className="text-sm text-graphite-600">
-            Each device’s runtime comes from one of the operating modes recorded in its teardown. The comparison says, per device, which mode it took and why; a device without a matching mode has
-            no runtime here, never a guess.
+            Each device’s runtime comes from one of the operating modes recorded in its teardown. The comparison says, per device, which mode it took and why; a device without a matching mode has no
+            runtime here, never a guess.
           </p>
           <ModeChoice
             value={mode}
@@ -224,16 +224,16 @@ export function LineupWorkspace({ lineup, axes, onAxes }: { lineup: LineupDto; a
         <div className="space-y-3 p-4">
           <ComparisonTable comparison={c} />
           <p className="text-xs text-graphite-500">
-            Hover a value to see where it comes from; a “—” is missing (hover it for why) and is left out of the ranking, never counted as zero. A device marked “Incomplete” lacks a weighted
-            metric: its score rests on the others, and it ranks after every complete device.
+            Hover a value to see where it comes from; a “—” is missing (hover it for why) and is left out of the ranking, never counted as zero. A device marked “Incomplete” lacks a weighted metric:
+            its score rests on the others, and it ranks after every complete device.
           </p>
           {c.notes
             .filter((n) => n !== ESTIMATES_NOTE && n !== HOT_SURFACE_CAUTION)
             .map((n) => (
-            <p key={n} className="text-xs text-amber-800">
-              {n}
-            </p>
-          ))}
+              <p key={n} className="text-xs text-amber-800">
+                {n}
+              </p>
+            ))}
           <EstimatesNote />
           {hot && <HotSurfaceNote />}
         </div>

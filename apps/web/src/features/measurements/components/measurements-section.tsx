@@ -219,7 +219,14 @@ function QuickEntry({ teardownId, editing, onDoneEditing }: { teardownId: number
         <div className="grid gap-3 sm:grid-cols-[10rem_11rem_minmax(0,1fr)]">
           <label className="block">
             <span className="mb-1 block text-xs font-medium text-graphite-700">Quantity</span>
-            <select name="quantity" value={draft.quantity} onChange={(e) => setDraft({ ...draft, quantity: e.target.value as MeasuredQuantity })} onKeyDown={onKeyDown} className={`${big} pr-8`} autoFocus={!editing}>
+            <select
+              name="quantity"
+              value={draft.quantity}
+              onChange={(e) => setDraft({ ...draft, quantity: e.target.value as MeasuredQuantity })}
+              onKeyDown={onKeyDown}
+              className={`${big} pr-8`}
+              autoFocus={!editing}
+            >
               {MEASURED_QUANTITY.values.map((q) => (
                 <option key={q} value={q}>
                   {MEASURED_QUANTITY.labels[q]}
@@ -249,7 +256,9 @@ function QuickEntry({ teardownId, editing, onDoneEditing }: { teardownId: number
         {Object.entries(errors).map(([k, message]) => (
           <p key={k} id={`reading-${k}-error`} role="alert" className="text-sm text-brick-700">
             {/* The server's messages about the value already start with the field's label. */}
-            {!(k === 'value' && message.startsWith('Value with unit')) && <span className="font-medium">{k === 'value' ? 'Value with unit' : k === 'subject' ? 'What was measured' : k === '_' ? 'Not saved' : k}: </span>}
+            {!(k === 'value' && message.startsWith('Value with unit')) && (
+              <span className="font-medium">{k === 'value' ? 'Value with unit' : k === 'subject' ? 'What was measured' : k === '_' ? 'Not saved' : k}: </span>
+            )}
             {message}
           </p>
         ))}
@@ -260,7 +269,8 @@ function QuickEntry({ teardownId, editing, onDoneEditing }: { teardownId: number
         )}
         {!saved && !Object.keys(errors).length && (
           <p className="text-xs text-graphite-500">
-            {MEASURED_QUANTITY.labels[draft.quantity]}: e.g. {example(draft.quantity)} · {bareRule(draft.quantity)}. Enter saves the reading and keeps the row ready for the next one; Esc {editing ? 'cancels the correction' : 'clears the value'}.
+            {MEASURED_QUANTITY.labels[draft.quantity]}: e.g. {example(draft.quantity)} · {bareRule(draft.quantity)}. Enter saves the reading and keeps the row ready for the next one; Esc{' '}
+            {editing ? 'cancels the correction' : 'clears the value'}.
           </p>
         )}
       </div>

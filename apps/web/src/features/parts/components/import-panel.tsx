@@ -72,8 +72,7 @@ export function ImportPanel({ teardownId, onClose }: { teardownId: number; onClo
     >
       <div className="space-y-4 p-4 text-sm">
         <p className="text-graphite-600">
-          Nothing is saved until you import: the preview checks every row first, and if any row is wrong nothing is imported. Comma, semicolon or tab separated; quoted fields and a UTF-8
-          BOM are fine.
+          Nothing is saved until you import: the preview checks every row first, and if any row is wrong nothing is imported. Comma, semicolon or tab separated; quoted fields and a UTF-8 BOM are fine.
         </p>
         <div className="grid gap-4 lg:grid-cols-2">
           <div className="space-y-2">
@@ -152,9 +151,9 @@ export function ImportPanel({ teardownId, onClose }: { teardownId: number; onClo
               </tbody>
             </table>
             <p className="mt-2 text-graphite-600">
-              <span className="font-medium">Category:</span> {PART_CATEGORY.values.join(', ')} (or their labels; resistor and capacitor read as passive).{' '}
-              <span className="font-medium">Mount:</span> {MOUNT_TYPE.values.join(', ')}; blank gives manual for cells, boards, heaters, motors, wires and mechanical parts, SMT otherwise. <span className="font-medium">Quantity:</span>{' '}
-              a whole number, blank is 1. Row numbers count the header as row 1, as a spreadsheet does.
+              <span className="font-medium">Category:</span> {PART_CATEGORY.values.join(', ')} (or their labels; resistor and capacitor read as passive). <span className="font-medium">Mount:</span>{' '}
+              {MOUNT_TYPE.values.join(', ')}; blank gives manual for cells, boards, heaters, motors, wires and mechanical parts, SMT otherwise. <span className="font-medium">Quantity:</span> a whole
+              number, blank is 1. Row numbers count the header as row 1, as a spreadsheet does.
             </p>
           </details>
         </div>

@@ -54,7 +54,14 @@ export function partColumns(o: PartColumnsOptions): Column<PartDto>[] {
       ),
     },
     { id: 'designators', header: 'Designators', value: (p) => p.designators, filter: 'text', className: 'min-w-24 font-medium', cell: (p) => show(p, 'designators', p.designators ?? dash) },
-    { id: 'category', header: 'Category', value: (p) => PART_CATEGORY.labels[p.category], filter: 'select', className: 'min-w-28 whitespace-nowrap', cell: (p) => show(p, 'category', PART_CATEGORY.labels[p.category]) },
+    {
+      id: 'category',
+      header: 'Category',
+      value: (p) => PART_CATEGORY.labels[p.category],
+      filter: 'select',
+      className: 'min-w-28 whitespace-nowrap',
+      cell: (p) => show(p, 'category', PART_CATEGORY.labels[p.category]),
+    },
     {
       id: 'description',
       header: 'Description',
@@ -70,7 +77,14 @@ export function partColumns(o: PartColumnsOptions): Column<PartDto>[] {
           </span>,
         ),
     },
-    { id: 'marking', header: 'Marking', value: (p) => p.marking, filter: 'text', className: 'min-w-20 whitespace-nowrap font-mono text-xs', cell: (p) => show(p, 'marking', p.marking ?? dash, { mono: true }) },
+    {
+      id: 'marking',
+      header: 'Marking',
+      value: (p) => p.marking,
+      filter: 'text',
+      className: 'min-w-20 whitespace-nowrap font-mono text-xs',
+      cell: (p) => show(p, 'marking', p.marking ?? dash, { mono: true }),
+    },
     {
       id: 'decoded',
       header: 'Decoded',
@@ -88,7 +102,14 @@ export function partColumns(o: PartColumnsOptions): Column<PartDto>[] {
           dash
         ),
     },
-    { id: 'mpn', header: 'Maker part no.', value: (p) => p.makerPartNumber, filter: 'text', className: 'min-w-28 whitespace-nowrap font-mono text-xs', cell: (p) => show(p, 'makerPartNumber', p.makerPartNumber ?? dash, { mono: true }) },
+    {
+      id: 'mpn',
+      header: 'Maker part no.',
+      value: (p) => p.makerPartNumber,
+      filter: 'text',
+      className: 'min-w-28 whitespace-nowrap font-mono text-xs',
+      cell: (p) => show(p, 'makerPartNumber', p.makerPartNumber ?? dash, { mono: true }),
+    },
     { id: 'package', header: 'Package', value: (p) => p.package, filter: 'text', className: 'min-w-20 whitespace-nowrap', cell: (p) => show(p, 'package', p.package ?? dash) },
     { id: 'quantity', header: 'Qty', value: (p) => p.quantity, align: 'right', className: 'w-16', cell: (p) => show(p, 'quantity', p.quantity, { numeric: true }) },
     { id: 'mount', header: 'Mount', value: (p) => MOUNT_TYPE.labels[p.mount], filter: 'select', className: 'min-w-24 whitespace-nowrap', cell: (p) => show(p, 'mount', MOUNT_TYPE.labels[p.mount]) },

@@ -48,7 +48,11 @@ export function PartEntryRow({ state, busy }: { state: EditorState; busy: boolea
       <tr>
         <td colSpan={12} className="px-3 pb-2 pt-1">
           <div className="sticky left-3 w-fit max-w-[40rem]">
-            {Object.keys(errors).length ? <DraftErrors errors={errors} /> : <p className="text-xs text-graphite-500">Type a line and press Enter: it is added and this row is ready for the next. Esc clears it.</p>}
+            {Object.keys(errors).length ? (
+              <DraftErrors errors={errors} />
+            ) : (
+              <p className="text-xs text-graphite-500">Type a line and press Enter: it is added and this row is ready for the next. Esc clears it.</p>
+            )}
           </div>
         </td>
       </tr>

@@ -17,17 +17,7 @@ import { PartEntryRow } from './part-entry-row';
  * place, Enter saves, Esc cancels; the entry row at the bottom adds a line on Enter and stays ready
  * for the next. `renderPartExtras` adds content to a row's details (e.g. the photo pins of the part).
  */
-export function PartList({
-  teardownId,
-  parts,
-  gate,
-  renderPartExtras,
-}: {
-  teardownId: number;
-  parts: PartDto[];
-  gate: EditGate;
-  renderPartExtras?: (partId: number) => ReactNode;
-}) {
+export function PartList({ teardownId, parts, gate, renderPartExtras }: { teardownId: number; parts: PartDto[]; gate: EditGate; renderPartExtras?: (partId: number) => ReactNode }) {
   const canEdit = gate.canEdit;
   const create = useCreatePart(teardownId);
   const update = useUpdatePart(teardownId);
@@ -66,10 +56,7 @@ export function PartList({
   );
 
   const removeLine = (p: PartDto) =>
-    remove.mutate(
-      { id: p.id },
-      { onSuccess: () => toast.success(`Removed ${partName(p)}.`), onError: (e) => toast.error(e.message), onSettled: () => setConfirmDelete(null) },
-    );
+    remove.mutate({ id: p.id }, { onSuccess: () => toast.success(`Removed ${partName(p)}.`), onError: (e) => toast.error(e.message), onSettled: () => setConfirmDelete(null) });
   const latestRemove = useRef(removeLine);
   latestRemove.current = removeLine;
 

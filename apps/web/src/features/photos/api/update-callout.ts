@@ -5,8 +5,7 @@ import { withUnpublishConfirm } from '@/lib/unpublish-confirm';
 import { teardownScope } from '@/lib/query-keys';
 import { photosKey } from './get-photos';
 
-export const updateCallout = ({ id, body }: { id: number; body: UpdateCalloutBody }) =>
-  withUnpublishConfirm((opts) => api.patch<{ callout: CalloutDto }>(`/api/callouts/${id}`, body, opts));
+export const updateCallout = ({ id, body }: { id: number; body: UpdateCalloutBody }) => withUnpublishConfirm((opts) => api.patch<{ callout: CalloutDto }>(`/api/callouts/${id}`, body, opts));
 
 /** Moves show at once (optimistic position), and roll back if the server refuses. */
 export function useUpdateCallout(teardownId: number) {
@@ -22,9 +21,7 @@ export function useUpdateCallout(teardownId: number) {
           ...before,
           photos: before.photos.map((p) => ({
             ...p,
-            callouts: p.callouts.map((c) =>
-              c.id === id ? { ...c, x: body.x ?? c.x, y: body.y ?? c.y, label: typeof body.label === 'string' ? body.label.trim() || c.label : c.label } : c,
-            ),
+            callouts: p.callouts.map((c) => (c.id === id ? { ...c, x: body.x ?? c.x, y: body.y ?? c.y, label: typeof body.label === 'string' ? body.label.trim() || c.label : c.label } : c)),
           })),
         });
       }

@@ -4,8 +4,7 @@ import { api } from '@/lib/api-client';
 import { withUnpublishConfirm } from '@/lib/unpublish-confirm';
 import { teardownScope } from '@/lib/query-keys';
 
-export const updatePhoto = ({ id, body }: { id: number; body: UpdatePhotoBody }) =>
-  withUnpublishConfirm((opts) => api.patch<{ photo: PhotoDto }>(`/api/photos/${id}`, body, opts));
+export const updatePhoto = ({ id, body }: { id: number; body: UpdatePhotoBody }) => withUnpublishConfirm((opts) => api.patch<{ photo: PhotoDto }>(`/api/photos/${id}`, body, opts));
 
 export function useUpdatePhoto(teardownId: number) {
   const qc = useQueryClient();

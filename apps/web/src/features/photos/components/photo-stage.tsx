@@ -96,12 +96,7 @@ export function PhotoStage({
   const nextNumber = Math.max(0, ...photo.callouts.map((c) => c.number)) + 1;
   return (
     <div className="flex justify-center rounded-lg bg-graphite-950 p-2">
-      <div
-        ref={box}
-        className="relative select-none"
-        style={{ aspectRatio: `${photo.width} / ${photo.height}`, width: `min(100%, calc(66vh * ${aspect.toFixed(4)}))` }}
-        data-testid="photo-stage"
-      >
+      <div ref={box} className="relative select-none" style={{ aspectRatio: `${photo.width} / ${photo.height}`, width: `min(100%, calc(66vh * ${aspect.toFixed(4)}))` }} data-testid="photo-stage">
         <img
           src={photo.urls.display}
           alt={photo.caption ?? photo.name}

@@ -66,10 +66,12 @@ export function PhotosSection({ teardown }: { teardown: TeardownDto }) {
 
   // Each write asks first when the teardown is published (withUnpublishConfirm in the api/ files);
   // choosing to keep it published is not an error to show.
-  const failed = (prefix = '') => (e: unknown) => {
-    const message = mutationErrorMessage(e);
-    if (message) toast.error(`${prefix}${message}`);
-  };
+  const failed =
+    (prefix = '') =>
+    (e: unknown) => {
+      const message = mutationErrorMessage(e);
+      if (message) toast.error(`${prefix}${message}`);
+    };
   const quiet = () => {};
 
   const placePin = (v: PinValues) =>
@@ -106,7 +108,14 @@ export function PhotosSection({ teardown }: { teardown: TeardownDto }) {
       .catch(failed());
 
   const upload = canEdit && (
-    <UploadPanel limits={limits} queue={queue} layer={uploadLayer} onLayerChange={setUploadLayer} nextStep={(layer) => nextStepIn(list, layer) + queue.items.filter((i) => i.layer === layer && i.status !== 'done' && i.status !== 'refused').length} compact={list.length > 0} />
+    <UploadPanel
+      limits={limits}
+      queue={queue}
+      layer={uploadLayer}
+      onLayerChange={setUploadLayer}
+      nextStep={(layer) => nextStepIn(list, layer) + queue.items.filter((i) => i.layer === layer && i.status !== 'done' && i.status !== 'refused').length}
+      compact={list.length > 0}
+    />
   );
 
   return (

@@ -125,11 +125,19 @@ export function PinPanel({
         {canEdit && <span className="text-xs text-graphite-500">Click the photo to add one</span>}
       </div>
       {draftNumber !== null && (
-        <PinForm key={`draft-${draftNumber}`} number={draftNumber} initial={EMPTY} targets={targets} busy={create.busy} error={create.error} submitLabel="Place pin" onSubmit={create.run} onCancel={onCancelDraft} />
+        <PinForm
+          key={`draft-${draftNumber}`}
+          number={draftNumber}
+          initial={EMPTY}
+          targets={targets}
+          busy={create.busy}
+          error={create.error}
+          submitLabel="Place pin"
+          onSubmit={create.run}
+          onCancel={onCancelDraft}
+        />
       )}
-      {callouts.length === 0 && draftNumber === null && (
-        <p className="text-sm text-graphite-500">{canEdit ? 'No pins yet. Click a spot on the photo to number it.' : 'No pins on this photo.'}</p>
-      )}
+      {callouts.length === 0 && draftNumber === null && <p className="text-sm text-graphite-500">{canEdit ? 'No pins yet. Click a spot on the photo to number it.' : 'No pins on this photo.'}</p>}
       <ul className="space-y-1">
         {callouts.map((c) => (
           <li key={c.id}>

@@ -10,14 +10,7 @@ export function PinnedPhoto({ photo, className = '' }: { photo: Pick<PhotoDto, '
     <div className={`relative overflow-hidden rounded bg-graphite-900 ${className}`} style={{ aspectRatio: `${photo.width} / ${photo.height}` }} data-testid="pinned-photo">
       <img src={photo.urls.display} alt={photo.caption ?? photo.name} className="absolute inset-0 size-full" decoding="sync" />
       {photo.callouts.map((c) => (
-        <span
-          key={c.id}
-          className="absolute -translate-x-1/2 -translate-y-1/2"
-          style={at(c.x, c.y)}
-          role="img"
-          aria-label={`Pin ${c.number}: ${c.label}`}
-          data-pin={c.number}
-        >
+        <span key={c.id} className="absolute -translate-x-1/2 -translate-y-1/2" style={at(c.x, c.y)} role="img" aria-label={`Pin ${c.number}: ${c.label}`} data-pin={c.number}>
           <PinMark number={c.number} size="report" />
         </span>
       ))}

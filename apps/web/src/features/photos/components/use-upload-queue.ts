@@ -94,9 +94,11 @@ export function useUploadQueue(teardown: Pick<TeardownDto, 'id' | 'status'>) {
         patch(item.key, { status: 'cancelled', error: 'Not sent: the teardown stays published.' });
         return;
       }
-      const job = uploadPhoto({ teardownId, file: item.file, layer: item.layer, step: item.step, caption: item.caption }, (f) =>
-        patch(item.key, f >= 1 ? { progress: 1, status: 'processing' } : { progress: f }),
-      opts.headers);
+      const job = uploadPhoto(
+        { teardownId, file: item.file, layer: item.layer, step: item.step, caption: item.caption },
+        (f) => patch(item.key, f >= 1 ? { progress: 1, status: 'processing' } : { progress: f }),
+        opts.headers,
+      );
       aborts.current.set(item.key, job.abort);
       try {
         const { photo } = await job.promise;

@@ -1,13 +1,5 @@
 import { useMemo } from 'react';
-import {
-  CONVERTER_FIELDS,
-  CONVERTER_ROLE,
-  CONVERTER_TOPOLOGY,
-  converterFormSchema,
-  type ConverterDto,
-  type ConverterForm as ConverterBody,
-  type ConverterFormValues,
-} from '@splitcase/contracts';
+import { CONVERTER_FIELDS, CONVERTER_ROLE, CONVERTER_TOPOLOGY, converterFormSchema, type ConverterDto, type ConverterForm as ConverterBody, type ConverterFormValues } from '@splitcase/contracts';
 import { Badge } from '@/components/badges';
 import type { Column } from '@/components/data-table';
 import { Field, Input, Select, LabelledOptions } from '@/components/field';
@@ -59,7 +51,13 @@ export function ConvertersCard({ teardownId, converters, gate }: { teardownId: n
           </span>
         ),
       },
-      { id: 'current', header: 'Current', value: (c) => c.chargeCurrentAmps ?? c.ratedCurrentAmps ?? undefined, className: 'num whitespace-nowrap', cell: (c) => (c.role === 'charge' ? shown(c, 'chargeCurrentAmps', 'A') : shown(c, 'ratedCurrentAmps', 'A')) },
+      {
+        id: 'current',
+        header: 'Current',
+        value: (c) => c.chargeCurrentAmps ?? c.ratedCurrentAmps ?? undefined,
+        className: 'num whitespace-nowrap',
+        cell: (c) => (c.role === 'charge' ? shown(c, 'chargeCurrentAmps', 'A') : shown(c, 'ratedCurrentAmps', 'A')),
+      },
       {
         id: 'efficiency',
         header: 'Efficiency',

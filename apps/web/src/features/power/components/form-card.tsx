@@ -194,10 +194,13 @@ export function RecordsCard<T extends { id: number; label: string }>({
         keepLabel: `Keep the ${noun}`,
         onEdit: setEditing,
         onDelete: (r) =>
-          remove.run(r).then(
-            () => toast.success(`Removed ${r.label}.`),
-            (e: unknown) => toast.error(e instanceof Error ? e.message : `The ${noun} was not removed.`),
-          ).finally(() => setConfirmDelete(null)),
+          remove
+            .run(r)
+            .then(
+              () => toast.success(`Removed ${r.label}.`),
+              (e: unknown) => toast.error(e instanceof Error ? e.message : `The ${noun} was not removed.`),
+            )
+            .finally(() => setConfirmDelete(null)),
       }),
     ],
     [columns, gate.canEdit, confirmDelete, remove, noun],

@@ -26,7 +26,15 @@ const QUANTITIES = quantityList({ resistanceOhms: 'Ω', currentAmps: 'A', powerW
 type QKey = (typeof QUANTITIES)[number]['key'];
 const only = (...keys: QKey[]) => QUANTITIES.filter((f) => keys.includes(f.key));
 
-const LABELS = { kind: 'Kind', label: 'Label', connection: 'Connection', converterId: 'Fed through', surfaceMaterial: 'Surface material', elementMaterial: 'Element material', ...labelsOf(LOAD_FIELDS) };
+const LABELS = {
+  kind: 'Kind',
+  label: 'Label',
+  connection: 'Connection',
+  converterId: 'Fed through',
+  surfaceMaterial: 'Surface material',
+  elementMaterial: 'Element material',
+  ...labelsOf(LOAD_FIELDS),
+};
 
 const valuesOf = (l: LoadDto | null): LoadFormValues => ({
   kind: l?.kind ?? 'heater',
@@ -71,10 +79,23 @@ export function LoadsCard({ teardownId, loads, converters, gate }: { teardownId:
         cell: (l) => shown(l, 'resistanceOhms', 'Ω') ?? shown(l, 'currentAmps', 'A') ?? shown(l, 'powerWatts', 'W'),
         className: 'whitespace-nowrap num',
       },
-      { id: 'supply', header: 'Supply', value: (l) => l.supplyVolts ?? undefined, cell: (l) => shown(l, 'supplyVolts', 'V') ?? <span className="text-graphite-400">from source</span>, className: 'whitespace-nowrap num' },
+      {
+        id: 'supply',
+        header: 'Supply',
+        value: (l) => l.supplyVolts ?? undefined,
+        cell: (l) => shown(l, 'supplyVolts', 'V') ?? <span className="text-graphite-400">from source</span>,
+        className: 'whitespace-nowrap num',
+      },
       { id: 'count', header: 'Count', value: (l) => l.count, cell: (l) => `${l.count} × ${CONNECTION.labels[l.connection].toLowerCase()}`, className: 'whitespace-nowrap' },
       { id: 'duty', header: 'Duty', value: (l) => l.duty, cell: (l) => shown(l, 'duty', ''), align: 'right' },
-      { id: 'via', header: 'Fed through', value: (l) => (l.converterId ? converterName.get(l.converterId) : 'Pack'), filter: 'select', className: 'min-w-40', cell: (l) => (l.converterId ? converterName.get(l.converterId) : <span className="text-graphite-500">the pack, directly</span>) },
+      {
+        id: 'via',
+        header: 'Fed through',
+        value: (l) => (l.converterId ? converterName.get(l.converterId) : 'Pack'),
+        filter: 'select',
+        className: 'min-w-40',
+        cell: (l) => (l.converterId ? converterName.get(l.converterId) : <span className="text-graphite-500">the pack, directly</span>),
+      },
       {
         id: 'area',
         header: 'Heated area',
@@ -123,7 +144,14 @@ function LoadForm({ teardownId, load, converters, onDone }: { teardownId: number
   const kind = form.watch('kind');
 
   return (
-    <FormFrame card={card} label={load ? `Edit ${load.label}` : 'New load'} title={load ? `Edit ${load.label}` : 'New load'} labels={LABELS} submitLabel={load ? 'Save load' : 'Add load'} onCancel={onDone}>
+    <FormFrame
+      card={card}
+      label={load ? `Edit ${load.label}` : 'New load'}
+      title={load ? `Edit ${load.label}` : 'New load'}
+      labels={LABELS}
+      submitLabel={load ? 'Save load' : 'Add load'}
+      onCancel={onDone}
+    >
       <Field label="Kind" error={errors.kind?.message}>
         {(p) => (
           <Select {...p} {...form.register('kind')} autoFocus>

@@ -50,9 +50,7 @@ export function ModesCard({ teardownId, loads, modes, gate }: { teardownId: numb
   const heaters = useMemo(() => loads.filter((l) => l.kind === 'heater' && l.heatedAreaM2 !== null), [loads]);
 
   if (loads.length === 0 && modes.length === 0) return null;
-  const editRow = (mode: ModeDto | null) => (
-    <ModeRow key={mode?.id ?? 'new'} teardownId={teardownId} mode={mode} loads={loads} heaters={heaters} onDone={() => setEditing(null)} />
-  );
+  const editRow = (mode: ModeDto | null) => <ModeRow key={mode?.id ?? 'new'} teardownId={teardownId} mode={mode} loads={loads} heaters={heaters} onDone={() => setEditing(null)} />;
 
   return (
     <Card
@@ -232,7 +230,15 @@ function ModeRow({ teardownId, mode, loads, heaters, onDone }: { teardownId: num
           const err = errors.duties?.[String(l.id)]?.message;
           return (
             <td key={l.id} className="px-2 py-1.5">
-              <Input aria-label={`Duty of ${l.label} in ${label}`} aria-invalid={Boolean(err)} placeholder="off" className="num" autoComplete="off" spellCheck={false} {...register(`duties.${l.id}`)} />
+              <Input
+                aria-label={`Duty of ${l.label} in ${label}`}
+                aria-invalid={Boolean(err)}
+                placeholder="off"
+                className="num"
+                autoComplete="off"
+                spellCheck={false}
+                {...register(`duties.${l.id}`)}
+              />
               <InlineError message={err} />
               {heaters.some((h) => h.id === l.id) && (
                 <button type="button" className="mt-1 inline-flex items-center gap-1 text-xs text-copper-700 underline-offset-2 hover:underline" onClick={() => fillDuty(l)} disabled={duty.isPending}>

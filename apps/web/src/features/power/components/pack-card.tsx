@@ -1,15 +1,6 @@
 import { useState, type ReactNode } from 'react';
 import { Battery } from 'lucide-react';
-import {
-  CHEMISTRY,
-  INTERNAL_RESISTANCE_READING_FIELDS,
-  JOINING,
-  PACK_FIELDS,
-  packFormSchema,
-  type PackDto,
-  type PackForm,
-  type PackFormValues,
-} from '@splitcase/contracts';
+import { CHEMISTRY, INTERNAL_RESISTANCE_READING_FIELDS, JOINING, PACK_FIELDS, packFormSchema, type PackDto, type PackForm, type PackFormValues } from '@splitcase/contracts';
 import { Button } from '@/components/button';
 import { Field, Input, Select, LabelledOptions } from '@/components/field';
 import { Card } from '@/components/page';
@@ -27,7 +18,14 @@ const QUANTITIES = quantityList({ nominalVolts: 'V', maxVolts: 'V', capacityAh: 
 /** The two readings of the DC method (IEC 61960-3): the cell voltage at a low and at a high current. */
 const READINGS = ['lowAmps', 'lowVolts', 'highAmps', 'highVolts'] as const;
 
-const LABELS = { chemistry: 'Chemistry', cellFormat: 'Cell format', joining: 'Joining', protection: 'Protection circuit present', ...labelsOf(PACK_FIELDS), ...labelsOf(INTERNAL_RESISTANCE_READING_FIELDS, 'internalResistanceReadings.') };
+const LABELS = {
+  chemistry: 'Chemistry',
+  cellFormat: 'Cell format',
+  joining: 'Joining',
+  protection: 'Protection circuit present',
+  ...labelsOf(PACK_FIELDS),
+  ...labelsOf(INTERNAL_RESISTANCE_READING_FIELDS, 'internalResistanceReadings.'),
+};
 
 const valuesOf = (p: PackDto | null): PackFormValues => ({
   chemistry: p?.chemistry ?? 'li-ion',
@@ -56,11 +54,7 @@ export function PackCard({ teardownId, pack, gate }: { teardownId: number; pack:
   const { form } = card;
 
   if (!gate.canEdit) {
-    return (
-      <Card title="Cells and pack">
-        {pack ? <PackSummary pack={pack} /> : <p className="p-4 text-sm text-graphite-500">No pack recorded yet.</p>}
-      </Card>
-    );
+    return <Card title="Cells and pack">{pack ? <PackSummary pack={pack} /> : <p className="p-4 text-sm text-graphite-500">No pack recorded yet.</p>}</Card>;
   }
 
   const errors = form.formState.errors;
@@ -72,7 +66,12 @@ export function PackCard({ teardownId, pack, gate }: { teardownId: number; pack:
         (confirmRemove ? (
           <span className="flex items-center gap-2 text-sm">
             Remove the pack record?
-            <Button size="sm" variant="danger" busy={remove.isPending} onClick={() => remove.mutate({ teardownId }, { onSuccess: () => toast.success('Pack removed.'), onSettled: () => setConfirmRemove(false), onError: (e) => toast.error(e.message) })}>
+            <Button
+              size="sm"
+              variant="danger"
+              busy={remove.isPending}
+              onClick={() => remove.mutate({ teardownId }, { onSuccess: () => toast.success('Pack removed.'), onSettled: () => setConfirmRemove(false), onError: (e) => toast.error(e.message) })}
+            >
               Remove
             </Button>
             <Button size="sm" variant="ghost" onClick={() => setConfirmRemove(false)}>

@@ -7,8 +7,7 @@ import { formatStored, sameQuantityText } from '@/lib/format';
  * The text to show in a field: what the user typed last time, or the stored value with its stored
  * unit ("0.046 kg"), so that saving again never sends a bare number read in another unit.
  */
-export const typedOr = (entered: Record<string, string> | undefined, key: string, value: number | null | undefined, field: FieldDeclaration) =>
-  entered?.[key] ?? storedQuantityText(value, field.kind);
+export const typedOr = (entered: Record<string, string> | undefined, key: string, value: number | null | undefined, field: FieldDeclaration) => entered?.[key] ?? storedQuantityText(value, field.kind);
 
 /** What the engineer typed, with the stored value in SI beside it when the two read differently ("2700 mAh · 2.70 Ah"). */
 export function TypedQuantity({ typed, si }: { typed: string | undefined; si: string }) {
@@ -34,7 +33,12 @@ export const quantityList = <K extends string>(units: Record<K, string>): readon
 type Saved<K extends string> = Record<K, number | null> & { entered: Record<string, string> };
 
 /** The form's text of each quantity: the text typed last time (or the stored value with its unit), else `blank[key]` or ''. */
-export function quantityTexts<K extends string>(list: readonly QuantitySpec<K>[], fields: Record<K, FieldDeclaration>, record: Saved<K> | null, blank: Partial<Record<K, string>> = {}): Record<K, string> {
+export function quantityTexts<K extends string>(
+  list: readonly QuantitySpec<K>[],
+  fields: Record<K, FieldDeclaration>,
+  record: Saved<K> | null,
+  blank: Partial<Record<K, string>> = {},
+): Record<K, string> {
   return Object.fromEntries(list.map((f) => [f.key, record ? typedOr(record.entered, f.key, record[f.key], fields[f.key]) : (blank[f.key] ?? '')])) as Record<K, string>;
 }
 

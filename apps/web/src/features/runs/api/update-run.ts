@@ -5,8 +5,7 @@ import { rootKeys, teardownScope } from '@/lib/query-keys';
 import { withUnpublishConfirm } from '@/lib/unpublish-confirm';
 
 /** A change to a run of a published teardown asks first (it moves the teardown back to draft). */
-export const updateRun = ({ run, body }: { run: RunDto; body: UpdateRunBody }) =>
-  withUnpublishConfirm((opts) => api.patch<{ run: RunDto }>(`/api/runs/${run.id}`, body, opts)).then((r) => r.run);
+export const updateRun = ({ run, body }: { run: RunDto; body: UpdateRunBody }) => withUnpublishConfirm((opts) => api.patch<{ run: RunDto }>(`/api/runs/${run.id}`, body, opts)).then((r) => r.run);
 
 export function useUpdateRun() {
   const qc = useQueryClient();

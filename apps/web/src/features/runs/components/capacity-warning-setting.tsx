@@ -24,8 +24,8 @@ export function CapacityWarningSetting({ canEdit }: { canEdit: boolean }) {
     <Card title="Capacity warning">
       <div className="space-y-3 p-4 text-sm">
         <p className="text-graphite-700">
-          A discharge that delivers less than <strong className="num">{Math.round(current * 10) / 10} %</strong> of the label is flagged, in the runs, the figures and the suggested
-          findings. Runs compare energy: the label&apos;s Wh, or its mAh at the cell voltage.
+          A discharge that delivers less than <strong className="num">{Math.round(current * 10) / 10} %</strong> of the label is flagged, in the runs, the figures and the suggested findings. Runs
+          compare energy: the label&apos;s Wh, or its mAh at the cell voltage.
         </p>
         {canEdit ? (
           <form
@@ -48,7 +48,11 @@ export function CapacityWarningSetting({ canEdit }: { canEdit: boolean }) {
             <Button type="submit" size="md" busy={update.isPending}>
               Save
             </Button>
-            {saved && !update.isPending && <span className="pb-2 text-cell-700" role="status">Saved</span>}
+            {saved && !update.isPending && (
+              <span className="pb-2 text-cell-700" role="status">
+                Saved
+              </span>
+            )}
           </form>
         ) : (
           <p className="text-xs text-graphite-500">An admin can change this threshold.</p>

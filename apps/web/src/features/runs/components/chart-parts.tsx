@@ -114,20 +114,63 @@ export function markersFor(run: RunDto, key: TraceKey): ReactNode[] {
   // For a horizontal line, insideBottom… puts the text above the line and insideTop… below it.
   const label = (value: string, position: 'insideTopRight' | 'insideTopLeft' | 'insideBottomRight' = 'insideTopRight') => ({ value, position, fontSize: 11, fill: 'currentColor' });
   if (key === 'v' && a.discharge) {
-    if (a.discharge.cutoffVolts) out.push(<ReferenceLine key="cutoff-v" y={a.discharge.cutoffVolts} className="text-graphite-400" stroke="currentColor" strokeDasharray="4 3" label={label(`cut-off ${sig(a.discharge.cutoffVolts, 3)} V`, 'insideBottomRight')} />);
+    if (a.discharge.cutoffVolts)
+      out.push(
+        <ReferenceLine
+          key="cutoff-v"
+          y={a.discharge.cutoffVolts}
+          className="text-graphite-400"
+          stroke="currentColor"
+          strokeDasharray="4 3"
+          label={label(`cut-off ${sig(a.discharge.cutoffVolts, 3)} V`, 'insideBottomRight')}
+        />,
+      );
     if (a.discharge.cutoff) out.push(<ReferenceLine key="cutoff-t" x={a.discharge.analysedToS} className="text-graphite-500" stroke="currentColor" label={label('end of totals', 'insideTopRight')} />);
   }
   if (a.charge) {
-    if (a.charge.transitionS !== null && (key === 'v' || key === 'i')) out.push(<ReferenceLine key="cv" x={a.charge.transitionS} className="text-graphite-500" stroke="currentColor" strokeDasharray="4 3" label={label('CC → CV', 'insideTopRight')} />);
-    if (key === 'i') out.push(<ReferenceLine key="term" y={a.charge.terminationCurrentA} className="text-graphite-400" stroke="currentColor" strokeDasharray="4 3" label={label(`termination ${sig(a.charge.terminationCurrentA, 3)} A`, 'insideBottomRight')} />);
+    if (a.charge.transitionS !== null && (key === 'v' || key === 'i'))
+      out.push(<ReferenceLine key="cv" x={a.charge.transitionS} className="text-graphite-500" stroke="currentColor" strokeDasharray="4 3" label={label('CC → CV', 'insideTopRight')} />);
+    if (key === 'i')
+      out.push(
+        <ReferenceLine
+          key="term"
+          y={a.charge.terminationCurrentA}
+          className="text-graphite-400"
+          stroke="currentColor"
+          strokeDasharray="4 3"
+          label={label(`termination ${sig(a.charge.terminationCurrentA, 3)} A`, 'insideBottomRight')}
+        />,
+      );
   }
   if (key === 'temp' && a.thermal) {
     const th = a.thermal;
     if (th.steadyState.reached && th.steadyState.fromS !== null && th.steadyState.toS !== null) {
-      out.push(<ReferenceArea key="steady" x1={th.steadyState.fromS} x2={th.steadyState.toS} className="text-cell-400" fill="currentColor" fillOpacity={0.08} label={label('steady state', 'insideBottomRight')} />);
+      out.push(
+        <ReferenceArea
+          key="steady"
+          x1={th.steadyState.fromS}
+          x2={th.steadyState.toS}
+          className="text-cell-400"
+          fill="currentColor"
+          fillOpacity={0.08}
+          label={label('steady state', 'insideBottomRight')}
+        />,
+      );
     }
-    out.push(<ReferenceLine key="burn" y={th.burnThreshold.temperatureC} className="text-brick-600" stroke="currentColor" strokeDasharray="5 3" label={label(`burn threshold ${th.burnThreshold.temperatureC} °C`, 'insideBottomRight')} />);
-    if (th.thresholdC !== null) out.push(<ReferenceLine key="threshold" y={th.thresholdC} className="text-graphite-400" stroke="currentColor" strokeDasharray="2 3" label={label(`${sig(th.thresholdC, 3)} °C`, 'insideTopRight')} />);
+    out.push(
+      <ReferenceLine
+        key="burn"
+        y={th.burnThreshold.temperatureC}
+        className="text-brick-600"
+        stroke="currentColor"
+        strokeDasharray="5 3"
+        label={label(`burn threshold ${th.burnThreshold.temperatureC} °C`, 'insideBottomRight')}
+      />,
+    );
+    if (th.thresholdC !== null)
+      out.push(
+        <ReferenceLine key="threshold" y={th.thresholdC} className="text-graphite-400" stroke="currentColor" strokeDasharray="2 3" label={label(`${sig(th.thresholdC, 3)} °C`, 'insideTopRight')} />,
+      );
   }
   return out;
 }
@@ -174,4 +217,3 @@ export function ChartTable({ runs, traces, label, unit }: { runs: RunDto[]; trac
     </details>
   );
 }
-

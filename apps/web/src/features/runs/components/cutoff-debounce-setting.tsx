@@ -36,18 +36,24 @@ export function CutoffDebounceSetting({ canEdit }: { canEdit: boolean }) {
     <Card title="Cut-off debounce">
       <div className="space-y-3 p-4 text-sm">
         <p className="text-graphite-700">
-          A discharge ends at its cut-off voltage once the voltage stays at or below it for <strong className="num">{current} s</strong>; a shorter sag, as at a load step, is
-          ignored. A dip still under the cut-off when the load stops or the log ends always ends the run.
+          A discharge ends at its cut-off voltage once the voltage stays at or below it for <strong className="num">{current} s</strong>; a shorter sag, as at a load step, is ignored. A dip still
+          under the cut-off when the load stops or the log ends always ends the run.
         </p>
         <p className="text-xs text-graphite-500">
-          0 s ends a run at the first sample at the cut-off. Applies to runs analysed from now on (an upload, or “Save and re-analyse”); a run can set its own, and each run shows the
-          debounce it used.
+          0 s ends a run at the first sample at the cut-off. Applies to runs analysed from now on (an upload, or “Save and re-analyse”); a run can set its own, and each run shows the debounce it used.
         </p>
         {canEdit ? (
           <form className="space-y-2" onSubmit={submit} noValidate aria-label="Cut-off debounce">
             <div className="flex flex-wrap items-end gap-2">
               <Field label="Debounce (s)" error={formState.errors.cutoffDebounceSeconds?.message} hint="0–600 s">
-                {(f) => <Input {...f} className="w-28" inputMode="decimal" {...register('cutoffDebounceSeconds', { setValueAs: (v: string) => (String(v).trim() === '' ? Number.NaN : Number(String(v).replace(',', '.'))) })} />}
+                {(f) => (
+                  <Input
+                    {...f}
+                    className="w-28"
+                    inputMode="decimal"
+                    {...register('cutoffDebounceSeconds', { setValueAs: (v: string) => (String(v).trim() === '' ? Number.NaN : Number(String(v).replace(',', '.'))) })}
+                  />
+                )}
               </Field>
               <Button type="submit" size="md" busy={update.isPending}>
                 Save

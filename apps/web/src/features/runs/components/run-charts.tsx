@@ -36,10 +36,11 @@ function QuantityChart({
   const yTicks = useMemo(() => {
     let lo = Infinity;
     let hi = -Infinity;
-    for (const tr of traces) for (const y of tr?.y ?? []) {
-      if (y < lo) lo = y;
-      if (y > hi) hi = y;
-    }
+    for (const tr of traces)
+      for (const y of tr?.y ?? []) {
+        if (y < lo) lo = y;
+        if (y > hi) hi = y;
+      }
     return niceTicks(lo, hi);
   }, [traces]);
   // Live state: the handlers read the selection as it is now, not as of the last render.

@@ -86,8 +86,8 @@ export function RunComparison({ run }: { run: RunDto }) {
             </Badge>
           )}
           <span className="text-graphite-700">
-            <strong className="num">{percent(c.labelEnergy.percent)}</strong>: {formatQuantity(c.labelEnergy.measuredWh, 'Wh')} at the output against {formatQuantity(c.labelEnergy.claimedWh, 'Wh')} on the
-            label. Conversion usually keeps 80–90 % of the cell energy.
+            <strong className="num">{percent(c.labelEnergy.percent)}</strong>: {formatQuantity(c.labelEnergy.measuredWh, 'Wh')} at the output against {formatQuantity(c.labelEnergy.claimedWh, 'Wh')} on
+            the label. Conversion usually keeps 80–90 % of the cell energy.
           </span>
           <p className="w-full text-xs text-graphite-500">Basis: {c.labelEnergy.basis}</p>
         </div>
@@ -106,10 +106,10 @@ function HotSurface({ run }: { run: RunDto }) {
   if (th.marginC < 5) {
     return (
       <Caution title={th.marginC < 0 ? 'Hot enough to burn' : 'Close to the burn threshold'}>
-        The surface peaked at {celsius(th.maxC)},{' '}
-        {th.marginC < 0 ? `${sig(-th.marginC, 2)} °C above` : `only ${sig(th.marginC, 2)} °C below`} the {b.temperatureC} °C burn threshold for {contact} of contact with {material}
-        {th.timeToBurnThresholdS !== null && `, reached after ${formatElapsed(th.timeToBurnThresholdS)}`}. Check it with the thermocouple rather than a finger, let the device cool before handling
-        it, and follow your lab&apos;s safety rules. These are bench estimates, not certification results.
+        The surface peaked at {celsius(th.maxC)}, {th.marginC < 0 ? `${sig(-th.marginC, 2)} °C above` : `only ${sig(th.marginC, 2)} °C below`} the {b.temperatureC} °C burn threshold for {contact} of
+        contact with {material}
+        {th.timeToBurnThresholdS !== null && `, reached after ${formatElapsed(th.timeToBurnThresholdS)}`}. Check it with the thermocouple rather than a finger, let the device cool before handling it,
+        and follow your lab&apos;s safety rules. These are bench estimates, not certification results.
       </Caution>
     );
   }
@@ -159,8 +159,8 @@ export function RunResults({ run }: { run: RunDto }) {
             detail={
               r ? (
                 <>
-                  {formatQuantity(r.lowAmps, 'A')} at {formatQuantity(r.lowVolts, 'V', 4)} → {formatQuantity(r.highAmps, 'A')} at {formatQuantity(r.highVolts, 'V', 4)}, after {formatElapsed(r.atSeconds)}; (U₁ − U₂) ÷ (I₂ − I₁) at
-                  the pack terminals
+                  {formatQuantity(r.lowAmps, 'A')} at {formatQuantity(r.lowVolts, 'V', 4)} → {formatQuantity(r.highAmps, 'A')} at {formatQuantity(r.highVolts, 'V', 4)}, after{' '}
+                  {formatElapsed(r.atSeconds)}; (U₁ − U₂) ÷ (I₂ − I₁) at the pack terminals
                 </>
               ) : (
                 'Step the load between two steady currents (e.g. 0.2 C, then 1 C for 1 s) to measure it'
@@ -175,7 +175,11 @@ export function RunResults({ run }: { run: RunDto }) {
     figures = (
       <>
         <Figure label="Charge taken in" value={formatQuantity(a.ampHours, 'Ah')} detail={formatQuantity(a.wattHours, 'Wh')} tone="energy" />
-        <Figure label="Charge time" value={formatElapsed(c.chargeTimeS)} detail={c.terminated ? `To ${formatQuantity(c.terminationCurrentA, 'A')} (${terminationText(c)})` : 'Not terminated in the log'} />
+        <Figure
+          label="Charge time"
+          value={formatElapsed(c.chargeTimeS)}
+          detail={c.terminated ? `To ${formatQuantity(c.terminationCurrentA, 'A')} (${terminationText(c)})` : 'Not terminated in the log'}
+        />
         <Figure label="Constant current" value={formatQuantity(c.cc.currentA, 'A')} detail={`${formatElapsed(c.cc.endS - c.cc.startS)}, until ${formatElapsed(c.cc.endS)}`} />
         <Figure
           label="Constant voltage"
@@ -254,7 +258,11 @@ export function RunResults({ run }: { run: RunDto }) {
           ))}
         </ul>
       )}
-      {run.kind === 'thermal' && a.thermal && <p className="text-xs text-graphite-500">Threshold source: {a.thermal.burnThreshold.source}. Steady state: {a.thermal.steadyState.criterion}.</p>}
+      {run.kind === 'thermal' && a.thermal && (
+        <p className="text-xs text-graphite-500">
+          Threshold source: {a.thermal.burnThreshold.source}. Steady state: {a.thermal.steadyState.criterion}.
+        </p>
+      )}
     </div>
   );
 }

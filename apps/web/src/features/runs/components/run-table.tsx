@@ -77,7 +77,9 @@ export function RunTable({ runs, onSelect, selectedId, withDevice = false }: { r
       ...(withDevice ? [{ id: 'kind', header: 'Kind', value: (r: RunDto) => RUN_KIND.labels[r.kind], filter: 'select' as const }] : []),
       { id: 'result', header: 'Result', value: (r) => runHeadline(r), sortable: false, cell: (r) => <span className="num whitespace-nowrap">{runHeadline(r)}</span> },
       { id: 'label-pct', header: 'Vs label', value: (r) => r.comparison.label?.percent ?? r.comparison.labelEnergy?.percent, align: 'right', cell: (r) => <LabelVerdict run={r} /> },
-      ...(withDevice ? [{ id: 'added', header: 'Added', value: (r: RunDto) => r.createdAt, cell: (r: RunDto) => <span className="whitespace-nowrap text-graphite-600">{formatDate(r.createdAt)}</span> }] : []),
+      ...(withDevice
+        ? [{ id: 'added', header: 'Added', value: (r: RunDto) => r.createdAt, cell: (r: RunDto) => <span className="whitespace-nowrap text-graphite-600">{formatDate(r.createdAt)}</span> }]
+        : []),
     ],
     [withDevice, selectedId, onSelect],
   );

@@ -141,9 +141,7 @@ export function RunUpload({ teardown, onDone, onCancel }: { teardown: TeardownDt
       }
     >
       <div className="space-y-4 p-4">
-        {(!file || !p) && (
-          <LogDropzone reading={preview.isPending ? (file?.name ?? '') : null} onFile={choose} onRefused={(message) => setFormError(message)} />
-        )}
+        {(!file || !p) && <LogDropzone reading={preview.isPending ? (file?.name ?? '') : null} onFile={choose} onRefused={(message) => setFormError(message)} />}
         {preview.isError && <ErrorPanel error={preview.error} />}
         {refused && (
           <div role="alert" className="rounded-lg border border-brick-100 bg-brick-50 p-3 text-sm text-brick-800">

@@ -86,11 +86,7 @@ function RunDetail({ run, canEdit, onDeleted }: { run: RunDto; canEdit: boolean;
         }
         actions={
           <div className="flex flex-wrap gap-1.5">
-            <a
-              href={`/api/runs/${run.id}/raw`}
-              download={run.fileName}
-              className="inline-flex h-8 items-center gap-1.5 rounded-md px-2.5 text-sm font-medium text-copper-700 hover:bg-copper-50"
-            >
+            <a href={`/api/runs/${run.id}/raw`} download={run.fileName} className="inline-flex h-8 items-center gap-1.5 rounded-md px-2.5 text-sm font-medium text-copper-700 hover:bg-copper-50">
               <Download className="size-4" aria-hidden /> Raw log
             </a>
             {canEdit && !editing && (

@@ -19,13 +19,20 @@ export function ReportBom({ parts, photos, cost, costProblem }: { parts: PartDto
   const lines = new Map((cost?.lines ?? []).map((l) => [l.partId, l]));
   // The currency is named once in the column heads; amounts as the cost section shows them (4 decimals below 1).
   const money = (v: number | null | undefined) =>
-    v === null || v === undefined || !Number.isFinite(v)
-      ? '—'
-      : v.toLocaleString('en-GB', { minimumFractionDigits: Math.abs(v) < 1 ? 4 : 2, maximumFractionDigits: Math.abs(v) < 1 ? 4 : 2 });
+    v === null || v === undefined || !Number.isFinite(v) ? '—' : v.toLocaleString('en-GB', { minimumFractionDigits: Math.abs(v) < 1 ? 4 : 2, maximumFractionDigits: Math.abs(v) < 1 ? 4 : 2 });
   const unpriced = cost ? cost.unpricedPartIds.length : 0;
   // Line prices only in a 'detail' view; a 'totals' view (viewers) keeps the parts total.
   const linePrices = cost?.priceView === 'detail';
-  const head = ['#', 'Designators', 'Description', 'Marking', 'Value', 'Qty', 'Mount', ...(cost ? (linePrices ? [`Unit price, ${cost.currency}`, `Extended, ${cost.currency}`] : [`Cost, ${cost.currency}`]) : [])];
+  const head = [
+    '#',
+    'Designators',
+    'Description',
+    'Marking',
+    'Value',
+    'Qty',
+    'Mount',
+    ...(cost ? (linePrices ? [`Unit price, ${cost.currency}`, `Extended, ${cost.currency}`] : [`Cost, ${cost.currency}`]) : []),
+  ];
   return (
     <div>
       <ReportTable label="Parts" head={head}>

@@ -135,8 +135,8 @@ export function ReportFigures({ data }: { data: FiguresResponse }) {
         <EstimatesNote text={data.note} />
         {implausible > 0 && (
           <p className="mt-1.5 text-xs text-brick-700" data-testid="implausible-count">
-            {implausible === 1 ? 'One figure is' : `${implausible} figures are`} marked implausible: outside what the physics or the chemistry allows. Check the inputs (a unit typed wrong is the
-            usual cause) before relying on {implausible === 1 ? 'it' : 'them'}.
+            {implausible === 1 ? 'One figure is' : `${implausible} figures are`} marked implausible: outside what the physics or the chemistry allows. Check the inputs (a unit typed wrong is the usual
+            cause) before relying on {implausible === 1 ? 'it' : 'them'}.
           </p>
         )}
         {modes.length === 0 && (
@@ -161,7 +161,11 @@ export function ReportFigures({ data }: { data: FiguresResponse }) {
                   Mode: {m.name}
                   {m.note ? <span className="font-normal normal-case tracking-normal"> ({m.note})</span> : null}
                 </ReportSubheading>
-                {own.length ? <FigureTable label={`Figures of mode ${m.name}`} figures={own} /> : <NoneRecorded>No figures for this mode: it runs no load with a power recorded and has no quiescent current.</NoneRecorded>}
+                {own.length ? (
+                  <FigureTable label={`Figures of mode ${m.name}`} figures={own} />
+                ) : (
+                  <NoneRecorded>No figures for this mode: it runs no load with a power recorded and has no quiescent current.</NoneRecorded>
+                )}
               </div>
             );
           })}

@@ -8,8 +8,7 @@ const ORDER: Severity[] = ['critical', 'major', 'minor', 'note'];
 /** Findings grouped by severity, most severe first, with the parts they concern and the pins that mark them. */
 export function ReportFindings({ findings, photos }: { findings: FindingDto[]; photos: PhotoDto[] }) {
   if (!findings.length) return <NoneRecorded>No findings recorded.</NoneRecorded>;
-  const pinsOf = (findingId: number) =>
-    photos.flatMap((p) => p.callouts.filter((c) => c.finding?.id === findingId).map((c) => `pin ${c.number} on photo ${photoNumber(photos, p.id)}`));
+  const pinsOf = (findingId: number) => photos.flatMap((p) => p.callouts.filter((c) => c.finding?.id === findingId).map((c) => `pin ${c.number} on photo ${photoNumber(photos, p.id)}`));
   return (
     <div className="space-y-4">
       {ORDER.map((severity) => {

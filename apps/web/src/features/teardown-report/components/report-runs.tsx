@@ -19,7 +19,10 @@ function keyResults(run: RunDto): { text: string; hot?: boolean }[] {
       push(`Stopped at ${formatQuantity(d.cutoff.volts, 'V')} after ${duration(d.cutoff.t)} (${d.cutoff.reason.replace(/-/g, ' ')}${held})`);
     }
     const r = d.internalResistance;
-    if (r) push(`DC resistance ${formatQuantity(r.ohms, 'Ω')} at the terminals: ${formatQuantity(r.lowAmps, 'A')} at ${formatQuantity(r.lowVolts, 'V', 4)} → ${formatQuantity(r.highAmps, 'A')} at ${formatQuantity(r.highVolts, 'V', 4)}`);
+    if (r)
+      push(
+        `DC resistance ${formatQuantity(r.ohms, 'Ω')} at the terminals: ${formatQuantity(r.lowAmps, 'A')} at ${formatQuantity(r.lowVolts, 'V', 4)} → ${formatQuantity(r.highAmps, 'A')} at ${formatQuantity(r.highVolts, 'V', 4)}`,
+      );
   }
   if (a.charge) {
     const c = a.charge;
@@ -44,7 +47,8 @@ function keyResults(run: RunDto): { text: string; hot?: boolean }[] {
 
 function againstLabel(run: RunDto): string {
   const c = run.comparison;
-  if (c.label) return `${sig(c.label.percent)} % of ${formatQuantity(c.label.claimedWh, 'Wh')}${c.label.labelBasis === 'label-ah-at-cell-volts' ? ` (${formatQuantity(c.label.claimedAh, 'Ah')} at the cell voltage)` : ''}${c.label.warning ? ' (below threshold)' : ''}`;
+  if (c.label)
+    return `${sig(c.label.percent)} % of ${formatQuantity(c.label.claimedWh, 'Wh')}${c.label.labelBasis === 'label-ah-at-cell-volts' ? ` (${formatQuantity(c.label.claimedAh, 'Ah')} at the cell voltage)` : ''}${c.label.warning ? ' (below threshold)' : ''}`;
   if (c.labelEnergy) return `${sig(c.labelEnergy.percent)} % of ${formatQuantity(c.labelEnergy.claimedWh, 'Wh')}${c.labelEnergy.warning ? ' (below 80 %)' : ''}`;
   if (c.rated) return `${sig(c.rated.percent)} % of the cell rating`;
   return '—';

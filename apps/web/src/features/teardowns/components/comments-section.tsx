@@ -58,7 +58,10 @@ export function CommentsSection({ teardown }: { teardown: TeardownDto }) {
           ) : comments.isError ? (
             <ErrorPanel error={comments.error} onRetry={() => comments.refetch()} />
           ) : comments.data.length === 0 ? (
-            <EmptyState icon={<MessageSquare className="size-8" />} message={teardown.permissions.comment ? 'No comments yet. Ask a question or leave a note for the team below.' : 'No comments on this teardown.'} />
+            <EmptyState
+              icon={<MessageSquare className="size-8" />}
+              message={teardown.permissions.comment ? 'No comments yet. Ask a question or leave a note for the team below.' : 'No comments on this teardown.'}
+            />
           ) : (
             <ol className="space-y-2" aria-label="Comments">
               {comments.data.map((c) => (

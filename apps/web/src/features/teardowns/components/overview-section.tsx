@@ -191,7 +191,11 @@ function RecordForm({ teardown }: { teardown: TeardownDto }) {
   );
 }
 
-const REVIEW_KINDS = { submitted: { icon: Eye, label: 'Submitted for review' }, 'sent-back': { icon: Undo2, label: 'Sent back to draft' }, approved: { icon: CircleCheck, label: 'Approved and published' } } as const;
+const REVIEW_KINDS = {
+  submitted: { icon: Eye, label: 'Submitted for review' },
+  'sent-back': { icon: Undo2, label: 'Sent back to draft' },
+  approved: { icon: CircleCheck, label: 'Approved and published' },
+} as const;
 
 function ReviewCard({ teardown: t }: { teardown: TeardownDto }) {
   const comments = useComments(t.id);

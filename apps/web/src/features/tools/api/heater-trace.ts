@@ -4,8 +4,7 @@ import { api } from '@/lib/api-client';
 import { rootKeys } from '@/lib/query-keys';
 
 export const heaterTraceKey = (body: HeaterTraceToolBody | null) => [...rootKeys.tools, 'heater-trace', body] as const;
-export const computeHeaterTrace = (body: HeaterTraceToolBody, signal?: AbortSignal) =>
-  api.post<FiguresToolResponse>('/api/tools/heater-trace', body, { signal });
+export const computeHeaterTrace = (body: HeaterTraceToolBody, signal?: AbortSignal) => api.post<FiguresToolResponse>('/api/tools/heater-trace', body, { signal });
 export const heaterTraceQuery = (body: HeaterTraceToolBody | null) =>
   queryOptions({
     queryKey: heaterTraceKey(body),

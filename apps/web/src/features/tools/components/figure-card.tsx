@@ -4,12 +4,7 @@ import type { ReactNode } from 'react';
 import { formatFigure } from './format-figure';
 
 /** The parts of a result every tool shows: formula, inputs, assumptions and source, folded away. */
-export function HowComputed({
-  formula,
-  source,
-  inputs,
-  assumptions,
-}: Pick<ExplainedFigure, 'formula' | 'source' | 'inputs' | 'assumptions'>) {
+export function HowComputed({ formula, source, inputs, assumptions }: Pick<ExplainedFigure, 'formula' | 'source' | 'inputs' | 'assumptions'>) {
   return (
     <details className="group mt-2 text-sm">
       <summary className="flex min-h-11 cursor-pointer list-none items-center gap-1.5 rounded-md px-1 text-copper-700 hover:text-copper-800 [&::-webkit-details-marker]:hidden">

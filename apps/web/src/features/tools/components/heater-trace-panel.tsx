@@ -105,8 +105,8 @@ export function HeaterTracePanel() {
               {f.key === 'powerDensity' && (
                 <div className="mt-3">
                   <Caution title="Hot surfaces">
-                    Skin burns with long contact at temperatures that only feel warm: about 43 °C over hours, 48–51 °C within minutes (ISO 13732-1).
-                    Measure a running heater with a thermocouple, not by touch, keep it off flammable material and follow your lab’s safety rules.
+                    Skin burns with long contact at temperatures that only feel warm: about 43 °C over hours, 48–51 °C within minutes (ISO 13732-1). Measure a running heater with a thermocouple, not
+                    by touch, keep it off flammable material and follow your lab’s safety rules.
                   </Caution>
                 </div>
               )}

@@ -200,12 +200,7 @@ export function MarkingPanel() {
                 error={state.fieldErrors.code}
                 mono
               />
-              <Segmented
-                legend="Part"
-                value={kind}
-                onChange={setKind}
-                options={MARKING_KINDS.map((k) => ({ value: k, label: MARKING_KIND_LABELS[k] }))}
-              />
+              <Segmented legend="Part" value={kind} onChange={setKind} options={MARKING_KINDS.map((k) => ({ value: k, label: MARKING_KIND_LABELS[k] }))} />
             </>
           ) : (
             <>
@@ -214,12 +209,7 @@ export function MarkingPanel() {
                 {chosen.map((b, i) => (
                   <Field key={i} label={`Band ${i + 1} · ${bandRole(i, n)}`} error={state.fieldErrors[`bands.${i}`]}>
                     {(props) => (
-                      <Select
-                        {...props}
-                        value={b}
-                        className="h-11 text-base"
-                        onChange={(e) => setBands((all) => all.map((x, j) => (j === i ? e.target.value : x)))}
-                      >
+                      <Select {...props} value={b} className="h-11 text-base" onChange={(e) => setBands((all) => all.map((x, j) => (j === i ? e.target.value : x)))}>
                         <option value="">Choose…</option>
                         {BAND_COLOURS.map((c) => (
                           <option key={c} value={c}>
@@ -251,12 +241,7 @@ export function MarkingPanel() {
             {/* Every valid reading, ranked on each kind of part: resistor readings first. */}
             <div className={`grid gap-4 ${state.result.readings.length > 1 ? 'xl:grid-cols-2' : ''}`}>
               {state.result.readings.map((r) => (
-                <Reading
-                  key={`${r.component}-${r.rank}`}
-                  reading={r}
-                  wide={state.result!.readings.length === 1}
-                  of={state.result!.readings.filter((x) => x.component === r.component).length}
-                />
+                <Reading key={`${r.component}-${r.rank}`} reading={r} wide={state.result!.readings.length === 1} of={state.result!.readings.filter((x) => x.component === r.component).length} />
               ))}
             </div>
           </div>

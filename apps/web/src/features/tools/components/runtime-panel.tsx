@@ -13,18 +13,7 @@ import { filledFields, useToolResult } from './use-tool-result';
 
 type LoadMode = 'power' | 'resistance' | 'current';
 type TextFields =
-  | 'cellNominalVoltage'
-  | 'cellCapacity'
-  | 'series'
-  | 'parallel'
-  | 'loadPower'
-  | 'loadResistance'
-  | 'supplyVoltage'
-  | 'loadCurrent'
-  | 'efficiency'
-  | 'usableFraction'
-  | 'duty'
-  | 'cellMass';
+  'cellNominalVoltage' | 'cellCapacity' | 'series' | 'parallel' | 'loadPower' | 'loadResistance' | 'supplyVoltage' | 'loadCurrent' | 'efficiency' | 'usableFraction' | 'duty' | 'cellMass';
 
 const EMPTY: Record<TextFields, string> = {
   cellNominalVoltage: '',
@@ -95,9 +84,7 @@ export function RuntimePanel() {
   // The runtime leads; the rest follow in the order the server derived them.
   const figures = [...(state.result?.figures ?? [])].sort((a, b) => Number(b.key === 'runtime') - Number(a.key === 'runtime'));
 
-  const field = (name: TextFields) => (
-    <QuantityField key={name} name={name} {...INFO[name]} value={fields[name]} onChange={set(name)} error={state.fieldErrors[name]} parsed={state.parsed[name]} />
-  );
+  const field = (name: TextFields) => <QuantityField key={name} name={name} {...INFO[name]} value={fields[name]} onChange={set(name)} error={state.fieldErrors[name]} parsed={state.parsed[name]} />;
 
   return (
     <ToolLayout
@@ -169,10 +156,10 @@ export function RuntimePanel() {
       >
         <div className="space-y-4">
           {LITHIUM.includes(chemistry) && (
-          <Caution title="Lithium cells">
-            Do not short, puncture, crush or open lithium cells: a damaged or swollen cell can vent and catch fire. Discharge packs before work, work on a
-            non-flammable surface with a fire-safe container at hand, and follow your lab’s rules and local codes for charging, shipping and disposal.
-          </Caution>
+            <Caution title="Lithium cells">
+              Do not short, puncture, crush or open lithium cells: a damaged or swollen cell can vent and catch fire. Discharge packs before work, work on a non-flammable surface with a fire-safe
+              container at hand, and follow your lab’s rules and local codes for charging, shipping and disposal.
+            </Caution>
           )}
           <div className="gap-4 md:columns-2 [&>*]:mb-4 [&>*]:break-inside-avoid">
             {figures.map((f) => (

@@ -40,7 +40,15 @@ export function ResultsState({
         </div>
       )}
       {!hasResult && !message ? (
-        <Card>{busy ? <p className="p-6 text-sm text-graphite-500" role="status">Computing…</p> : <EmptyState icon={<Calculator className="size-8" />} message={empty} />}</Card>
+        <Card>
+          {busy ? (
+            <p className="p-6 text-sm text-graphite-500" role="status">
+              Computing…
+            </p>
+          ) : (
+            <EmptyState icon={<Calculator className="size-8" />} message={empty} />
+          )}
+        </Card>
       ) : hasResult ? (
         <div className={outdated ? 'opacity-60 transition-opacity' : 'transition-opacity'} aria-busy={busy || undefined}>
           {outdated && !busy && <p className="mb-2 text-xs text-graphite-500">These results are for the last inputs that could be computed.</p>}
