@@ -74,6 +74,7 @@ export default defineConfig({
           include: ['tests/e2e/**/*.test.ts'],
           environment: 'node',
           globalSetup: [here('./tests/e2e/global-setup.ts')],
+          setupFiles: [here('./tests/e2e/failure-screenshots.ts')],
           testTimeout: 90_000,
           hookTimeout: 180_000,
           fileParallelism: false,

@@ -5,12 +5,20 @@ import { E2E_PASSWORD } from './password';
 
 export const baseUrl = () => inject('baseUrl');
 
+const browsers = new Set<Browser>();
+
+/** Browsers launched by this test file and still open (failure-screenshots.ts photographs their pages). */
+export const openBrowsers = (): Browser[] => [...browsers].filter((b) => b.isConnected());
+
 export async function launch(): Promise<Browser> {
-  return chromium.launch({
+  const browser = await chromium.launch({
     executablePath: process.env.SPLITCASE_CHROMIUM ?? '/usr/bin/chromium',
     headless: true,
     args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--disable-dev-shm-usage'],
   });
+  browsers.add(browser);
+  browser.on('disconnected', () => browsers.delete(browser));
+  return browser;
 }
 
 /** A fresh browser context (own cookies) signed in as a demo user (`engineer`, `lead`…). */
